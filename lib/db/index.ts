@@ -1,0 +1,40 @@
+import pg from "pg";
+import { Sequelize } from "sequelize";
+import { initModels } from "@/models";
+
+/**
+ * The Sequelize instance, one per process (kept on globalThis so hot reload does not open new pools).
+ * The schema comes only from migrations: this module never calls sync().
+ */
+const holder = globalThis as unknown as { spanlarkSequelize?: Sequelize };
+
+export function createSequelize(url: string): Sequelize {
+  const sequelize = new Sequelize(url, {
+    dialect: "postgres",
+    dialectModule: pg,
+    logging: false,
+    pool: { max: 10, min: 0, idle: 10_000 },
+    define: { underscored: true },
+  });
+  initModels(sequelize);
+  return sequelize;
+}
+
+export function getSequelize(): Sequelize {
+  if (!holder.spanlarkSequelize) {
+    const url = process.env.DATABASE_URL;
+    if (!url) throw new Error("DATABASE_URL is not set");
+    holder.spanlarkSequelize = createSequelize(url);
+  }
+  return holder.spanlarkSequelize;
+}
+
+/** Used by GET /api/health: true when a trivial query answers. */
+export async function databaseIsUp(): Promise<boolean> {
+  try {
+    await getSequelize().query("SELECT 1");
+    return true;
+  } catch {
+    return false;
+  }
+}

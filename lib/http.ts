@@ -1,0 +1,71 @@
+import "server-only";
+import { randomUUID } from "node:crypto";
+import { NextResponse } from "next/server";
+import { ZodError, type ZodType } from "zod";
+import { logger } from "@/lib/logger";
+
+/** An error with an HTTP status and a message fit to show a user (never a raw internal error). */
+export class HttpError extends Error {
+  constructor(
+    readonly status: number,
+    message: string,
+    readonly details?: Record<string, unknown>,
+  ) {
+    super(message);
+  }
+}
+
+export interface FieldIssue {
+  path: string;
+  message: string;
+}
+
+export function zodIssues(error: ZodError): FieldIssue[] {
+  return error.issues.map((i) => ({ path: i.path.map(String).join(".") || "(body)", message: i.message }));
+}
+
+/** Parses a JSON request body with a zod schema; a bad body becomes a 400 naming each field. */
+export async function parseJson<T>(req: Request, schema: ZodType<T>): Promise<T> {
+  let body: unknown;
+  try {
+    body = await req.json();
+  } catch {
+    throw new HttpError(400, "the request body is not valid JSON", { issues: [{ path: "(body)", message: "not valid JSON" }] });
+  }
+  const parsed = schema.safeParse(body);
+  if (!parsed.success) throw new HttpError(400, "invalid input", { issues: zodIssues(parsed.error) });
+  return parsed.data;
+}
+
+type Handler<C> = (req: Request, ctx: C) => Promise<Response>;
+
+/**
+ * Wraps a route handler: gives each request an id, logs one line per request, turns HttpError and
+ * ZodError into JSON 4xx answers, and any other error into a plain 500 that hides the details.
+ */
+export function route<C>(handler: Handler<C>): Handler<C> {
+  return async (req, ctx) => {
+    const requestId = req.headers.get("x-request-id") ?? randomUUID();
+    const started = performance.now();
+    const url = new URL(req.url);
+    let res: Response;
+    try {
+      res = await handler(req, ctx);
+    } catch (err) {
+      if (err instanceof HttpError) {
+        res = NextResponse.json({ error: err.message, ...err.details }, { status: err.status });
+      } else if (err instanceof ZodError) {
+        res = NextResponse.json({ error: "invalid input", issues: zodIssues(err) }, { status: 400 });
+      } else {
+        logger.error({ err, requestId, method: req.method, path: url.pathname }, "request failed");
+        res = NextResponse.json({ error: "something went wrong on our side; try again", requestId }, { status: 500 });
+      }
+    }
+    res.headers.set("x-request-id", requestId);
+    logger.info(
+      { requestId, method: req.method, path: url.pathname, status: res.status, ms: Math.round(performance.now() - started) },
+      "request",
+    );
+    return res;
+  };
+}

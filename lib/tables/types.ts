@@ -1,0 +1,146 @@
+/**
+ * Shapes of the material tables the design checks read.
+ *
+ * The same shapes come from two places: the starter data that ships in lib/tables (read by the
+ * CLI with no database) and a published version in PostgreSQL (read by the app). Units: inches,
+ * in^2, in^3, in^4, in^6, psi, ksi for steel strengths, lb/ft for weights, lb/ft^3 for densities.
+ */
+
+export type Species = "Douglas Fir-Larch" | "Hem-Fir" | "Spruce-Pine-Fir" | "Southern Pine";
+export type SawnGrade = "Select Structural" | "No.1" | "No.2" | "No.3";
+export type SawnSizeClass = "dimension" | "beams-stringers";
+
+/** A dressed (surfaced dry) sawn size, e.g. 2x10 = 1.5 x 9.25 in. */
+export interface SawnSize {
+  /** nominal name, e.g. "2x10" */
+  name: string;
+  nominalThickness: number;
+  nominalDepth: number;
+  /** dressed thickness b, in */
+  b: number;
+  /** dressed depth d, in */
+  d: number;
+  /** in^2 */
+  A: number;
+  /** in^3, about the strong axis */
+  Sx: number;
+  /** in^4, about the strong axis */
+  Ix: number;
+  sizeClass: SawnSizeClass;
+}
+
+/** Reference design values for one species, grade and size class (NDS Supplement tables). */
+export interface SawnDesignValues {
+  species: Species;
+  grade: SawnGrade;
+  sizeClass: SawnSizeClass;
+  /** psi */
+  Fb: number;
+  Ft: number;
+  Fv: number;
+  FcPerp: number;
+  Fc: number;
+  E: number;
+  Emin: number;
+  /** specific gravity G, oven-dry */
+  G: number;
+  /** where the numbers come from, e.g. "NDS Supplement 2018, Table 4A" */
+  source: string;
+}
+
+/** Size factor CF for Fb by grade and nominal depth (and thickness where the table splits it). */
+export interface SizeFactorRow {
+  /** which design value table the factor belongs to */
+  table: "4A" | "4B" | "4D";
+  grades: SawnGrade[];
+  nominalDepth: number;
+  /** nominal thickness 2-3 in or 4 in where the table splits by thickness; 0 = any */
+  nominalThickness: number;
+  CF_Fb: number;
+  CF_Ft: number;
+  CF_Fc: number;
+  source: string;
+}
+
+export type EngineeredKind = "LVL" | "PSL" | "glulam";
+
+export type EngineeredSizeRule =
+  | { type: "none" }
+  /** CF = (refDepth / d)^exponent, capped at maxFactor (typical of LVL and PSL literature) */
+  | { type: "depth"; refDepthIn: number; exponent: number; maxFactor: number }
+  /** glulam volume factor, NDS 5.3.6: CV = (21/L)^(1/x) (12/d)^(1/x) (5.125/b)^(1/x) <= 1 */
+  | { type: "volume"; x: number };
+
+export interface EngineeredProduct {
+  name: string;
+  kind: EngineeredKind;
+  /** psi */
+  Fb: number;
+  Fv: number;
+  FcPerp: number;
+  E: number;
+  Emin: number;
+  sizeRule: EngineeredSizeRule;
+  /** widths of one ply, in */
+  widths: number[];
+  depths: number[];
+  /** lb/ft^3 */
+  density: number;
+  note: string;
+  source: string;
+}
+
+/** A hot-rolled W-shape with the properties the AISC 360 checks need. */
+export interface WShape {
+  name: string;
+  /** nominal weight, lb/ft */
+  W: number;
+  A: number;
+  d: number;
+  tw: number;
+  bf: number;
+  tf: number;
+  /** design k (kdes), in */
+  kdes: number;
+  Ix: number;
+  Zx: number;
+  Sx: number;
+  rx: number;
+  Iy: number;
+  Zy: number;
+  Sy: number;
+  ry: number;
+  /** in^4 */
+  J: number;
+  /** in^6 */
+  Cw: number;
+  rts: number;
+  ho: number;
+  /** bf/2tf */
+  bf_2tf: number;
+  /** h/tw */
+  h_tw: number;
+  source: string;
+}
+
+export interface SteelGrade {
+  name: string;
+  /** ksi */
+  Fy: number;
+  Fu: number;
+}
+
+/** An optional cost per foot for the yard's own ranking, keyed by an item key (see itemKey). */
+export type CostTable = Record<string, number>;
+
+export interface MaterialTables {
+  /** version label, e.g. "starter-2026.1" or a database version id */
+  version: string;
+  sawnSizes: SawnSize[];
+  sawnValues: SawnDesignValues[];
+  sizeFactors: SizeFactorRow[];
+  engineered: EngineeredProduct[];
+  steel: WShape[];
+  steelGrades: SteelGrade[];
+  costs: CostTable;
+}

@@ -1,0 +1,40 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type Sequelize,
+} from "sequelize";
+
+export type Role = "builder" | "subscriber" | "admin";
+export const ROLES: readonly Role[] = ["builder", "subscriber", "admin"];
+
+export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
+  declare id: CreationOptional<string>;
+  declare email: string;
+  declare passwordHash: string;
+  declare name: string;
+  declare company: string | null;
+  declare role: CreationOptional<Role>;
+  declare emailVerifiedAt: Date | null;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+}
+
+export function initUser(sequelize: Sequelize): void {
+  User.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      email: { type: DataTypes.STRING(254), allowNull: false, unique: true },
+      passwordHash: { type: DataTypes.STRING(100), allowNull: false },
+      name: { type: DataTypes.STRING(120), allowNull: false },
+      company: { type: DataTypes.STRING(160), allowNull: true },
+      role: { type: DataTypes.ENUM(...ROLES), allowNull: false, defaultValue: "builder" },
+      emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "users", underscored: true },
+  );
+}
