@@ -44,6 +44,11 @@ export interface SawnDesignValues {
   Emin: number;
   /** specific gravity G, oven-dry */
   G: number;
+  /**
+   * nominal depth (in) the row applies to, where the table gives values by width (NDS Supplement
+   * Table 4B, Southern Pine); absent = every depth of the size class
+   */
+  nominalDepth?: number;
   /** where the numbers come from, e.g. "NDS Supplement 2018, Table 4A" */
   source: string;
 }
@@ -76,6 +81,11 @@ export interface EngineeredProduct {
   kind: EngineeredKind;
   /** psi */
   Fb: number;
+  /**
+   * bending with the tension zone stressed in compression (negative moment over a support or on
+   * a cantilever), psi: glulam Fbx- of unbalanced layups; absent = same as Fb
+   */
+  FbNeg?: number;
   Fv: number;
   FcPerp: number;
   E: number;

@@ -1,0 +1,161 @@
+import type { EngineeredProduct, EngineeredSizeRule } from "./types";
+
+/**
+ * Generic engineered lumber rows: LVL, PSL and glulam. Units: psi, in, lb/ft³.
+ *
+ * These are not one maker's product. LVL and PSL values are typical of published literature for
+ * the named E grade; every maker publishes its own, and the maker's values govern. Glulam values
+ * are the NDS Supplement (2018 edition) Table 5A reference values for the named combination,
+ * from memory — verify against the printed table.
+ */
+
+export const SUPPLIER_NOTE = "typical values — confirm with the supplier's published values";
+
+/**
+ * Emin from E, NDS 2018 Appendix D (Eq. D-4): Emin = E (1 − 1.645 COV_E) k / 1.66, with COV_E =
+ * 0.10 for LVL and PSL and k the adjustment from apparent to pure-bending E (1.03 for sawn
+ * lumber, 1.05 for glulam). Makers of LVL and PSL publish their own Emin; the default k = 1.0
+ * here gives about 0.503 E, a little below the typical published figures (about 0.508 E).
+ * Example: E = 2,000,000 psi gives Emin = 1,006,627 psi.
+ */
+export function eminFromE(E: number, covE = 0.1, k = 1.0): number {
+  return (E * (1 - 1.645 * covE) * k) / 1.66;
+}
+
+/**
+ * Depth size factor typical of LVL and PSL literature: CF = (refDepth/d)^exponent, at most
+ * maxFactor. Applies to Fb. Example: LVL at d = 16 in, (12/16)^0.136 = 0.962.
+ */
+export function depthSizeFactor(rule: Extract<EngineeredSizeRule, { type: "depth" }>, dIn: number): number {
+  return Math.min((rule.refDepthIn / dIn) ** rule.exponent, rule.maxFactor);
+}
+
+/**
+ * Glulam volume factor, NDS 2018 5.3.6 (Eq. 5.3-1): CV = (21/L)^(1/x) (12/d)^(1/x) (5.125/b)^(1/x) ≤ 1.0,
+ * L = length between points of zero moment (ft), d depth (in), b width (in; for multi-piece
+ * laminations the widest piece), x = 20 for Southern Pine, 10 for all other species.
+ * Example: 5-1/8 x 18, L = 24 ft, x = 10: (21/24 · 12/18 · 1)^0.1 = 0.947.
+ */
+export function glulamVolumeFactorCV(x: number, lengthFt: number, dIn: number, bIn: number): number {
+  const cv = ((21 / lengthFt) * (12 / dIn) * (5.125 / bIn)) ** (1 / x);
+  return Math.min(cv, 1.0);
+}
+
+const LVL_DEPTH_RULE: EngineeredSizeRule = { type: "depth", refDepthIn: 12, exponent: 0.136, maxFactor: 1.18 };
+const PSL_DEPTH_RULE: EngineeredSizeRule = { type: "depth", refDepthIn: 12, exponent: 0.111, maxFactor: 1.15 };
+const WESTERN_VOLUME_RULE: EngineeredSizeRule = { type: "volume", x: 10 };
+
+const LVL_DEPTHS = [7.25, 9.25, 9.5, 11.25, 11.875, 14, 16, 18];
+const PSL_DEPTHS = [9.25, 9.5, 11.25, 11.875, 14, 16, 18];
+/** western-species glulam builds up in 1-1/2 in laminations */
+const GLULAM_WESTERN_DEPTHS = [9, 10.5, 12, 13.5, 15, 16.5, 18, 19.5, 21, 22.5, 24];
+/** framing-width glulam matches lumber and I-joist depths */
+const GLULAM_FRAMING_DEPTHS = [9.25, 11.25, 11.875, 14, 16, 18];
+
+const SCL_SOURCE =
+  "typical of published literature for LVL/PSL of this E grade; size rule (12/d)^n typical of published literature";
+const T5A = "NDS Supplement 2018, Table 5A (from memory — verify against the printed table)";
+
+export const ENGINEERED: EngineeredProduct[] = [
+  {
+    name: "LVL 1.9E",
+    kind: "LVL",
+    Fb: 2600,
+    Fv: 285,
+    FcPerp: 750,
+    E: 1_900_000,
+    Emin: Math.round(eminFromE(1_900_000)),
+    sizeRule: LVL_DEPTH_RULE,
+    widths: [1.75],
+    depths: LVL_DEPTHS,
+    density: 42,
+    note: SUPPLIER_NOTE,
+    source: SCL_SOURCE,
+  },
+  {
+    name: "LVL 2.0E",
+    kind: "LVL",
+    Fb: 2600,
+    Fv: 285,
+    FcPerp: 750,
+    E: 2_000_000,
+    Emin: Math.round(eminFromE(2_000_000)),
+    sizeRule: LVL_DEPTH_RULE,
+    widths: [1.75],
+    depths: LVL_DEPTHS,
+    density: 42,
+    note: `${SUPPLIER_NOTE}; several makers publish Fb 2,900–3,100 psi for 2.0E, the lower figure is kept here`,
+    source: SCL_SOURCE,
+  },
+  {
+    name: "PSL 2.0E",
+    kind: "PSL",
+    Fb: 2900,
+    Fv: 290,
+    FcPerp: 625,
+    E: 2_000_000,
+    Emin: Math.round(eminFromE(2_000_000)),
+    sizeRule: PSL_DEPTH_RULE,
+    widths: [3.5, 5.25],
+    depths: PSL_DEPTHS,
+    density: 45,
+    note: SUPPLIER_NOTE,
+    source: SCL_SOURCE,
+  },
+  {
+    // Table 5A, 24F-V4 Douglas Fir-Larch, bending about x-x: Fbx+ 2400, Fbx− 1850, Fc⊥x 650,
+    // Fvx 265, Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory). Unbalanced: the − value
+    // applies over supports and on cantilevers.
+    name: "Glulam 24F-V4 DF",
+    kind: "glulam",
+    Fb: 2400,
+    FbNeg: 1850,
+    Fv: 265,
+    FcPerp: 650,
+    E: 1_800_000,
+    Emin: 950_000,
+    sizeRule: WESTERN_VOLUME_RULE,
+    widths: [3.125, 5.125, 6.75],
+    depths: GLULAM_WESTERN_DEPTHS,
+    density: 35,
+    note: SUPPLIER_NOTE,
+    source: T5A,
+  },
+  {
+    // Table 5A, 24F-1.8E: Fbx+ 2400, Fbx− 1450 (the table's unbalanced figure; many stock beams
+    // are balanced and carry 2400 both ways — take that only from the supplier's literature),
+    // Fc⊥x 650, Fvx 265 (western species), Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory).
+    // x = 10 (western species) is kept for the volume factor, the larger reduction.
+    name: "Glulam 24F-1.8E",
+    kind: "glulam",
+    Fb: 2400,
+    FbNeg: 1450,
+    Fv: 265,
+    FcPerp: 650,
+    E: 1_800_000,
+    Emin: 950_000,
+    sizeRule: WESTERN_VOLUME_RULE,
+    widths: [3.125, 5.125],
+    depths: GLULAM_WESTERN_DEPTHS,
+    density: 35,
+    note: SUPPLIER_NOTE,
+    source: T5A,
+  },
+  {
+    // The same combination in framing widths (3-1/2 and 5-1/2 in) and lumber depths.
+    name: "Glulam 24F-1.8E framing width",
+    kind: "glulam",
+    Fb: 2400,
+    FbNeg: 1450,
+    Fv: 265,
+    FcPerp: 650,
+    E: 1_800_000,
+    Emin: 950_000,
+    sizeRule: WESTERN_VOLUME_RULE,
+    widths: [3.5, 5.5],
+    depths: GLULAM_FRAMING_DEPTHS,
+    density: 35,
+    note: SUPPLIER_NOTE,
+    source: T5A,
+  },
+];
