@@ -1,0 +1,102 @@
+/**
+ * Basic load combinations of ASCE/SEI 7-22 (Minimum Design Loads and Associated Criteria for
+ * Buildings and Other Structures, 2022 edition), limited to the cases Spanlark carries:
+ * D, L, Lr, S, W (no rain R, seismic E, fluid F, soil H or self-straining T).
+ * ASCE 7-22 snow loads are strength level, hence 0.7S in ASD and 1.0S in LRFD.
+ */
+import type { Combination, LoadCase, NamedCombination } from "../types";
+import { LOAD_CASES } from "../types";
+
+/** "Lr or 0.7S" style alternatives are expanded into one combination per roof load present. */
+type Term = { c: LoadCase; f: number };
+
+function name(terms: Term[]): string {
+  const parts: string[] = [];
+  for (const t of terms) {
+    if (t.f === 0) continue;
+    const coef = t.f === 1 ? "" : String(Math.round(t.f * 1e4) / 1e4);
+    parts.push(`${coef}${t.c}`);
+  }
+  return parts.join("+");
+}
+
+/**
+ * Keeps the terms of the cases present and drops exact duplicates. A combination written for a
+ * variable load that is absent (e.g. 0.6D+0.6W without wind, or D+0.75L+0.75Lr without roof live
+ * load) is dropped too: what is left of it is either a duplicate or, for load effects that are
+ * linear, lies between two combinations already listed (D+0.75L between D and D+L), so it can
+ * never govern.
+ */
+function build(raw: { terms: Term[]; needs: LoadCase[] }[], cases: LoadCase[]): NamedCombination[] {
+  const present = new Set(cases);
+  const out: NamedCombination[] = [];
+  const seen = new Set<string>();
+  for (const r of raw) {
+    if (r.needs.some((c) => !present.has(c))) continue;
+    const terms = r.terms.filter((t) => present.has(t.c) && t.f !== 0);
+    if (terms.length === 0) continue;
+    const factors: Combination = {};
+    for (const t of terms) factors[t.c] = (factors[t.c] ?? 0) + t.f;
+    const key = LOAD_CASES.map((c) => factors[c] ?? 0).join(",");
+    if (seen.has(key)) continue;
+    seen.add(key);
+    out.push({ name: name(terms), factors });
+  }
+  return out;
+}
+
+const T = (c: LoadCase, f: number): Term => ({ c, f });
+
+/** ASCE 7-22 §2.4.1 basic combinations for allowable stress design (combinations 1–7 without E). */
+export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES]): NamedCombination[] {
+  const roof: { t: Term; c: LoadCase }[] = [
+    { t: T("Lr", 1), c: "Lr" },
+    { t: T("S", 0.7), c: "S" },
+  ];
+  const raw: { terms: Term[]; needs: LoadCase[] }[] = [];
+  // (1) D
+  raw.push({ terms: [T("D", 1)], needs: [] });
+  // (2) D + L
+  raw.push({ terms: [T("D", 1), T("L", 1)], needs: ["L"] });
+  // (3) D + (Lr or 0.7S or R)
+  for (const r of roof) raw.push({ terms: [T("D", 1), r.t], needs: [r.c] });
+  // (4) D + 0.75L + 0.75(Lr or 0.7S or R)
+  for (const r of roof) raw.push({ terms: [T("D", 1), T("L", 0.75), T(r.c, 0.75 * r.t.f)], needs: [r.c] });
+  // (5) D + 0.6W
+  raw.push({ terms: [T("D", 1), T("W", 0.6)], needs: ["W"] });
+  // (6a) D + 0.75L + 0.75(0.6W) + 0.75(Lr or 0.7S or R)
+  raw.push({ terms: [T("D", 1), T("L", 0.75), T("W", 0.45)], needs: ["W"] });
+  for (const r of roof) raw.push({ terms: [T("D", 1), T("L", 0.75), T("W", 0.45), T(r.c, 0.75 * r.t.f)], needs: ["W", r.c] });
+  // (7) 0.6D + 0.6W
+  raw.push({ terms: [T("D", 0.6), T("W", 0.6)], needs: ["W"] });
+  return build(raw, cases);
+}
+
+/**
+ * ASCE 7-22 §2.3.1 basic combinations for strength design (LRFD), combinations 1–5 without E
+ * (factors as recalled from the 2022 edition, where snow is strength level: 1.0S, and 0.3S as the
+ * companion load; from memory).
+ */
+export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES]): NamedCombination[] {
+  const raw: { terms: Term[]; needs: LoadCase[] }[] = [];
+  const companions: { t: Term; c: LoadCase }[] = [
+    { t: T("Lr", 0.5), c: "Lr" },
+    { t: T("S", 0.15), c: "S" },
+  ];
+  // (1) 1.4D
+  raw.push({ terms: [T("D", 1.4)], needs: [] });
+  // (2) 1.2D + 1.6L + 0.5(Lr or 0.3S or R)
+  raw.push({ terms: [T("D", 1.2), T("L", 1.6)], needs: ["L"] });
+  for (const r of companions) raw.push({ terms: [T("D", 1.2), T("L", 1.6), r.t], needs: [r.c] });
+  // (3) 1.2D + 1.6(Lr or R) + (L or 0.5W);  1.2D + 1.0S + (L or 0.5W)
+  for (const lead of [T("Lr", 1.6), T("S", 1)]) {
+    raw.push({ terms: [T("D", 1.2), lead, T("L", 1)], needs: [lead.c] });
+    raw.push({ terms: [T("D", 1.2), lead, T("W", 0.5)], needs: [lead.c, "W"] });
+  }
+  // (4) 1.2D + 1.0W + L + 0.5(Lr or 0.3S or R)
+  raw.push({ terms: [T("D", 1.2), T("W", 1), T("L", 1)], needs: ["W"] });
+  for (const r of companions) raw.push({ terms: [T("D", 1.2), T("W", 1), T("L", 1), r.t], needs: ["W", r.c] });
+  // (5) 0.9D + 1.0W
+  raw.push({ terms: [T("D", 0.9), T("W", 1)], needs: ["W"] });
+  return build(raw, cases);
+}
