@@ -1,0 +1,87 @@
+import { describe, expect, test } from "vitest";
+import { depthSizeFactor, eminFromE, findEngineered, glulamVolumeFactorCV, STARTER_TABLES, SUPPLIER_NOTE } from "@/lib/tables";
+
+const T = STARTER_TABLES;
+
+describe("engineered rows", () => {
+  test("every row says its values are typical and names a source", () => {
+    expect(T.engineered.length).toBeGreaterThanOrEqual(5);
+    for (const p of T.engineered) {
+      expect(p.note).toContain(SUPPLIER_NOTE);
+      expect(p.source.length).toBeGreaterThan(0);
+      expect(p.widths.length).toBeGreaterThan(0);
+      expect(p.depths.length).toBeGreaterThan(0);
+    }
+  });
+
+  // Glulam reference values, NDS Supplement 2018 Table 5A (from memory — verify against the
+  // printed table): Fbx+, Fbx−, Fvx, Fc⊥x, Ex, Ex min (psi).
+  test.each([
+    ["Glulam 24F-V4 DF", 2400, 1850, 265, 650, 1_800_000, 950_000],
+    ["Glulam 24F-1.8E", 2400, 1450, 265, 650, 1_800_000, 950_000],
+  ])("NDS Supplement 2018, Table 5A: %s", (name, fb, fbNeg, fv, fcPerp, E, Emin) => {
+    const p = findEngineered(T, name);
+    expect([p.Fb, p.FbNeg, p.Fv, p.FcPerp, p.E, p.Emin]).toEqual([fb, fbNeg, fv, fcPerp, E, Emin]);
+    expect(p.sizeRule).toEqual({ type: "volume", x: 10 });
+  });
+
+  // NDS 2018 Appendix D Eq. D-4 for glulam: Emin = E (1 − 1.645 · 0.10)(1.05)/1.66, which the
+  // Supplement prints rounded to 0.01 × 10⁶ psi.
+  test("glulam Emin follows NDS Appendix D with COV_E 0.10", () => {
+    for (const p of T.engineered.filter((row) => row.kind === "glulam")) {
+      const emin = (p.E * (1 - 1.645 * 0.1) * 1.05) / 1.66;
+      expect(Math.abs(p.Emin - emin)).toBeLessThanOrEqual(5000);
+    }
+  });
+
+  test("LVL and PSL Emin from NDS Appendix D with COV_E 0.10, no bending adjustment", () => {
+    for (const p of T.engineered.filter((row) => row.kind !== "glulam")) {
+      expect(p.Emin).toBe(Math.round((p.E * (1 - 1.645 * 0.1)) / 1.66));
+      expect(p.Emin).toBe(Math.round(eminFromE(p.E)));
+    }
+  });
+
+  test("the depth sizes asked for are there: LVL 1-3/4 in, 7-1/4 to 18 in; PSL 3-1/2 and 5-1/4 in", () => {
+    for (const name of ["LVL 1.9E", "LVL 2.0E"]) {
+      const p = findEngineered(T, name);
+      expect(p.widths).toEqual([1.75]);
+      expect(Math.min(...p.depths)).toBe(7.25);
+      expect(Math.max(...p.depths)).toBe(18);
+    }
+    expect(findEngineered(T, "PSL 2.0E").widths).toEqual([3.5, 5.25]);
+  });
+});
+
+describe("size and volume rules", () => {
+  // Typical of published literature: CF = (12/d)^0.136 for LVL, (12/d)^0.111 for PSL.
+  test.each([
+    ["LVL 1.9E", 18, Math.pow(12 / 18, 0.136)],
+    ["LVL 1.9E", 12, 1],
+    ["LVL 1.9E", 9.25, Math.pow(12 / 9.25, 0.136)],
+    ["PSL 2.0E", 18, Math.pow(12 / 18, 0.111)],
+    ["PSL 2.0E", 11.875, Math.pow(12 / 11.875, 0.111)],
+  ] as const)("%s at d = %f in: CF = %f", (name, d, expected) => {
+    const rule = findEngineered(T, name).sizeRule;
+    if (rule.type !== "depth") throw new Error(`${name} should carry a depth rule`);
+    expect(depthSizeFactor(rule, d)).toBeCloseTo(expected, 12);
+  });
+
+  test("the depth factor is capped", () => {
+    expect(depthSizeFactor({ type: "depth", refDepthIn: 12, exponent: 0.136, maxFactor: 1.18 }, 1)).toBe(1.18);
+  });
+
+  // NDS 2018 Eq. 5.3-1: CV = (21/L)^(1/x)(12/d)^(1/x)(5.125/b)^(1/x) ≤ 1.0, computed here term by term.
+  test.each([
+    [10, 24, 18, 5.125],
+    [10, 32, 24, 6.75],
+    [10, 20, 12, 3.125],
+    [20, 30, 21, 5],
+  ])("x = %d, L = %f ft, d = %f in, b = %f in", (x, L, d, b) => {
+    const expected = Math.min(1, Math.pow(21 / L, 1 / x) * Math.pow(12 / d, 1 / x) * Math.pow(5.125 / b, 1 / x));
+    expect(glulamVolumeFactorCV(x, L, d, b)).toBeCloseTo(expected, 12);
+  });
+
+  test("CV is 1.0 at the reference beam 5-1/8 x 12 x 21 ft", () => {
+    expect(glulamVolumeFactorCV(10, 21, 12, 5.125)).toBeCloseTo(1, 12);
+  });
+});
