@@ -1,7 +1,13 @@
 import type { Sequelize } from "sequelize";
-import { initUser } from "./user";
+import { initUser, User } from "./user";
+import { AuthToken, initAuthToken } from "./auth-token";
+import { initRateLimit } from "./rate-limit";
+import { initMaterialTableModels } from "./material-tables";
 
 export { User, ROLES, type Role } from "./user";
+export { AuthToken, AUTH_TOKEN_PURPOSES, type AuthTokenPurpose } from "./auth-token";
+export { RateLimit } from "./rate-limit";
+export * from "./material-tables";
 
 /**
  * Initialises every model on a Sequelize instance, then wires the associations — all in this one place.
@@ -9,9 +15,14 @@ export { User, ROLES, type Role } from "./user";
  */
 export function initModels(sequelize: Sequelize): void {
   initUser(sequelize);
+  initAuthToken(sequelize);
+  initRateLimit(sequelize);
+  initMaterialTableModels(sequelize);
   associate();
 }
 
 function associate(): void {
+  User.hasMany(AuthToken, { foreignKey: "userId", as: "authTokens", onDelete: "CASCADE" });
+  AuthToken.belongsTo(User, { foreignKey: "userId", as: "user" });
   // Associations are added here as models land (jobs, members, sheets, table versions, subscriptions).
 }

@@ -18,6 +18,8 @@ export class User extends Model<InferAttributes<User>, InferCreationAttributes<U
   declare company: string | null;
   declare role: CreationOptional<Role>;
   declare emailVerifiedAt: Date | null;
+  /** When the password last changed; sessions signed in before it no longer count. */
+  declare passwordChangedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
 }
@@ -32,6 +34,7 @@ export function initUser(sequelize: Sequelize): void {
       company: { type: DataTypes.STRING(160), allowNull: true },
       role: { type: DataTypes.ENUM(...ROLES), allowNull: false, defaultValue: "builder" },
       emailVerifiedAt: { type: DataTypes.DATE, allowNull: true },
+      passwordChangedAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,
     },

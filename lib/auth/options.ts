@@ -1,0 +1,63 @@
+import "server-only";
+import type { NextAuthOptions } from "next-auth";
+import CredentialsProvider from "next-auth/providers/credentials";
+import { env } from "@/lib/env";
+import { authenticate } from "./accounts";
+import { clientIp } from "./client-ip";
+import { SignInSchema } from "./schemas";
+
+/** A session lasts 14 days from sign-in; it is not extended by use. */
+export const SESSION_MAX_AGE_SECONDS = 14 * 24 * 60 * 60;
+
+/** Error codes the sign-in page turns into words (next-auth passes a thrown message as `error`). */
+export const SIGN_IN_ERRORS = {
+  invalid: "CredentialsSignin",
+  unverified: "EmailNotVerified",
+  rateLimited: "TooManyTries",
+} as const;
+
+let cached: NextAuthOptions | undefined;
+
+export function authOptions(): NextAuthOptions {
+  if (cached) return cached;
+  const config = env();
+  // next-auth builds its callback and redirect addresses from NEXTAUTH_URL.
+  process.env.NEXTAUTH_URL ??= config.APP_URL;
+  cached = {
+    secret: config.NEXTAUTH_SECRET,
+    session: { strategy: "jwt", maxAge: SESSION_MAX_AGE_SECONDS, updateAge: SESSION_MAX_AGE_SECONDS },
+    jwt: { maxAge: SESSION_MAX_AGE_SECONDS },
+    pages: { signIn: "/sign-in", error: "/sign-in" },
+    providers: [
+      CredentialsProvider({
+        id: "credentials",
+        name: "E-mail and password",
+        credentials: { email: { label: "E-mail", type: "email" }, password: { label: "Password", type: "password" } },
+        async authorize(credentials, req) {
+          const parsed = SignInSchema.safeParse(credentials ?? {});
+          if (!parsed.success) return null;
+          const result = await authenticate(parsed.data.email, parsed.data.password, clientIp(req.headers ?? {}));
+          if (result.ok) return { id: result.user.id, email: result.user.email, name: result.user.name };
+          if (result.reason === "unverified") throw new Error(SIGN_IN_ERRORS.unverified);
+          if (result.reason === "rate-limited") throw new Error(SIGN_IN_ERRORS.rateLimited);
+          return null;
+        },
+      }),
+    ],
+    callbacks: {
+      async jwt({ token, user }) {
+        if (user) {
+          token.sub = user.id;
+          token.authAt = Date.now();
+        }
+        return token;
+      },
+      async session({ session, token }) {
+        session.user = { id: token.sub ?? "", email: token.email ?? null, name: token.name ?? null };
+        session.authAt = token.authAt ?? 0;
+        return session;
+      },
+    },
+  };
+  return cached;
+}
