@@ -1,0 +1,161 @@
+/**
+ * Lengths typed the way the trade writes them, parsed to decimal feet and echoed back in feet and
+ * inches to the nearest 1/16 in. Pure: no React, no I/O.
+ *
+ * Accepted forms (spaces optional, ' ′ ’ for feet, " ″ ” '' for inches):
+ *   12' 6"   12'6"   12' 6-1/2"   12' 6 1/2"   12'   6"   6-1/2"   150"   150 in   12 ft 6 in
+ *   12-6     12-6-1/2   (feet-inches, the tape's shorthand)
+ *   12.5     12         (a bare number is feet)
+ *   3.8 m    380 cm    3800 mm
+ */
+
+export type LengthParse = { ok: true; feet: number } | { ok: false; message: string };
+
+const FT_PER_M = 1 / 0.3048;
+const FOOT_MARK = "['′’]";
+const INCH_MARK = `(?:"|″|”|''|′′|’’)`;
+const NUM = String.raw`\d+(?:\.\d+)?|\.\d+`;
+const FRACTION = String.raw`\d+\s*\/\s*\d+`;
+// inches: a decimal, a whole number with a fraction ("6-1/2", "6 1/2") or a fraction alone ("1/2")
+const INCHES = String.raw`(?:(\d+)(?:\s*-\s*|\s+)(${FRACTION})|(${FRACTION})|(${NUM}))`;
+
+const FEET_INCHES = new RegExp(
+  String.raw`^(${NUM})\s*(?:${FOOT_MARK}|ft|feet|foot)\s*(?:-?\s*${INCHES}\s*(?:${INCH_MARK}|in|inches|inch)?)?$`,
+  "i",
+);
+const INCHES_ONLY = new RegExp(String.raw`^${INCHES}\s*(?:${INCH_MARK}|in|inches|inch)$`, "i");
+const DASHED = new RegExp(String.raw`^(\d+)\s*-\s*${INCHES}$`);
+const METRIC = new RegExp(String.raw`^(${NUM})\s*(m|cm|mm)$`, "i");
+const BARE = new RegExp(String.raw`^(${NUM})$`);
+
+const EXAMPLES = `12' 6", 12-6, 12.5, 150" or 3.8 m`;
+
+/** Parses "a/b" to a number; null when the denominator is 0 or the fraction is not proper. */
+function fraction(text: string): number | null {
+  const [a, b] = text.split("/").map((s) => Number(s.trim()));
+  if (!Number.isFinite(a) || !Number.isFinite(b) || b === 0) return null;
+  return a / b;
+}
+
+type InchesParse = { ok: true; inches: number } | { ok: false; message: string };
+
+function inchesFrom(whole: string | undefined, fracWithWhole: string | undefined, fracAlone: string | undefined, decimal: string | undefined): InchesParse {
+  if (whole !== undefined && fracWithWhole !== undefined) {
+    const f = fraction(fracWithWhole);
+    if (f === null) return { ok: false, message: `"${fracWithWhole}" is not a fraction of an inch (the bottom number cannot be 0)` };
+    if (f >= 1) return { ok: false, message: `"${fracWithWhole}" must be less than one inch, e.g. 6-1/2"` };
+    return { ok: true, inches: Number(whole) + f };
+  }
+  if (fracAlone !== undefined) {
+    const f = fraction(fracAlone);
+    if (f === null) return { ok: false, message: `"${fracAlone}" is not a fraction of an inch (the bottom number cannot be 0)` };
+    return { ok: true, inches: f };
+  }
+  if (decimal !== undefined) return { ok: true, inches: Number(decimal) };
+  return { ok: true, inches: 0 };
+}
+
+/**
+ * Parses a typed length to feet. The message on failure says what was wrong and shows the forms
+ * that work; it never mentions the field, so the form can put its own label first.
+ */
+export function parseLength(raw: string): LengthParse {
+  const text = raw.trim().replace(/\s+/g, " ");
+  if (text === "") return { ok: false, message: `is empty: type a length such as ${EXAMPLES}` };
+  if (/^-/.test(text)) return { ok: false, message: "cannot be negative" };
+  if (text.includes(",")) return { ok: false, message: `use a point for decimals, not a comma (e.g. 3.8 m, 12.5)` };
+
+  let m = BARE.exec(text);
+  if (m) return finite(Number(m[1]));
+
+  m = FEET_INCHES.exec(text);
+  if (m) {
+    const inches = inchesFrom(m[2], m[3], m[4], m[5]);
+    if (!inches.ok) return inches;
+    if (inches.inches >= 12) return { ok: false, message: `has ${trimNumber(inches.inches)} inches after the feet: inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})` };
+    return finite(Number(m[1]) + inches.inches / 12);
+  }
+
+  m = DASHED.exec(text);
+  if (m) {
+    const inches = inchesFrom(m[2], m[3], m[4], m[5]);
+    if (!inches.ok) return inches;
+    if (inches.inches >= 12) return { ok: false, message: `"${text}" reads as feet-inches, and inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})` };
+    return finite(Number(m[1]) + inches.inches / 12);
+  }
+
+  m = INCHES_ONLY.exec(text);
+  if (m) {
+    const inches = inchesFrom(m[1], m[2], m[3], m[4]);
+    if (!inches.ok) return inches;
+    return finite(inches.inches / 12);
+  }
+
+  m = METRIC.exec(text);
+  if (m) {
+    const value = Number(m[1]);
+    const unit = m[2].toLowerCase();
+    const metres = unit === "m" ? value : unit === "cm" ? value / 100 : value / 1000;
+    return finite(metres * FT_PER_M);
+  }
+
+  if (/[a-z]/i.test(text.replace(/\b(ft|feet|foot|in|inch|inches|m|cm|mm)\b/gi, ""))) {
+    return { ok: false, message: `"${text}" has a unit or letters we do not read: type ${EXAMPLES}` };
+  }
+  return { ok: false, message: `"${text}" is not a length we can read: type ${EXAMPLES}` };
+}
+
+function finite(feet: number): LengthParse {
+  if (!Number.isFinite(feet)) return { ok: false, message: "is not a number we can use" };
+  return { ok: true, feet };
+}
+
+function trimNumber(n: number): string {
+  return Number.isInteger(n) ? String(n) : String(Math.round(n * 1000) / 1000);
+}
+
+function feetInchesHint(feet: number, inches: number): string {
+  return formatFeetInches(feet + inches / 12);
+}
+
+function gcd(a: number, b: number): number {
+  return b === 0 ? a : gcd(b, a % b);
+}
+
+/**
+ * Feet and inches to the nearest 1/16 in, the way a builder reads a tape:
+ * 12.5 → 12' 6"; 12.541666 → 12' 6-1/2"; 0.5 → 6"; 10 → 10' 0".
+ */
+export function formatFeetInches(feet: number): string {
+  if (!Number.isFinite(feet)) return "—";
+  const negative = feet < 0;
+  const sixteenths = Math.round(Math.abs(feet) * 12 * 16);
+  const ft = Math.floor(sixteenths / (12 * 16));
+  const restSixteenths = sixteenths - ft * 12 * 16;
+  const wholeIn = Math.floor(restSixteenths / 16);
+  const frac = restSixteenths - wholeIn * 16;
+  let inchText = String(wholeIn);
+  if (frac > 0) {
+    const g = gcd(frac, 16);
+    inchText = `${wholeIn}-${frac / g}/${16 / g}`;
+    if (wholeIn === 0 && ft === 0) inchText = `${frac / g}/${16 / g}`;
+  }
+  const body = ft === 0 ? `${inchText}"` : `${ft}' ${inchText}"`;
+  return negative ? `−${body}` : body;
+}
+
+/** Inches to the nearest 1/16 in without feet, e.g. for bearing lengths: 3.5 → 3-1/2". */
+export function formatInches(inches: number): string {
+  if (!Number.isFinite(inches)) return "—";
+  const sixteenths = Math.round(Math.abs(inches) * 16);
+  const whole = Math.floor(sixteenths / 16);
+  const frac = sixteenths - whole * 16;
+  if (frac === 0) return `${whole}"`;
+  const g = gcd(frac, 16);
+  return whole === 0 ? `${frac / g}/${16 / g}"` : `${whole}-${frac / g}/${16 / g}"`;
+}
+
+/** A short decimal-feet echo for engineers, e.g. 12.54 ft. */
+export function formatDecimalFeet(feet: number): string {
+  return `${(Math.round(feet * 100) / 100).toFixed(2)} ft`;
+}

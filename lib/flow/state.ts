@@ -1,0 +1,226 @@
+/**
+ * The sizing flow's state: everything the user has told us, in the trade's units (lengths in ft,
+ * spacing and bearing in in, area loads in psf, line loads in plf, point loads in lb). It is the
+ * whole input of a member: it lives in the URL and local storage while the flow is open and is
+ * saved as a member's `flowState` in a job. Pure: no React, no I/O.
+ */
+import type { LoadCase, SupportType } from "@/lib/solver/types";
+import type { SawnGrade, Species } from "@/lib/tables/types";
+import type { RoofExposure, RoofThermal } from "@/lib/solver/asce7/snow";
+
+export const MEMBER_KINDS = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"] as const;
+export type MemberKind = (typeof MEMBER_KINDS)[number];
+
+export const KIND_LABELS: Readonly<Record<MemberKind, string>> = {
+  "floor-joist": "Floor joist",
+  header: "Header",
+  beam: "Beam or girder",
+  "deck-joist": "Deck joist",
+  "deck-beam": "Deck beam",
+  rafter: "Rafter or ceiling joist",
+};
+
+export const FLOW_STEPS = ["kind", "span", "loads", "material", "answer"] as const;
+export type FlowStepId = (typeof FLOW_STEPS)[number];
+export const STEP_TITLES: Readonly<Record<FlowStepId, string>> = {
+  kind: "What are you sizing?",
+  span: "Span and supports",
+  loads: "Loads",
+  material: "Material",
+  answer: "Answer",
+};
+
+export interface FlowSupport {
+  /** ft from the member's left end */
+  x: number;
+  type: SupportType;
+}
+
+/** Joists share a floor by their spacing (in); beams and headers carry a tributary width (ft). */
+export type FlowWidth = { mode: "spacing"; spacingIn: number } | { mode: "tributary"; tributaryFt: number };
+
+export interface FlowAreaLoad {
+  id: string;
+  /** an occupancy preset id (lib/solver/asce7/loads OCCUPANCY_PRESETS) or "custom" */
+  preset: string;
+  label: string;
+  case: LoadCase;
+  psf: number;
+}
+
+/** Roof snow from ground snow by ASCE 7-22 Chapter 7's flat-roof path, carried over the width. */
+export interface FlowSnow {
+  on: boolean;
+  /** ground snow load pg, psf */
+  groundPsf: number;
+  exposure: RoofExposure;
+  thermal: RoofThermal;
+}
+
+export interface FlowPointLoad {
+  id: string;
+  label: string;
+  /** ft from the left end */
+  x: number;
+  /** lb, downward */
+  P: number;
+  case: LoadCase;
+}
+
+/** A uniform line load over all or part of the member (a wall on it, a partial load). */
+export interface FlowLineLoad {
+  id: string;
+  label: string;
+  from: number;
+  to: number;
+  /** plf, downward */
+  w: number;
+  case: LoadCase;
+}
+
+export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "steel"] as const;
+export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
+
+export interface FlowMaterial {
+  family: MaterialFamily;
+  /** sawn and built-up */
+  species: Species;
+  grade: SawnGrade;
+  /** built-up: 2 to 4 plies, 0 = let the search pick */
+  plies: number;
+  /** engineered: a product name from the table, "" = any product */
+  product: string;
+}
+
+export interface FlowLimits {
+  /** live (or snow / roof live) deflection limit as the denominator n of L/n */
+  live: number;
+  /** total-load deflection limit, L/n */
+  total: number;
+}
+
+export interface FlowState {
+  version: 1;
+  kind: MemberKind;
+  /** the member's whole length, ft (span plus any overhangs) */
+  lengthFt: number;
+  supports: FlowSupport[];
+  width: FlowWidth;
+  areaLoads: FlowAreaLoad[];
+  snow: FlowSnow;
+  pointLoads: FlowPointLoad[];
+  lineLoads: FlowLineLoad[];
+  material: FlowMaterial;
+  /** bearing length at each support, in */
+  bearingIn: number;
+  limits: FlowLimits;
+  /** wet service (decks, exposed framing) */
+  wet: boolean;
+  /** joists at 24 in or less sharing the load (NDS repetitive member) */
+  repetitive: boolean;
+  /** unbraced length of the compression edge, ft; 0 = braced along its length by the floor or roof */
+  unbracedFt: number;
+  selfWeight: boolean;
+}
+
+/** Where the flow is: the state plus the step on screen. */
+export interface FlowLocation {
+  state: FlowState;
+  step: FlowStepId;
+}
+
+let counter = 0;
+/** A short id for a load row: unique within one state, stable across reloads once stored. */
+export function newLoadId(prefix: string): string {
+  counter += 1;
+  return `${prefix}${Date.now().toString(36)}${counter.toString(36)}`;
+}
+
+/** The span between the first two supports (the clear span a builder measures), ft. */
+export function mainSpanFt(state: FlowState): number {
+  const xs = sortedSupports(state.supports).map((s) => s.x);
+  if (xs.length < 2) return state.lengthFt;
+  return xs[1] - xs[0];
+}
+
+export function sortedSupports(supports: readonly FlowSupport[]): FlowSupport[] {
+  return [...supports].sort((a, b) => a.x - b.x);
+}
+
+/** Overhang past the first support (left) and past the last one (right), ft. */
+export function overhangs(state: FlowState): { left: number; right: number } {
+  const xs = sortedSupports(state.supports).map((s) => s.x);
+  if (xs.length === 0) return { left: 0, right: 0 };
+  return { left: xs[0], right: state.lengthFt - xs[xs.length - 1] };
+}
+
+/** The spans between consecutive supports, ft. */
+export function spansFt(state: FlowState): number[] {
+  const xs = sortedSupports(state.supports).map((s) => s.x);
+  const spans: number[] = [];
+  for (let i = 1; i < xs.length; i++) spans.push(xs[i] - xs[i - 1]);
+  return spans;
+}
+
+/**
+ * Sets the span between the first two supports, keeping the overhangs and moving every support and
+ * load to the right of the second support by the same amount.
+ */
+export function withMainSpan(state: FlowState, spanFt: number): FlowState {
+  const sorted = sortedSupports(state.supports);
+  if (sorted.length < 2) {
+    return { ...state, lengthFt: spanFt, supports: [{ x: 0, type: "pin" }, { x: spanFt, type: "roller" }] };
+  }
+  const delta = spanFt - (sorted[1].x - sorted[0].x);
+  const pivot = sorted[1].x;
+  const shift = (x: number) => (x >= pivot - 1e-9 ? x + delta : x);
+  return {
+    ...state,
+    lengthFt: state.lengthFt + delta,
+    supports: state.supports.map((s) => ({ ...s, x: shift(s.x) })),
+    pointLoads: state.pointLoads.map((p) => ({ ...p, x: clamp(shift(p.x), 0, state.lengthFt + delta) })),
+    lineLoads: state.lineLoads.map((l) => fitLine(l, state.lengthFt, state.lengthFt + delta)),
+  };
+}
+
+/** Sets the overhang past the last support (right) or before the first (left), ft. */
+export function withOverhang(state: FlowState, side: "left" | "right", overhangFt: number): FlowState {
+  const sorted = sortedSupports(state.supports);
+  if (sorted.length === 0) return state;
+  if (side === "right") {
+    const newLength = sorted[sorted.length - 1].x + overhangFt;
+    return {
+      ...state,
+      lengthFt: newLength,
+      pointLoads: state.pointLoads.map((p) => ({ ...p, x: clamp(p.x, 0, newLength) })),
+      lineLoads: state.lineLoads.map((l) => fitLine(l, state.lengthFt, newLength)),
+    };
+  }
+  const delta = overhangFt - sorted[0].x;
+  const newLength = state.lengthFt + delta;
+  return {
+    ...state,
+    lengthFt: newLength,
+    supports: state.supports.map((s) => ({ ...s, x: s.x + delta })),
+    pointLoads: state.pointLoads.map((p) => ({ ...p, x: clamp(p.x + delta, 0, newLength) })),
+    lineLoads: state.lineLoads.map((l) => {
+      const wasFull = l.from <= 1e-9 && l.to >= state.lengthFt - 1e-9;
+      return wasFull ? { ...l, from: 0, to: newLength } : { ...l, from: clamp(l.from + delta, 0, newLength), to: clamp(l.to + delta, 0, newLength) };
+    }),
+  };
+}
+
+function fitLine(l: FlowLineLoad, oldLength: number, newLength: number): FlowLineLoad {
+  const wasFull = l.from <= 1e-9 && l.to >= oldLength - 1e-9;
+  if (wasFull) return { ...l, from: 0, to: newLength };
+  return { ...l, from: clamp(l.from, 0, newLength), to: clamp(l.to, 0, newLength) };
+}
+
+export function clamp(x: number, lo: number, hi: number): number {
+  return Math.min(hi, Math.max(lo, x));
+}
+
+/** Rounds a position to the nearest 1/16 in, as a tape reads. */
+export function snapFt(x: number): number {
+  return Math.round(x * 12 * 16) / (12 * 16);
+}

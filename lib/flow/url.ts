@@ -1,0 +1,106 @@
+/**
+ * The flow's state in the address bar (`/size?step=loads&s=…`) and in local storage, so a reload,
+ * a shared link or a dropped connection loses nothing. The state is JSON in base64url (UTF-8 safe).
+ */
+import { defaultFlowState } from "./defaults";
+import { parseFlowState } from "./schema";
+import { FLOW_STEPS, MEMBER_KINDS, type FlowLocation, type FlowState, type FlowStepId, type MemberKind } from "./state";
+
+export const STORAGE_KEY = "spanlark.flow.v1";
+
+function toBase64Url(bytes: Uint8Array): string {
+  let binary = "";
+  for (const b of bytes) binary += String.fromCharCode(b);
+  return btoa(binary).replace(/\+/g, "-").replace(/\//g, "_").replace(/=+$/, "");
+}
+
+function fromBase64Url(text: string): Uint8Array | null {
+  if (!/^[A-Za-z0-9_-]*$/.test(text)) return null;
+  const padded = text.replace(/-/g, "+").replace(/_/g, "/") + "===".slice((text.length + 3) % 4);
+  try {
+    const binary = atob(padded);
+    const bytes = new Uint8Array(binary.length);
+    for (let i = 0; i < binary.length; i++) bytes[i] = binary.charCodeAt(i);
+    return bytes;
+  } catch {
+    return null;
+  }
+}
+
+export function encodeFlowState(state: FlowState): string {
+  return toBase64Url(new TextEncoder().encode(JSON.stringify(state)));
+}
+
+/** The state in an `s=` parameter; null when it is missing, garbled or does not fit the schema. */
+export function decodeFlowState(text: string | null | undefined): FlowState | null {
+  if (!text) return null;
+  const bytes = fromBase64Url(text);
+  if (!bytes) return null;
+  try {
+    return parseFlowState(JSON.parse(new TextDecoder("utf-8", { fatal: true }).decode(bytes)));
+  } catch {
+    return null;
+  }
+}
+
+export function isMemberKind(value: string | null | undefined): value is MemberKind {
+  return typeof value === "string" && (MEMBER_KINDS as readonly string[]).includes(value);
+}
+
+export function isStep(value: string | null | undefined): value is FlowStepId {
+  return typeof value === "string" && (FLOW_STEPS as readonly string[]).includes(value);
+}
+
+/** The flow's query string for a location, plus any job/member being edited. */
+export function flowSearch(location: FlowLocation, extra: { job?: string; member?: string } = {}): string {
+  const params = new URLSearchParams();
+  if (extra.job) params.set("job", extra.job);
+  if (extra.member) params.set("member", extra.member);
+  params.set("step", location.step);
+  params.set("s", encodeFlowState(location.state));
+  return `?${params.toString()}`;
+}
+
+export interface FlowStart {
+  location: FlowLocation;
+  /** where the state came from, for a short note ("Picked up where you left off") */
+  from: "url" | "storage" | "kind" | "saved" | "new";
+}
+
+/**
+ * Where the flow starts, in order: a state in the URL; `?kind=` from the home page (resuming the
+ * stored state when it is the same kind, else that kind's defaults, at the span step); the stored
+ * state; else a new floor joist at the first step.
+ */
+export function resolveFlowStart(params: { s?: string | null; step?: string | null; kind?: string | null }, stored: string | null): FlowStart {
+  const step = isStep(params.step) ? params.step : null;
+  const fromUrl = decodeFlowState(params.s);
+  if (fromUrl) return { location: { state: fromUrl, step: step ?? "span" }, from: "url" };
+
+  const storedLocation = readStoredLocation(stored);
+  if (isMemberKind(params.kind)) {
+    if (storedLocation && storedLocation.state.kind === params.kind) return { location: { ...storedLocation, step: step ?? storedLocation.step }, from: "storage" };
+    return { location: { state: defaultFlowState(params.kind), step: step ?? "span" }, from: "kind" };
+  }
+  if (storedLocation) return { location: { ...storedLocation, step: step ?? storedLocation.step }, from: "storage" };
+  return { location: { state: defaultFlowState("floor-joist"), step: "kind" }, from: "new" };
+}
+
+export function storeLocation(location: FlowLocation): string {
+  return JSON.stringify({ step: location.step, state: location.state });
+}
+
+export function readStoredLocation(stored: string | null): FlowLocation | null {
+  if (!stored) return null;
+  try {
+    const raw: unknown = JSON.parse(stored);
+    if (typeof raw !== "object" || raw === null) return null;
+    const record = raw as { step?: unknown; state?: unknown };
+    const state = parseFlowState(record.state);
+    if (!state) return null;
+    const step = typeof record.step === "string" && isStep(record.step) ? record.step : "span";
+    return { state, step };
+  } catch {
+    return null;
+  }
+}
