@@ -40,9 +40,8 @@ export function sawnSection(
 
 /**
  * Dimension lumber is 2 in to 4 in thick. Beams and stringers (NDS 4.1.3) are 5 in and thicker
- * with a depth more than 2 in greater than the thickness; a 6x8 is strictly a post-and-timber
- * size by that rule and is listed here with the beam sizes, carrying beam-and-stringer values
- * (see sawn-values.ts) only where it is graded to beam-and-stringer rules.
+ * with a depth more than 2 in greater than the thickness. A 6x8 is a post-and-timber size by that
+ * rule (lower Fb than beams and stringers), so it is left out until post-and-timber values are added.
  */
 export const SAWN_SIZES: SawnSize[] = [
   // NDS Supplement 2018, Table 1B — dimension lumber
@@ -56,7 +55,6 @@ export const SAWN_SIZES: SawnSize[] = [
   sawnSection(4, 10, 3.5, 9.25, "dimension"),
   sawnSection(4, 12, 3.5, 11.25, "dimension"),
   // NDS Supplement 2018, Table 1B — timbers 5 in and thicker (dressed 1/2 in under nominal)
-  sawnSection(6, 8, 5.5, 7.5, "beams-stringers"),
   sawnSection(6, 10, 5.5, 9.5, "beams-stringers"),
   sawnSection(6, 12, 5.5, 11.5, "beams-stringers"),
 ];

@@ -193,9 +193,8 @@ export function beamsStringersCF(dIn: number): number {
 
 const CF_4D = "NDS Supplement 2018, Table 4D size factor CF = (12/d)^(1/9) for d > 12 in";
 
-// Rows for the 6x8, 6x10 and 6x12 (dressed depth 7.5, 9.5, 11.5 in, all 12 in or less).
+// Rows for the 6x10 and 6x12 (dressed depth 9.5 and 11.5 in, both 12 in or less).
 const SIZE_FACTORS_4D: SizeFactorRow[] = [
-  [8, 7.5],
   [10, 9.5],
   [12, 11.5],
 ].map(([depth, dIn]) => ({
