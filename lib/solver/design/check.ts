@@ -1,0 +1,179 @@
+/**
+ * Checks one member against its loads: `npm run check` and POST /api/check.
+ * Pure: the caller passes the material tables (starter data in the CLI, the published version in the app).
+ */
+import type { MaterialTables } from "@/lib/tables/types";
+import { BeamInputError, BeamInstabilityError, CAUTION } from "../beam";
+import type { ZodError } from "zod";
+import { buildContext, type DesignContext } from "./context";
+import { DesignInputError, type DesignIssue } from "./errors";
+import { resolveMember, type DesignMember } from "./member";
+import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
+import { evaluateSteel, type SteelFactors } from "./steel";
+import type { CheckName, DesignCheck, SupportReaction } from "./types";
+import { evaluateWood, type WoodFactors } from "./wood";
+
+export { CAUTION };
+
+/** What the member checks leave to others; carried by every result. */
+export const NOT_CHECKED: readonly string[] = [
+  "connections, fasteners and hangers",
+  "posts, studs, columns and the plates, walls or footings under the bearing (bearing is checked on this member only)",
+  "lateral loads (wind and seismic on the building), and wind on this member beyond the load cases given",
+  "point loads on joists without blocking or a beam under them",
+  "notches, holes and cuts in the member",
+  "floor vibration, ponding on flat roofs, drift, sliding and unbalanced snow",
+  "fire resistance and decay or insect protection",
+];
+
+export interface MemberSummary {
+  spec: MemberSpec;
+  label: string;
+  /** lb/ft, counted as dead load when selfWeight is on */
+  weightPlf: number;
+  /** dressed or nominal section, in units of in */
+  section: { b: number | null; d: number; A: number | null; S: number | null; I: number };
+  sources: string[];
+  note: string | null;
+}
+
+export interface CheckOutput {
+  pass: boolean;
+  /** the check with the largest ratio */
+  governing: CheckName | null;
+  ratio: number;
+  method: "asd" | "lrfd";
+  member: MemberSummary;
+  checks: DesignCheck[];
+  reactions: SupportReaction[];
+  factors: WoodFactors | SteelFactors;
+  /** the line loads the member carries, by case, and how each was derived */
+  loads: { case: string; type: string; w: number | null; note: string }[];
+  limits: { live: number | null; total: number | null; source: string };
+  assumptions: string[];
+  notChecked: readonly string[];
+  caution: string;
+  /** version of the material tables used */
+  tables: string;
+}
+
+export interface Evaluation {
+  checks: DesignCheck[];
+  reactions: SupportReaction[];
+  factors: WoodFactors | SteelFactors;
+  governing: CheckName | null;
+  ratio: number;
+  pass: boolean;
+}
+
+/** Runs every check of one resolved member in a shared context. */
+export function evaluateMember(member: DesignMember, ctx: DesignContext): Evaluation {
+  const r = member.kind === "steel" ? evaluateSteel(member, ctx) : evaluateWood(member, ctx);
+  let governing: CheckName | null = null;
+  let ratio = 0;
+  for (const c of r.checks) {
+    if (c.ratio > ratio) {
+      ratio = c.ratio;
+      governing = c.name;
+    }
+  }
+  for (const c of r.checks) c.ratio = Math.round(c.ratio * 1e4) / 1e4;
+  return { ...r, governing, ratio: Math.round(ratio * 1e4) / 1e4, pass: ratio <= 1 };
+}
+
+function issuesFromZod(error: ZodError): DesignIssue[] {
+  return error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }));
+}
+
+/** Parses with a schema; a failure becomes a DesignInputError naming every field. */
+export function parseWith<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: ZodError } }, json: unknown): T {
+  const r = schema.safeParse(json);
+  if (!r.success) throw new DesignInputError(issuesFromZod(r.error));
+  return r.data;
+}
+
+/** Turns the solver's own input errors (instability, geometry) into design input errors. */
+export function asDesignError(err: unknown): unknown {
+  if (err instanceof BeamInstabilityError) return new DesignInputError([{ path: "supports", message: err.message }]);
+  if (err instanceof BeamInputError) return new DesignInputError(err.issues);
+  return err;
+}
+
+export function contextFor(input: Omit<CheckInput, "member">): DesignContext {
+  try {
+    return buildContext(input);
+  } catch (err) {
+    throw asDesignError(err);
+  }
+}
+
+export function summarizeMember(m: DesignMember): MemberSummary {
+  if (m.kind === "steel") {
+    return {
+      spec: m.spec,
+      label: m.label,
+      weightPlf: m.weightPlf,
+      section: { b: m.shape.bf, d: m.shape.d, A: m.shape.A, S: m.shape.Sx, I: m.shape.Ix },
+      sources: m.sources,
+      note: null,
+    };
+  }
+  const r = (v: number) => Math.round(v * 1000) / 1000;
+  return {
+    spec: m.spec,
+    label: m.label,
+    weightPlf: r(m.weightPlf),
+    section: { b: r(m.b), d: r(m.d), A: r(m.A), S: r(m.S), I: r(m.I) },
+    sources: m.sources,
+    note: m.note ?? null,
+  };
+}
+
+export function assumptionsFor(input: Omit<CheckInput, "member">, member: DesignMember, ctx: DesignContext): string[] {
+  const a: string[] = [];
+  const c = input.conditions;
+  a.push(`load combinations: ASCE 7-22 ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}; deflection and reactions at service level (§2.4.1)`);
+  a.push(c.selfWeight ? `member's own weight counted as dead load: ${Math.round(member.weightPlf * 10) / 10} plf` : "member's own weight not counted");
+  a.push(c.unbracedLength > 0 ? `compression edge braced every ${c.unbracedLength} ft and at the supports` : "compression edge braced continuously (sheathing or decking fastened along it)");
+  if (ctx.model.patterned) a.push("live load placed span by span for the worst effect (pattern loading, ASCE 7-22 §4.3.3)");
+  a.push(`bearing length ${input.bearing} in at every support`);
+  if (member.kind === "wood") {
+    a.push(c.wet ? "wet service" : "dry service (moisture content 19 % or less for sawn lumber, 16 % for glulam)");
+    a.push(`temperature up to ${c.temperatureF} °F`);
+    a.push(c.shearIgnoreLoadsNearSupports ? "shear: uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "shear: every load counted, none left out near the supports");
+    a.push("span taken centre to centre of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
+  }
+  if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
+  return a;
+}
+
+/** Checks one member. Throws DesignInputError (field and reason) on bad input or unknown names. */
+export function checkMember(json: unknown, tables: MaterialTables): CheckOutput {
+  const input = parseWith<CheckInput>(checkInputSchema, json);
+  const member = resolveMember(input.member, tables);
+  if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) {
+    throw new DesignInputError([{ path: "conditions.wet", message: "LVL and PSL are for dry service only here; use sawn lumber or glulam in wet service, or the maker's published wet-use values" }]);
+  }
+  const ctx = contextFor(input);
+  const ev = evaluateMember(member, ctx);
+  const sw = input.conditions.selfWeight ? member.weightPlf : 0;
+  return {
+    pass: ev.pass,
+    governing: ev.governing,
+    ratio: ev.ratio,
+    method: input.method,
+    member: summarizeMember(member),
+    checks: ev.checks,
+    reactions: ev.reactions,
+    factors: ev.factors,
+    loads: [
+      ...ctx.loads.map((l) => ({ case: l.load.case, type: l.load.type, w: l.load.type === "udl" ? Math.round(l.load.w * 100) / 100 : null, note: l.note })),
+      ...(sw > 0 ? [{ case: "D", type: "udl", w: Math.round(sw * 100) / 100, note: "D member's own weight" }] : []),
+    ],
+    limits: ctx.limits,
+    assumptions: assumptionsFor(input, member, ctx),
+    notChecked: NOT_CHECKED,
+    caution: CAUTION,
+    tables: tables.version,
+  };
+}

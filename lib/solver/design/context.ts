@@ -1,0 +1,79 @@
+/**
+ * What every candidate member shares in one design problem: the load model, the combination
+ * envelopes (strength, service, live-only) and the conditions. Built once per input.
+ */
+import { asdCombinations, lrfdCombinations } from "../asce7/combinations";
+import type { Combination, LoadCase, NamedCombination } from "../types";
+import { buildLoadModel, type ComboEnvelope, type LoadModel } from "./load-model";
+import { resolveLimits } from "./presets";
+import type { CheckInput, DesignConditions } from "./schema";
+import { takeDown, type TakenDownLoad } from "./take-down";
+
+export interface DesignContext {
+  model: LoadModel;
+  method: "asd" | "lrfd";
+  /** combinations for strength: ASCE 7-22 §2.4.1 (ASD) or §2.3.1 (LRFD) */
+  strength: ComboEnvelope[];
+  /** ASCE 7-22 §2.4.1 combinations at service level: total deflection and the crew's reactions */
+  service: ComboEnvelope[];
+  /** the service combinations without D and W: live (or snow, roof live) deflection */
+  live: ComboEnvelope[];
+  conditions: DesignConditions;
+  limits: { live: number | null; total: number | null; source: string };
+  bearingIn: number;
+  spacingIn?: number;
+  tributaryFt?: number;
+  loads: TakenDownLoad[];
+}
+
+const CASE_ORDER: LoadCase[] = ["D", "L", "Lr", "S", "W"];
+
+function comboName(f: Combination): string {
+  return CASE_ORDER.filter((c) => (f[c] ?? 0) !== 0)
+    .map((c) => `${f[c] === 1 ? "" : String(Math.round((f[c] as number) * 1e4) / 1e4)}${c}`)
+    .join("+");
+}
+
+/** Service combinations with the dead and wind parts removed, duplicates dropped. */
+export function liveCombinations(service: NamedCombination[]): NamedCombination[] {
+  const out: NamedCombination[] = [];
+  const seen = new Set<string>();
+  for (const c of service) {
+    const f: Combination = {};
+    for (const k of ["L", "Lr", "S"] as LoadCase[]) if ((c.factors[k] ?? 0) !== 0) f[k] = c.factors[k];
+    const name = comboName(f);
+    if (name === "" || seen.has(name)) continue;
+    seen.add(name);
+    out.push({ name, factors: f });
+  }
+  return out;
+}
+
+export type DesignProblem = Omit<CheckInput, "member">;
+
+export function buildContext(input: DesignProblem): DesignContext {
+  const loads = takeDown(input.loads, input.length, { spacingIn: input.spacing, tributaryFt: input.tributary });
+  const model = buildLoadModel({
+    length: input.length,
+    supports: input.supports,
+    loads: loads.map((l) => l.load),
+    unbracedFt: input.conditions.unbracedLength,
+    pattern: input.conditions.patternLiveLoad,
+  });
+  const asd = asdCombinations(model.cases);
+  const strengthCombos = input.method === "lrfd" ? lrfdCombinations(model.cases) : asd;
+  const serviceEnv = model.envelopes(asd);
+  return {
+    model,
+    method: input.method,
+    strength: input.method === "lrfd" ? model.envelopes(strengthCombos) : serviceEnv,
+    service: serviceEnv,
+    live: model.envelopes(liveCombinations(asd)),
+    conditions: input.conditions,
+    limits: resolveLimits(input.limits),
+    bearingIn: input.bearing,
+    spacingIn: input.spacing,
+    tributaryFt: input.tributary,
+    loads,
+  };
+}

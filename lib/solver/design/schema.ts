@@ -1,0 +1,206 @@
+/**
+ * Input of the member design checks and of the sizing search, parsed at every boundary (CLI,
+ * route handlers) by these zod schemas. Units: ft for positions and lengths, in for spacing,
+ * bearing and member dimensions, psf for area loads, plf for line loads, lb for point loads,
+ * lb-ft for couples. Loads keep the solver contract's signs (positive downward).
+ */
+import { z } from "zod";
+import { geometryIssues, LIMITS } from "../beam/checks";
+import type { BeamInput, Load } from "../types";
+
+const loadCase = z.enum(["D", "L", "Lr", "S", "W"], { error: 'must be one of "D", "L", "Lr", "S", "W"' });
+const finite = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine(Number.isFinite, `must be a finite number (${unit})`);
+const positive = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine((v) => Number.isFinite(v) && v > 0, `must be a number greater than 0 (${unit})`);
+
+export const areaLoadSchema = z
+  .object({
+    type: z.literal("area"),
+    /** an occupancy preset id from OCCUPANCY_PRESETS instead of case and psf */
+    preset: z.string().min(1).optional(),
+    case: loadCase.optional(),
+    psf: finite("psf").optional(),
+    /** a partial area load from..to (ft); default the whole member */
+    from: finite("ft").optional(),
+    to: finite("ft").optional(),
+  })
+  .strict();
+
+export const snowLoadSchema = z
+  .object({
+    type: z.literal("snow"),
+    /** ground snow load, psf (ASCE 7-22 §7.2) */
+    pg: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be a number of 0 or more (psf)"),
+    Ce: positive("exposure factor").optional(),
+    Ct: positive("thermal factor").optional(),
+    Is: positive("importance factor").optional(),
+    from: finite("ft").optional(),
+    to: finite("ft").optional(),
+  })
+  .strict();
+
+const lineLoadSchema = z.discriminatedUnion("type", [
+  z.object({ type: z.literal("point"), case: loadCase, x: finite("ft"), P: finite("lb") }).strict(),
+  z.object({ type: z.literal("udl"), case: loadCase, from: finite("ft"), to: finite("ft"), w: finite("plf") }).strict(),
+  z.object({ type: z.literal("linear"), case: loadCase, from: finite("ft"), to: finite("ft"), w1: finite("plf"), w2: finite("plf") }).strict(),
+  z.object({ type: z.literal("moment"), case: loadCase, x: finite("ft"), M: finite("lb-ft") }).strict(),
+]);
+
+export const designLoadSchema = z.union([areaLoadSchema, snowLoadSchema, lineLoadSchema], {
+  error: 'must be a load of type "area", "snow", "udl", "point", "linear" or "moment" with its fields',
+});
+
+const plies = z.number().int("must be a whole number of plies").min(1, "must be 1 to 4 plies").max(4, "must be 1 to 4 plies");
+
+export const sawnMemberSchema = z
+  .object({ material: z.literal("sawn"), species: z.string().min(1), grade: z.string().min(1), size: z.string().min(1), plies: plies.default(1) })
+  .strict();
+export const steelMemberSchema = z.object({ material: z.literal("steel"), shape: z.string().min(1), grade: z.string().min(1).default("A992") }).strict();
+export const engineeredMemberSchema = z
+  .object({ material: z.literal("engineered"), product: z.string().min(1), width: positive("in").optional(), depth: positive("in"), plies: plies.default(1) })
+  .strict();
+
+export const memberSchema = z.discriminatedUnion("material", [sawnMemberSchema, steelMemberSchema, engineeredMemberSchema], {
+  error: 'must name a material: "sawn", "steel" or "engineered"',
+});
+
+export const DEFLECTION_PRESET_IDS = ["floor", "floor-tile", "roof-no-ceiling", "ceiling-flexible", "ceiling-brittle", "other"] as const;
+
+export const conditionsSchema = z
+  .object({
+    /** wet service (moisture content over 19 % for sawn lumber, 16 % for glulam) */
+    wet: z.boolean().default(false),
+    incised: z.boolean().default(false),
+    /** member in a repetitive system (joists or rafters at 24 in or less, at least 3, sheathed) */
+    repetitive: z.boolean().default(false),
+    /** unbraced length of the compression edge, ft; 0 = continuously braced */
+    unbracedLength: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)").default(0),
+    selfWeight: z.boolean().default(true),
+    /** sustained temperature, °F (NDS Table 2.3.3) */
+    temperatureF: z.number().refine((v) => Number.isFinite(v) && v <= 150, "must be at most 150 °F").default(70),
+    /** leave out uniform loads within d of each support in the shear check (NDS 2018 §3.4.3.1(a)) */
+    shearIgnoreLoadsNearSupports: z.boolean().default(false),
+    /** place live load span by span for the worst case (ASCE 7-22 §4.3.3) */
+    patternLiveLoad: z.boolean().default(true),
+    /** load on the wide face (flat use) */
+    flat: z.boolean().default(false),
+  })
+  .strict();
+
+export const limitsSchema = z
+  .object({
+    preset: z.enum(DEFLECTION_PRESET_IDS, { error: `must be one of ${DEFLECTION_PRESET_IDS.join(", ")}` }).optional(),
+    /** span/deflection for live (or snow, roof live) load; null = not checked */
+    live: z.number().refine((v) => Number.isFinite(v) && v > 0, "must be a number greater than 0 (L/n)").nullable().optional(),
+    total: z.number().refine((v) => Number.isFinite(v) && v > 0, "must be a number greater than 0 (L/n)").nullable().optional(),
+  })
+  .strict();
+
+const designFields = {
+  length: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
+  supports: z
+    .array(z.object({ x: finite("ft"), type: z.enum(["pin", "roller", "fixed"], { error: 'must be "pin", "roller" or "fixed"' }) }).strict())
+    .min(1, "give at least one support"),
+  /** joist spacing, in on centre */
+  spacing: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
+  /** tributary width, ft */
+  tributary: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
+  loads: z.array(designLoadSchema).max(LIMITS.maxLoads),
+  /** bearing length at each support, in; default 1-1/2 in (IRC R502.6 minimum on wood or metal) */
+  bearing: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
+  conditions: conditionsSchema.default(() => conditionsSchema.parse({})),
+  limits: limitsSchema.default({}),
+  method: z.enum(["asd", "lrfd"], { error: 'must be "asd" or "lrfd"' }).default("asd"),
+};
+
+type RefineCtx = z.RefinementCtx;
+
+/** Checks that need more than one field: spacing vs tributary, positions on the member, area load fields. */
+function crossFieldIssues(v: { length: number; supports: { x: number; type: "pin" | "roller" | "fixed" }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[] }, ctx: RefineCtx): void {
+  const hasArea = v.loads.some((l) => l.type === "area" || l.type === "snow");
+  if (v.spacing !== undefined && v.tributary !== undefined) {
+    ctx.addIssue({ code: "custom", path: ["tributary"], message: "give either spacing (in, for joists) or tributary (ft, for beams and headers), not both" });
+  } else if (hasArea && v.spacing === undefined && v.tributary === undefined) {
+    ctx.addIssue({ code: "custom", path: ["spacing"], message: "area loads (psf) need spacing (in, for joists) or tributary (ft, for beams and headers)" });
+  }
+  v.loads.forEach((l, i) => {
+    if (l.type === "area") {
+      if (l.preset === undefined && (l.case === undefined || l.psf === undefined)) {
+        ctx.addIssue({ code: "custom", path: ["loads", i, l.case === undefined ? "case" : "psf"], message: "an area load needs case and psf, or a preset" });
+      }
+      if (l.preset !== undefined && (l.case !== undefined || l.psf !== undefined)) {
+        ctx.addIssue({ code: "custom", path: ["loads", i, "preset"], message: "give a preset or case and psf, not both" });
+      }
+    }
+    if ((l.type === "area" || l.type === "snow") && (l.from !== undefined || l.to !== undefined)) {
+      const from = l.from ?? 0;
+      const to = l.to ?? v.length;
+      if (!(from >= 0 && to <= v.length && to > from)) {
+        ctx.addIssue({ code: "custom", path: ["loads", i, l.to !== undefined ? "to" : "from"], message: `must lie on the member, 0 to ${v.length} ft, with to > from` });
+      }
+    }
+  });
+  const lineLoads: Load[] = v.loads.filter((l): l is Exclude<typeof l, { type: "area" } | { type: "snow" }> => l.type !== "area" && l.type !== "snow");
+  const lineIndex = v.loads.map((l, i) => (l.type !== "area" && l.type !== "snow" ? i : -1)).filter((i) => i >= 0);
+  const beam: BeamInput = { length: v.length, E: 1, I: 1, supports: v.supports, loads: lineLoads };
+  for (const issue of geometryIssues(beam)) {
+    const parts = issue.path.split(".");
+    if (parts[0] === "loads") parts[1] = String(lineIndex[Number(parts[1])]);
+    ctx.addIssue({ code: "custom", path: parts.map((p) => (/^\d+$/.test(p) ? Number(p) : p)), message: issue.message });
+  }
+}
+
+export const checkInputSchema = z.object({ member: memberSchema, ...designFields }).strict().superRefine(crossFieldIssues);
+
+export const sizeFamilySchema = z.discriminatedUnion(
+  "material",
+  [
+    z
+      .object({
+        material: z.literal("sawn"),
+        species: z.string().min(1).optional(),
+        grade: z.string().min(1).optional(),
+        /** plies to try; default 1 for joists at a spacing, 1 to 4 otherwise */
+        plies: z.array(plies).min(1).optional(),
+      })
+      .strict(),
+    z.object({ material: z.literal("steel"), grade: z.string().min(1).default("A992") }).strict(),
+    z.object({ material: z.literal("engineered"), product: z.string().min(1).optional(), plies: z.array(plies).min(1).optional() }).strict(),
+    z.object({ material: z.literal("any") }).strict(),
+  ],
+  { error: 'must name a family: material "sawn", "engineered", "steel" or "any"' },
+);
+
+export const sizeInputSchema = z
+  .object({
+    member: sizeFamilySchema.default({ material: "any" }),
+    ...designFields,
+    /** how passing members are ranked */
+    rank: z.enum(["weight", "depth", "cost"], { error: 'must be "weight", "depth" or "cost"' }).default("weight"),
+    /** how many passing members and how many nearest failures to return */
+    limit: z.number().int().min(1).max(500).default(20),
+    failures: z.number().int().min(0).max(100).default(5),
+  })
+  .strict()
+  .superRefine(crossFieldIssues);
+
+export const spanInputSchema = z
+  .object({
+    member: memberSchema,
+    ...designFields,
+    /** search range for the largest span, ft */
+    minLength: positive("ft").default(1),
+    maxLength: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).default(40),
+    /** bisection stops when the bracket is narrower than this, in */
+    toleranceIn: positive("in").default(0.05),
+  })
+  .strict()
+  .superRefine(crossFieldIssues);
+
+export type CheckInput = z.infer<typeof checkInputSchema>;
+export type SizeInput = z.infer<typeof sizeInputSchema>;
+export type SpanInput = z.infer<typeof spanInputSchema>;
+export type MemberSpec = z.infer<typeof memberSchema>;
+export type SizeFamily = z.infer<typeof sizeFamilySchema>;
+export type DesignLoad = z.infer<typeof designLoadSchema>;
+export type DesignConditions = z.infer<typeof conditionsSchema>;
+export type DeflectionPresetId = (typeof DEFLECTION_PRESET_IDS)[number];

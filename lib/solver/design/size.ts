@@ -1,0 +1,252 @@
+/**
+ * Sizing: every candidate in the tables (or one family) checked against the same loads, passing
+ * members ranked by weight, depth or the table's cost, with the nearest failures and why they fail;
+ * and the largest span a given member passes, by bisection on the length (as span tables give it).
+ */
+import { TableLookupError } from "@/lib/tables";
+import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
+import { CAUTION } from "../beam";
+import { assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
+import type { DesignContext } from "./context";
+import { DesignInputError } from "./errors";
+import { resolveMember, resolveMemberUnchecked, type DesignMember } from "./member";
+import { sizeInputSchema, spanInputSchema, type MemberSpec, type SizeFamily, type SizeInput, type SpanInput } from "./schema";
+import type { CheckName, DesignCheck } from "./types";
+
+export interface SizeCandidateResult {
+  member: MemberSpec;
+  label: string;
+  governing: CheckName | null;
+  ratio: number;
+  weightPlf: number;
+  /** in */
+  depth: number;
+  /** from the table's cost column, per foot of the whole member; null where the table has none */
+  costPerFoot: number | null;
+  /** jack studs per support (wood) and bearing needed, for the answer line */
+  supports: { x: number; maxDown: number; uplift: number; requiredBearing: number; jackStuds: number | null }[];
+}
+
+export interface SizeFailure extends SizeCandidateResult {
+  /** plain words, e.g. "bending 112% in D+L at 7 ft" */
+  reason: string;
+}
+
+export interface SizeOutput {
+  passing: SizeCandidateResult[];
+  failing: SizeFailure[];
+  rank: "weight" | "depth" | "cost";
+  method: "asd" | "lrfd";
+  /** how many members were checked and how many passed */
+  candidates: number;
+  passingCount: number;
+  assumptions: string[];
+  notChecked: readonly string[];
+  caution: string;
+  tables: string;
+}
+
+const ALL_PLIES = [1, 2, 3, 4];
+
+/** Every member of the family that the tables can build, in table order. */
+export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joists: boolean): MemberSpec[] {
+  const out: MemberSpec[] = [];
+  const mat = family.material;
+  if (mat === "sawn" || mat === "any") {
+    const f = family.material === "sawn" ? family : undefined;
+    const speciesHeld = [...new Set(tables.sawnValues.map((v) => v.species))];
+    let species: Species[] = speciesHeld;
+    if (f?.species !== undefined) {
+      const hit = speciesHeld.find((s) => s.toLowerCase() === f.species?.trim().toLowerCase());
+      if (!hit) throw new DesignInputError([{ path: "member.species", message: new TableLookupError("member.species", `unknown species "${f.species}"`, speciesHeld).message }]);
+      species = [hit];
+    }
+    const plies = f?.plies ?? (joists ? [1] : ALL_PLIES);
+    for (const sp of species) {
+      const gradesHeld = [...new Set(tables.sawnValues.filter((v) => v.species === sp).map((v) => v.grade))];
+      let grades: SawnGrade[] = gradesHeld;
+      if (f?.grade !== undefined) {
+        const norm = (s: string) => s.toLowerCase().replace(/[\s.#]/g, "").replace(/^no/, "");
+        const hit = gradesHeld.find((g) => norm(g) === norm(f.grade as string));
+        if (!hit) throw new DesignInputError([{ path: "member.grade", message: new TableLookupError("member.grade", `unknown grade "${f.grade}" for ${sp}`, gradesHeld).message }]);
+        grades = [hit];
+      }
+      for (const grade of grades) {
+        for (const size of tables.sawnSizes) {
+          for (const n of size.sizeClass === "dimension" ? plies : [1]) {
+            out.push({ material: "sawn", species: sp, grade, size: size.name, plies: n });
+          }
+        }
+      }
+    }
+  }
+  if (mat === "engineered" || mat === "any") {
+    const f = family.material === "engineered" ? family : undefined;
+    let products = tables.engineered;
+    if (f?.product !== undefined) {
+      const hit = tables.engineered.find((p) => p.name.toLowerCase() === f.product?.trim().toLowerCase());
+      if (!hit) throw new DesignInputError([{ path: "member.product", message: new TableLookupError("member.product", `unknown engineered product "${f.product}"`, tables.engineered.map((p) => p.name)).message }]);
+      products = [hit];
+    }
+    for (const p of products) {
+      const plies = p.kind === "LVL" ? (f?.plies ?? (joists ? [1] : ALL_PLIES)) : [1];
+      for (const width of p.widths) for (const depth of p.depths) for (const n of plies) out.push({ material: "engineered", product: p.name, width, depth, plies: n });
+    }
+  }
+  if (mat === "steel" || mat === "any") {
+    const grade = family.material === "steel" ? family.grade : "A992";
+    for (const s of tables.steel) out.push({ material: "steel", shape: s.name, grade });
+  }
+  return out;
+}
+
+function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>): SizeCandidateResult {
+  return {
+    member: member.spec,
+    label: member.label,
+    governing: ev.governing,
+    ratio: ev.ratio,
+    weightPlf: Math.round(member.weightPlf * 100) / 100,
+    depth: member.d,
+    costPerFoot: member.costPerFoot ?? null,
+    supports: ev.reactions.map((r) => ({ x: r.x, maxDown: r.maxDown, uplift: r.uplift, requiredBearing: r.requiredBearing, jackStuds: r.jackStuds })),
+  };
+}
+
+function reasonOf(c: DesignCheck | undefined): string {
+  if (!c) return "no check ran";
+  const where = c.x === null ? "" : ` at ${Math.round(c.x * 100) / 100} ft`;
+  const combo = c.combination ? ` in ${c.combination}` : "";
+  return `${c.name} ${Math.round(c.ratio * 100)}%${combo}${where}: ${c.demand} ${c.unit} against ${c.capacity} ${c.unit}`;
+}
+
+const RANKERS: Record<SizeOutput["rank"], (a: SizeCandidateResult, b: SizeCandidateResult) => number> = {
+  weight: (a, b) => a.weightPlf - b.weightPlf || a.depth - b.depth || a.ratio - b.ratio,
+  depth: (a, b) => a.depth - b.depth || a.weightPlf - b.weightPlf || a.ratio - b.ratio,
+  cost: (a, b) => (a.costPerFoot ?? Infinity) - (b.costPerFoot ?? Infinity) || a.weightPlf - b.weightPlf || a.ratio - b.ratio,
+};
+
+/** Sizes a member: `npm run size` and POST /api/size. Throws DesignInputError on bad input. */
+export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
+  const input = parseWith<SizeInput>(sizeInputSchema, json);
+  const specs = candidateSpecs(input.member, tables, input.spacing !== undefined);
+  const ctx: DesignContext = contextFor(input);
+  const passing: SizeCandidateResult[] = [];
+  const failing: SizeFailure[] = [];
+  let checked = 0;
+  let lastMember: DesignMember | null = null;
+  for (const spec of specs) {
+    let member: DesignMember;
+    try {
+      member = resolveMemberUnchecked(spec, tables);
+    } catch (err) {
+      if (err instanceof TableLookupError || err instanceof DesignInputError) continue;
+      throw err;
+    }
+    if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) continue;
+    checked++;
+    lastMember = member;
+    const ev = evaluateMember(member, ctx);
+    const row = describe(member, ev);
+    if (ev.pass) passing.push(row);
+    else failing.push({ ...row, reason: reasonOf(ev.checks.find((c) => c.name === ev.governing)) });
+  }
+  passing.sort(RANKERS[input.rank]);
+  failing.sort((a, b) => a.ratio - b.ratio);
+  return {
+    passing: passing.slice(0, input.limit),
+    failing: failing.slice(0, input.failures),
+    rank: input.rank,
+    method: input.method,
+    candidates: checked,
+    passingCount: passing.length,
+    assumptions: lastMember ? assumptionsFor(input, lastMember, ctx).filter((a) => !a.startsWith("member's own weight counted")) : [],
+    notChecked: NOT_CHECKED,
+    caution: CAUTION,
+    tables: tables.version,
+  };
+}
+
+export interface SpanOutput {
+  member: MemberSpec;
+  label: string;
+  /** largest length that passes, ft (rounded down to 1/100 ft) */
+  largestSpan: number | null;
+  /** the same in inches, rounded down to 1/16 in */
+  largestSpanIn: number | null;
+  /** the check that fails just past the largest span */
+  governing: CheckName | null;
+  /** true when the member still passes at maxLength (the span is at least that) */
+  atMaxLength: boolean;
+  /** the full check at the largest span */
+  check: CheckOutput | null;
+  note: string;
+}
+
+/** Positions scaled with the length: supports and loads keep their place as a fraction of the member. */
+function scaled(input: SpanInput, length: number): Record<string, unknown> {
+  const k = length / input.length;
+  const loads = input.loads.map((l) => {
+    switch (l.type) {
+      case "area":
+      case "snow":
+        return { ...l, from: l.from === undefined ? undefined : l.from * k, to: l.to === undefined ? undefined : l.to * k };
+      case "point":
+      case "moment":
+        return { ...l, x: l.x * k };
+      default:
+        return { ...l, from: l.from * k, to: l.to * k };
+    }
+  });
+  const { minLength: _min, maxLength: _max, toleranceIn: _tol, ...rest } = input;
+  void _min;
+  void _max;
+  void _tol;
+  return { ...rest, length, supports: input.supports.map((s) => ({ ...s, x: s.x * k })), loads };
+}
+
+/**
+ * Largest span that passes every check, by bisection on the length between minLength and maxLength
+ * (supports and loads scaled with the length). Ratios grow with the span for the usual layouts.
+ */
+export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
+  const input = parseWith<SpanInput>(spanInputSchema, json);
+  const member = resolveMember(input.member, tables);
+  const run = (L: number) => checkMember(scaled(input, L), tables);
+  const base = { member: member.spec, label: member.label };
+  let lo = input.minLength;
+  let hi = input.maxLength;
+  const atLo = run(lo);
+  if (!atLo.pass) {
+    return { ...base, largestSpan: null, largestSpanIn: null, governing: atLo.governing, atMaxLength: false, check: atLo, note: `fails even at ${lo} ft` };
+  }
+  const atHi = run(hi);
+  if (atHi.pass) {
+    return { ...base, largestSpan: hi, largestSpanIn: hi * 12, governing: null, atMaxLength: true, check: atHi, note: `passes at the search limit of ${hi} ft` };
+  }
+  let best = atLo;
+  let failGov = atHi.governing;
+  while ((hi - lo) * 12 > input.toleranceIn) {
+    const mid = (lo + hi) / 2;
+    const r = run(mid);
+    if (r.pass) {
+      lo = mid;
+      best = r;
+    } else {
+      hi = mid;
+      failGov = r.governing;
+    }
+  }
+  const inches = Math.floor(lo * 12 * 16) / 16;
+  return {
+    ...base,
+    largestSpan: Math.floor(lo * 100) / 100,
+    largestSpanIn: inches,
+    governing: failGov,
+    atMaxLength: false,
+    check: best,
+    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in, centre to centre of supports; ${failGov ?? "a check"} governs just beyond`,
+  };
+}
+
+export { summarizeMember };

@@ -1,0 +1,50 @@
+/** Output shapes of the design checks (`npm run check`, POST /api/check) and the sizing search. */
+
+export type CheckName =
+  | "bending"
+  | "shear"
+  | "deflection-live"
+  | "deflection-total"
+  | "bearing"
+  | "stability"
+  | "web-yielding"
+  | "web-crippling"
+  | "web-compactness";
+
+export interface DesignCheck {
+  name: CheckName;
+  /** the largest demand found (stress, moment, force or deflection) */
+  demand: number;
+  /** what the member is allowed at that place and in that combination */
+  capacity: number;
+  /** unit of demand and capacity: "psi", "kip-ft", "kip", "lb", "in" */
+  unit: string;
+  /** demand / capacity; the check passes at 1.0 or less */
+  ratio: number;
+  /** the load combination that governs, e.g. "D+L"; deflection-live names only the live part */
+  combination: string | null;
+  /** where along the member, ft; null where the check is not at one place */
+  x: number | null;
+  /** plain words on what was checked, e.g. "span 1, L/360 = 0.47 in" */
+  note: string;
+}
+
+export interface SupportReaction {
+  /** ft */
+  x: number;
+  type: "pin" | "roller" | "fixed";
+  /** largest downward reaction over the service (ASD) combinations, lb (the support pushes up) */
+  maxDown: number;
+  maxDownCombination: string;
+  /** largest uplift over the service combinations, lb, 0 when the member never lifts */
+  uplift: number;
+  upliftCombination: string | null;
+  /** unfactored reaction by load case, lb (D includes the member's own weight when counted) */
+  byCase: Partial<Record<"D" | "L" | "Lr" | "S" | "W", number>>;
+  /** bearing length given, in */
+  bearing: number;
+  /** bearing length the member needs here, in */
+  requiredBearing: number;
+  /** wood members: 1-1/2 in jack studs needed under this end of a header (bearing on the member only) */
+  jackStuds: number | null;
+}
