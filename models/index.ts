@@ -3,11 +3,17 @@ import { initUser, User } from "./user";
 import { AuthToken, initAuthToken } from "./auth-token";
 import { initRateLimit } from "./rate-limit";
 import { initMaterialTableModels } from "./material-tables";
+import { initStripeCustomer } from "./stripe-customer";
+import { initStripeEvent } from "./stripe-event";
+import { initSubscription, Subscription } from "./subscription";
 
 export { User, ROLES, type Role } from "./user";
 export { AuthToken, AUTH_TOKEN_PURPOSES, type AuthTokenPurpose } from "./auth-token";
 export { RateLimit } from "./rate-limit";
 export * from "./material-tables";
+export { Subscription, type SubscriptionStatus } from "./subscription";
+export { StripeEvent } from "./stripe-event";
+export { StripeCustomer } from "./stripe-customer";
 
 /**
  * Initialises every model on a Sequelize instance, then wires the associations — all in this one place.
@@ -18,11 +24,16 @@ export function initModels(sequelize: Sequelize): void {
   initAuthToken(sequelize);
   initRateLimit(sequelize);
   initMaterialTableModels(sequelize);
+  initSubscription(sequelize);
+  initStripeEvent(sequelize);
+  initStripeCustomer(sequelize);
   associate();
 }
 
 function associate(): void {
   User.hasMany(AuthToken, { foreignKey: "userId", as: "authTokens", onDelete: "CASCADE" });
   AuthToken.belongsTo(User, { foreignKey: "userId", as: "user" });
+  User.hasMany(Subscription, { foreignKey: "userId", as: "subscriptions", onDelete: "CASCADE" });
+  Subscription.belongsTo(User, { foreignKey: "userId", as: "user" });
   // Associations are added here as models land (jobs, members, sheets, table versions, subscriptions).
 }
