@@ -1,0 +1,67 @@
+import type { Metadata, Viewport } from "next";
+import localFont from "next/font/local";
+import type { ReactNode } from "react";
+import { BottomNav } from "@/components/shell/bottom-nav";
+import { SiteFooter } from "@/components/shell/site-footer";
+import { SiteHeader } from "@/components/shell/site-header";
+import { ToastProvider } from "@/components/ui/toast";
+import "./globals.css";
+
+// Shipped in fonts/ (copied from @fontsource, SIL OFL 1.1); nothing is fetched from a font service.
+const sans = localFont({
+  src: [
+    { path: "../fonts/atkinson-hyperlegible-latin-400-normal.woff2", weight: "400", style: "normal" },
+    { path: "../fonts/atkinson-hyperlegible-latin-700-normal.woff2", weight: "700", style: "normal" },
+  ],
+  variable: "--font-sans",
+  display: "swap",
+  fallback: ["system-ui", "Arial", "sans-serif"],
+});
+
+const mono = localFont({
+  src: [
+    { path: "../fonts/ibm-plex-mono-latin-400-normal.woff2", weight: "400", style: "normal" },
+    { path: "../fonts/ibm-plex-mono-latin-500-normal.woff2", weight: "500", style: "normal" },
+  ],
+  variable: "--font-mono",
+  display: "swap",
+  fallback: ["ui-monospace", "Menlo", "monospace"],
+});
+
+export const metadata: Metadata = {
+  title: { default: "Spanlark — size joists, headers and beams on site", template: "%s · Spanlark" },
+  description: "Spanlark sizes floor joists, headers, beams, deck framing and rafters in timber and steel, on your phone.",
+  applicationName: "Spanlark",
+  formatDetection: { telephone: false },
+};
+
+export const viewport: Viewport = {
+  width: "device-width",
+  initialScale: 1,
+  themeColor: "#F7F5EF",
+  viewportFit: "cover",
+};
+
+export default function RootLayout({ children }: { children: ReactNode }) {
+  return (
+    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+      <body className="flex min-h-dvh flex-col bg-paper font-sans text-ink antialiased">
+        <a
+          href="#main"
+          className="sr-only focus:not-sr-only focus:fixed focus:top-2 focus:left-2 focus:z-50 focus:rounded-lg focus:bg-ink focus:px-4 focus:py-3 focus:text-paper"
+        >
+          Skip to content
+        </a>
+        <ToastProvider>
+          <SiteHeader />
+          <main id="main" tabIndex={-1} className="mx-auto w-full max-w-5xl flex-1 px-4 pt-6 focus:outline-none">
+            {children}
+          </main>
+          <SiteFooter />
+          <div aria-hidden="true" className="md:hidden" style={{ height: "var(--bottom-nav-h)" }} />
+          <BottomNav />
+        </ToastProvider>
+      </body>
+    </html>
+  );
+}

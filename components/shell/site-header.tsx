@@ -1,0 +1,44 @@
+"use client";
+
+import Link from "next/link";
+import { usePathname } from "next/navigation";
+import { cx } from "@/components/ui/cx";
+import { NavIcon } from "./nav-icon";
+import { NAV_ITEMS, isActive } from "./nav-items";
+import { Wordmark } from "./wordmark";
+
+/** The top bar: the name (home) on every screen, and the three places as a top nav on wide screens. */
+export function SiteHeader() {
+  const pathname = usePathname() ?? "/";
+  return (
+    <header className="no-print sticky top-0 z-40 border-b-2 border-rule bg-paper/95 backdrop-blur supports-[backdrop-filter]:bg-paper/85">
+      <div className="mx-auto flex h-14 max-w-5xl items-center justify-between gap-4 px-4">
+        <Link href="/" className="-ml-1 inline-flex min-h-touch items-center rounded-lg px-1 no-underline" aria-label="Spanlark home">
+          <Wordmark />
+        </Link>
+        <nav aria-label="Main" className="hidden md:block">
+          <ul className="flex items-center gap-1">
+            {NAV_ITEMS.map((item) => {
+              const active = isActive(pathname, item.href);
+              return (
+                <li key={item.href}>
+                  <Link
+                    href={item.href}
+                    aria-current={active ? "page" : undefined}
+                    className={cx(
+                      "inline-flex min-h-touch items-center gap-2 rounded-lg px-3 font-bold no-underline",
+                      active ? "bg-spruce text-white" : "text-ink hover:bg-spruce-light",
+                    )}
+                  >
+                    <NavIcon icon={item.icon} className="h-5 w-5" />
+                    {item.label}
+                  </Link>
+                </li>
+              );
+            })}
+          </ul>
+        </nav>
+      </div>
+    </header>
+  );
+}

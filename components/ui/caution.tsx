@@ -1,0 +1,35 @@
+import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "./caution-text";
+import { WarningIcon } from "./icons";
+import { cx } from "./cx";
+
+export type CautionProps = {
+  /** "short" on screens (the caution in one paragraph); "full" on sheets and the crew link (with the list). */
+  variant?: "short" | "full";
+  className?: string;
+};
+
+/** The safety caution with its warning triangle, on every answer, crew link and job sheet. */
+export function Caution({ variant = "short", className }: CautionProps) {
+  return (
+    <aside
+      aria-label="Safety caution"
+      className={cx("rounded-card border-2 border-caution border-l-8 bg-caution-bg p-4 text-ink", className)}
+    >
+      <p className="flex items-center gap-2 font-bold text-caution-ink">
+        <WarningIcon className="h-6 w-6 shrink-0" />
+        <span>{CAUTION_TITLE}</span>
+      </p>
+      <p className="mt-2">{CAUTION_TEXT}</p>
+      {variant === "full" ? (
+        <>
+          <p className="mt-3 font-bold">Spanlark does not check:</p>
+          <ul className="mt-1 list-disc space-y-0.5 pl-6">
+            {NOT_CHECKED.map((item) => (
+              <li key={item}>{item}</li>
+            ))}
+          </ul>
+        </>
+      ) : null}
+    </aside>
+  );
+}
