@@ -142,7 +142,9 @@ function crossFieldIssues(v: { length: number; supports: { x: number; type: "pin
   const lineLoads: Load[] = v.loads.filter((l): l is Exclude<typeof l, { type: "area" } | { type: "snow" }> => l.type !== "area" && l.type !== "snow");
   const lineIndex = v.loads.map((l, i) => (l.type !== "area" && l.type !== "snow" ? i : -1)).filter((i) => i >= 0);
   const beam: BeamInput = { length: v.length, E: 1, I: 1, supports: v.supports, loads: lineLoads };
+  if (!(Number.isFinite(v.length) && v.length > 0)) return;
   for (const issue of geometryIssues(beam)) {
+    if (issue.path === "length") continue;
     const parts = issue.path.split(".");
     if (parts[0] === "loads") parts[1] = String(lineIndex[Number(parts[1])]);
     ctx.addIssue({ code: "custom", path: parts.map((p) => (/^\d+$/.test(p) ? Number(p) : p)), message: issue.message });
