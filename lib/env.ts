@@ -21,6 +21,8 @@ const EnvSchema = z.object({
   STRIPE_API_HOST: z.string().optional(),
   STRIPE_API_PORT: z.coerce.number().int().positive().optional(),
   STRIPE_API_PROTOCOL: z.enum(["http", "https"]).optional(),
+  STRIPE_STANDIN_PORT: z.coerce.number().int().min(1).max(65535).default(12111),
+  STRIPE_WEBHOOK_URL: z.union([z.literal(""), z.string().url("must be the app's webhook URL")]).default("http://127.0.0.1:3000/api/stripe/webhook"),
 });
 
 export type Env = z.infer<typeof EnvSchema>;
