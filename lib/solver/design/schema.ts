@@ -22,6 +22,8 @@ export const areaLoadSchema = z
     /** a partial area load from..to (ft); default the whole member */
     from: finite("ft").optional(),
     to: finite("ft").optional(),
+    /** this load's own tributary width, ft (e.g. roof and floor above a header); default the member's spacing or tributary */
+    tributary: positive("ft").optional(),
   })
   .strict();
 
@@ -35,6 +37,7 @@ export const snowLoadSchema = z
     Is: positive("importance factor").optional(),
     from: finite("ft").optional(),
     to: finite("ft").optional(),
+    tributary: positive("ft").optional(),
   })
   .strict();
 
@@ -116,11 +119,11 @@ type RefineCtx = z.RefinementCtx;
 
 /** Checks that need more than one field: spacing vs tributary, positions on the member, area load fields. */
 function crossFieldIssues(v: { length: number; supports: { x: number; type: "pin" | "roller" | "fixed" }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[] }, ctx: RefineCtx): void {
-  const hasArea = v.loads.some((l) => l.type === "area" || l.type === "snow");
+  const hasArea = v.loads.some((l) => (l.type === "area" || l.type === "snow") && l.tributary === undefined);
   if (v.spacing !== undefined && v.tributary !== undefined) {
     ctx.addIssue({ code: "custom", path: ["tributary"], message: "give either spacing (in, for joists) or tributary (ft, for beams and headers), not both" });
   } else if (hasArea && v.spacing === undefined && v.tributary === undefined) {
-    ctx.addIssue({ code: "custom", path: ["spacing"], message: "area loads (psf) need spacing (in, for joists) or tributary (ft, for beams and headers)" });
+    ctx.addIssue({ code: "custom", path: ["spacing"], message: "area loads (psf) need spacing (in, for joists) or tributary (ft, for beams and headers), here or on each area load" });
   }
   v.loads.forEach((l, i) => {
     if (l.type === "area") {

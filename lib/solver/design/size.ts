@@ -108,7 +108,7 @@ function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>): 
     ratio: ev.ratio,
     weightPlf: Math.round(member.weightPlf * 100) / 100,
     depth: member.d,
-    costPerFoot: member.costPerFoot ?? null,
+    costPerFoot: member.costPerFoot === undefined ? null : Math.round(member.costPerFoot * 100) / 100,
     supports: ev.reactions.map((r) => ({ x: r.x, maxDown: r.maxDown, uplift: r.uplift, requiredBearing: r.requiredBearing, jackStuds: r.jackStuds })),
   };
 }

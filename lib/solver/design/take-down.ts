@@ -20,9 +20,10 @@ export interface TakenDownLoad {
 
 const r1 = (v: number) => Math.round(v * 10) / 10;
 
-export function takeDown(loads: DesignLoad[], lengthFt: number, width: { spacingIn?: number; tributaryFt?: number }): TakenDownLoad[] {
-  const widthText = width.spacingIn !== undefined ? `${width.spacingIn} in / 12` : `${width.tributaryFt} ft`;
+export function takeDown(loads: DesignLoad[], lengthFt: number, memberWidth: { spacingIn?: number; tributaryFt?: number }): TakenDownLoad[] {
   return loads.map((l, i): TakenDownLoad => {
+    const width = (l.type === "area" || l.type === "snow") && l.tributary !== undefined ? { tributaryFt: l.tributary } : memberWidth;
+    const widthText = width.spacingIn !== undefined ? `${width.spacingIn} in / 12` : `${width.tributaryFt} ft`;
     if (l.type === "area") {
       let lc = l.case;
       let psf = l.psf;
