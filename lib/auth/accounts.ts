@@ -36,7 +36,8 @@ function emailKey(kind: string, email: string): string {
   return `${kind}:email:${sha256Hex(normalizeEmail(email)).slice(0, 40)}`;
 }
 
-function limitsFor(kind: "sign-in" | "reset" | "sign-up", email: string, ip: string): Limit[] {
+/** The two counters one attempt of `kind` bumps: one for the e-mail address, one for the client address. */
+export function limitsFor(kind: "sign-in" | "reset" | "sign-up", email: string, ip: string): Limit[] {
   const [perEmail, perIp] =
     kind === "sign-in"
       ? [LIMITS.signInPerEmail, LIMITS.signInPerIp]

@@ -1,0 +1,81 @@
+import { randomUUID } from "node:crypto";
+import { describe, expect, test, vi } from "vitest";
+import { TEST_DB, makeUser, sendMailMock, uniqueEmail, uniqueIp } from "./support";
+
+vi.mock("@/lib/mail", () => ({ sendMail: sendMailMock }));
+
+const { hit, hitAll } = await import("@/lib/auth/rate-limit");
+const { authenticate, requestPasswordReset, limitsFor, LIMITS, RateLimitedError } = await import("@/lib/auth/accounts");
+
+const MINUTE = 60_000;
+
+describe.skipIf(!TEST_DB)("rate limits kept in PostgreSQL", () => {
+  test("allows `max` attempts in a window, then blocks with the time left", async () => {
+    const key = `test:${randomUUID()}`;
+    const t0 = new Date("2026-12-01T10:00:00Z");
+    const results = [];
+    for (let i = 0; i < 4; i++) results.push(await hit({ key, max: 3, windowMs: 10 * MINUTE }, new Date(t0.getTime() + i * MINUTE)));
+    expect(results.map((r) => r.allowed)).toEqual([true, true, true, false]);
+    expect(results.map((r) => r.count)).toEqual([1, 2, 3, 4]);
+    // The window opened at t0 and lasts 10 min; the 4th try came at t0 + 3 min, so 7 min are left.
+    expect(results[3].retryAfterSeconds).toBe(7 * 60);
+  });
+
+  test("a new window starts once the old one has passed", async () => {
+    const key = `test:${randomUUID()}`;
+    const t0 = new Date("2026-12-01T10:00:00Z");
+    for (let i = 0; i < 5; i++) await hit({ key, max: 2, windowMs: 10 * MINUTE }, t0);
+    const later = await hit({ key, max: 2, windowMs: 10 * MINUTE }, new Date(t0.getTime() + 10 * MINUTE));
+    expect(later).toEqual({ allowed: true, count: 1, retryAfterSeconds: 0 });
+  });
+
+  test("concurrent attempts are each counted once (atomic upsert)", async () => {
+    const key = `test:${randomUUID()}`;
+    const now = new Date();
+    const results = await Promise.all(Array.from({ length: 25 }, () => hit({ key, max: 10, windowMs: MINUTE }, now)));
+    expect(results.map((r) => r.count).sort((a, b) => a - b)).toEqual(Array.from({ length: 25 }, (_, i) => i + 1));
+    expect(results.filter((r) => r.allowed)).toHaveLength(10);
+  });
+
+  test("hitAll blocks when any one limit is over", async () => {
+    const a = { key: `test:${randomUUID()}`, max: 1, windowMs: MINUTE };
+    const b = { key: `test:${randomUUID()}`, max: 5, windowMs: MINUTE };
+    expect((await hitAll([a, b])).allowed).toBe(true);
+    expect((await hitAll([a, b])).allowed).toBe(false);
+  });
+
+  test("sign-in: after the per-address limit even the right password is refused", async () => {
+    const user = await makeUser({ password: "the-right-password" });
+    // Two wrong tries through the real flow, the rest of the allowance spent directly on the same counter.
+    for (let i = 0; i < 2; i++) {
+      expect(await authenticate(user.email, "a-wrong-password", uniqueIp())).toEqual({ ok: false, reason: "invalid" });
+    }
+    const [perEmail] = limitsFor("sign-in", user.email, uniqueIp());
+    for (let i = 2; i < LIMITS.signInPerEmail.max; i++) await hit(perEmail);
+    const blocked = await authenticate(user.email.toUpperCase(), "the-right-password", uniqueIp());
+    expect(blocked.ok === false && blocked.reason).toBe("rate-limited");
+    expect(blocked.ok === false && blocked.reason === "rate-limited" && blocked.retryAfterSeconds).toBeGreaterThan(0);
+  });
+
+  test("sign-in: one client address trying many addresses is stopped by the per-client limit", async () => {
+    const ip = uniqueIp();
+    const [, perIp] = limitsFor("sign-in", uniqueEmail("spray"), ip);
+    for (let i = 0; i < LIMITS.signInPerIp.max - 1; i++) await hit(perIp);
+    expect(await authenticate(uniqueEmail("spray"), "whatever-password", ip)).toEqual({ ok: false, reason: "invalid" });
+    const blocked = await authenticate(uniqueEmail("spray"), "whatever-password", ip);
+    expect(blocked.ok === false && blocked.reason).toBe("rate-limited");
+    // Another client is not affected.
+    expect(await authenticate(uniqueEmail("spray"), "whatever-password", uniqueIp())).toEqual({ ok: false, reason: "invalid" });
+  });
+
+  test("password reset: the per-address limit answers 429, the same for an address with or without an account", async () => {
+    const user = await makeUser();
+    const nobody = uniqueEmail("nobody");
+    for (const address of [user.email, nobody]) {
+      for (let i = 0; i < LIMITS.resetPerEmail.max; i++) await requestPasswordReset(address, uniqueIp());
+      const error = await requestPasswordReset(address, uniqueIp()).catch((e: unknown) => e);
+      expect(error).toBeInstanceOf(RateLimitedError);
+      expect((error as InstanceType<typeof RateLimitedError>).status).toBe(429);
+    }
+  }, 60_000);
+});
