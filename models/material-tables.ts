@@ -1,0 +1,24 @@
+import type { Sequelize } from "sequelize";
+import { CostRowModel, initCost } from "./cost";
+import { EngineeredProductRow, initEngineeredProduct } from "./engineered-product";
+import { initSawnSize, SawnSizeRow } from "./sawn-size";
+import { initSawnValue, SawnValueRow } from "./sawn-value";
+import { initSizeFactor, SizeFactorRow } from "./size-factor";
+import { initSteelGrade, SteelGradeRow } from "./steel-grade";
+import { initSteelShape, SteelShapeRow } from "./steel-shape";
+import { initTableVersion, TableVersion, TABLE_VERSION_SOURCES, type TableVersionSource } from "./table-version";
+
+export { CostRowModel, EngineeredProductRow, SawnSizeRow, SawnValueRow, SizeFactorRow, SteelGradeRow, SteelShapeRow, TableVersion };
+export { TABLE_VERSION_SOURCES, type TableVersionSource };
+
+/** The material table models: one version table and one row table per material table. */
+export function initMaterialTableModels(sequelize: Sequelize): void {
+  initTableVersion(sequelize);
+  initSawnSize(sequelize);
+  initSawnValue(sequelize);
+  initSizeFactor(sequelize);
+  initEngineeredProduct(sequelize);
+  initSteelShape(sequelize);
+  initSteelGrade(sequelize);
+  initCost(sequelize);
+}
