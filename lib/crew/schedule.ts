@@ -1,0 +1,65 @@
+/**
+ * The crew's member schedule: one row per member, in the job's order, read from the answer saved with
+ * each member (Member.resultSummary), so the crew sees the numbers the builder saw. Pure.
+ */
+import { formatFeetInches, formatInches } from "@/lib/flow/length";
+import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
+import type { MemberResultSummary } from "@/lib/flow/summary";
+import { formatLb, supportName } from "@/lib/sheets/format";
+
+export interface ScheduleSupport {
+  name: string;
+  /** "2,671 lb down" (and uplift when there is one) */
+  reaction: string;
+  /** "2 jack studs" or "bearing 3" (needs 15/16")" */
+  bearing: string;
+}
+
+export interface ScheduleRow {
+  id: string;
+  label: string;
+  kindLabel: string;
+  /** "3-ply 2x12 No.2 — 2 jack studs each end", or null when no size is chosen */
+  headline: string | null;
+  memberLabel: string | null;
+  /** "10' 0"" and, with overhangs, the whole length */
+  span: string;
+  supports: ScheduleSupport[];
+  /** "OK 64% (bending)" or a warning */
+  verdict: { pass: boolean; words: string } | null;
+}
+
+export interface ScheduleMemberSource {
+  id: string;
+  label: string;
+  kind: MemberKind;
+  resultSummary: MemberResultSummary | null;
+}
+
+export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
+  const s = m.resultSummary;
+  if (!s) {
+    return { id: m.id, label: m.label, kindLabel: KIND_LABELS[m.kind], headline: null, memberLabel: null, span: "—", supports: [], verdict: null };
+  }
+  const overhang = Math.abs(s.lengthFt - s.spanFt) > 1 / 192;
+  const span = overhang ? `${formatFeetInches(s.spanFt)} (member ${formatFeetInches(s.lengthFt)} long)` : formatFeetInches(s.spanFt);
+  const supports = s.reactions.map((r, i) => {
+    const reaction = r.uplift > 0 ? `${formatLb(r.maxDown)} down, ${formatLb(r.uplift)} uplift` : `${formatLb(r.maxDown)} down`;
+    const bearing =
+      r.jackStuds !== null
+        ? `${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"}`
+        : `bearing ${formatInches(r.bearing)} (needs ${formatInches(Math.max(r.requiredBearing, 0))})`;
+    return { name: supportName(i, s.reactions.length, r.x), reaction, bearing };
+  });
+  const pct = `${Math.round(s.ratio * 100)}%`;
+  return {
+    id: m.id,
+    label: m.label,
+    kindLabel: KIND_LABELS[m.kind],
+    headline: s.headline,
+    memberLabel: s.memberLabel,
+    span,
+    supports,
+    verdict: { pass: s.pass, words: s.pass ? `OK ${pct}${s.governing ? `, ${s.governing.replace(/-/g, " ")} governs` : ""}` : `Over ${pct}: do not build this` },
+  };
+}

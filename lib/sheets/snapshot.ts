@@ -1,0 +1,323 @@
+/**
+ * A job sheet's snapshot: the job's members worked out once, when the sheet is saved, and kept as JSON.
+ * Reprinting (the page, the PDF) reads only this: no solver, no tables, no member rows. So a sheet prints
+ * the same numbers after the tables are edited or the member is changed. Pure: no database, no React.
+ */
+import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/caution-text";
+import { formatFeetInches, formatInches } from "@/lib/flow/length";
+import { checkRequest, combinationFactors, diagramBeam } from "@/lib/flow/request";
+import { KIND_LABELS, mainSpanFt, sortedSupports, type FlowState, type MemberKind } from "@/lib/flow/state";
+import { headlineFor } from "@/lib/flow/summary";
+import { analyzeBeam, type Segment } from "@/lib/solver/beam";
+import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
+import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { DesignCheck, SupportReaction } from "@/lib/solver/design/types";
+import type { MaterialTables } from "@/lib/tables/types";
+
+export const SNAPSHOT_FORMAT = 1;
+
+export interface SheetExtreme {
+  x: number;
+  value: number;
+  label: string;
+}
+
+export interface SheetDiagram {
+  quantity: "V" | "M" | "deflection";
+  title: string;
+  unit: string;
+  /** the load combination drawn, e.g. "D+L" */
+  combination: string;
+  segments: Segment[];
+  extremes: SheetExtreme[];
+}
+
+export interface SheetMember {
+  id: string;
+  label: string;
+  kind: MemberKind;
+  kindLabel: string;
+  /** "3-ply 2x12 No.2 — 2 jack studs each end" */
+  headline: string;
+  memberLabel: string;
+  pass: boolean;
+  governing: string | null;
+  ratio: number;
+  spanFt: number;
+  lengthFt: number;
+  supports: { x: number; type: "pin" | "roller" | "fixed" }[];
+  /** the inputs in words, in order: [what, value] */
+  inputs: [string, string][];
+  /** the inputs as the flow holds them (for reference; never recomputed) */
+  flowState: FlowState;
+  loads: CheckOutput["loads"];
+  checks: DesignCheck[];
+  reactions: SupportReaction[];
+  /** adjustment factors and design values, [symbol, value] */
+  factors: [string, string][];
+  limits: CheckOutput["limits"];
+  assumptions: string[];
+  diagrams: SheetDiagram[];
+  /** set when the member's saved answer came from other tables than this sheet's */
+  note: string | null;
+}
+
+export interface SheetSkipped {
+  id: string;
+  label: string;
+  reason: string;
+}
+
+export interface SheetSnapshot {
+  format: typeof SNAPSHOT_FORMAT;
+  /** ISO 8601 */
+  savedAt: string;
+  job: { id: string; name: string; siteAddress: string; notes: string };
+  preparedBy: { name: string; company: string | null };
+  tablesVersion: string;
+  method: "asd";
+  members: SheetMember[];
+  skipped: SheetSkipped[];
+  caution: { title: string; text: string; notChecked: string[] };
+}
+
+/** One member as it comes from the job: its inputs and the size chosen for it (null: not sized yet). */
+export interface SheetMemberSource {
+  id: string;
+  label: string;
+  kind: MemberKind;
+  flowState: FlowState;
+  chosenMember: MemberSpec | null;
+  /** tables version of the answer saved with the member, if any */
+  savedTables: string | null;
+}
+
+export interface SheetSource {
+  job: { id: string; name: string; siteAddress: string; notes: string };
+  preparedBy: { name: string; company: string | null };
+  members: SheetMemberSource[];
+  tables: MaterialTables;
+  now: Date;
+}
+
+const round = (v: number, digits = 4) => {
+  const f = 10 ** digits;
+  return Math.round(v * f) / f;
+};
+
+function fmtNumber(v: number): string {
+  if (!Number.isFinite(v)) return "—";
+  const abs = Math.abs(v);
+  const digits = abs >= 1000 ? 0 : abs >= 100 ? 1 : abs >= 1 ? 2 : 3;
+  return v.toLocaleString("en-US", { maximumFractionDigits: digits, minimumFractionDigits: 0 });
+}
+
+function widthWords(state: FlowState): string {
+  return state.width.mode === "spacing" ? `${fmtNumber(state.width.spacingIn)} in on centre` : `${fmtNumber(state.width.tributaryFt)} ft tributary width`;
+}
+
+function materialWords(state: FlowState): string {
+  const m = state.material;
+  switch (m.family) {
+    case "any":
+      return "Any material (best found)";
+    case "sawn":
+      return `Sawn lumber, ${m.species} ${m.grade}`;
+    case "built-up":
+      return `Built-up plies, ${m.species} ${m.grade}${m.plies > 0 ? `, ${m.plies} plies` : ""}`;
+    case "engineered":
+      return m.product ? `Engineered, ${m.product}` : "Engineered lumber (any product)";
+    case "steel":
+      return "Steel W-shape, A992";
+  }
+}
+
+function inputRows(state: FlowState): [string, string][] {
+  const supports = sortedSupports(state.supports)
+    .map((s) => `${s.type} at ${formatFeetInches(s.x)}`)
+    .join(", ");
+  const rows: [string, string][] = [
+    ["Member", KIND_LABELS[state.kind]],
+    ["Length", formatFeetInches(state.lengthFt)],
+    ["Supports", supports],
+    [state.width.mode === "spacing" ? "Spacing" : "Tributary width", widthWords(state)],
+  ];
+  for (const a of state.areaLoads) if (a.psf > 0) rows.push([`Area load (${a.case})`, `${a.label || a.preset}: ${fmtNumber(a.psf)} psf`]);
+  if (state.snow.on && state.snow.groundPsf > 0) {
+    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf, ${state.snow.exposure}, ${state.snow.thermal}`]);
+  }
+  for (const p of state.pointLoads) rows.push([`Point load (${p.case})`, `${p.label ? `${p.label}: ` : ""}${fmtNumber(p.P)} lb at ${formatFeetInches(p.x)}`]);
+  for (const l of state.lineLoads) {
+    rows.push([`Line load (${l.case})`, `${l.label ? `${l.label}: ` : ""}${fmtNumber(l.w)} plf from ${formatFeetInches(l.from)} to ${formatFeetInches(l.to)}`]);
+  }
+  rows.push(
+    ["Material", materialWords(state)],
+    ["Bearing length", formatInches(state.bearingIn)],
+    ["Deflection limits", `live L/${state.limits.live}, total L/${state.limits.total}`],
+    ["Service", state.wet ? "wet (exposed)" : "dry"],
+    ["Repetitive members", state.repetitive ? "yes" : "no"],
+    ["Unbraced length", state.unbracedFt === 0 ? "0 (braced along its length)" : formatFeetInches(state.unbracedFt)],
+    ["Own weight counted", state.selfWeight ? "yes" : "no"],
+  );
+  return rows;
+}
+
+const FACTOR_NAMES: Record<string, string> = {
+  FcPerp: "Fc⊥",
+  FcPerpPrime: "Fc⊥′",
+  shearLoadsNearSupportsIgnored: "Loads within d of supports left out of shear",
+  longTermDeflection: "Long-term deflection, in (Kcr × ΔD + Δrest)",
+  flexureLimitState: "Flexure limit state",
+  shearClause: "Shear clause",
+  omegaB: "Ωb",
+  phiB: "φb",
+  omegaV: "Ωv",
+  phiV: "φv",
+  lambda: "λ",
+  phi: "φ",
+  Fy: "Fy, ksi",
+  Mp: "Mp, kip-ft",
+  Mn: "Mn, kip-ft",
+  Vn: "Vn, kip",
+  Lp: "Lp, ft",
+  Lr: "Lr, ft",
+  Lb: "Lb, ft",
+};
+
+function factorName(key: string): string {
+  if (key in FACTOR_NAMES) return FACTOR_NAMES[key];
+  if (key.endsWith("Prime")) return `${factorName(key.slice(0, -5))}′`;
+  return key;
+}
+
+/** Factor objects flattened to [symbol, value] rows ("CM.Fb" → "CM (Fb)", "FbPrime" → "Fb′"). */
+export function factorRows(factors: object): [string, string][] {
+  const rows: [string, string][] = [];
+  const walk = (prefix: string, key: string, value: unknown) => {
+    if (value === null || value === undefined || key === "method") return;
+    const name = prefix ? `${prefix} (${factorName(key)})` : factorName(key);
+    if (typeof value === "object") {
+      for (const [k, v] of Object.entries(value)) walk(prefix ? name : factorName(key), k, v);
+      return;
+    }
+    if (typeof value === "number") rows.push([name, fmtNumber(value)]);
+    else if (typeof value === "boolean") rows.push([name, value ? "yes" : "no"]);
+    else rows.push([name, String(value)]);
+  };
+  for (const [k, v] of Object.entries(factors)) walk("", k, v);
+  return rows;
+}
+
+function strengthCombination(check: CheckOutput): string | null {
+  const order = ["bending", "shear", "stability"];
+  for (const name of order) {
+    const c = check.checks.find((k) => k.name === name && k.combination);
+    if (c?.combination) return c.combination;
+  }
+  return check.checks.find((k) => k.combination && !k.name.startsWith("deflection"))?.combination ?? null;
+}
+
+function diagramsFor(state: FlowState, check: CheckOutput): SheetDiagram[] {
+  const beam = diagramBeam(state, check);
+  const diagrams: SheetDiagram[] = [];
+  const strength = strengthCombination(check);
+  const strengthFactors = strength ? combinationFactors(strength) : null;
+  if (strength && strengthFactors) {
+    const a = analyzeBeam(beam, strengthFactors);
+    const e = a.extremes;
+    diagrams.push({
+      quantity: "V",
+      title: "Shear",
+      unit: "lb",
+      combination: strength,
+      segments: a.segments,
+      extremes: [{ x: e.Vabs.x, value: e.Vabs.value, label: "largest" }],
+    });
+    const m: SheetExtreme[] = [{ x: e.Mpos.x, value: e.Mpos.value, label: "largest" }];
+    if (e.Mneg.value < -1e-6) m.push({ x: e.Mneg.x, value: e.Mneg.value, label: "hogging" });
+    diagrams.push({ quantity: "M", title: "Moment", unit: "lb-ft", combination: strength, segments: a.segments, extremes: m });
+  }
+  const total = check.checks.find((c) => c.name === "deflection-total" && c.combination)?.combination ?? null;
+  const totalFactors = total ? combinationFactors(total) : null;
+  if (total && totalFactors) {
+    const a = analyzeBeam(beam, totalFactors);
+    const e = a.extremes;
+    const d: SheetExtreme[] = [{ x: e.deflDown.x, value: e.deflDown.value, label: "down" }];
+    if (e.deflUp.value < -1e-6) d.push({ x: e.deflUp.x, value: e.deflUp.value, label: "up" });
+    diagrams.push({ quantity: "deflection", title: "Deflection", unit: "in", combination: total, segments: a.segments, extremes: d });
+  }
+  return diagrams;
+}
+
+function roundSegments(diagrams: SheetDiagram[]): SheetDiagram[] {
+  // Coefficients keep 12 significant figures: far below what a drawing or a label can show, and the JSON stays small.
+  const sig = (v: number) => (v === 0 ? 0 : Number(v.toPrecision(12)));
+  return diagrams.map((d) => ({
+    ...d,
+    segments: d.segments.map((s) => ({ x0: s.x0, x1: s.x1, V: s.V.map(sig), M: s.M.map(sig), slope: s.slope.map(sig), deflection: s.deflection.map(sig) })),
+    extremes: d.extremes.map((x) => ({ ...x, x: round(x.x, 6), value: round(x.value, 6) })),
+  }));
+}
+
+/** Works one member out for the sheet; throws the design's input error when its inputs no longer check. */
+export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables: MaterialTables): SheetMember {
+  const state = source.flowState;
+  const check = checkMember(checkRequest(state, spec), tables);
+  const reactions = check.reactions.map((r) => ({ ...r, jackStuds: state.kind === "header" ? r.jackStuds : null }));
+  const note =
+    source.savedTables && source.savedTables !== tables.version
+      ? `This member's saved answer used tables ${source.savedTables}; this sheet checks it again with tables ${tables.version}.`
+      : null;
+  return {
+    id: source.id,
+    label: source.label,
+    kind: state.kind,
+    kindLabel: KIND_LABELS[state.kind],
+    headline: headlineFor(check.member.spec, check.member.label, reactions, state.kind),
+    memberLabel: check.member.label,
+    pass: check.pass,
+    governing: check.governing,
+    ratio: check.ratio,
+    spanFt: mainSpanFt(state),
+    lengthFt: state.lengthFt,
+    supports: sortedSupports(state.supports).map((s) => ({ x: s.x, type: s.type })),
+    inputs: inputRows(state),
+    flowState: state,
+    loads: check.loads,
+    checks: check.checks,
+    reactions,
+    factors: factorRows(check.factors),
+    limits: check.limits,
+    assumptions: check.assumptions,
+    diagrams: roundSegments(diagramsFor(state, check)),
+    note,
+  };
+}
+
+/** The whole snapshot; members without a chosen size, or whose inputs no longer check, are listed as skipped. */
+export function buildSheetSnapshot(source: SheetSource): SheetSnapshot {
+  const members: SheetMember[] = [];
+  const skipped: SheetSkipped[] = [];
+  for (const m of source.members) {
+    if (!m.chosenMember) {
+      skipped.push({ id: m.id, label: m.label, reason: "no size chosen yet" });
+      continue;
+    }
+    try {
+      members.push(sheetMember(m, m.chosenMember, source.tables));
+    } catch (err) {
+      skipped.push({ id: m.id, label: m.label, reason: err instanceof Error ? err.message : "could not be checked" });
+    }
+  }
+  return {
+    format: SNAPSHOT_FORMAT,
+    savedAt: source.now.toISOString(),
+    job: source.job,
+    preparedBy: source.preparedBy,
+    tablesVersion: source.tables.version,
+    method: "asd",
+    members,
+    skipped,
+    caution: { title: CAUTION_TITLE, text: CAUTION_TEXT, notChecked: [...NOT_CHECKED] },
+  };
+}
