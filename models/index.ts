@@ -6,6 +6,8 @@ import { initMaterialTableModels } from "./material-tables";
 import { initStripeCustomer } from "./stripe-customer";
 import { initStripeEvent } from "./stripe-event";
 import { initSubscription, Subscription } from "./subscription";
+import { initCrewLink } from "./crew-link";
+import { initJobSheet } from "./job-sheet";
 
 export { User, ROLES, type Role } from "./user";
 export { AuthToken, AUTH_TOKEN_PURPOSES, type AuthTokenPurpose } from "./auth-token";
@@ -14,6 +16,8 @@ export * from "./material-tables";
 export { Subscription, type SubscriptionStatus } from "./subscription";
 export { StripeEvent } from "./stripe-event";
 export { StripeCustomer } from "./stripe-customer";
+export { CrewLink } from "./crew-link";
+export { JobSheet } from "./job-sheet";
 
 /**
  * Initialises every model on a Sequelize instance, then wires the associations — all in this one place.
@@ -27,6 +31,8 @@ export function initModels(sequelize: Sequelize): void {
   initSubscription(sequelize);
   initStripeEvent(sequelize);
   initStripeCustomer(sequelize);
+  initCrewLink(sequelize);
+  initJobSheet(sequelize);
   associate();
 }
 
