@@ -1,0 +1,84 @@
+/**
+ * Who may call each route handler method and each server action. tests/api/access.test.ts finds every
+ * `app/api/**\/route.ts` export (GET, POST, PUT, PATCH, DELETE) and every function exported from
+ * `components/**\/actions.ts` and `app/**\/actions.ts`, and FAILS when one has no row here (or a row names
+ * something that no longer exists). For each row it calls the handler directly as a signed-out visitor, a
+ * builder, a subscriber and an admin (getSessionUser is mocked), and every caller not allowed must get
+ * 401, 403 or 404 (an action: `{ ok: false, status: 401 | 403 | 404 }`, see lib/auth/action.ts, or a thrown
+ * HttpError with that status).
+ *
+ * HOW TO ADD A ROW (one per method per route, one per action):
+ *   { method: "POST", path: "/api/jobs", allowed: ["builder", "subscriber", "admin"] }
+ *   { method: "GET", path: "/api/jobs/[jobId]", allowed: ["owner"], note: "404 for everyone else" }
+ *   { method: "ACTION", path: "components/jobs/actions.ts#renameJob", allowed: ["owner"], args: [{ jobId: "…", name: "Deck" }] }
+ *
+ * - method: the HTTP method exported by the route file, or "ACTION" for a server action.
+ * - path: the route's URL pattern as its folders spell it, without route groups: app/api/jobs/[jobId]/route.ts
+ *   is "/api/jobs/[jobId]". An action is "<file>#<exportName>".
+ * - allowed: who may use it.
+ *     "public"      anyone, signed in or not (nothing is asserted beyond the row existing);
+ *     "builder" | "subscriber" | "admin"   a signed-in account with that role (list each role allowed);
+ *     "owner"       only the account that owns the thing named in the path (everyone else: 404 or 403);
+ *     "crew"        anyone holding a valid crew link (a made-up link must get 404).
+ *   Callers are checked as role personas; none of them owns anything, so a row with only "owner" (or "crew")
+ *   expects all four callers to be refused.
+ * - params: values for the path's [segments] (default: a random UUID each; [...rest] gets one).
+ * - body: the JSON body sent to a route (default {}). Give a VALID body so that a missing session check shows
+ *   up as a success or a 500, not as a 400 that happens to look like a refusal.
+ * - args: the arguments passed to an action (default [{}]); valid ones, for the same reason.
+ * - setup: optional async function run once before the row's calls (with TEST_DATABASE_URL set), returning
+ *   params/body/args to use, e.g. a job created for some other account so "owner" is tested on a real row.
+ * - note: why, in a few words, when it is not obvious.
+ */
+
+export type Allowed = "public" | "builder" | "subscriber" | "admin" | "owner" | "crew";
+export type AccessMethod = "GET" | "POST" | "PUT" | "PATCH" | "DELETE" | "ACTION";
+
+export interface AccessFixture {
+  params?: Record<string, string | string[]>;
+  body?: unknown;
+  args?: unknown[];
+}
+
+export interface AccessRow extends AccessFixture {
+  method: AccessMethod;
+  path: string;
+  allowed: Allowed[];
+  note?: string;
+  setup?: () => Promise<AccessFixture>;
+}
+
+const SIGNED_IN: Allowed[] = ["builder", "subscriber", "admin"];
+
+export const ACCESS_TABLE: AccessRow[] = [
+  // Health and the sizing engine: open to everyone, so a builder can size without an account.
+  { method: "GET", path: "/api/health", allowed: ["public"] },
+  { method: "POST", path: "/api/solve", allowed: ["public"] },
+  { method: "POST", path: "/api/check", allowed: ["public"] },
+  { method: "POST", path: "/api/size", allowed: ["public"] },
+
+  // Accounts (lib/auth): the public flows answer the same whatever the address; rate limits guard them.
+  { method: "GET", path: "/api/auth/[...nextauth]", allowed: ["public"], note: "next-auth: csrf, session, providers" },
+  { method: "POST", path: "/api/auth/[...nextauth]", allowed: ["public"], note: "next-auth: sign-in, sign-out" },
+  { method: "POST", path: "/api/auth/sign-up", allowed: ["public"] },
+  { method: "POST", path: "/api/auth/verify", allowed: ["public"], note: "needs the mailed single-use token" },
+  { method: "POST", path: "/api/auth/verify/resend", allowed: ["public"] },
+  { method: "POST", path: "/api/auth/password/forgot", allowed: ["public"] },
+  { method: "POST", path: "/api/auth/password/reset", allowed: ["public"], note: "needs the mailed single-use token" },
+  {
+    method: "ACTION",
+    path: "components/auth/actions.ts#updateProfile",
+    allowed: SIGNED_IN,
+    note: "changes only the caller's own account",
+    args: [{ name: "Dee Rowe", company: "Hollis & Rowe Framing" }],
+  },
+  {
+    method: "ACTION",
+    path: "components/admin/users/actions.ts#changeUserRole",
+    allowed: ["admin"],
+    args: [{ userId: "8f0c2a34-8d47-4c1e-9a55-3f6c1b2d4e5f", role: "admin" }],
+  },
+
+  // Payments: Stripe signs its events; there is no session to check.
+  { method: "POST", path: "/api/stripe/webhook", allowed: ["public"], note: "the Stripe signature on the raw body is the check" },
+];
