@@ -50,6 +50,13 @@ export interface AccessRow extends AccessFixture {
 
 const SIGNED_IN: Allowed[] = ["builder", "subscriber", "admin"];
 
+/** The form a billing action receives from its button (payments rows). */
+function checkoutForm(plan: string): FormData {
+  const form = new FormData();
+  form.set("plan", plan);
+  return form;
+}
+
 export const ACCESS_TABLE: AccessRow[] = [
   // Health and the sizing engine: open to everyone, so a builder can size without an account.
   { method: "GET", path: "/api/health", allowed: ["public"] },
@@ -81,4 +88,18 @@ export const ACCESS_TABLE: AccessRow[] = [
 
   // Payments: Stripe signs its events; there is no session to check.
   { method: "POST", path: "/api/stripe/webhook", allowed: ["public"], note: "the Stripe signature on the raw body is the check" },
+  {
+    method: "ACTION",
+    path: "components/billing/actions.ts#startCheckoutAction",
+    allowed: ["builder", "subscriber"],
+    note: "admins already have every paid feature",
+    args: [null, checkoutForm("monthly")],
+  },
+  {
+    method: "ACTION",
+    path: "components/billing/actions.ts#openPortalAction",
+    allowed: SIGNED_IN,
+    note: "opens the caller's own customer only",
+    args: [null, checkoutForm("monthly")],
+  },
 ];
