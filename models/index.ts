@@ -6,6 +6,8 @@ import { initMaterialTableModels } from "./material-tables";
 import { initStripeCustomer } from "./stripe-customer";
 import { initStripeEvent } from "./stripe-event";
 import { initSubscription, Subscription } from "./subscription";
+import { initJob, Job } from "./job";
+import { initMember, Member } from "./member";
 import { initCrewLink } from "./crew-link";
 import { initJobSheet } from "./job-sheet";
 
@@ -16,6 +18,8 @@ export * from "./material-tables";
 export { Subscription, type SubscriptionStatus } from "./subscription";
 export { StripeEvent } from "./stripe-event";
 export { StripeCustomer } from "./stripe-customer";
+export { Job } from "./job";
+export { Member, MEMBER_KIND_VALUES } from "./member";
 export { CrewLink } from "./crew-link";
 export { JobSheet } from "./job-sheet";
 
@@ -31,6 +35,8 @@ export function initModels(sequelize: Sequelize): void {
   initSubscription(sequelize);
   initStripeEvent(sequelize);
   initStripeCustomer(sequelize);
+  initJob(sequelize);
+  initMember(sequelize);
   initCrewLink(sequelize);
   initJobSheet(sequelize);
   associate();
@@ -41,5 +47,10 @@ function associate(): void {
   AuthToken.belongsTo(User, { foreignKey: "userId", as: "user" });
   User.hasMany(Subscription, { foreignKey: "userId", as: "subscriptions", onDelete: "CASCADE" });
   Subscription.belongsTo(User, { foreignKey: "userId", as: "user" });
+  User.hasMany(Job, { foreignKey: "ownerId", as: "jobs", onDelete: "CASCADE" });
+  Job.belongsTo(User, { foreignKey: "ownerId", as: "owner" });
+  Job.hasMany(Member, { foreignKey: "jobId", as: "members", onDelete: "CASCADE" });
+  Member.belongsTo(Job, { foreignKey: "jobId", as: "job" });
+  Member.belongsTo(Member, { foreignKey: "carriedByMemberId", as: "carriedBy" });
   // Associations are added here as models land (jobs, members, sheets, table versions, subscriptions).
 }

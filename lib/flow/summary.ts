@@ -1,0 +1,104 @@
+/**
+ * The answer of a sized member as saved in a job (`Member.resultSummary`): what to build, the check
+ * that governs, a ratio per check, and what each support needs. The crew link and the job sheet
+ * read it, so they show the same numbers as the answer screen. Pure.
+ */
+import type { CheckOutput } from "@/lib/solver/design/check";
+import type { MemberSpec } from "@/lib/solver/design/schema";
+import { formatFeetInches, formatInches } from "./length";
+import { mainSpanFt, type FlowState } from "./state";
+
+export interface SummaryReaction {
+  /** ft from the left end */
+  x: number;
+  type: "pin" | "roller" | "fixed";
+  /** largest downward reaction over the service combinations, lb */
+  maxDown: number;
+  maxDownCombination: string;
+  /** largest uplift, lb (0 when none) */
+  uplift: number;
+  /** bearing length given and needed, in */
+  bearing: number;
+  requiredBearing: number;
+  /** 1-1/2 in jack studs under this end (wood headers), null where it does not apply */
+  jackStuds: number | null;
+}
+
+export interface MemberResultSummary {
+  /** "3-ply 2x12 No.2 Douglas Fir-Larch" */
+  memberLabel: string;
+  /** the answer in one line: "3-ply 2x12 No.2 — 2 jack studs each end" */
+  headline: string;
+  spec: MemberSpec;
+  pass: boolean;
+  governing: string | null;
+  ratio: number;
+  checks: { name: string; ratio: number; demand: number; capacity: number; unit: string; combination: string | null }[];
+  reactions: SummaryReaction[];
+  /** the clear span between the first two supports and the whole length, ft */
+  spanFt: number;
+  lengthFt: number;
+  /** material tables version the answer came from */
+  tables: string;
+  /** when the answer was worked out, ISO 8601 */
+  computedAt: string;
+}
+
+/** "2 jack studs each end", "2 jack studs left, 3 right", or the bearing needed when no studs apply. */
+export function supportWords(reactions: readonly Pick<SummaryReaction, "jackStuds" | "requiredBearing">[]): string {
+  if (reactions.length === 0) return "";
+  const studs = reactions.map((r) => r.jackStuds);
+  if (studs.every((s) => s !== null)) {
+    const counts = studs as number[];
+    if (counts.every((c) => c === counts[0])) return `${counts[0]} jack stud${counts[0] === 1 ? "" : "s"} each end`;
+    return counts.map((c, i) => `${c} jack stud${c === 1 ? "" : "s"} at support ${i + 1}`).join(", ");
+  }
+  const need = Math.max(...reactions.map((r) => r.requiredBearing));
+  return `bearing at least ${formatInches(Math.max(need, 0))} at each support`;
+}
+
+/** The member as a builder says it: "3-ply 2x12 No.2", "W8x18", "1-3/4 x 11-7/8 LVL 2.0E". */
+export function shortLabel(spec: MemberSpec, fullLabel: string): string {
+  if (spec.material === "sawn") return `${spec.plies > 1 ? `${spec.plies}-ply ` : ""}${spec.size} ${spec.grade}`;
+  if (spec.material === "steel") return spec.shape;
+  return fullLabel;
+}
+
+/** The answer line from a member and what its supports need. */
+export function headlineFor(spec: MemberSpec, fullLabel: string, reactions: readonly Pick<SummaryReaction, "jackStuds" | "requiredBearing">[], kind: FlowState["kind"]): string {
+  const words = supportWords(reactions.map((r) => ({ ...r, jackStuds: kind === "header" ? r.jackStuds : null })));
+  const name = shortLabel(spec, fullLabel);
+  return words ? `${name} — ${words}` : name;
+}
+
+export function summarize(state: FlowState, check: CheckOutput, computedAt: Date = new Date()): MemberResultSummary {
+  const reactions: SummaryReaction[] = check.reactions.map((r) => ({
+    x: r.x,
+    type: r.type,
+    maxDown: r.maxDown,
+    maxDownCombination: r.maxDownCombination,
+    uplift: r.uplift,
+    bearing: r.bearing,
+    requiredBearing: r.requiredBearing,
+    jackStuds: state.kind === "header" ? r.jackStuds : null,
+  }));
+  return {
+    memberLabel: check.member.label,
+    headline: headlineFor(check.member.spec, check.member.label, reactions, state.kind),
+    spec: check.member.spec,
+    pass: check.pass,
+    governing: check.governing,
+    ratio: check.ratio,
+    checks: check.checks.map((c) => ({ name: c.name, ratio: c.ratio, demand: c.demand, capacity: c.capacity, unit: c.unit, combination: c.combination })),
+    reactions,
+    spanFt: mainSpanFt(state),
+    lengthFt: state.lengthFt,
+    tables: check.tables,
+    computedAt: computedAt.toISOString(),
+  };
+}
+
+/** "10' 0" span" with any overhangs, for list rows. */
+export function spanWords(state: FlowState): string {
+  return `${formatFeetInches(mainSpanFt(state))} span`;
+}

@@ -1,0 +1,57 @@
+import {
+  DataTypes,
+  Model,
+  type CreationOptional,
+  type ForeignKey,
+  type InferAttributes,
+  type InferCreationAttributes,
+  type NonAttribute,
+  type Sequelize,
+} from "sequelize";
+import type { FlowState, MemberKind } from "@/lib/flow/state";
+import type { MemberResultSummary } from "@/lib/flow/summary";
+import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { Job } from "./job";
+
+export const MEMBER_KIND_VALUES: readonly MemberKind[] = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"];
+
+/**
+ * One sized member of a job ("H1 kitchen header"): the flow's inputs, the answer as it was when
+ * saved, and the member chosen. `carriedByMemberId` names the member that carries this one
+ * (joists on a beam, a beam on a post), so its reactions can become that member's loads.
+ */
+export class Member extends Model<InferAttributes<Member>, InferCreationAttributes<Member>> {
+  declare id: CreationOptional<string>;
+  declare jobId: ForeignKey<string>;
+  declare label: string;
+  declare kind: MemberKind;
+  declare flowState: FlowState;
+  declare resultSummary: MemberResultSummary | null;
+  declare chosenMember: MemberSpec | null;
+  declare carriedByMemberId: CreationOptional<string | null>;
+  declare sortOrder: CreationOptional<number>;
+  declare deletedAt: CreationOptional<Date | null>;
+  declare createdAt: CreationOptional<Date>;
+  declare updatedAt: CreationOptional<Date>;
+  declare job?: NonAttribute<Job>;
+}
+
+export function initMember(sequelize: Sequelize): void {
+  Member.init(
+    {
+      id: { type: DataTypes.UUID, primaryKey: true, defaultValue: DataTypes.UUIDV4 },
+      jobId: { type: DataTypes.UUID, allowNull: false },
+      label: { type: DataTypes.STRING(120), allowNull: false },
+      kind: { type: DataTypes.ENUM(...MEMBER_KIND_VALUES), allowNull: false },
+      flowState: { type: DataTypes.JSONB, allowNull: false },
+      resultSummary: { type: DataTypes.JSONB, allowNull: true },
+      chosenMember: { type: DataTypes.JSONB, allowNull: true },
+      carriedByMemberId: { type: DataTypes.UUID, allowNull: true },
+      sortOrder: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      deletedAt: { type: DataTypes.DATE, allowNull: true },
+      createdAt: DataTypes.DATE,
+      updatedAt: DataTypes.DATE,
+    },
+    { sequelize, tableName: "members", underscored: true },
+  );
+}
