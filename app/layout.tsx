@@ -8,7 +8,7 @@ import { ToastProvider } from "@/components/ui/toast";
 import "./globals.css";
 
 // Shipped in fonts/ (copied from @fontsource, SIL OFL 1.1); nothing is fetched from a font service.
-const sans = localFont({
+const atkinson = localFont({
   src: [
     { path: "../fonts/atkinson-hyperlegible-latin-400-normal.woff2", weight: "400", style: "normal" },
     { path: "../fonts/atkinson-hyperlegible-latin-700-normal.woff2", weight: "700", style: "normal" },
@@ -18,7 +18,7 @@ const sans = localFont({
   fallback: ["system-ui", "Arial", "sans-serif"],
 });
 
-const mono = localFont({
+const plexMono = localFont({
   src: [
     { path: "../fonts/ibm-plex-mono-latin-400-normal.woff2", weight: "400", style: "normal" },
     { path: "../fonts/ibm-plex-mono-latin-500-normal.woff2", weight: "500", style: "normal" },
@@ -44,7 +44,7 @@ export const viewport: Viewport = {
 
 export default function RootLayout({ children }: { children: ReactNode }) {
   return (
-    <html lang="en" className={`${sans.variable} ${mono.variable}`}>
+    <html lang="en" className={`${atkinson.variable} ${plexMono.variable}`}>
       <body className="flex min-h-dvh flex-col bg-paper font-sans text-ink antialiased">
         <a
           href="#main"

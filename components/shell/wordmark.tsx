@@ -3,17 +3,17 @@ import { cx } from "@/components/ui/cx";
 export type SpanMarkProps = { className?: string };
 
 /**
- * Spanlark's mark: an amber beam bowing a touch under its load, resting on a square bearing block at one
- * end and a round roller at the other, on a spruce tile.
+ * Spanlark's mark: an amber beam on two bearing wedges, with the arc of a lark's flight from one support to the other
+ * above it, on a spruce tile.
  */
 export function SpanMark({ className }: SpanMarkProps) {
   return (
     <svg viewBox="0 0 32 32" aria-hidden="true" focusable="false" className={cx("h-8 w-8 shrink-0", className)}>
       <rect width="32" height="32" rx="7" fill="#1E5B4F" />
-      <path d="M4.5 12.5 Q16 16.2 27.5 12.5 L27.5 16 Q16 19.7 4.5 16 Z" fill="#E9A53A" />
-      <rect x="5" y="17.6" width="5" height="5" rx="0.8" fill="#F7F5EF" />
-      <circle cx="24.5" cy="20.3" r="2.7" fill="#F7F5EF" />
-      <path d="M3.5 25.5h25" stroke="#F7F5EF" strokeWidth="1.6" strokeLinecap="round" />
+      <path d="M6 13.5 Q16 3.5 26 13.5" fill="none" stroke="#F7F5EF" strokeWidth="1.8" strokeLinecap="round" />
+      <rect x="3.5" y="15.5" width="25" height="4.5" rx="1" fill="#E9A53A" />
+      <path d="M6.5 20 L9.5 25.5 H3.5 Z" fill="#F7F5EF" />
+      <path d="M25.5 20 L28.5 25.5 H22.5 Z" fill="#F7F5EF" />
     </svg>
   );
 }

@@ -18,6 +18,7 @@ export function BottomActionBar({ children, summary, className }: BottomActionBa
     <>
       <div aria-hidden="true" className={cx("md:hidden", summary ? "h-32" : "h-20")} />
       <div
+        data-bottom-action-bar={summary ? "tall" : "short"}
         className={cx(
           "no-print fixed inset-x-0 z-30 border-t-2 border-rule bg-paper px-4 py-3 shadow-bar",
           "md:static md:z-auto md:mt-8 md:rounded-card md:border-2 md:shadow-none",

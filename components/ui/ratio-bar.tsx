@@ -29,11 +29,13 @@ export type RatioBarProps = {
   detail?: string;
   /** Marks the check that governs the member. */
   governing?: boolean;
+  /** Writes "100%" under the limit line; pass false on all but the first of a stack of bars. */
+  showScale?: boolean;
   className?: string;
 };
 
 /** One check as a bar: the fill stops at the ratio, a dark line marks 100%, and the words say OK or Over. */
-export function RatioBar({ ratio, label, detail, governing = false, className }: RatioBarProps) {
+export function RatioBar({ ratio, label, detail, governing = false, showScale = true, className }: RatioBarProps) {
   const verdict = ratioVerdict(ratio);
   const shown = Number.isFinite(ratio) && ratio > 0 ? Math.min(ratio, RATIO_BAR_MAX) : 0;
   const fillPercent = (shown / RATIO_BAR_MAX) * 100;
@@ -49,7 +51,7 @@ export function RatioBar({ ratio, label, detail, governing = false, className }:
         </span>
         <span className={cx("inline-flex items-center gap-1 font-bold whitespace-nowrap", verdict.pass ? "text-sound-ink" : "text-over-ink")}>
           <Icon className="h-5 w-5" />
-          <span className="figures">{verdict.text}</span>
+          <span>{verdict.text}</span>
         </span>
       </div>
       <div className="relative h-4 w-full rounded-sm border border-ink-soft bg-paper-raised" aria-hidden="true">
@@ -65,11 +67,13 @@ export function RatioBar({ ratio, label, detail, governing = false, className }:
         <div className="absolute -top-1 -bottom-1 w-0.5 bg-ink" style={{ left: `calc(${limitPercent}% - 1px)` }} />
         {ratio > RATIO_BAR_MAX ? <div className="absolute inset-y-0 right-0 w-1.5 bg-ink" /> : null}
       </div>
-      <div className="relative h-5 text-sm leading-5 text-graphite" aria-hidden="true">
-        <span className="figures absolute -translate-x-1/2" style={{ left: `${limitPercent}%` }}>
-          100%
-        </span>
-      </div>
+      {showScale ? (
+        <div className="relative h-5 text-sm leading-5 text-graphite" aria-hidden="true">
+          <span className="absolute -translate-x-1/2" style={{ left: `${limitPercent}%` }}>
+            100%
+          </span>
+        </div>
+      ) : null}
       {detail ? <p className="text-sm text-ink-soft">{detail}</p> : null}
     </div>
   );

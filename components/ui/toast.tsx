@@ -44,7 +44,7 @@ export function ToastProvider({ children }: { children: ReactNode }) {
         aria-live="polite"
         aria-relevant="additions"
         className="no-print pointer-events-none fixed inset-x-0 z-50 flex flex-col items-center gap-2 px-4"
-        style={{ bottom: "calc(var(--bottom-nav-h) + 0.75rem)" }}
+        style={{ bottom: "calc(var(--bottom-nav-h) + var(--action-bar-h) + 0.75rem)" }}
       >
         {toasts.map((toast) => (
           <ToastItem key={toast.id} toast={toast} onDismiss={dismiss} />

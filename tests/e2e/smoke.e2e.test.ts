@@ -37,7 +37,8 @@ describe("home page", () => {
     const caution = page.getByRole("complementary", { name: "Safety caution" });
     expect(await caution.first().textContent()).toContain(CAUTION_TEXT);
 
-    await screenshot(shot);
+    await screenshot(shot, { fullPage: false });
+    await screenshot(`${shot}-full`);
     expect(consoleErrors).toEqual([]);
   });
 

@@ -47,8 +47,8 @@ export type OpenedPage = {
   consoleErrors: string[];
   /** Goes to a path of the app (or a full URL) and waits for the page's load event and its fonts. */
   goto: (pathOrUrl: string) => Promise<void>;
-  /** Saves a full-page PNG to tests/artifacts/<name>.png and returns its path. */
-  screenshot: (name: string) => Promise<string>;
+  /** Saves a PNG to tests/artifacts/<name>.png (the whole page unless fullPage is false) and returns its path. */
+  screenshot: (name: string, options?: ScreenshotOptions) => Promise<string>;
   close: () => Promise<void>;
 };
 
@@ -58,10 +58,15 @@ function viewportSize(choice: ViewportChoice): { width: number; height: number }
   return choice;
 }
 
-export async function saveScreenshot(page: Page, name: string): Promise<string> {
+export type ScreenshotOptions = {
+  /** The whole scrolled page (default) or only what the screen shows; bars fixed to the screen sit mid-page in a full shot. */
+  fullPage?: boolean;
+};
+
+export async function saveScreenshot(page: Page, name: string, options: ScreenshotOptions = {}): Promise<string> {
   await mkdir(ARTIFACTS_DIR, { recursive: true });
   const file = path.join(ARTIFACTS_DIR, `${name.replace(/[^a-z0-9._-]+/gi, "-")}.png`);
-  await page.screenshot({ path: file, fullPage: true });
+  await page.screenshot({ path: file, fullPage: options.fullPage ?? true });
   return file;
 }
 
@@ -110,7 +115,7 @@ export async function openPage(browser: Browser, pathOrUrl: string | null, optio
     context,
     consoleErrors,
     goto,
-    screenshot: (name) => saveScreenshot(page, name),
+    screenshot: (name, screenshotOptions) => saveScreenshot(page, name, screenshotOptions),
     close: () => context.close(),
   };
 }
