@@ -614,3 +614,8 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
     }),
   };
 }
+
+/** The natural key of a row (TABLE_SPECS[table].keyOf, callable with a table key known only at run time). */
+export function rowKey<K extends TableKey>(table: K, row: TableRowMap[K]): string {
+  return TABLE_SPECS[table].keyOf(row);
+}

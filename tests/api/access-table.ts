@@ -86,6 +86,37 @@ export const ACCESS_TABLE: AccessRow[] = [
     args: [{ userId: "8f0c2a34-8d47-4c1e-9a55-3f6c1b2d4e5f", role: "admin" }],
   },
 
+  // Material tables (issue 6): admins only. Bodies are valid so a missing role check would show.
+  { method: "GET", path: "/api/admin/tables", allowed: ["admin"] },
+  { method: "GET", path: "/api/admin/tables/[table]", allowed: ["admin"], params: { table: "steel-grades" } },
+  {
+    method: "POST",
+    path: "/api/admin/tables/[table]/rows",
+    allowed: ["admin"],
+    params: { table: "steel-grades" },
+    body: { baseVersionId: "3b2f7c1e-6a4d-4f0e-9c1b-2d3e4f5a6b7c", values: { name: "A572-50", Fy_ksi: "50", Fu_ksi: "65" } },
+  },
+  {
+    method: "PUT",
+    path: "/api/admin/tables/[table]/rows",
+    allowed: ["admin"],
+    params: { table: "steel-grades" },
+    body: { baseVersionId: "3b2f7c1e-6a4d-4f0e-9c1b-2d3e4f5a6b7c", originalKey: "A36", values: { name: "A36", Fy_ksi: "36", Fu_ksi: "58" } },
+  },
+  {
+    method: "DELETE",
+    path: "/api/admin/tables/[table]/rows",
+    allowed: ["admin"],
+    params: { table: "steel-grades" },
+    body: { baseVersionId: "3b2f7c1e-6a4d-4f0e-9c1b-2d3e4f5a6b7c", key: "A36" },
+  },
+  { method: "GET", path: "/api/admin/tables/[table]/csv", allowed: ["admin"], params: { table: "steel-grades" } },
+  { method: "POST", path: "/api/admin/tables/[table]/import/preview", allowed: ["admin"], params: { table: "steel-grades" }, note: "multipart CSV upload" },
+  { method: "POST", path: "/api/admin/tables/[table]/import", allowed: ["admin"], params: { table: "steel-grades" }, note: "multipart CSV upload" },
+  { method: "GET", path: "/api/admin/tables/versions", allowed: ["admin"] },
+  { method: "GET", path: "/api/admin/tables/versions/[versionId]", allowed: ["admin"] },
+  { method: "POST", path: "/api/admin/tables/versions/[versionId]/restore", allowed: ["admin"], body: { note: "Back to the seeded values" } },
+
   // Payments: Stripe signs its events; there is no session to check.
   { method: "POST", path: "/api/stripe/webhook", allowed: ["public"], note: "the Stripe signature on the raw body is the check" },
   {
