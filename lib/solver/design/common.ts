@@ -27,36 +27,34 @@ export function deflectionCheck(
   if (limit === null || envs.length === 0) return { check: null, deadPartIn: 0 };
   const { model } = ctx;
   const scale = (E_REF * I_REF) / (EPsi * IIn4);
-  let best: DesignCheck | null = null;
-  let bestI = 0;
-  let bestFd = 0;
-  model.regions.forEach((r) => {
+  let best = { ratio: -1, demand: 0, allowed: 0, x: 0, i: 0, fD: 0, region: 0, combination: "" };
+  model.regions.forEach((r, ri) => {
     const ref = r.kind === "span" ? r.length : 2 * r.length;
     const allowed = (ref * 12) / limit;
     for (const env of envs) {
       const p = peakAbs(model.xs, env.Dmax, env.Dmin, model.selfWeight.D, env.fD * swPlf, r.i0, r.i1);
       const demand = p.value * scale;
       const ratio = demand / allowed;
-      if (!best || ratio > best.ratio) {
-        const where = r.kind === "span" ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft` : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
-        best = {
-          name,
-          demand: round(demand, 4),
-          capacity: round(allowed, 4),
-          unit: "in",
-          ratio,
-          combination: env.name,
-          x: round(p.x, 3),
-          note: `${where}, L/${limit} = ${round(allowed, 3)} in`,
-        };
-        bestI = p.i;
-        bestFd = env.fD;
-      }
+      if (ratio > best.ratio) best = { ratio, demand, allowed, x: p.x, i: p.i, fD: env.fD, region: ri, combination: env.name };
     }
   });
+  const r = model.regions[best.region];
+  const where = r.kind === "span" ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft` : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
+  const check: DesignCheck = {
+    name,
+    demand: round(best.demand, 4),
+    capacity: round(best.allowed, 4),
+    unit: "in",
+    ratio: best.ratio,
+    combination: best.combination,
+    x: round(best.x, 3),
+    note: `${where}, L/${limit} = ${round(best.allowed, 3)} in`,
+  };
+  const bestI = best.i;
+  const bestFd = best.fD;
   const dead = model.perCase.D;
-  const deadPartIn = best && dead && bestFd !== 0 ? (dead.D[bestI] + swPlf * model.selfWeight.D[bestI]) * scale : 0;
-  return { check: best, deadPartIn };
+  const deadPartIn = dead && bestFd !== 0 ? (dead.D[bestI] + swPlf * model.selfWeight.D[bestI]) * scale : 0;
+  return { check, deadPartIn };
 }
 
 /** Per support: largest downward reaction and any uplift over the service combinations, with the case breakdown. */

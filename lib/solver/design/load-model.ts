@@ -203,62 +203,69 @@ export function buildLoadModel(input: LoadModelInput): LoadModel {
 
   function envelopes(combos: NamedCombination[]): ComboEnvelope[] {
     return combos.map((combo) => {
+      const buf = new Float64Array(6 * n + 2 * ns);
       const env: ComboEnvelope = {
         name: combo.name,
         factors: combo.factors,
         fD: combo.factors.D ?? 0,
-        Mmax: new Float64Array(n),
-        Mmin: new Float64Array(n),
-        Vmax: new Float64Array(n),
-        Vmin: new Float64Array(n),
-        Dmax: new Float64Array(n),
-        Dmin: new Float64Array(n),
-        Rmax: new Float64Array(ns),
-        Rmin: new Float64Array(ns),
-      };
-      const addFixed = (a: CaseArrays, f: number) => {
-        for (let i = 0; i < n; i++) {
-          env.Mmax[i] += f * a.M[i];
-          env.Mmin[i] += f * a.M[i];
-          env.Vmax[i] += f * a.V[i];
-          env.Vmin[i] += f * a.V[i];
-          env.Dmax[i] += f * a.D[i];
-          env.Dmin[i] += f * a.D[i];
-        }
-        for (let j = 0; j < ns; j++) {
-          env.Rmax[j] += f * a.R[j];
-          env.Rmin[j] += f * a.R[j];
-        }
-      };
-      const addPattern = (a: CaseArrays, f: number) => {
-        for (let i = 0; i < n; i++) {
-          const m = f * a.M[i];
-          const v = f * a.V[i];
-          const d = f * a.D[i];
-          if (m > 0) env.Mmax[i] += m;
-          else env.Mmin[i] += m;
-          if (v > 0) env.Vmax[i] += v;
-          else env.Vmin[i] += v;
-          if (d > 0) env.Dmax[i] += d;
-          else env.Dmin[i] += d;
-        }
-        for (let j = 0; j < ns; j++) {
-          const r = f * a.R[j];
-          if (r > 0) env.Rmax[j] += r;
-          else env.Rmin[j] += r;
-        }
+        Mmax: buf.subarray(0, n),
+        Mmin: buf.subarray(n, 2 * n),
+        Vmax: buf.subarray(2 * n, 3 * n),
+        Vmin: buf.subarray(3 * n, 4 * n),
+        Dmax: buf.subarray(4 * n, 5 * n),
+        Dmin: buf.subarray(5 * n, 6 * n),
+        Rmax: buf.subarray(6 * n, 6 * n + ns),
+        Rmin: buf.subarray(6 * n + ns, 6 * n + 2 * ns),
       };
       for (const c of cases) {
         const f = combo.factors[c] ?? 0;
         if (f === 0) continue;
-        if (c === "L" && patterned) for (const a of liveByRegion) addPattern(a, f);
-        else addFixed(perCase[c] as CaseArrays, f);
+        if (c === "L" && patterned) for (const a of liveByRegion) addPattern(env, a, f, n, ns);
+        else addFixed(env, perCase[c] as CaseArrays, f, n, ns);
       }
       return env;
     });
   }
 
   return { length: L, supports, xs, regions, segments, cases, patterned, perCase, selfWeight, envelopes };
+}
+
+function addFixed(env: ComboEnvelope, a: CaseArrays, f: number, n: number, ns: number): void {
+  for (let i = 0; i < n; i++) {
+    const m = f * a.M[i];
+    const v = f * a.V[i];
+    const d = f * a.D[i];
+    env.Mmax[i] += m;
+    env.Mmin[i] += m;
+    env.Vmax[i] += v;
+    env.Vmin[i] += v;
+    env.Dmax[i] += d;
+    env.Dmin[i] += d;
+  }
+  for (let j = 0; j < ns; j++) {
+    env.Rmax[j] += f * a.R[j];
+    env.Rmin[j] += f * a.R[j];
+  }
+}
+
+/** A region's live load counts where it makes the value larger (max) or smaller (min). */
+function addPattern(env: ComboEnvelope, a: CaseArrays, f: number, n: number, ns: number): void {
+  for (let i = 0; i < n; i++) {
+    const m = f * a.M[i];
+    const v = f * a.V[i];
+    const d = f * a.D[i];
+    if (m > 0) env.Mmax[i] += m;
+    else env.Mmin[i] += m;
+    if (v > 0) env.Vmax[i] += v;
+    else env.Vmin[i] += v;
+    if (d > 0) env.Dmax[i] += d;
+    else env.Dmin[i] += d;
+  }
+  for (let j = 0; j < ns; j++) {
+    const r = f * a.R[j];
+    if (r > 0) env.Rmax[j] += r;
+    else env.Rmin[j] += r;
+  }
 }
 
 export interface Peak {

@@ -187,6 +187,27 @@ export function resolveMemberUnchecked(spec: MemberSpec, tables: MaterialTables)
   };
 }
 
+/**
+ * The same sawn or LVL member with another number of plies: section, weight and cost scale with
+ * the plies (saves the table lookups when a search tries 1 to 4 plies of one size).
+ */
+export function withPlies(m: WoodMember, plies: number): WoodMember {
+  const k = plies / m.plies;
+  const name = m.label.replace(/^\d+-ply /, "");
+  return {
+    ...m,
+    spec: { ...m.spec, plies } as MemberSpec,
+    label: `${pliesLabel(plies)}${name}`,
+    plies,
+    b: m.b * k,
+    A: m.A * k,
+    S: m.S * k,
+    I: m.I * k,
+    weightPlf: m.weightPlf * k,
+    costPerFoot: m.costPerFoot === undefined ? undefined : m.costPerFoot * k,
+  };
+}
+
 function fmtIn(v: number): string {
   return String(Math.round(v * 1000) / 1000);
 }

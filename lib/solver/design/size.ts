@@ -9,7 +9,7 @@ import { CAUTION } from "../beam";
 import { assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
-import { resolveMember, resolveMemberUnchecked, type DesignMember } from "./member";
+import { resolveMember, resolveMemberUnchecked, withPlies, type DesignMember } from "./member";
 import { sizeInputSchema, spanInputSchema, type MemberSpec, type SizeFamily, type SizeInput, type SpanInput } from "./schema";
 import type { CheckName, DesignCheck } from "./types";
 
@@ -135,14 +135,24 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   const failing: SizeFailure[] = [];
   let checked = 0;
   let lastMember: DesignMember | null = null;
+  // one table lookup per size; other ply counts derive from it
+  const onePly = new Map<string, DesignMember | null>();
   for (const spec of specs) {
     let member: DesignMember;
-    try {
-      member = resolveMemberUnchecked(spec, tables);
-    } catch (err) {
-      if (err instanceof TableLookupError || err instanceof DesignInputError) continue;
-      throw err;
+    const plies = spec.material === "steel" ? 1 : spec.plies;
+    const key = spec.material === "sawn" ? `s|${spec.species}|${spec.grade}|${spec.size}` : spec.material === "engineered" ? `e|${spec.product}|${spec.width}|${spec.depth}` : "";
+    let base = key ? onePly.get(key) : undefined;
+    if (base === undefined) {
+      try {
+        base = resolveMemberUnchecked(spec.material === "steel" ? spec : { ...spec, plies: 1 }, tables);
+      } catch (err) {
+        if (!(err instanceof TableLookupError || err instanceof DesignInputError)) throw err;
+        base = null;
+      }
+      if (key) onePly.set(key, base);
     }
+    if (base === null) continue;
+    member = base.kind === "wood" && plies !== 1 ? withPlies(base, plies) : base;
     if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) continue;
     checked++;
     lastMember = member;
@@ -186,23 +196,24 @@ export interface SpanOutput {
 /** Positions scaled with the length: supports and loads keep their place as a fraction of the member. */
 function scaled(input: SpanInput, length: number): Record<string, unknown> {
   const k = length / input.length;
+  const at = (x: number) => Math.min(length, Math.max(0, x * k));
   const loads = input.loads.map((l) => {
     switch (l.type) {
       case "area":
       case "snow":
-        return { ...l, from: l.from === undefined ? undefined : l.from * k, to: l.to === undefined ? undefined : l.to * k };
+        return { ...l, from: l.from === undefined ? undefined : at(l.from), to: l.to === undefined ? undefined : at(l.to) };
       case "point":
       case "moment":
-        return { ...l, x: l.x * k };
+        return { ...l, x: at(l.x) };
       default:
-        return { ...l, from: l.from * k, to: l.to * k };
+        return { ...l, from: at(l.from), to: at(l.to) };
     }
   });
   const { minLength: _min, maxLength: _max, toleranceIn: _tol, ...rest } = input;
   void _min;
   void _max;
   void _tol;
-  return { ...rest, length, supports: input.supports.map((s) => ({ ...s, x: s.x * k })), loads };
+  return { ...rest, length, supports: input.supports.map((s) => ({ ...s, x: at(s.x) })), loads };
 }
 
 /**

@@ -100,10 +100,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
 
   // Bending, per unbraced segment and combination (NDS 2018 §3.3).
   const fbBase = m.Fb * CM.Fb * Ct.Fb * m.CF * Ci.Fb * Cr * (lrfd ? FORMAT_CONVERSION_KF.Fb * RESISTANCE_PHI.Fb : 1);
-  let bend: DesignCheck | null = null;
-  let bendCD = 1;
-  let bendCL = 1;
-  let bendFbPrime = 0;
+  let bestBend = { ratio: -1, fb: 0, FbPrime: 0, M: 0, x: 0, CD: 1, CL: 1, luFt: 0, combination: "" };
   let worstRB = 0;
   for (const seg of model.segments) {
     const luIn = seg.luFt * 12;
@@ -118,24 +115,24 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       const stability = CV === null ? CL : Math.min(CL, CV);
       const FbPrime = FbStar * stability * Cfu;
       const ratio = fb / FbPrime;
-      if (!bend || ratio > bend.ratio) {
-        bend = {
-          name: "bending",
-          demand: round(fb, 1),
-          capacity: round(FbPrime, 1),
-          unit: "psi",
-          ratio,
-          combination: env.name,
-          x: round(p.x, 3),
-          note: `fb = M/S = ${round(p.value, 0)} lb-ft × 12 / ${round(m.S, 2)} in³; Fb' with ${lrfd ? "λ" : "CD"} = ${CD}, CL = ${round(CL, 3)}${seg.luFt > 0 ? ` (lu = ${round(seg.luFt, 2)} ft)` : " (compression edge braced)"}`,
-        };
-        bendCD = CD;
-        bendCL = CL;
-        bendFbPrime = FbPrime;
-      }
+      if (ratio > bestBend.ratio) bestBend = { ratio, fb, FbPrime, M: p.value, x: p.x, CD, CL, luFt: seg.luFt, combination: env.name };
     }
   }
-  if (bend) checks.push(bend);
+  const bendCD = bestBend.CD;
+  const bendCL = bestBend.CL;
+  const bendFbPrime = bestBend.FbPrime;
+  if (bestBend.ratio >= 0) {
+    checks.push({
+      name: "bending",
+      demand: round(bestBend.fb, 1),
+      capacity: round(bestBend.FbPrime, 1),
+      unit: "psi",
+      ratio: bestBend.ratio,
+      combination: bestBend.combination,
+      x: round(bestBend.x, 3),
+      note: `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
+    });
+  }
   if (worstRB > 0) {
     checks.push({
       name: "stability",
@@ -153,15 +150,15 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const dFt = m.d / 12;
   const excluded = (x: number) => cond.shearIgnoreLoadsNearSupports && model.supports.some((s) => Math.abs(x - s.x) < dFt);
   const fvBase = m.Fv * CM.Fv * Ct.Fv * Ci.Fv * (lrfd ? FORMAT_CONVERSION_KF.Fv * RESISTANCE_PHI.Fv : 1);
-  let shear: DesignCheck | null = null;
-  let shearFvPrime = 0;
+  let bestShear = { ratio: -1, fv: 0, FvPrime: 0, V: 0, x: 0, combination: "" };
   for (const env of ctx.strength) {
     const k = env.fD * sw;
     let V = 0;
     let at = 0;
     for (let i = 0; i < xs.length; i++) {
-      if (excluded(xs[i])) continue;
-      const v = Math.max(env.Vmax[i] + k * model.selfWeight.V[i], -(env.Vmin[i] + k * model.selfWeight.V[i]));
+      if (cond.shearIgnoreLoadsNearSupports && excluded(xs[i])) continue;
+      const u = k * model.selfWeight.V[i];
+      const v = Math.max(env.Vmax[i] + u, -(env.Vmin[i] + u));
       if (v > V) {
         V = v;
         at = xs[i];
@@ -182,21 +179,21 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
     const fv = (1.5 * V) / m.A;
     const FvPrime = fvBase * durationFactor(ctx, env);
     const ratio = fv / FvPrime;
-    if (!shear || ratio > shear.ratio) {
-      shear = {
-        name: "shear",
-        demand: round(fv, 1),
-        capacity: round(FvPrime, 1),
-        unit: "psi",
-        ratio,
-        combination: env.name,
-        x: round(at, 3),
-        note: `fv = 3V/2A with V = ${round(V, 0)} lb; ${cond.shearIgnoreLoadsNearSupports ? "uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "all loads counted, including those within d of the supports"}`,
-      };
-      shearFvPrime = FvPrime;
-    }
+    if (ratio > bestShear.ratio) bestShear = { ratio, fv, FvPrime, V, x: at, combination: env.name };
   }
-  if (shear) checks.push(shear);
+  const shearFvPrime = bestShear.FvPrime;
+  if (bestShear.ratio >= 0) {
+    checks.push({
+      name: "shear",
+      demand: round(bestShear.fv, 1),
+      capacity: round(bestShear.FvPrime, 1),
+      unit: "psi",
+      ratio: bestShear.ratio,
+      combination: bestShear.combination,
+      x: round(bestShear.x, 3),
+      note: `fv = 3V/2A with V = ${round(bestShear.V, 0)} lb; ${cond.shearIgnoreLoadsNearSupports ? "uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "all loads counted, including those within d of the supports"}`,
+    });
+  }
 
   // Deflection (NDS 2018 §3.5), service loads, E'.
   const live = deflectionCheck(ctx, ctx.live, "deflection-live", ctx.limits.live, sw, EPrime, m.I);
@@ -214,9 +211,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const FcBase = m.FcPerp * CM.FcPerp * Ct.FcPerp * Ci.FcPerp * (lrfd ? FORMAT_CONVERSION_KF.FcPerp * RESISTANCE_PHI.FcPerp : 1);
   const service = reactionsFor(ctx, sw);
   const reactions: SupportReaction[] = [];
-  let bearing: DesignCheck | null = null;
-  let bearingCb = 1;
-  let bearingFc = FcBase;
+  let bestBearing = { ratio: -1, fc: 0, FcPrime: FcBase, R: 0, x: 0, Cb: 1, combination: "" };
   model.supports.forEach((s, j) => {
     const { R, combination } = lrfd ? factoredReaction(ctx, ctx.strength, j, sw) : { R: service[j].maxDown, combination: service[j].maxDownCombination };
     const fromEndIn = Math.min(s.x, model.length - s.x) * 12;
@@ -226,20 +221,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
     const ratio = fc / FcPrime;
     let required = R / (m.b * FcBase);
     if (fromEndIn >= 3 && required < 6) required = Math.max(R / (m.b * FcBase) - 0.375, 0);
-    if (!bearing || ratio > bearing.ratio) {
-      bearing = {
-        name: "bearing",
-        demand: round(fc, 1),
-        capacity: round(FcPrime, 1),
-        unit: "psi",
-        ratio,
-        combination,
-        x: s.x,
-        note: `fc⊥ = R / (b × lb) = ${round(R, 0)} lb / (${round(m.b, 3)} in × ${ctx.bearingIn} in), Cb = ${round(Cb, 3)}; bearing on this member only`,
-      };
-      bearingCb = Cb;
-      bearingFc = FcPrime;
-    }
+    if (ratio > bestBearing.ratio) bestBearing = { ratio, fc, FcPrime, R, x: s.x, Cb, combination };
     reactions.push({
       ...service[j],
       bearing: ctx.bearingIn,
@@ -247,7 +229,20 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       jackStuds: Math.max(1, Math.ceil(required / JACK_STUD_IN - 1e-9)),
     });
   });
-  if (bearing) checks.push(bearing);
+  const bearingCb = bestBearing.Cb;
+  const bearingFc = bestBearing.FcPrime;
+  if (bestBearing.ratio >= 0) {
+    checks.push({
+      name: "bearing",
+      demand: round(bestBearing.fc, 1),
+      capacity: round(bestBearing.FcPrime, 1),
+      unit: "psi",
+      ratio: bestBearing.ratio,
+      combination: bestBearing.combination,
+      x: bestBearing.x,
+      note: `fc⊥ = R / (b × lb) = ${round(bestBearing.R, 0)} lb / (${round(m.b, 3)} in × ${ctx.bearingIn} in), Cb = ${round(bestBearing.Cb, 3)}; bearing on this member only`,
+    });
+  }
 
   const factors: WoodFactors = {
     method: ctx.method,
