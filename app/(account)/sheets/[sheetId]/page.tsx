@@ -1,0 +1,49 @@
+import type { Metadata } from "next";
+import { notFound, redirect } from "next/navigation";
+import { PageHeader } from "@/components/ui/page-header";
+import { SheetDocument } from "@/components/sheets/sheet-document";
+import { SheetPrintStyles } from "@/components/sheets/print-styles";
+import { SheetToolbar } from "@/components/sheets/sheet-toolbar";
+import { getSessionUser } from "@/lib/auth/session";
+import { HttpError } from "@/lib/http";
+import { SHEET_LAPSED_WORDS, sheetAccess } from "@/lib/sheets/access";
+import { getJobSheet, type SheetRecord } from "@/lib/sheets/sheets";
+
+export const metadata: Metadata = { title: "Job sheet", robots: { index: false, follow: false } };
+export const dynamic = "force-dynamic";
+
+type SheetPageProps = { params: Promise<{ sheetId: string }> };
+
+// GET /sheets/[sheetId] — one job sheet, printable, read from its frozen snapshot; owner only (404 for others)
+export default async function SheetPage({ params }: SheetPageProps) {
+  const { sheetId } = await params;
+  const user = await getSessionUser();
+  if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/sheets/${sheetId}`)}`);
+  let sheet: SheetRecord;
+  try {
+    sheet = await getJobSheet(user.id, sheetId);
+  } catch (err) {
+    if (err instanceof HttpError && err.status === 404) notFound();
+    throw err;
+  }
+  const access = await sheetAccess(user);
+  return (
+    <div className="flex flex-col gap-4 pb-10">
+      <SheetPrintStyles />
+      <div className="no-print">
+        <PageHeader
+          title="Job sheet"
+          lead={sheet.title}
+          back={sheet.jobId ? { href: `/jobs/${sheet.jobId}`, label: "Job" } : { href: "/sheets", label: "Job sheets" }}
+        />
+        <SheetToolbar sheetId={sheet.id} canReprint={access.canReprint} lapsedWords={SHEET_LAPSED_WORDS} />
+      </div>
+      {access.canReprint ? null : (
+        <p className="sheet-print-blocked hidden text-lg">
+          Printing a job sheet needs a subscription. This sheet can be read on screen at Spanlark; subscribe to print or download it.
+        </p>
+      )}
+      <SheetDocument snapshot={sheet.snapshot} />
+    </div>
+  );
+}

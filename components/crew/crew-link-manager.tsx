@@ -1,0 +1,196 @@
+"use client";
+
+import { useRouter } from "next/navigation";
+import { useState, useTransition, type FormEvent } from "react";
+import { Button } from "@/components/ui/button";
+import { SelectField, TextField } from "@/components/ui/field";
+import { useToast } from "@/components/ui/toast";
+import type { CrewLinkView } from "@/lib/crew/links";
+import { createCrewLink, revokeCrewLink, sendCrewLink } from "./actions";
+
+export type CrewLinkManagerProps = {
+  jobId: string;
+  links: CrewLinkView[];
+  /** live links allowed at once (free tier), null for no limit */
+  activeLimit: number | null;
+  /** live links across all the owner's jobs */
+  activeCount: number;
+};
+
+const EXPIRY_OPTIONS = [
+  { value: "0", label: "Until I revoke it" },
+  { value: "1", label: "1 day" },
+  { value: "7", label: "7 days" },
+  { value: "30", label: "30 days" },
+  { value: "90", label: "90 days" },
+];
+
+const STATUS_WORDS: Record<CrewLinkView["status"], string> = { active: "Live", revoked: "Revoked", expired: "Expired" };
+
+function dateWords(iso: string): string {
+  return new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
+}
+
+function LinkRow({ link, onChanged }: { link: CrewLinkView; onChanged: () => void }) {
+  const toast = useToast();
+  const [pending, startTransition] = useTransition();
+  const [mailOpen, setMailOpen] = useState(false);
+  const [to, setTo] = useState("");
+  const [note, setNote] = useState("");
+  const [mailError, setMailError] = useState<string | null>(null);
+
+  const copy = async () => {
+    if (!link.url) return;
+    try {
+      await navigator.clipboard.writeText(link.url);
+      toast.show({ message: "Crew link copied." });
+    } catch {
+      toast.show({ message: "Could not copy: press and hold the link to copy it." });
+    }
+  };
+
+  const revoke = () => {
+    if (!window.confirm("Revoke this crew link? Anyone who has it will see “This link is no longer active”.")) return;
+    startTransition(async () => {
+      const result = await revokeCrewLink({ linkId: link.id });
+      toast.show({ message: result.ok ? "Crew link revoked. It stopped working at once." : result.error });
+      if (result.ok) onChanged();
+    });
+  };
+
+  const send = (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    setMailError(null);
+    startTransition(async () => {
+      const result = await sendCrewLink({ linkId: link.id, to, note });
+      if (result.ok) {
+        toast.show({ message: `Crew link sent to ${result.sentTo}.` });
+        setMailOpen(false);
+        setTo("");
+        setNote("");
+      } else {
+        setMailError("issues" in result && result.issues?.length ? result.issues.map((i) => `${i.path}: ${i.message}`).join("; ") : result.error);
+      }
+    });
+  };
+
+  const live = link.status === "active";
+  return (
+    <li className="flex flex-col gap-2 rounded-card border-2 border-rule bg-paper-raised p-3" data-testid="crew-link-row" data-status={link.status}>
+      <div className="flex flex-wrap items-baseline justify-between gap-2">
+        <p className="font-bold">{link.label || "Crew link"}</p>
+        <p className={live ? "font-bold text-sound-ink" : "font-bold text-graphite"}>
+          {STATUS_WORDS[link.status]}
+          {live && link.expiresAt ? ` until ${dateWords(link.expiresAt)}` : ""}
+        </p>
+      </div>
+      <p className="text-sm text-ink-soft">
+        Made {dateWords(link.createdAt)}
+        {link.lastOpenedAt ? ` · last opened ${dateWords(link.lastOpenedAt)}` : " · not opened yet"}
+      </p>
+      {live && link.url ? (
+        <input
+          readOnly
+          value={link.url}
+          aria-label="Crew link address"
+          className="min-h-touch w-full rounded-lg border-2 border-rule bg-paper px-3 font-mono text-sm"
+          onFocus={(e) => e.currentTarget.select()}
+          data-testid="crew-link-url"
+        />
+      ) : null}
+      {live && !link.url ? <p className="text-sm">This link can no longer be shown here; revoke it and make a new one.</p> : null}
+      {live ? (
+        <div className="flex flex-wrap gap-2">
+          {link.url ? (
+            <Button variant="secondary" onClick={copy}>
+              Copy link
+            </Button>
+          ) : null}
+          {link.url ? (
+            <Button variant="secondary" onClick={() => setMailOpen((o) => !o)} aria-expanded={mailOpen}>
+              E-mail it
+            </Button>
+          ) : null}
+          <Button variant="danger" onClick={revoke} loading={pending}>
+            Revoke
+          </Button>
+        </div>
+      ) : null}
+      {live && mailOpen ? (
+        <form onSubmit={send} className="flex flex-col gap-2" noValidate>
+          <TextField label="Send to" type="email" inputMode="email" autoComplete="email" value={to} onChange={(e) => setTo(e.target.value)} required error={mailError ?? undefined} />
+          <TextField label="Note (optional)" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} />
+          <Button type="submit" loading={pending} className="w-full sm:w-fit">
+            Send
+          </Button>
+        </form>
+      ) : null}
+    </li>
+  );
+}
+
+/** The owner's crew links for one job: make one, copy it, e-mail it, revoke it. */
+export function CrewLinkManager({ jobId, links, activeLimit, activeCount }: CrewLinkManagerProps) {
+  const router = useRouter();
+  const toast = useToast();
+  const [pending, startTransition] = useTransition();
+  const [label, setLabel] = useState("");
+  const [expires, setExpires] = useState("0");
+  const [error, setError] = useState<string | null>(null);
+  const atLimit = activeLimit !== null && activeCount >= activeLimit;
+
+  const create = (event: FormEvent<HTMLFormElement>) => {
+    event.preventDefault();
+    setError(null);
+    startTransition(async () => {
+      const result = await createCrewLink({ jobId, label, expiresInDays: Number(expires) });
+      if (result.ok) {
+        setLabel("");
+        if (result.link.url) {
+          try {
+            await navigator.clipboard.writeText(result.link.url);
+            toast.show({ message: "Crew link made and copied." });
+          } catch {
+            toast.show({ message: "Crew link made. Copy it from the list." });
+          }
+        }
+        router.refresh();
+      } else {
+        setError(result.error);
+      }
+    });
+  };
+
+  return (
+    <div className="flex flex-col gap-3">
+      <p className="text-ink-soft">
+        Anyone with a crew link sees this job&apos;s member schedule and the caution, read only, without an account. Revoke it and it stops working at once.
+      </p>
+      {activeLimit !== null ? (
+        <p className="text-sm" data-testid="crew-link-limit">
+          Free account: {activeCount} of {activeLimit} crew links live (across all your jobs).
+        </p>
+      ) : null}
+      <form onSubmit={create} className="flex flex-col gap-2 sm:flex-row sm:items-end" noValidate>
+        <TextField label="Who it is for (optional)" value={label} onChange={(e) => setLabel(e.target.value)} maxLength={80} containerClassName="sm:flex-1" />
+        <SelectField label="Works for" options={EXPIRY_OPTIONS} value={expires} onChange={(e) => setExpires(e.target.value)} />
+        <Button type="submit" loading={pending} disabled={atLimit} data-testid="crew-link-create">
+          Make crew link
+        </Button>
+      </form>
+      {atLimit ? <p className="font-bold text-caution-ink">Revoke a live link, or subscribe, to make another.</p> : null}
+      {error ? (
+        <p role="alert" className="font-bold text-over-ink">
+          {error}
+        </p>
+      ) : null}
+      {links.length > 0 ? (
+        <ul className="flex flex-col gap-2" aria-label="Crew links">
+          {links.map((l) => (
+            <LinkRow key={l.id} link={l} onChanged={() => router.refresh()} />
+          ))}
+        </ul>
+      ) : null}
+    </div>
+  );
+}
