@@ -74,23 +74,27 @@ async function readCosts(versionId: string, transaction?: Transaction) {
 
 /** Every table's rows of one version. */
 export async function readVersionRows(versionId: string, transaction?: Transaction): Promise<TableRows> {
-  const [sawnSizes, sawnValues, sizeFactors, engineered, steelShapes, steelGrades, costs] = await Promise.all([
-    readSawnSizes(versionId, transaction),
-    readSawnValues(versionId, transaction),
-    readSizeFactors(versionId, transaction),
-    readEngineered(versionId, transaction),
-    readSteelShapes(versionId, transaction),
-    readSteelGrades(versionId, transaction),
-    readCosts(versionId, transaction),
-  ]);
   const rows = emptyRows();
-  rows["sawn-sizes"] = sawnSizes;
-  rows["sawn-values"] = sawnValues;
-  rows["size-factors"] = sizeFactors;
-  rows.engineered = engineered;
-  rows["steel-shapes"] = steelShapes;
-  rows["steel-grades"] = steelGrades;
-  rows.costs = costs;
+  if (transaction) {
+    // One connection runs one query at a time: read in turn.
+    rows["sawn-sizes"] = await readSawnSizes(versionId, transaction);
+    rows["sawn-values"] = await readSawnValues(versionId, transaction);
+    rows["size-factors"] = await readSizeFactors(versionId, transaction);
+    rows.engineered = await readEngineered(versionId, transaction);
+    rows["steel-shapes"] = await readSteelShapes(versionId, transaction);
+    rows["steel-grades"] = await readSteelGrades(versionId, transaction);
+    rows.costs = await readCosts(versionId, transaction);
+    return rows;
+  }
+  [rows["sawn-sizes"], rows["sawn-values"], rows["size-factors"], rows.engineered, rows["steel-shapes"], rows["steel-grades"], rows.costs] = await Promise.all([
+    readSawnSizes(versionId),
+    readSawnValues(versionId),
+    readSizeFactors(versionId),
+    readEngineered(versionId),
+    readSteelShapes(versionId),
+    readSteelGrades(versionId),
+    readCosts(versionId),
+  ]);
   return rows;
 }
 
