@@ -1,0 +1,53 @@
+"use client";
+
+import { useState } from "react";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { FormAlert } from "./form-alert";
+import { postJson } from "./form-support";
+
+export type VerifyEmailProps = { token: string };
+
+/**
+ * One tap confirms the address. The link alone does not: mail scanners open links before people do, and a
+ * single-use link spent by a scanner would leave the person with a dead one.
+ */
+export function VerifyEmail({ token }: VerifyEmailProps) {
+  const [state, setState] = useState<"idle" | "working" | "done" | "failed">("idle");
+  const [message, setMessage] = useState("");
+
+  if (state === "done") {
+    return (
+      <div className="flex flex-col gap-4" data-testid="verify-done">
+        <FormAlert tone="done">Your e-mail is confirmed.</FormAlert>
+        <ButtonLink href="/sign-in?from=verified" size="lg" fullWidth>
+          Sign in
+        </ButtonLink>
+      </div>
+    );
+  }
+
+  return (
+    <div className="flex flex-col gap-4">
+      {state === "failed" ? <FormAlert tone="error">{message}</FormAlert> : null}
+      <Button
+        size="lg"
+        fullWidth
+        loading={state === "working"}
+        onClick={async () => {
+          setState("working");
+          const result = await postJson("/api/auth/verify", { token });
+          if (result.ok) return setState("done");
+          setMessage(result.error);
+          setState("failed");
+        }}
+      >
+        Confirm my e-mail
+      </Button>
+      {state === "failed" ? (
+        <ButtonLink href="/sign-in" variant="secondary" fullWidth>
+          Go to sign in
+        </ButtonLink>
+      ) : null}
+    </div>
+  );
+}
