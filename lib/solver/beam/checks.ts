@@ -20,6 +20,22 @@ function finite(v: unknown): v is number {
   return typeof v === "number" && Number.isFinite(v);
 }
 
+function needFinite(issues: InputIssue[], path: string, v: unknown, unit: string): void {
+  if (!finite(v)) issues.push({ path, message: `must be a finite number (${unit})` });
+}
+
+function onMemberIssue(issues: InputIssue[], path: string, x: unknown, L: number): boolean {
+  if (!finite(x)) {
+    issues.push({ path, message: "must be a finite number (ft)" });
+    return false;
+  }
+  if (!onMember(x, L)) {
+    issues.push({ path, message: `must be on the member, between 0 and ${formatFt(L)} ft (got ${formatFt(x)})` });
+    return false;
+  }
+  return true;
+}
+
 /**
  * Checks that depend on more than one field (positions against the length, from < to, repeated
  * supports). Shared by the zod schema and by analyzeBeam, so both give the same words.
@@ -35,57 +51,49 @@ export function geometryIssues(input: BeamInput): InputIssue[] {
   if (L > LIMITS.maxLengthFt) issues.push({ path: "length", message: `must be at most ${LIMITS.maxLengthFt} ft` });
   if (!finite(input.E) || input.E <= 0) issues.push({ path: "E", message: "must be a number greater than 0 (psi)" });
   if (!finite(input.I) || input.I <= 0) issues.push({ path: "I", message: "must be a number greater than 0 (in^4)" });
-  const range = `between 0 and ${formatFt(L)} ft`;
-  if (input.supports.length > LIMITS.maxSupports) {
-    issues.push({ path: "supports", message: `at most ${LIMITS.maxSupports} supports` });
-  }
-  const seen: number[] = [];
-  input.supports.forEach((s, i) => {
-    if (!finite(s.x)) issues.push({ path: `supports.${i}.x`, message: "must be a finite number (ft)" });
-    else if (!onMember(s.x, L)) issues.push({ path: `supports.${i}.x`, message: `must be on the member, ${range} (got ${formatFt(s.x)})` });
-    else {
-      const j = seen.findIndex((x) => Math.abs(x - s.x) <= SAME_POINT * L);
-      if (j >= 0) issues.push({ path: `supports.${i}.x`, message: `another support (supports.${j}) is already at x = ${formatFt(s.x)} ft` });
+  const sup = input.supports;
+  if (sup.length > LIMITS.maxSupports) issues.push({ path: "supports", message: `at most ${LIMITS.maxSupports} supports` });
+  for (let i = 0; i < sup.length; i++) {
+    const s = sup[i];
+    if (onMemberIssue(issues, `supports.${i}.x`, s.x, L)) {
+      for (let j = 0; j < i; j++) {
+        if (Math.abs(sup[j].x - s.x) <= SAME_POINT * L) {
+          issues.push({ path: `supports.${i}.x`, message: `another support (supports.${j}) is already at x = ${formatFt(s.x)} ft` });
+          break;
+        }
+      }
     }
-    seen.push(finite(s.x) ? s.x : Number.NaN);
     if (s.type !== "pin" && s.type !== "roller" && s.type !== "fixed") {
       issues.push({ path: `supports.${i}.type`, message: 'must be "pin", "roller" or "fixed"' });
     }
-  });
-  if (input.loads.length > LIMITS.maxLoads) issues.push({ path: "loads", message: `at most ${LIMITS.maxLoads} loads` });
-  input.loads.forEach((ld, i) => {
-    const p = `loads.${i}`;
-    const num = (key: string, v: unknown, unit: string) => {
-      if (!finite(v)) issues.push({ path: `${p}.${key}`, message: `must be a finite number (${unit})` });
-    };
+  }
+  const loads = input.loads;
+  if (loads.length > LIMITS.maxLoads) issues.push({ path: "loads", message: `at most ${LIMITS.maxLoads} loads` });
+  for (let i = 0; i < loads.length; i++) {
+    const ld = loads[i];
     if (ld.type === "point" || ld.type === "moment") {
-      if (!finite(ld.x)) issues.push({ path: `${p}.x`, message: "must be a finite number (ft)" });
-      else if (!onMember(ld.x, L)) issues.push({ path: `${p}.x`, message: `must be on the member, ${range} (got ${formatFt(ld.x)})` });
-      if (ld.type === "point") num("P", ld.P, "lb");
-      else num("M", ld.M, "lb-ft");
-    } else {
-      const okFrom = finite(ld.from);
-      const okTo = finite(ld.to);
-      if (!okFrom) issues.push({ path: `${p}.from`, message: "must be a finite number (ft)" });
-      else if (!onMember(ld.from, L)) issues.push({ path: `${p}.from`, message: `must be on the member, ${range} (got ${formatFt(ld.from)})` });
-      if (!okTo) issues.push({ path: `${p}.to`, message: "must be a finite number (ft)" });
-      else if (!onMember(ld.to, L)) issues.push({ path: `${p}.to`, message: `must be on the member, ${range} (got ${formatFt(ld.to)})` });
+      onMemberIssue(issues, `loads.${i}.x`, ld.x, L);
+      if (ld.type === "point") needFinite(issues, `loads.${i}.P`, ld.P, "lb");
+      else needFinite(issues, `loads.${i}.M`, ld.M, "lb-ft");
+    } else if (ld.type === "udl" || ld.type === "linear") {
+      const okFrom = onMemberIssue(issues, `loads.${i}.from`, ld.from, L);
+      const okTo = onMemberIssue(issues, `loads.${i}.to`, ld.to, L);
       if (okFrom && okTo && !(ld.to - ld.from > SAME_POINT * L)) {
-        issues.push({ path: `${p}.to`, message: `must be greater than from (${formatFt(ld.from)} ft)` });
+        issues.push({ path: `loads.${i}.to`, message: `must be greater than from (${formatFt(ld.from)} ft)` });
       }
-      if (ld.type === "udl") num("w", ld.w, "plf");
+      if (ld.type === "udl") needFinite(issues, `loads.${i}.w`, ld.w, "plf");
       else {
-        num("w1", ld.w1, "plf");
-        num("w2", ld.w2, "plf");
+        needFinite(issues, `loads.${i}.w1`, ld.w1, "plf");
+        needFinite(issues, `loads.${i}.w2`, ld.w2, "plf");
       }
+    } else {
+      issues.push({ path: `loads.${i}.type`, message: 'must be "point", "udl", "linear" or "moment"' });
     }
-  });
-  if (input.at) {
-    if (input.at.length > LIMITS.maxStations) issues.push({ path: "at", message: `at most ${LIMITS.maxStations} stations` });
-    input.at.forEach((x, i) => {
-      if (!finite(x)) issues.push({ path: `at.${i}`, message: "must be a finite number (ft)" });
-      else if (!onMember(x, L)) issues.push({ path: `at.${i}`, message: `must be on the member, ${range} (got ${formatFt(x)})` });
-    });
+  }
+  const at = input.at;
+  if (at) {
+    if (at.length > LIMITS.maxStations) issues.push({ path: "at", message: `at most ${LIMITS.maxStations} stations` });
+    for (let i = 0; i < at.length; i++) onMemberIssue(issues, `at.${i}`, at[i], L);
   }
   return issues;
 }

@@ -135,6 +135,107 @@ function shape(t: number, Le: number, out: Float64Array): void {
   out[7] = -2 * r + 3 * r2;
 }
 
+function elementOf(nodeX: Float64Array, x: number): number {
+  let e = 0;
+  while (e < nodeX.length - 2 && x >= nodeX[e + 1]) e++;
+  return e;
+}
+
+function regionOf(regions: Region[], x: number, tol: number): number {
+  for (let r = 0; r < regions.length; r++) if (x < regions[r].to - tol) return r;
+  return regions.length - 1;
+}
+
+function addRegion(regions: Region[], bp: Float64Array, tol: number, from: number, to: number, kind: RegionKind): void {
+  let spanNo = 0;
+  if (kind === "span") {
+    spanNo = 1;
+    for (const r of regions) if (r.kind === "span") spanNo++;
+  }
+  regions.push({ from, to, kind, spanNo, segFrom: bpIndex(bp, from, tol), segTo: bpIndex(bp, to, tol) });
+}
+
+const N = new Float64Array(8);
+
+function concentratedPiece(
+  source: number,
+  loadCase: LoadCase,
+  region: number,
+  b: number,
+  bpNode: Int32Array,
+  nodeX: Float64Array,
+  x: number,
+  mag: number,
+  moment: boolean,
+): Piece {
+  let fDof: Int32Array;
+  let fVal: Float64Array;
+  if (bpNode[b] >= 0) {
+    fDof = Int32Array.of(2 * bpNode[b] + (moment ? 1 : 0));
+    fVal = Float64Array.of(mag);
+  } else {
+    const e = elementOf(nodeX, x);
+    shape(x - nodeX[e], nodeX[e + 1] - nodeX[e], N);
+    fDof = Int32Array.of(2 * e, 2 * e + 1, 2 * e + 2, 2 * e + 3);
+    const o = moment ? 4 : 0;
+    fVal = Float64Array.of(mag * N[o], mag * N[o + 1], mag * N[o + 2], mag * N[o + 3]);
+  }
+  return { source, loadCase, region, fDof, fVal, bp: b, dV: moment ? 0 : -mag, dM: moment ? mag : 0, segFrom: 0, segTo: 0, xa: 0, wa: 0, k: 0 };
+}
+
+/** Consistent nodal loads of w(x) = w1 + k(x − x0) over [a, b], by 3-point Gauss (exact: degree 4). */
+function distributedPiece(
+  source: number,
+  loadCase: LoadCase,
+  region: number,
+  bp: Float64Array,
+  tol: number,
+  nodeX: Float64Array,
+  a: number,
+  b: number,
+  x0: number,
+  w1: number,
+  k: number,
+): Piece {
+  const nn = nodeX.length;
+  let count = 0;
+  for (let e = 0; e < nn - 1; e++) if (Math.min(b, nodeX[e + 1]) - Math.max(a, nodeX[e]) > tol) count++;
+  const fDof = new Int32Array(4 * count);
+  const fVal = new Float64Array(4 * count);
+  let c = 0;
+  for (let e = 0; e < nn - 1; e++) {
+    const lo = Math.max(a, nodeX[e]);
+    const hi = Math.min(b, nodeX[e + 1]);
+    if (hi - lo <= tol) continue;
+    const Le = nodeX[e + 1] - nodeX[e];
+    const half = (hi - lo) / 2;
+    const mid = (hi + lo) / 2;
+    for (let i = 0; i < 4; i++) fDof[c + i] = 2 * e + i;
+    for (let g = 0; g < 3; g++) {
+      const x = mid + half * GAUSS_T[g];
+      const w = GAUSS_W[g] * half * (w1 + k * (x - x0));
+      shape(x - nodeX[e], Le, N);
+      for (let i = 0; i < 4; i++) fVal[c + i] += w * N[i];
+    }
+    c += 4;
+  }
+  return {
+    source,
+    loadCase,
+    region,
+    fDof,
+    fVal,
+    bp: -1,
+    dV: 0,
+    dM: 0,
+    segFrom: bpIndex(bp, a, tol),
+    segTo: bpIndex(bp, b, tol),
+    xa: x0,
+    wa: w1,
+    k,
+  };
+}
+
 /** Validates, checks stability, and builds the breakpoints, the factored stiffness and the load pieces. */
 export function prepareBeam(input: BeamInput): PreparedBeam {
   const issues = geometryIssues(input);
@@ -144,33 +245,51 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   const L = input.length;
   const tol = SAME_POINT * L;
   const EI = (input.E * input.I) / 144;
+  const loads = input.loads;
+  const inSup = input.supports;
 
   // Breakpoints: ends, supports, load points and load ends, merged within tol.
-  const raw: number[] = [0, L];
-  for (const s of input.supports) raw.push(s.x);
-  for (const ld of input.loads) {
-    if (ld.type === "point" || ld.type === "moment") raw.push(ld.x);
-    else raw.push(ld.from, ld.to);
+  let nraw = 2 + inSup.length;
+  for (const ld of loads) nraw += ld.type === "point" || ld.type === "moment" ? 1 : 2;
+  const raw = new Float64Array(nraw);
+  let r = 0;
+  raw[r++] = 0;
+  raw[r++] = L;
+  for (const sp of inSup) raw[r++] = sp.x;
+  for (const ld of loads) {
+    if (ld.type === "point" || ld.type === "moment") raw[r++] = ld.x;
+    else {
+      raw[r++] = ld.from;
+      raw[r++] = ld.to;
+    }
   }
-  raw.sort((a, b) => a - b);
-  const merged: number[] = [];
-  for (const x of raw) if (merged.length === 0 || x - merged[merged.length - 1] > tol) merged.push(x);
-  merged[merged.length - 1] = L;
-  merged[0] = 0;
-  const bp = Float64Array.from(merged);
-  const nbp = bp.length;
+  raw.sort();
+  let nbp = 0;
+  for (let i = 0; i < nraw; i++) if (nbp === 0 || raw[i] - raw[nbp - 1] > tol) raw[nbp++] = raw[i];
+  const bp = raw.slice(0, nbp);
+  bp[0] = 0;
+  bp[nbp - 1] = L;
   const nseg = nbp - 1;
 
   // Nodes: member ends and supports.
   const bpNode = new Int32Array(nbp).fill(-1);
   bpNode[0] = 1;
   bpNode[nbp - 1] = 1;
-  const supBp = input.supports.map((s) => bpIndex(bp, s.x, tol));
-  for (const b of supBp) bpNode[b] = 1;
-  const nodeXs: number[] = [];
-  for (let b = 0; b < nbp; b++) if (bpNode[b] === 1) bpNode[b] = nodeXs.push(bp[b]) - 1;
-  const nodeX = Float64Array.from(nodeXs);
-  const nn = nodeX.length;
+  const supBp = new Int32Array(inSup.length);
+  for (let i = 0; i < inSup.length; i++) {
+    supBp[i] = bpIndex(bp, inSup[i].x, tol);
+    bpNode[supBp[i]] = 1;
+  }
+  let nn = 0;
+  for (let b = 0; b < nbp; b++) if (bpNode[b] === 1) nn++;
+  const nodeX = new Float64Array(nn);
+  nn = 0;
+  for (let b = 0; b < nbp; b++) {
+    if (bpNode[b] === 1) {
+      nodeX[nn] = bp[b];
+      bpNode[b] = nn++;
+    }
+  }
   const ndof = 2 * nn;
 
   // Stiffness: dof 2n is the deflection (down), 2n+1 the slope (clockwise) at node n.
@@ -178,25 +297,32 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   for (let e = 0; e < nn - 1; e++) {
     const Le = nodeX[e + 1] - nodeX[e];
     const c = EI / (Le * Le * Le);
-    const k = [
-      [12, 6 * Le, -12, 6 * Le],
-      [6 * Le, 4 * Le * Le, -6 * Le, 2 * Le * Le],
-      [-12, -6 * Le, 12, -6 * Le],
-      [6 * Le, 2 * Le * Le, -6 * Le, 4 * Le * Le],
-    ];
-    for (let i = 0; i < 4; i++) for (let j = 0; j < 4; j++) K[(2 * e + i) * ndof + 2 * e + j] += c * k[i][j];
+    const a = 12 * c;
+    const bq = 6 * Le * c;
+    const d4 = 4 * Le * Le * c;
+    const d2 = 2 * Le * Le * c;
+    const i0 = 2 * e;
+    const add = (i: number, j: number, v: number) => {
+      K[(i0 + i) * ndof + i0 + j] += v;
+    };
+    add(0, 0, a); add(0, 1, bq); add(0, 2, -a); add(0, 3, bq);
+    add(1, 0, bq); add(1, 1, d4); add(1, 2, -bq); add(1, 3, d2);
+    add(2, 0, -a); add(2, 1, -bq); add(2, 2, a); add(2, 3, -bq);
+    add(3, 0, bq); add(3, 1, d2); add(3, 2, -bq); add(3, 3, d4);
   }
   const restrained = new Uint8Array(ndof);
-  const supports: PreparedSupport[] = input.supports.map((s, i) => {
+  const supports: PreparedSupport[] = [];
+  for (let i = 0; i < inSup.length; i++) {
     const node = bpNode[supBp[i]];
     restrained[2 * node] = 1;
-    if (s.type === "fixed") restrained[2 * node + 1] = 1;
-    return { x: bp[supBp[i]], type: s.type, node, bp: supBp[i] };
-  });
-  const freeList: number[] = [];
-  for (let d = 0; d < ndof; d++) if (!restrained[d]) freeList.push(d);
-  const free = Int32Array.from(freeList);
-  const nf = free.length;
+    if (inSup[i].type === "fixed") restrained[2 * node + 1] = 1;
+    supports.push({ x: bp[supBp[i]], type: inSup[i].type, node, bp: supBp[i] });
+  }
+  let nf = 0;
+  for (let d = 0; d < ndof; d++) if (!restrained[d]) nf++;
+  const free = new Int32Array(nf);
+  nf = 0;
+  for (let d = 0; d < ndof; d++) if (!restrained[d]) free[nf++] = d;
 
   // Cholesky factor of K_ff (lower triangle, row-major); a vanishing pivot means a mechanism.
   const chol = new Float64Array(nf * nf);
@@ -215,124 +341,48 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
     d = Math.sqrt(d);
     chol[j * nf + j] = d;
     for (let i = j + 1; i < nf; i++) {
-      let s = chol[i * nf + j];
-      for (let k = 0; k < j; k++) s -= chol[i * nf + k] * chol[j * nf + k];
-      chol[i * nf + j] = s / d;
+      let sum = chol[i * nf + j];
+      for (let k = 0; k < j; k++) sum -= chol[i * nf + k] * chol[j * nf + k];
+      chol[i * nf + j] = sum / d;
     }
   }
 
   // Regions: overhangs and spans between supports, left to right.
-  const supXs = supports.map((s) => s.x).sort((a, b) => a - b);
+  const supXs = new Float64Array(supports.length);
+  for (let i = 0; i < supports.length; i++) supXs[i] = supports[i].x;
+  supXs.sort();
+  const ns = supXs.length;
   const regions: Region[] = [];
-  const addRegion = (from: number, to: number, kind: RegionKind) => {
-    const spanNo = kind === "span" ? regions.filter((r) => r.kind === "span").length + 1 : 0;
-    regions.push({ from, to, kind, spanNo, segFrom: bpIndex(bp, from, tol), segTo: bpIndex(bp, to, tol) });
-  };
-  if (supXs[0] > 0) addRegion(0, supXs[0], "overhang-left");
-  for (let i = 0; i + 1 < supXs.length; i++) addRegion(supXs[i], supXs[i + 1], "span");
-  if (supXs[supXs.length - 1] < L) addRegion(supXs[supXs.length - 1], L, "overhang-right");
-  const regionOf = (x: number): number => {
-    for (let r = 0; r < regions.length; r++) if (x < regions[r].to - tol) return r;
-    return regions.length - 1;
-  };
+  if (supXs[0] > 0) addRegion(regions, bp, tol, 0, supXs[0], "overhang-left");
+  for (let i = 0; i + 1 < ns; i++) addRegion(regions, bp, tol, supXs[i], supXs[i + 1], "span");
+  if (supXs[ns - 1] < L) addRegion(regions, bp, tol, supXs[ns - 1], L, "overhang-right");
 
-  // Load pieces with their consistent nodal loads.
+  // Load pieces with their consistent nodal loads; distributed loads are cut at the supports.
   const pieces: Piece[] = [];
-  const N = new Float64Array(8);
-  const elemOf = (x: number): number => {
-    let e = 0;
-    while (e < nn - 2 && x >= nodeX[e + 1]) e++;
-    return e;
-  };
-  input.loads.forEach((ld, source) => {
+  for (let source = 0; source < loads.length; source++) {
+    const ld = loads[source];
     const loadCase: LoadCase = ld.case ?? "D";
     if (ld.type === "point" || ld.type === "moment") {
       const b = bpIndex(bp, ld.x, tol);
-      const x = bp[b];
-      const dofs: number[] = [];
-      const vals: number[] = [];
       const moment = ld.type === "moment";
-      const mag = moment ? ld.M : ld.P;
-      if (bpNode[b] >= 0) {
-        dofs.push(2 * bpNode[b] + (moment ? 1 : 0));
-        vals.push(mag);
-      } else {
-        const e = elemOf(x);
-        shape(x - nodeX[e], nodeX[e + 1] - nodeX[e], N);
-        for (let i = 0; i < 4; i++) {
-          dofs.push(2 * e + i);
-          vals.push(mag * N[moment ? 4 + i : i]);
-        }
-      }
-      pieces.push({
-        source,
-        loadCase,
-        region: regionOf(x),
-        fDof: Int32Array.from(dofs),
-        fVal: Float64Array.from(vals),
-        bp: b,
-        dV: moment ? 0 : -mag,
-        dM: moment ? mag : 0,
-        segFrom: 0,
-        segTo: 0,
-        xa: 0,
-        wa: 0,
-        k: 0,
-      });
-      return;
+      pieces.push(
+        concentratedPiece(source, loadCase, regionOf(regions, bp[b], tol), b, bpNode, nodeX, bp[b], moment ? ld.M : ld.P, moment),
+      );
+      continue;
     }
-    const b0 = bpIndex(bp, ld.from, tol);
-    const b1 = bpIndex(bp, ld.to, tol);
-    const x0 = bp[b0];
-    const x1 = bp[b1];
+    const x0 = bp[bpIndex(bp, ld.from, tol)];
+    const x1 = bp[bpIndex(bp, ld.to, tol)];
     const w1 = ld.type === "udl" ? ld.w : ld.w1;
     const w2 = ld.type === "udl" ? ld.w : ld.w2;
     const k = (w2 - w1) / (x1 - x0);
-    // Split at supports so that each region can be loaded on its own (pattern live load).
-    const cuts = [x0];
-    for (const sx of supXs) if (sx > x0 + tol && sx < x1 - tol) cuts.push(sx);
-    cuts.push(x1);
-    for (let c = 0; c + 1 < cuts.length; c++) {
-      const a = cuts[c];
-      const bEnd = cuts[c + 1];
-      const dofs: number[] = [];
-      const vals: number[] = [];
-      for (let e = 0; e < nn - 1; e++) {
-        const lo = Math.max(a, nodeX[e]);
-        const hi = Math.min(bEnd, nodeX[e + 1]);
-        if (hi - lo <= tol) continue;
-        const Le = nodeX[e + 1] - nodeX[e];
-        const acc = [0, 0, 0, 0];
-        const half = (hi - lo) / 2;
-        const mid = (hi + lo) / 2;
-        for (let g = 0; g < 3; g++) {
-          const x = mid + half * GAUSS_T[g];
-          const w = w1 + k * (x - x0);
-          shape(x - nodeX[e], Le, N);
-          for (let i = 0; i < 4; i++) acc[i] += GAUSS_W[g] * half * w * N[i];
-        }
-        for (let i = 0; i < 4; i++) {
-          dofs.push(2 * e + i);
-          vals.push(acc[i]);
-        }
-      }
-      pieces.push({
-        source,
-        loadCase,
-        region: regionOf(a),
-        fDof: Int32Array.from(dofs),
-        fVal: Float64Array.from(vals),
-        bp: -1,
-        dV: 0,
-        dM: 0,
-        segFrom: bpIndex(bp, a, tol),
-        segTo: bpIndex(bp, bEnd, tol),
-        xa: x0,
-        wa: w1,
-        k,
-      });
+    let a = x0;
+    for (let i = 0; i <= ns; i++) {
+      const cut = i < ns ? supXs[i] : x1;
+      if (i < ns && !(cut > a + tol && cut < x1 - tol)) continue;
+      pieces.push(distributedPiece(source, loadCase, regionOf(regions, a, tol), bp, tol, nodeX, a, cut, x0, w1, k));
+      a = cut;
     }
-  });
+  }
 
   return { length: L, EI, tol, bp, nseg, bpNode, nodeX, ndof, K, free, chol, supports, regions, pieces };
 }
