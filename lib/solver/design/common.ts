@@ -39,7 +39,7 @@ export function deflectionCheck(
     }
   });
   const r = model.regions[best.region];
-  const where = r.kind === "span" ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft` : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
+  const where = !ctx.notes ? "" : r.kind === "span" ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft` : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
   const check: DesignCheck = {
     name,
     demand: round(best.demand, 4),
@@ -48,7 +48,7 @@ export function deflectionCheck(
     ratio: best.ratio,
     combination: best.combination,
     x: round(best.x, 3),
-    note: `${where}, L/${limit} = ${round(best.allowed, 3)} in`,
+    note: ctx.notes ? `${where}, L/${limit} = ${round(best.allowed, 3)} in` : "",
   };
   const bestI = best.i;
   const bestFd = best.fD;

@@ -3,6 +3,7 @@
  * envelopes (strength, service, live-only) and the conditions. Built once per input.
  */
 import { asdCombinations, lrfdCombinations } from "../asce7/combinations";
+import { loadDurationFactorCD, timeEffectFactorLambda } from "../nds/nds-2018";
 import type { Combination, LoadCase, NamedCombination } from "../types";
 import { buildLoadModel, type ComboEnvelope, type LoadModel } from "./load-model";
 import { resolveLimits } from "./presets";
@@ -14,6 +15,10 @@ export interface DesignContext {
   method: "asd" | "lrfd";
   /** combinations for strength: ASCE 7-22 §2.4.1 (ASD) or §2.3.1 (LRFD) */
   strength: ComboEnvelope[];
+  /** per strength combination: the wood load duration factor CD (ASD) or time effect factor λ (LRFD) */
+  woodDuration: number[];
+  /** write the plain-words notes on each check (the sizing search leaves them out) */
+  notes: boolean;
   /** ASCE 7-22 §2.4.1 combinations at service level: total deflection and the crew's reactions */
   service: ComboEnvelope[];
   /** the service combinations without D and W: live (or snow, roof live) deflection */
@@ -63,10 +68,13 @@ export function buildContext(input: DesignProblem): DesignContext {
   const asd = asdCombinations(model.cases);
   const strengthCombos = input.method === "lrfd" ? lrfdCombinations(model.cases) : asd;
   const serviceEnv = model.envelopes(asd);
+  const strength = input.method === "lrfd" ? model.envelopes(strengthCombos) : serviceEnv;
   return {
     model,
     method: input.method,
-    strength: input.method === "lrfd" ? model.envelopes(strengthCombos) : serviceEnv,
+    strength,
+    woodDuration: strength.map((e) => (input.method === "lrfd" ? timeEffectFactorLambda(e.factors) : loadDurationFactorCD(e.factors))),
+    notes: true,
     service: serviceEnv,
     live: model.envelopes(liveCombinations(asd)),
     conditions: input.conditions,

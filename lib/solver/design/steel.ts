@@ -106,7 +106,7 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Des
           ratio,
           combination: env.name,
           x: round(p.x, 3),
-          note: `${lrfd ? "φb Mn" : "Mn/Ωb"} with Mn by ${state} (AISC 360-16 ${state === "flange local buckling" ? "F3" : "F2"}), Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}`,
+          note: !ctx.notes ? "" : `${lrfd ? "φb Mn" : "Mn/Ωb"} with Mn by ${state} (AISC 360-16 ${state === "flange local buckling" ? "F3" : "F2"}), Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}`,
         };
         gov = { Lb: seg.luFt, Cb, Mn, state };
       }
@@ -131,7 +131,7 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Des
         ratio,
         combination: env.name,
         x: round(p.x, 3),
-        note: `Vn = 0.6 Fy Aw Cv1, Cv1 = ${round(shearStrength.Cv1, 3)} (AISC 360-16 ${shearStrength.clause})`,
+        note: !ctx.notes ? "" : `Vn = 0.6 Fy Aw Cv1, Cv1 = ${round(shearStrength.Cv1, 3)} (AISC 360-16 ${shearStrength.clause})`,
       };
     }
   }

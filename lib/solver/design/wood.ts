@@ -16,18 +16,16 @@ import {
   flatUseFactorCfu,
   FORMAT_CONVERSION_KF,
   incisingFactorCi,
-  loadDurationFactorCD,
   repetitiveMemberFactorCr,
   RESISTANCE_PHI,
   slendernessRatioRB,
   temperatureFactorCt,
-  timeEffectFactorLambda,
   volumeFactorCV,
   wetServiceFactorCM,
 } from "../nds/nds-2018";
 import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common";
 import type { DesignContext } from "./context";
-import { peakAbs, type ComboEnvelope } from "./load-model";
+import { peakAbs } from "./load-model";
 import type { WoodMember } from "./member";
 import type { DesignCheck, SupportReaction } from "./types";
 
@@ -75,10 +73,6 @@ export interface MemberEvaluation {
   factors: WoodFactors;
 }
 
-function durationFactor(ctx: DesignContext, env: ComboEnvelope): number {
-  return ctx.method === "lrfd" ? timeEffectFactorLambda(env.factors) : loadDurationFactorCD(env.factors);
-}
-
 export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluation {
   const { model, conditions: cond } = ctx;
   const lrfd = ctx.method === "lrfd";
@@ -106,10 +100,11 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
     const luIn = seg.luFt * 12;
     const RB = luIn > 0 ? slendernessRatioRB(effectiveLengthLe(luIn, m.d), m.d, m.b) : 0;
     if (RB > worstRB) worstRB = RB;
-    for (const env of ctx.strength) {
+    for (let e = 0; e < ctx.strength.length; e++) {
+      const env = ctx.strength[e];
       const p = peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, env.fD * sw, seg.i0, seg.i1);
       const fb = (p.value * 12) / m.S;
-      const CD = durationFactor(ctx, env);
+      const CD = ctx.woodDuration[e];
       const FbStar = fbBase * CD;
       const CL = RB > 0 ? beamStabilityFactorCL(FbStar, criticalBucklingFbE(EminPrime, RB)) : 1.0;
       const stability = CV === null ? CL : Math.min(CL, CV);
@@ -130,7 +125,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ratio: bestBend.ratio,
       combination: bestBend.combination,
       x: round(bestBend.x, 3),
-      note: `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
+      note: !ctx.notes ? "" : `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
     });
   }
   if (worstRB > 0) {
@@ -151,7 +146,8 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const excluded = (x: number) => cond.shearIgnoreLoadsNearSupports && model.supports.some((s) => Math.abs(x - s.x) < dFt);
   const fvBase = m.Fv * CM.Fv * Ct.Fv * Ci.Fv * (lrfd ? FORMAT_CONVERSION_KF.Fv * RESISTANCE_PHI.Fv : 1);
   let bestShear = { ratio: -1, fv: 0, FvPrime: 0, V: 0, x: 0, combination: "" };
-  for (const env of ctx.strength) {
+  for (let e = 0; e < ctx.strength.length; e++) {
+    const env = ctx.strength[e];
     const k = env.fD * sw;
     let V = 0;
     let at = 0;
@@ -177,7 +173,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       }
     }
     const fv = (1.5 * V) / m.A;
-    const FvPrime = fvBase * durationFactor(ctx, env);
+    const FvPrime = fvBase * ctx.woodDuration[e];
     const ratio = fv / FvPrime;
     if (ratio > bestShear.ratio) bestShear = { ratio, fv, FvPrime, V, x: at, combination: env.name };
   }
@@ -191,7 +187,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ratio: bestShear.ratio,
       combination: bestShear.combination,
       x: round(bestShear.x, 3),
-      note: `fv = 3V/2A with V = ${round(bestShear.V, 0)} lb; ${cond.shearIgnoreLoadsNearSupports ? "uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "all loads counted, including those within d of the supports"}`,
+      note: !ctx.notes ? "" : `fv = 3V/2A with V = ${round(bestShear.V, 0)} lb; ${cond.shearIgnoreLoadsNearSupports ? "uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "all loads counted, including those within d of the supports"}`,
     });
   }
 
@@ -203,7 +199,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   let longTerm: number | null = null;
   if (total.check) {
     longTerm = round(total.check.demand + (Kcr - 1) * total.deadPartIn, 4);
-    total.check.note += `; long-term with Kcr = ${Kcr}: ${longTerm} in (NDS 2018 §3.5.2, reported, not limited)`;
+    if (ctx.notes) total.check.note += `; long-term with Kcr = ${Kcr}: ${longTerm} in (NDS 2018 §3.5.2, reported, not limited)`;
     checks.push(total.check);
   }
 
@@ -240,7 +236,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ratio: bestBearing.ratio,
       combination: bestBearing.combination,
       x: bestBearing.x,
-      note: `fc⊥ = R / (b × lb) = ${round(bestBearing.R, 0)} lb / (${round(m.b, 3)} in × ${ctx.bearingIn} in), Cb = ${round(bestBearing.Cb, 3)}; bearing on this member only`,
+      note: !ctx.notes ? "" : `fc⊥ = R / (b × lb) = ${round(bestBearing.R, 0)} lb / (${round(m.b, 3)} in × ${ctx.bearingIn} in), Cb = ${round(bestBearing.Cb, 3)}; bearing on this member only`,
     });
   }
 
