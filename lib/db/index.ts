@@ -20,11 +20,19 @@ export function createSequelize(url: string): Sequelize {
   return sequelize;
 }
 
+// Next.js bundles route handlers and pages separately, each with its own copy of the model classes; the
+// instance is shared through globalThis, so each copy initialises its own classes on it once.
+let modelsReadyHere = false;
+
 export function getSequelize(): Sequelize {
   if (!holder.spanlarkSequelize) {
     const url = process.env.DATABASE_URL;
     if (!url) throw new Error("DATABASE_URL is not set");
     holder.spanlarkSequelize = createSequelize(url);
+    modelsReadyHere = true;
+  } else if (!modelsReadyHere) {
+    initModels(holder.spanlarkSequelize);
+    modelsReadyHere = true;
   }
   return holder.spanlarkSequelize;
 }
