@@ -22,6 +22,15 @@ export interface ReadUpload<K extends TableKey> {
 }
 
 export async function readUpload<K extends TableKey>(req: Request, table: K): Promise<ReadUpload<K>> {
+  try {
+    return await readCheckedUpload(req, table);
+  } catch (err) {
+    if (err instanceof CsvUploadError) throw new HttpError(err.status, err.message);
+    throw err;
+  }
+}
+
+async function readCheckedUpload<K extends TableKey>(req: Request, table: K): Promise<ReadUpload<K>> {
   checkUploadLength(req);
   let form: FormData;
   try {
@@ -36,13 +45,7 @@ export async function readUpload<K extends TableKey>(req: Request, table: K): Pr
     note: form.get("note") ?? undefined,
     baseVersionId: form.get("baseVersionId") || undefined,
   });
-  let text: string;
-  try {
-    text = await readCsvUpload(file);
-  } catch (err) {
-    if (err instanceof CsvUploadError) throw new HttpError(err.status, err.message);
-    throw err;
-  }
+  const text = await readCsvUpload(file);
   return { fileName: file.name, mode: fields.mode, note: fields.note, baseVersionId: fields.baseVersionId, parsed: parseTableCsv(table, text) };
 }
 
