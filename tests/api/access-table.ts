@@ -133,4 +133,36 @@ export const ACCESS_TABLE: AccessRow[] = [
     note: "opens the caller's own customer only",
     args: [null, checkoutForm("monthly")],
   },
+
+  // Crew links and job sheets: everything belongs to the job's owner (a stranger's real job, link and sheet
+  // here, so "owner" is tested on real rows). The crew page (/crew/[token]) is a page, not a route: the only
+  // thing a token opens is that read-only page, and no route or action below accepts a token in its place
+  // (tests/crew/crew-access.test.ts checks both).
+  { method: "ACTION", path: "components/crew/actions.ts#createCrewLink", allowed: ["owner"], note: "404 for a job of someone else", setup: crewFixture("create") },
+  { method: "ACTION", path: "components/crew/actions.ts#revokeCrewLink", allowed: ["owner"], note: "404 for a link of someone else", setup: crewFixture("link") },
+  { method: "ACTION", path: "components/crew/actions.ts#sendCrewLink", allowed: ["owner"], note: "404 for a link of someone else", setup: crewFixture("send") },
+  {
+    method: "ACTION",
+    path: "components/sheets/actions.ts#saveJobSheet",
+    allowed: ["owner"],
+    note: "a free builder gets 403 (subscription), anyone else's job 404",
+    setup: crewFixture("create"),
+  },
+  { method: "GET", path: "/api/sheets/[id]/pdf", allowed: ["owner"], note: "404 for anyone else's sheet; 403 for the owner without a subscription", setup: crewFixture("sheet") },
 ];
+
+/** A job, live crew link and job sheet owned by an account none of the personas is, and the arguments naming them. */
+function crewFixture(kind: "create" | "link" | "send" | "sheet"): () => Promise<AccessFixture> {
+  return async () => {
+    if (!process.env.TEST_DATABASE_URL) return {};
+    const { makeAccount, makeJob, asSessionUser } = await import("../crew/fixtures");
+    const { createCrewLink } = await import("@/lib/crew/links");
+    const { saveJobSheet } = await import("@/lib/sheets/sheets");
+    const owner = await makeAccount("subscriber", "access-owner");
+    const { job } = await makeJob(owner.id);
+    if (kind === "create") return { args: [{ jobId: job.id, label: "Crew", expiresInDays: 0 }] };
+    if (kind === "sheet") return { params: { id: (await saveJobSheet(asSessionUser(owner), job.id)).id } };
+    const link = await createCrewLink({ ownerId: owner.id, jobId: job.id, expiresInDays: 0, activeLimit: null });
+    return { args: [kind === "link" ? { linkId: link.id } : { linkId: link.id, to: "crew@example.test", note: "" }] };
+  };
+}
