@@ -143,6 +143,10 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     a.push(c.shearIgnoreLoadsNearSupports ? "shear: uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "shear: every load counted, none left out near the supports");
     a.push("span taken centre to centre of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
   }
+  if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
+    a.push("glulam: the table's Fb (tension zone stressed in tension) is used for every moment; where the member hogs over a support or an overhang, confirm Fbx− with the supplier");
+  }
+  if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
   if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
   return a;
 }
