@@ -22,9 +22,9 @@ export type BeamDiagramProps = {
   className?: string;
 };
 
-export const DIAGRAM_WIDTH = 640;
-export const DIAGRAM_HEIGHT = 190;
-const PAD = { left: 18, right: 18, top: 34, bottom: 34 };
+export const DIAGRAM_WIDTH = 420;
+export const DIAGRAM_HEIGHT = 180;
+const PAD = { left: 14, right: 14, top: 30, bottom: 30 };
 
 const TONES: Record<DiagramQuantity, { stroke: string; fill: string; dash?: string }> = {
   V: { stroke: INK.spruce, fill: INK.spruceLight },
@@ -94,8 +94,8 @@ export function diagramPath(chain: BezierChain, scales: DiagramScales): string {
 
 // squared paper: a line every 16 units across the whole drawing
 const GRID_PATH = [
-  ...Array.from({ length: Math.floor(DIAGRAM_WIDTH / 16) + 1 }, (_, i) => `M${i * 16} 0V${DIAGRAM_HEIGHT}`),
-  ...Array.from({ length: Math.floor(DIAGRAM_HEIGHT / 16) + 1 }, (_, i) => `M0 ${i * 16}H${DIAGRAM_WIDTH}`),
+  ...Array.from({ length: Math.floor(DIAGRAM_WIDTH / 14) + 1 }, (_, i) => `M${i * 14} 0V${DIAGRAM_HEIGHT}`),
+  ...Array.from({ length: Math.floor(DIAGRAM_HEIGHT / 14) + 1 }, (_, i) => `M0 ${i * 14}H${DIAGRAM_WIDTH}`),
 ].join("");
 
 const defaultFormat = (v: number) => Math.round(v).toLocaleString("en-US");
@@ -140,7 +140,7 @@ export function BeamDiagram({ title, quantity, segments, extremes, unit, support
           return (
             <g key={i} aria-hidden="true">
               <circle cx={px} cy={py} r={4.5} fill={INK.ink} />
-              <text x={px} y={ty} textAnchor={anchor} fontSize="17" fontWeight="700" fill={INK.ink} stroke={INK.paper} strokeWidth="4" paintOrder="stroke">
+              <text x={px} y={ty} textAnchor={anchor} fontSize="15" fontWeight="700" fill={INK.ink} stroke={INK.paper} strokeWidth="4" paintOrder="stroke">
                 {`${format(e.value)} ${unit} at ${formatFeetInches(e.x)}`}
               </text>
             </g>

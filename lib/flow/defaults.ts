@@ -59,6 +59,7 @@ export function defaultFlowState(kind: MemberKind): FlowState {
         snow: { ...BASE.snow, on: true },
         lineLoads: [WALL_ABOVE(6)],
         material: { family: "built-up", species: "Douglas Fir-Larch", grade: "No.2", plies: 0, product: "" },
+        limits: { live: 240, total: 180 },
         bearingIn: 3,
       };
     case "beam":
@@ -68,7 +69,7 @@ export function defaultFlowState(kind: MemberKind): FlowState {
         ...SIMPLE(14),
         width: { mode: "tributary", tributaryFt: 12 },
         areaLoads: [presetLoad("living"), presetLoad("floor-dead")],
-        material: { family: "any", species: "Douglas Fir-Larch", grade: "No.2", plies: 0, product: "" },
+        material: { family: "built-up", species: "Douglas Fir-Larch", grade: "No.2", plies: 0, product: "" },
         bearingIn: 3,
       };
     case "deck-joist":

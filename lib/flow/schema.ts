@@ -26,7 +26,7 @@ export const flowStateSchema = z
       .max(20, "can have at most 20 supports"),
     width: z.discriminatedUnion("mode", [
       z.object({ mode: z.literal("spacing"), spacingIn: z.number().gt(0, "must be more than 0").max(96, "must be 96 in or less") }),
-      z.object({ mode: z.literal("tributary"), tributaryFt: z.number().gt(0, "must be more than 0").max(100, "must be 100 ft or less") }),
+      z.object({ mode: z.literal("tributary"), tributaryFt: z.number().gt(0, "must be more than 0").max(60, "must be 60 ft or less") }),
     ]),
     areaLoads: z
       .array(z.object({ id, preset: z.string().max(40), label, case: loadCase, psf: z.number().min(0, "cannot be negative").max(1000, "must be 1,000 psf or less") }))

@@ -53,8 +53,9 @@ export function supportWords(reactions: readonly Pick<SummaryReaction, "jackStud
     if (counts.every((c) => c === counts[0])) return `${counts[0]} jack stud${counts[0] === 1 ? "" : "s"} each end`;
     return counts.map((c, i) => `${c} jack stud${c === 1 ? "" : "s"} at support ${i + 1}`).join(", ");
   }
-  const need = Math.max(...reactions.map((r) => r.requiredBearing));
-  return `bearing at least ${formatInches(Math.max(need, 0))} at each support`;
+  // never less than 1-1/2 in: the least bearing IRC 2021 R502.6 allows for joists and beams on wood or metal
+  const need = Math.max(1.5, ...reactions.map((r) => r.requiredBearing));
+  return `${formatInches(need)} bearing each end`;
 }
 
 /** The member as a builder says it: "3-ply 2x12 No.2", "W8x18", "1-3/4 x 11-7/8 LVL 2.0E". */

@@ -1,0 +1,44 @@
+import type { Metadata } from "next";
+import { notFound } from "next/navigation";
+import { CrewLinkPanel } from "@/components/crew/crew-link-panel";
+import { JobPage } from "@/components/jobs/job-page";
+import { SheetPanel } from "@/components/sheets/sheet-panel";
+import { userForPage } from "@/lib/auth/guard";
+import { getJob } from "@/lib/jobs/queries";
+
+export const metadata: Metadata = { title: "Job" };
+export const dynamic = "force-dynamic";
+
+type JobRouteProps = { params: Promise<{ jobId: string }> };
+
+// GET /jobs/[jobId] — one of the caller's jobs with its members; 404 for anyone but the owner
+export default async function JobRoute({ params }: JobRouteProps) {
+  const { jobId } = await params;
+  const user = await userForPage(`/jobs/${jobId}`);
+  const job = await getJob(user.id, jobId);
+  if (!job) notFound();
+  return (
+    <JobPage
+      job={{
+        id: job.id,
+        name: job.name,
+        siteAddress: job.siteAddress,
+        notes: job.notes,
+        members: job.members.map((m) => ({
+          id: m.id,
+          label: m.label,
+          kind: m.kind,
+          headline: m.resultSummary?.headline ?? null,
+          pass: m.resultSummary?.pass ?? null,
+          ratio: m.resultSummary?.ratio ?? null,
+          governing: m.resultSummary?.governing ?? null,
+          spanFt: m.resultSummary?.spanFt ?? null,
+          carriedBy: m.carriedByMemberId ? (job.members.find((c) => c.id === m.carriedByMemberId)?.label ?? null) : null,
+        })),
+      }}
+    >
+      <CrewLinkPanel jobId={job.id} />
+      <SheetPanel jobId={job.id} />
+    </JobPage>
+  );
+}

@@ -1,0 +1,45 @@
+import type { Metadata } from "next";
+import { notFound, redirect } from "next/navigation";
+import { SizingFlow } from "@/components/flow/sizing-flow";
+import { getSessionUser } from "@/lib/auth/session";
+import { getMember, jobChoices } from "@/lib/jobs/queries";
+import { resolveFlowStart } from "@/lib/flow/url";
+
+export const metadata: Metadata = { title: "Size a member" };
+
+type SizePageProps = { searchParams: Promise<Record<string, string | string[] | undefined>> };
+
+const one = (v: string | string[] | undefined): string | undefined => (Array.isArray(v) ? v[0] : v);
+
+// GET /size — the sizing flow, no sign-in; ?job=&member= reopens a saved member for its owner
+export default async function SizePage({ searchParams }: SizePageProps) {
+  const query = await searchParams;
+  const params = { s: one(query.s), step: one(query.step), kind: one(query.kind) };
+  const jobId = one(query.job);
+  const memberId = one(query.member);
+  const user = await getSessionUser();
+  const jobs = user ? await jobChoices(user.id) : [];
+
+  if (jobId && memberId) {
+    if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/size?job=${jobId}&member=${memberId}`)}`);
+    const member = await getMember(user.id, memberId);
+    if (!member || member.jobId !== jobId) notFound();
+    const fromUrl = resolveFlowStart(params, null);
+    const location = fromUrl.from === "url" ? fromUrl.location : { state: member.flowState, step: params.step === "answer" ? ("answer" as const) : ("span" as const) };
+    return (
+      <SizingFlow
+        initial={location}
+        from="saved"
+        params={params}
+        signedIn
+        jobs={jobs}
+        editing={{ jobId: member.jobId, memberId: member.id, label: member.label, jobName: member.jobName }}
+        openSave={false}
+        initialChosen={member.chosenMember}
+      />
+    );
+  }
+
+  const start = resolveFlowStart(params, null);
+  return <SizingFlow initial={start.location} from={start.from} params={params} signedIn={user !== null} jobs={jobs} editing={null} openSave={one(query.save) === "1"} />;
+}

@@ -1,0 +1,255 @@
+"use client";
+
+import { useEffect, useMemo, useState } from "react";
+import { Caution } from "@/components/ui/caution";
+import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
+import { Skeleton, Spinner } from "@/components/ui/spinner";
+import { StatusBadge } from "@/components/ui/status-badge";
+import { WarningIcon } from "@/components/ui/icons";
+import { cx } from "@/components/ui/cx";
+import { formatFeetInches, formatInches } from "@/lib/flow/length";
+import { headlineFor, shortLabel } from "@/lib/flow/summary";
+import { KIND_LABELS, mainSpanFt, type FlowState, type FlowStepId } from "@/lib/flow/state";
+import type { CheckOutput } from "@/lib/solver/design/check";
+import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { SizeCandidateResult } from "@/lib/solver/design/size";
+import { AnswerDiagrams } from "./answer-diagrams";
+import { MemberDetail } from "./member-detail";
+import { useChecks, useSize } from "./use-design";
+import { checkDetail, checkTitle } from "./words";
+
+export type AnswerProps = {
+  state: FlowState;
+  /** the member chosen to build (null: the best that works) */
+  chosen: MemberSpec | null;
+  onChoose: (spec: MemberSpec) => void;
+  /** the chosen member's full check, once known (for saving) */
+  onChosenCheck?: (check: CheckOutput | null) => void;
+  onGoTo: (step: FlowStepId) => void;
+  /** "full" on the answer step; "live" beside the inputs on a wide screen */
+  variant?: "full" | "live";
+};
+
+const SHOWN = 5;
+const sameSpec = (a: MemberSpec, b: MemberSpec) => JSON.stringify(a) === JSON.stringify(b);
+
+/** Which step holds the field an issue names. */
+function stepOfPath(path: string): FlowStepId {
+  if (/^(length|supports|bearing)/.test(path)) return "span";
+  if (/^(loads|spacing|tributary)/.test(path)) return "loads";
+  return "material";
+}
+
+function Problem({ title, issues, onGoTo }: { title: string; issues: { path: string; message: string }[]; onGoTo: (step: FlowStepId) => void }) {
+  return (
+    <div role="alert" className="rounded-card border-2 border-over bg-over-bg p-4">
+      <p className="flex items-center gap-2 font-bold text-over-ink">
+        <WarningIcon className="h-6 w-6" /> {title}
+      </p>
+      <ul className="mt-2 flex flex-col gap-2">
+        {issues.map((i, n) => (
+          <li key={n}>
+            <span className="text-ink">
+              {i.path ? <span className="font-bold">{i.path}: </span> : null}
+              {i.message}
+            </span>{" "}
+            <button type="button" className="min-h-touch font-bold text-spruce underline underline-offset-4" onClick={() => onGoTo(stepOfPath(i.path))}>
+              Fix it
+            </button>
+          </li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
+function CandidateCard({ candidate, check, chosen, onOpen }: { candidate: SizeCandidateResult; check: CheckOutput | undefined; chosen: boolean; onOpen: () => void }) {
+  const verdict = ratioVerdict(candidate.ratio);
+  return (
+    <li>
+      <button
+        type="button"
+        onClick={onOpen}
+        className={cx(
+          "flex w-full flex-col gap-3 rounded-card border-2 bg-paper-raised p-4 text-left hover:border-spruce",
+          chosen ? "border-amber border-l-8" : "border-rule",
+        )}
+        aria-label={`${candidate.label}: ${verdict.text}, ${checkTitle(candidate.governing)} governs.${chosen ? " Chosen." : ""} Open the full check.`}
+      >
+        <span className="flex flex-wrap items-center justify-between gap-2">
+          <span className="text-xl font-bold text-ink">{shortLabel(candidate.member, candidate.label)}</span>
+          <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} />
+        </span>
+        <span className="text-ink-soft">
+          {candidate.label} · {checkTitle(candidate.governing)} governs · {Math.round(candidate.weightPlf * 10) / 10} plf
+          {chosen ? <span className="ml-2 rounded bg-amber-light px-1.5 font-bold text-ink">chosen</span> : null}
+        </span>
+        <span className="flex min-h-[13.5rem] flex-col gap-2">
+          {check
+            ? check.checks.map((c) => <RatioBar key={c.name} ratio={c.ratio} label={checkTitle(c.name)} governing={c.name === check.governing} detail={checkDetail(c)} />)
+            : Array.from({ length: 4 }, (_, i) => <Skeleton key={i} width="100%" height="2.75rem" />)}
+        </span>
+        <span className="font-bold text-spruce underline underline-offset-4">Full check, every factor</span>
+      </button>
+    </li>
+  );
+}
+
+/** Step 5: the answer first, then the members that work, the supports and the diagrams. */
+export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant = "full" }: AnswerProps) {
+  const size = useSize(state);
+  const passing = size.data?.passing ?? [];
+  const shown = passing.slice(0, variant === "full" ? SHOWN : 1);
+  const chosenSpec = chosen && passing.some((p) => sameSpec(p.member, chosen)) ? chosen : (passing[0]?.member ?? null);
+  const specs = useMemo(() => {
+    const list = shown.map((c) => c.member);
+    if (chosenSpec && !list.some((s) => sameSpec(s, chosenSpec))) list.push(chosenSpec);
+    return list;
+  }, [shown, chosenSpec]);
+  const checks = useChecks(state, specs);
+  const checkOf = (spec: MemberSpec) => {
+    const i = specs.findIndex((s) => sameSpec(s, spec));
+    return i >= 0 ? checks.data?.[i] : undefined;
+  };
+  const chosenCheck = chosenSpec ? checkOf(chosenSpec) : undefined;
+  const chosenCandidate = chosenSpec ? passing.find((p) => sameSpec(p.member, chosenSpec)) : undefined;
+  const [detail, setDetail] = useState<MemberSpec | null>(null);
+  const detailCheck = detail ? checkOf(detail) : undefined;
+
+  useEffect(() => {
+    onChosenCheck?.(chosenCheck ?? null);
+  }, [chosenCheck, onChosenCheck]);
+
+  const busy = size.isLoading || size.isValidating;
+  const headline = chosenCandidate ? headlineFor(chosenCandidate.member, chosenCandidate.label, chosenCandidate.supports, state.kind) : null;
+
+  return (
+    <div className="flex flex-col gap-6" aria-busy={busy}>
+      <section aria-labelledby="answer-title" className="flex flex-col gap-3">
+        <h2 id="answer-title" className="sr-only">
+          The answer
+        </h2>
+        <p className="figures text-ink-soft">
+          {KIND_LABELS[state.kind]}, {formatFeetInches(mainSpanFt(state))} span
+          <span className="ml-2 inline-flex h-5 w-5 align-middle">{busy ? <Spinner size="sm" label="Working out the answer" /> : null}</span>
+        </p>
+        <div className="min-h-[7.5rem] rounded-card border-2 border-ink bg-paper-raised p-4" aria-live="polite">
+          {size.error ? (
+            <Problem title="Spanlark cannot size this yet" issues={size.error.issues.length > 0 ? size.error.issues : [{ path: "", message: size.error.message }]} onGoTo={onGoTo} />
+          ) : headline && chosenCandidate ? (
+            <>
+              <p className="text-sm font-bold tracking-wide text-graphite uppercase">Build</p>
+              <p className="text-3xl leading-tight font-bold text-ink" data-testid="answer-headline">
+                {headline}
+              </p>
+              <p className="mt-2 flex flex-wrap items-center gap-2 text-ink-soft">
+                <StatusBadge status="pass" label={ratioVerdict(chosenCandidate.ratio).text} />
+                <span>
+                  {checkTitle(chosenCandidate.governing)} governs · {chosenCandidate.label}
+                </span>
+              </p>
+            </>
+          ) : size.data ? (
+            <>
+              <p className="flex items-center gap-2 text-2xl font-bold text-over-ink">
+                <WarningIcon className="h-7 w-7" /> Nothing in the tables works
+              </p>
+              <p className="mt-1 text-ink">
+                None of the {size.data.candidates} members checked carries this load over this span. Try another material, more plies, a shorter span or another support.
+              </p>
+            </>
+          ) : (
+            <div className="flex flex-col gap-2">
+              <Skeleton width="4rem" height="1rem" />
+              <Skeleton width="90%" height="2.25rem" />
+              <Skeleton width="60%" height="1.5rem" />
+            </div>
+          )}
+        </div>
+        <Caution />
+      </section>
+
+      {variant === "full" ? (
+        <>
+          <section aria-labelledby="supports-title" className="flex flex-col gap-2">
+            <h2 id="supports-title" className="text-2xl font-bold">
+              At the supports
+            </h2>
+            <div className="min-h-[6rem]">
+              {chosenCheck ? (
+                <ul className="grid gap-2 sm:grid-cols-2">
+                  {chosenCheck.reactions.map((r, i) => (
+                    <li key={i} className="figures rounded-card border-2 border-rule bg-paper-raised p-3">
+                      <p className="font-bold">
+                        Support {i + 1} at {formatFeetInches(r.x)}
+                      </p>
+                      <p>
+                        {Math.round(r.maxDown).toLocaleString("en-US")} lb down <span className="text-graphite">({r.maxDownCombination})</span>
+                      </p>
+                      {r.uplift > 0 ? (
+                        <p className="font-bold text-over-ink">
+                          {Math.round(r.uplift).toLocaleString("en-US")} lb uplift ({r.upliftCombination}) — tie it down
+                        </p>
+                      ) : null}
+                      <p>
+                        {state.kind === "header" && r.jackStuds !== null
+                          ? `${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"} (needs ${formatInches(r.requiredBearing)} of bearing)`
+                          : `Bearing: needs ${formatInches(r.requiredBearing)}, you have ${formatInches(r.bearing)}`}
+                      </p>
+                    </li>
+                  ))}
+                </ul>
+              ) : (
+                <Skeleton width="100%" height="6rem" />
+              )}
+            </div>
+          </section>
+
+          <section aria-labelledby="members-title" className="flex flex-col gap-2">
+            <h2 id="members-title" className="text-2xl font-bold">
+              Members that work, best first
+            </h2>
+            <p className="text-ink-soft">Lightest first. Tap one for its full check.</p>
+            <ul className="flex flex-col gap-3">
+              {size.data
+                ? shown.map((c) => <CandidateCard key={JSON.stringify(c.member)} candidate={c} check={checkOf(c.member)} chosen={chosenSpec !== null && sameSpec(c.member, chosenSpec)} onOpen={() => setDetail(c.member)} />)
+                : Array.from({ length: 2 }, (_, i) => <Skeleton key={i} width="100%" height="20rem" />)}
+            </ul>
+            {size.data && size.data.failing.length > 0 ? (
+              <details className="rounded-card border-2 border-rule bg-paper-raised p-3">
+                <summary className="min-h-touch cursor-pointer py-2 font-bold">Nearest that do not work</summary>
+                <ul className="flex flex-col gap-2">
+                  {size.data.failing.map((f) => (
+                    <li key={JSON.stringify(f.member)} className="flex flex-wrap items-center gap-2">
+                      <StatusBadge status="fail" label={ratioVerdict(f.ratio).text} />
+                      <span className="font-bold">{f.label}</span>
+                      <span className="text-ink-soft">{f.reason}</span>
+                    </li>
+                  ))}
+                </ul>
+              </details>
+            ) : null}
+          </section>
+
+          <section aria-labelledby="diagrams-title" className="flex flex-col gap-2">
+            <h2 id="diagrams-title" className="text-2xl font-bold">
+              Diagrams{chosenCandidate ? ` for ${shortLabel(chosenCandidate.member, chosenCandidate.label)}` : ""}
+            </h2>
+            <div className="min-h-[40rem]">{chosenCheck ? <AnswerDiagrams state={state} check={chosenCheck} /> : <Skeleton width="100%" height="40rem" />}</div>
+          </section>
+        </>
+      ) : null}
+
+      <MemberDetail
+        open={detail !== null}
+        check={detailCheck ?? null}
+        chosen={detail !== null && chosenSpec !== null && sameSpec(detail, chosenSpec)}
+        onChoose={() => {
+          if (detail) onChoose(detail);
+          setDetail(null);
+        }}
+        onClose={() => setDetail(null)}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,75 @@
+"use client";
+
+import { useEffect, useState } from "react";
+import { NumberWithUnitField } from "@/components/ui/field";
+
+export type FlowNumberFieldProps = {
+  label: string;
+  value: number;
+  unit: string;
+  unitSpoken?: string;
+  onCommit: (value: number) => void;
+  min?: number;
+  max?: number;
+  /** a value of exactly min is refused */
+  exclusiveMin?: boolean;
+  hint?: string;
+  integer?: boolean;
+  containerClassName?: string;
+};
+
+/** A number with its unit; each good value is used as it is typed, a bad one says why and is not used. */
+export function FlowNumberField({ label, value, unit, unitSpoken, onCommit, min = 0, max = 1e9, exclusiveMin = false, hint, integer = false, containerClassName }: FlowNumberFieldProps) {
+  const [text, setText] = useState(String(value));
+  const [focused, setFocused] = useState(false);
+  const [error, setError] = useState<string | null>(null);
+
+  useEffect(() => {
+    if (!focused) setText(String(value));
+  }, [value, focused]);
+
+  const problem = (raw: string): string | null => {
+    const t = raw.trim().replace(/,/g, "");
+    if (t === "") return `${label} is empty: type a number`;
+    const n = Number(t);
+    if (!Number.isFinite(n)) return `${label} must be a number`;
+    if (integer && !Number.isInteger(n)) return `${label} must be a whole number`;
+    if (exclusiveMin ? n <= min : n < min) return `${label} must be ${exclusiveMin ? "more than" : "at least"} ${min.toLocaleString("en-US")} ${unit}`;
+    if (n > max) return `${label} must be ${max.toLocaleString("en-US")} ${unit} or less`;
+    return null;
+  };
+
+  const check = (raw: string, show: boolean) => {
+    const p = problem(raw);
+    if (p === null) {
+      setError(null);
+      const n = Number(raw.trim().replace(/,/g, ""));
+      if (n !== value) onCommit(n);
+    } else if (show) {
+      setError(p);
+    }
+  };
+
+  return (
+    <NumberWithUnitField
+      label={label}
+      unit={unit}
+      unitSpoken={unitSpoken}
+      hint={hint}
+      value={text}
+      error={error}
+      containerClassName={containerClassName}
+      inputMode={integer ? "numeric" : "decimal"}
+      enterKeyHint="done"
+      onFocus={() => setFocused(true)}
+      onChange={(event) => {
+        setText(event.target.value);
+        check(event.target.value, false);
+      }}
+      onBlur={() => {
+        setFocused(false);
+        check(text, true);
+      }}
+    />
+  );
+}

@@ -1,0 +1,107 @@
+"use client";
+
+import { Form, Formik } from "formik";
+import { useRouter } from "next/navigation";
+import { useState } from "react";
+import { saveMember, updateMember } from "@/components/jobs/actions";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { Dialog } from "@/components/ui/dialog";
+import { SelectField, TextField } from "@/components/ui/field";
+import { useToast } from "@/components/ui/toast";
+import { saveMemberSchema, type SaveMemberForm } from "@/lib/flow/forms";
+import { KIND_LABELS, type FlowState } from "@/lib/flow/state";
+import type { MemberSpec } from "@/lib/solver/design/schema";
+
+export type SaveTarget = { jobId: string; memberId: string; label: string; jobName: string };
+
+export type SaveToJobProps = {
+  open: boolean;
+  onClose: () => void;
+  state: FlowState;
+  chosen: MemberSpec | null;
+  /** the caller's jobs to choose from */
+  jobs: { id: string; name: string }[];
+  /** the member being edited, when the flow was opened from a job */
+  editing: SaveTarget | null;
+};
+
+/** Save the answer to a job (an existing one or a new one), or save the changes of the member being edited. */
+export function SaveToJob({ open, onClose, state, chosen, jobs, editing }: SaveToJobProps) {
+  const toast = useToast();
+  const router = useRouter();
+  const [serverError, setServerError] = useState<{ message: string; upgrade?: string } | null>(null);
+  const defaultLabel = `${KIND_LABELS[state.kind]}`;
+
+  return (
+    <Dialog open={open} onClose={onClose} title={editing ? "Save the changes" : "Save to a job"} description={editing ? `${editing.label} in ${editing.jobName}` : "Keep this member with the job it belongs to."}>
+      {open ? (
+        <Formik<SaveMemberForm>
+          initialValues={{ jobId: editing ? editing.jobId : (jobs[0]?.id ?? "new"), newJobName: "", newJobAddress: "", label: editing ? editing.label : defaultLabel }}
+          validationSchema={saveMemberSchema}
+          onSubmit={async (values, helpers) => {
+            setServerError(null);
+            const result = editing
+              ? await updateMember({ memberId: editing.memberId, label: values.label, flowState: state, chosenMember: chosen })
+              : await saveMember({
+                  ...(values.jobId === "new" ? { newJob: { name: values.newJobName, siteAddress: values.newJobAddress, notes: "" } } : { jobId: values.jobId }),
+                  label: values.label,
+                  flowState: state,
+                  chosenMember: chosen,
+                });
+            if (!result.ok) {
+              const issues = "issues" in result ? result.issues : undefined;
+              const upgrade = "upgrade" in result ? result.upgrade : undefined;
+              setServerError({ message: issues && issues.length > 0 ? issues.map((i) => i.message).join("; ") : result.error, upgrade });
+              helpers.setSubmitting(false);
+              return;
+            }
+            onClose();
+            const jobName = editing ? editing.jobName : values.jobId === "new" ? values.newJobName : (jobs.find((j) => j.id === values.jobId)?.name ?? "the job");
+            toast.show({ message: `${values.label} saved to ${jobName}` });
+            router.refresh();
+          }}
+        >
+          {(form) => (
+            <Form noValidate className="flex flex-col gap-4">
+              {!editing ? (
+                <SelectField
+                  label="Job"
+                  options={[...jobs.map((j) => ({ value: j.id, label: j.name })), { value: "new", label: "+ A new job" }]}
+                  {...form.getFieldProps("jobId")}
+                  error={form.touched.jobId ? form.errors.jobId : undefined}
+                />
+              ) : null}
+              {!editing && form.values.jobId === "new" ? (
+                <>
+                  <TextField label="New job's name" required {...form.getFieldProps("newJobName")} error={form.touched.newJobName ? form.errors.newJobName : undefined} />
+                  <TextField label="Site address" autoComplete="street-address" {...form.getFieldProps("newJobAddress")} error={form.touched.newJobAddress ? form.errors.newJobAddress : undefined} />
+                </>
+              ) : null}
+              <TextField label="Member name" hint="What the crew calls it, e.g. H1 kitchen header" required {...form.getFieldProps("label")} error={form.touched.label ? form.errors.label : undefined} />
+              {serverError ? (
+                <div role="alert" className="rounded-lg border-2 border-over bg-over-bg p-3 font-bold text-over-ink">
+                  {serverError.message}
+                  {serverError.upgrade ? (
+                    <div className="mt-2">
+                      <ButtonLink href={serverError.upgrade} variant="secondary">
+                        See the plans
+                      </ButtonLink>
+                    </div>
+                  ) : null}
+                </div>
+              ) : null}
+              <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
+                <Button variant="secondary" onClick={onClose}>
+                  Cancel
+                </Button>
+                <Button type="submit" loading={form.isSubmitting}>
+                  {editing ? "Save the changes" : "Save"}
+                </Button>
+              </div>
+            </Form>
+          )}
+        </Formik>
+      ) : null}
+    </Dialog>
+  );
+}

@@ -1,0 +1,249 @@
+"use client";
+
+import { useCallback, useEffect, useRef, useState } from "react";
+import { BottomActionBar } from "@/components/ui/bottom-action-bar";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { CheckIcon } from "@/components/ui/icons";
+import { cx } from "@/components/ui/cx";
+import { defaultFlowState } from "@/lib/flow/defaults";
+import { formatFeetInches } from "@/lib/flow/length";
+import { FLOW_STEPS, KIND_LABELS, STEP_TITLES, mainSpanFt, type FlowLocation, type FlowState, type FlowStepId, type MemberKind } from "@/lib/flow/state";
+import { flowSearch, resolveFlowStart, STORAGE_KEY, storeLocation, type FlowStart } from "@/lib/flow/url";
+import type { CheckOutput } from "@/lib/solver/design/check";
+import type { MemberSpec } from "@/lib/solver/design/schema";
+import { Answer } from "./answer";
+import { SaveToJob, type SaveTarget } from "./save-to-job";
+import { StepKind } from "./step-kind";
+import { StepLoads } from "./step-loads";
+import { StepMaterial } from "./step-material";
+import { StepSpan } from "./step-span";
+
+export type SizingFlowProps = {
+  initial: FlowLocation;
+  from: FlowStart["from"];
+  /** the page's query, to resume from local storage when the URL holds no state */
+  params: { s?: string; step?: string; kind?: string };
+  signedIn: boolean;
+  jobs: { id: string; name: string }[];
+  editing: SaveTarget | null;
+  /** open "Save to a job" at once (back from signing in) */
+  openSave: boolean;
+  /** the member chosen when the flow was saved (editing a member) */
+  initialChosen?: MemberSpec | null;
+};
+
+function readStorage(): string | null {
+  try {
+    return window.localStorage.getItem(STORAGE_KEY);
+  } catch {
+    return null;
+  }
+}
+
+function writeStorage(value: string): void {
+  try {
+    window.localStorage.setItem(STORAGE_KEY, value);
+  } catch {
+    // private browsing or a full store: the URL still holds everything
+  }
+}
+
+function StepNav({ step, onGo }: { step: FlowStepId; onGo: (step: FlowStepId) => void }) {
+  const current = FLOW_STEPS.indexOf(step);
+  return (
+    <nav aria-label="Steps" className="no-print">
+      <ol className="flex gap-1.5">
+        {FLOW_STEPS.map((id, i) => {
+          const done = i < current;
+          const here = i === current;
+          return (
+            <li key={id} className="flex-1">
+              <button
+                type="button"
+                onClick={() => onGo(id)}
+                aria-current={here ? "step" : undefined}
+                className={cx(
+                  "flex min-h-touch w-full flex-col items-center justify-center gap-0.5 rounded-lg border-2 px-1 text-sm font-bold",
+                  here ? "border-ink bg-ink text-paper" : done ? "border-spruce bg-spruce-light text-spruce-dark" : "border-rule-strong bg-paper-raised text-ink-soft",
+                )}
+              >
+                <span className="flex items-center gap-1">
+                  {done ? <CheckIcon className="h-4 w-4" aria-hidden="true" /> : null}
+                  <span className="figures">{i + 1}</span>
+                </span>
+                <span className="hidden sm:block">{STEP_TITLES[id]}</span>
+                <span className="sr-only sm:hidden">{STEP_TITLES[id]}</span>
+                {done ? <span className="sr-only">(done)</span> : null}
+              </button>
+            </li>
+          );
+        })}
+      </ol>
+    </nav>
+  );
+}
+
+/** The sizing flow: one step per screen on a phone, the inputs beside a live answer on a wide screen. */
+export function SizingFlow({ initial, from, params, signedIn, jobs, editing, openSave, initialChosen = null }: SizingFlowProps) {
+  const [location, setLocation] = useState<FlowLocation>(initial);
+  const [resumed, setResumed] = useState(false);
+  const [chosen, setChosen] = useState<MemberSpec | null>(initialChosen);
+  const [chosenCheck, setChosenCheck] = useState<CheckOutput | null>(null);
+  const [saveOpen, setSaveOpen] = useState(openSave && signedIn);
+  const headingRef = useRef<HTMLHeadingElement>(null);
+  const lastStep = useRef<FlowStepId>(initial.step);
+  const fromPop = useRef(false);
+  const arrived = useRef(false);
+  const { state, step } = location;
+  const extra = editing ? { job: editing.jobId, member: editing.memberId } : {};
+
+  // The URL may hold no state (a plain /size or /size?kind=): resume the stored one when it fits.
+  useEffect(() => {
+    if (arrived.current) return;
+    arrived.current = true;
+    if (editing || (from !== "new" && from !== "kind")) return;
+    const start = resolveFlowStart(params, readStorage());
+    if (start.from === "storage") {
+      setLocation(start.location);
+      setResumed(true);
+    }
+    // runs once, on arrival
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, []);
+
+  // Keep the address bar and local storage in step with every change; a new step is a new history entry.
+  useEffect(() => {
+    const url = `/size${flowSearch(location, extra)}`;
+    if (fromPop.current) {
+      fromPop.current = false;
+    } else if (location.step !== lastStep.current) {
+      window.history.pushState(null, "", url);
+    } else {
+      window.history.replaceState(null, "", url);
+    }
+    lastStep.current = location.step;
+    if (!editing) writeStorage(storeLocation(location));
+    // eslint-disable-next-line react-hooks/exhaustive-deps
+  }, [location]);
+
+  useEffect(() => {
+    const onPop = () => {
+      const search = new URLSearchParams(window.location.search);
+      const start = resolveFlowStart({ s: search.get("s"), step: search.get("step"), kind: search.get("kind") }, null);
+      if (start.from === "url") {
+        fromPop.current = true;
+        lastStep.current = start.location.step;
+        setLocation(start.location);
+      }
+    };
+    window.addEventListener("popstate", onPop);
+    return () => window.removeEventListener("popstate", onPop);
+  }, []);
+
+  const update = useCallback((fn: (s: FlowState) => FlowState) => setLocation((loc) => ({ ...loc, state: fn(loc.state) })), []);
+
+  const goTo = useCallback((next: FlowStepId) => {
+    setLocation((loc) => ({ ...loc, step: next }));
+    window.scrollTo({ top: 0 });
+    requestAnimationFrame(() => headingRef.current?.focus());
+  }, []);
+
+  const index = FLOW_STEPS.indexOf(step);
+  const prev = index > 0 ? FLOW_STEPS[index - 1] : null;
+  const next = index < FLOW_STEPS.length - 1 ? FLOW_STEPS[index + 1] : null;
+  const onKind = (kind: MemberKind) => {
+    if (kind === state.kind) return;
+    setChosen(null);
+    setLocation((loc) => ({ ...loc, state: defaultFlowState(kind) }));
+  };
+
+  const returnTo = `/size${flowSearch({ state, step: "answer" }, extra)}&save=1`;
+  const summaryLine = (
+    <span className="figures">
+      {KIND_LABELS[state.kind]} · {formatFeetInches(mainSpanFt(state))} span
+    </span>
+  );
+
+  const stepBody = (
+    <>
+      {step === "kind" ? <StepKind kind={state.kind} onChange={onKind} /> : null}
+      {step === "span" ? <StepSpan state={state} update={update} /> : null}
+      {step === "loads" ? <StepLoads state={state} update={update} /> : null}
+      {step === "material" ? <StepMaterial state={state} update={update} /> : null}
+      {step === "answer" ? <Answer state={state} chosen={chosen} onChoose={setChosen} onChosenCheck={setChosenCheck} onGoTo={goTo} /> : null}
+    </>
+  );
+
+  return (
+    <div className="flex flex-col gap-5">
+      <header className="flex flex-col gap-3">
+        <div className="flex flex-wrap items-baseline justify-between gap-2">
+          <h1 className="text-3xl leading-tight font-bold">{editing ? `Edit ${editing.label}` : "Size a member"}</h1>
+          {editing ? <p className="text-ink-soft">in {editing.jobName}</p> : null}
+        </div>
+        <StepNav step={step} onGo={goTo} />
+        {resumed ? (
+          <p className="flex flex-wrap items-center gap-2 rounded-lg bg-spruce-light p-2 pl-3 text-ink" role="status">
+            Picked up where you left off.
+            <Button
+              variant="ghost"
+              onClick={() => {
+                setResumed(false);
+                setChosen(null);
+                setLocation({ state: defaultFlowState(state.kind), step: "kind" });
+              }}
+            >
+              Start over
+            </Button>
+          </p>
+        ) : null}
+      </header>
+
+      <div className={cx("grid gap-8", step !== "answer" && "lg:grid-cols-[minmax(0,1fr)_minmax(0,26rem)]")}>
+        <section aria-labelledby="step-title" className="flex min-w-0 flex-col gap-4">
+          <h2 id="step-title" ref={headingRef} tabIndex={-1} className="text-2xl font-bold focus:outline-none">
+            <span className="block text-base font-bold text-graphite">
+              Step {index + 1} of {FLOW_STEPS.length}
+            </span>
+            {step === "answer" ? "What to build" : STEP_TITLES[step]}
+          </h2>
+          {stepBody}
+        </section>
+        {step !== "answer" ? (
+          <aside aria-label="Answer so far" className="hidden lg:block">
+            <div className="sticky top-4 flex flex-col gap-3">
+              <h2 className="text-xl font-bold">Answer so far</h2>
+              <Answer state={state} chosen={chosen} onChoose={setChosen} onGoTo={goTo} variant="live" />
+              <Button variant="secondary" onClick={() => goTo("answer")}>
+                See the whole answer
+              </Button>
+            </div>
+          </aside>
+        ) : null}
+      </div>
+
+      <BottomActionBar summary={summaryLine}>
+        {prev ? (
+          <Button variant="secondary" size="lg" onClick={() => goTo(prev)}>
+            Back
+          </Button>
+        ) : null}
+        {next ? (
+          <Button size="lg" onClick={() => goTo(next)}>
+            {next === "answer" ? "See the answer" : `Next: ${STEP_TITLES[next]}`}
+          </Button>
+        ) : signedIn ? (
+          <Button size="lg" onClick={() => setSaveOpen(true)} disabled={!chosenCheck}>
+            {editing ? "Save the changes" : "Save to a job"}
+          </Button>
+        ) : (
+          <ButtonLink size="lg" href={`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`}>
+            Sign in to save
+          </ButtonLink>
+        )}
+      </BottomActionBar>
+
+      {signedIn ? <SaveToJob open={saveOpen} onClose={() => setSaveOpen(false)} state={state} chosen={chosenCheck ? chosenCheck.member.spec : chosen} jobs={jobs} editing={editing} /> : null}
+    </div>
+  );
+}

@@ -1,0 +1,122 @@
+"use client";
+
+import { SelectField } from "@/components/ui/field";
+import type { FlowState, MaterialFamily } from "@/lib/flow/state";
+import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
+import { ENGINEERED } from "@/lib/tables/engineered";
+import type { SawnGrade, Species } from "@/lib/tables/types";
+import { ChoiceGroup } from "./choice-group";
+import { LengthField } from "./length-field";
+import { FlowNumberField } from "./number-field";
+
+export type StepMaterialProps = { state: FlowState; update: (fn: (s: FlowState) => FlowState) => void };
+
+const SPECIES: Species[] = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"];
+const GRADES: SawnGrade[] = ["Select Structural", "No.1", "No.2", "No.3"];
+
+const FAMILIES: { value: MaterialFamily; label: string; detail: string }[] = [
+  { value: "any", label: "Any", detail: "the lightest member that works, from every table" },
+  { value: "sawn", label: "Sawn lumber", detail: "one piece: 2x8, 2x10, 4x12…" },
+  { value: "built-up", label: "Built-up plies", detail: "2, 3 or 4 plies nailed together" },
+  { value: "engineered", label: "Engineered wood", detail: "LVL, PSL or glulam" },
+  { value: "steel", label: "Steel", detail: "W-shapes, A992" },
+];
+
+function Checkbox({ label, hint, checked, onChange }: { label: string; hint?: string; checked: boolean; onChange: (v: boolean) => void }) {
+  return (
+    <label className="flex min-h-touch cursor-pointer items-start gap-3 py-1">
+      <input type="checkbox" className="mt-1 h-6 w-6 shrink-0 accent-spruce" checked={checked} onChange={(e) => onChange(e.target.checked)} />
+      <span className="flex flex-col">
+        <span className="font-bold">{label}</span>
+        {hint ? <span className="text-sm text-graphite">{hint}</span> : null}
+      </span>
+    </label>
+  );
+}
+
+/** Step 4: what it is made of, and the conditions the checks need. */
+export function StepMaterial({ state, update }: StepMaterialProps) {
+  const m = state.material;
+  const preset = DEFLECTION_PRESETS.find((p) => p.live === state.limits.live && p.total === state.limits.total);
+  return (
+    <div className="flex flex-col gap-6">
+      <ChoiceGroup
+        legend="Material"
+        name="family"
+        value={m.family}
+        onChange={(family) => update((s) => ({ ...s, material: { ...s.material, family, plies: family === "sawn" ? 1 : 0 } }))}
+        choices={FAMILIES.map((f) => ({ value: f.value, label: f.label, detail: f.detail }))}
+      />
+
+      {m.family === "sawn" || m.family === "built-up" ? (
+        <div className="grid gap-3 sm:grid-cols-2">
+          <SelectField label="Species" options={SPECIES.map((s) => ({ value: s, label: s }))} value={m.species} onChange={(e) => update((s) => ({ ...s, material: { ...s.material, species: e.target.value as Species } }))} />
+          <SelectField label="Grade" options={GRADES.map((g) => ({ value: g, label: g }))} value={m.grade} onChange={(e) => update((s) => ({ ...s, material: { ...s.material, grade: e.target.value as SawnGrade } }))} />
+          {m.family === "built-up" ? (
+            <SelectField
+              label="Plies"
+              options={[
+                { value: "0", label: "Let Spanlark pick (2 to 4)" },
+                { value: "2", label: "2 plies" },
+                { value: "3", label: "3 plies" },
+                { value: "4", label: "4 plies" },
+              ]}
+              value={String(m.plies)}
+              onChange={(e) => update((s) => ({ ...s, material: { ...s.material, plies: Number(e.target.value) } }))}
+            />
+          ) : null}
+        </div>
+      ) : null}
+
+      {m.family === "engineered" ? (
+        <SelectField
+          label="Product"
+          hint="Typical values — confirm with the supplier's published values."
+          options={[{ value: "", label: "Any engineered product" }, ...ENGINEERED.map((p) => ({ value: p.name, label: `${p.name} (${p.kind})` }))]}
+          value={m.product}
+          onChange={(e) => update((s) => ({ ...s, material: { ...s.material, product: e.target.value } }))}
+        />
+      ) : null}
+
+      <section aria-labelledby="limits-title" className="flex flex-col gap-3">
+        <h3 id="limits-title" className="text-xl font-bold">
+          How stiff
+        </h3>
+        <SelectField
+          label="Deflection limits"
+          options={[...DEFLECTION_PRESETS.map((p) => ({ value: p.id, label: `${p.label}: L/${p.live} live, L/${p.total} total` })), { value: "own", label: "My own limits" }]}
+          value={preset ? preset.id : "own"}
+          hint={preset ? preset.source : "Set below"}
+          onChange={(e) => {
+            const p = DEFLECTION_PRESETS.find((d) => d.id === e.target.value);
+            if (p && p.live !== null && p.total !== null) update((s) => ({ ...s, limits: { live: p.live ?? s.limits.live, total: p.total ?? s.limits.total } }));
+          }}
+        />
+        <div className="grid grid-cols-2 gap-3">
+          <FlowNumberField label="Live load, L /" unit="" value={state.limits.live} min={60} max={2000} onCommit={(live) => update((s) => ({ ...s, limits: { ...s.limits, live } }))} />
+          <FlowNumberField label="Total load, L /" unit="" value={state.limits.total} min={60} max={2000} onCommit={(total) => update((s) => ({ ...s, limits: { ...s.limits, total } }))} />
+        </div>
+      </section>
+
+      <section aria-labelledby="conditions-title" className="flex flex-col gap-1">
+        <h3 id="conditions-title" className="mb-2 text-xl font-bold">
+          Conditions
+        </h3>
+        <Checkbox label="Wet service" hint="Outdoors or damp: decks, exposed framing" checked={state.wet} onChange={(wet) => update((s) => ({ ...s, wet }))} />
+        {state.width.mode === "spacing" && state.width.spacingIn <= 24 ? (
+          <Checkbox label="Joists share the load" hint="Three or more at 24 in or less, sheathed together (repetitive members, Cr)" checked={state.repetitive} onChange={(repetitive) => update((s) => ({ ...s, repetitive }))} />
+        ) : null}
+        <Checkbox label="Count the member's own weight" checked={state.selfWeight} onChange={(selfWeight) => update((s) => ({ ...s, selfWeight }))} />
+        <LengthField
+          containerClassName="mt-3"
+          label="Top edge braced every"
+          hint="0 when the floor or roof sheathing is nailed along it"
+          valueFt={state.unbracedFt}
+          minFt={0}
+          maxFt={state.lengthFt}
+          onCommit={(unbracedFt) => update((s) => ({ ...s, unbracedFt }))}
+        />
+      </section>
+    </div>
+  );
+}

@@ -1,0 +1,216 @@
+"use client";
+
+import Link from "next/link";
+import { useRouter } from "next/navigation";
+import { useState, useTransition, type ReactNode } from "react";
+import { Button, ButtonLink } from "@/components/ui/button";
+import { Dialog } from "@/components/ui/dialog";
+import { EmptyState } from "@/components/ui/empty-state";
+import { PageHeader } from "@/components/ui/page-header";
+import { StatusBadge } from "@/components/ui/status-badge";
+import { useToast } from "@/components/ui/toast";
+import { ratioVerdict } from "@/components/ui/ratio-bar";
+import { PlusIcon } from "@/components/ui/icons";
+import { formatFeetInches } from "@/lib/flow/length";
+import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
+import { deleteJob, deleteMember, duplicateJob, duplicateMember, restoreJob, restoreMember } from "./actions";
+import { JobForm } from "./job-form";
+
+export type JobPageMember = {
+  id: string;
+  label: string;
+  kind: MemberKind;
+  headline: string | null;
+  pass: boolean | null;
+  ratio: number | null;
+  governing: string | null;
+  spanFt: number | null;
+  /** the label of the member that carries this one */
+  carriedBy: string | null;
+};
+
+export type JobPageProps = {
+  job: { id: string; name: string; siteAddress: string; notes: string; members: JobPageMember[] };
+  /** more sections under the members (crew link, job sheets) */
+  children?: ReactNode;
+};
+
+/** A job: its members (edit, duplicate, delete with Undo) and the job's own actions. */
+export function JobPage({ job, children }: JobPageProps) {
+  const router = useRouter();
+  const toast = useToast();
+  const [editing, setEditing] = useState(false);
+  const [confirmDelete, setConfirmDelete] = useState(false);
+  const [pending, startTransition] = useTransition();
+  const [problem, setProblem] = useState<string | null>(null);
+
+  const run = (work: () => Promise<void>) => startTransition(work);
+
+  const removeMember = (m: JobPageMember) =>
+    run(async () => {
+      const result = await deleteMember({ memberId: m.id });
+      if (!result.ok) {
+        setProblem(result.error);
+        return;
+      }
+      router.refresh();
+      toast.show({
+        message: `${m.label} deleted`,
+        undo: async () => {
+          const back = await restoreMember({ memberId: m.id });
+          if (!back.ok) setProblem(back.error);
+          router.refresh();
+        },
+      });
+    });
+
+  const copyMember = (m: JobPageMember) =>
+    run(async () => {
+      const result = await duplicateMember({ memberId: m.id });
+      if (!result.ok) setProblem(result.error);
+      else toast.show({ message: `${m.label} copied` });
+      router.refresh();
+    });
+
+  return (
+    <div className="flex flex-col gap-6 pb-8">
+      <PageHeader
+        title={job.name}
+        lead={job.siteAddress || undefined}
+        back={{ href: "/jobs", label: "Jobs" }}
+        actions={
+          <ButtonLink href="/size" icon={<PlusIcon className="h-5 w-5" />}>
+            Size a member
+          </ButtonLink>
+        }
+      />
+      {job.notes ? <p className="max-w-prose whitespace-pre-line text-ink">{job.notes}</p> : null}
+      {problem ? (
+        <p role="alert" className="rounded-lg border-2 border-over bg-over-bg p-3 font-bold text-over-ink">
+          {problem}
+        </p>
+      ) : null}
+
+      <section aria-labelledby="members-title" className="flex flex-col gap-3">
+        <h2 id="members-title" className="text-2xl font-bold">
+          Members
+        </h2>
+        {job.members.length === 0 ? (
+          <EmptyState title="No members yet" body="Size a member and save it to this job." action={<ButtonLink href="/size">Size a member</ButtonLink>} />
+        ) : (
+          <ul className="flex flex-col gap-3">
+            {job.members.map((m) => {
+              const verdict = m.ratio !== null ? ratioVerdict(m.ratio) : null;
+              return (
+                <li key={m.id} className="flex flex-col gap-3 rounded-card border-2 border-rule bg-paper-raised p-4">
+                  <div className="flex flex-wrap items-start justify-between gap-2">
+                    <div className="min-w-0">
+                      <h3 className="text-lg font-bold">{m.label}</h3>
+                      <p className="figures text-sm text-graphite">
+                        {KIND_LABELS[m.kind]}
+                        {m.spanFt !== null ? ` · ${formatFeetInches(m.spanFt)} span` : ""}
+                        {m.carriedBy ? ` · bears on ${m.carriedBy}` : ""}
+                      </p>
+                    </div>
+                    {verdict ? <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} /> : <StatusBadge status="caution" label="Not sized" />}
+                  </div>
+                  <p className="text-xl font-bold text-ink">{m.headline ?? "Nothing in the tables worked for these inputs."}</p>
+                  <div className="flex flex-wrap gap-2">
+                    <ButtonLink href={`/size?job=${job.id}&member=${m.id}`} variant="secondary">
+                      Edit
+                    </ButtonLink>
+                    <Button variant="ghost" disabled={pending} onClick={() => copyMember(m)} aria-label={`Duplicate ${m.label}`}>
+                      Duplicate
+                    </Button>
+                    <Button variant="ghost" disabled={pending} onClick={() => removeMember(m)} aria-label={`Delete ${m.label}`}>
+                      Delete
+                    </Button>
+                  </div>
+                </li>
+              );
+            })}
+          </ul>
+        )}
+      </section>
+
+      {children}
+
+      <section aria-labelledby="job-actions-title" className="flex flex-col gap-3">
+        <h2 id="job-actions-title" className="text-2xl font-bold">
+          This job
+        </h2>
+        <div className="flex flex-wrap gap-2">
+          <Button variant="secondary" onClick={() => setEditing(true)}>
+            Change name, address, notes
+          </Button>
+          <Button
+            variant="secondary"
+            disabled={pending}
+            onClick={() =>
+              run(async () => {
+                const result = await duplicateJob({ jobId: job.id });
+                if (!result.ok) {
+                  setProblem(result.error);
+                  return;
+                }
+                toast.show({ message: `${job.name} copied` });
+                router.push(`/jobs/${result.jobId}`);
+              })
+            }
+          >
+            Duplicate the job
+          </Button>
+          <Button variant="danger" onClick={() => setConfirmDelete(true)}>
+            Delete the job
+          </Button>
+        </div>
+        <p className="text-sm text-graphite">
+          <Link href="/jobs" className="inline-flex min-h-touch items-center font-bold">
+            All jobs
+          </Link>
+        </p>
+      </section>
+
+      <Dialog open={editing} onClose={() => setEditing(false)} title="Change the job">
+        {editing ? <JobForm job={job} onDone={() => setEditing(false)} /> : null}
+      </Dialog>
+      <Dialog
+        open={confirmDelete}
+        onClose={() => setConfirmDelete(false)}
+        title="Delete this job?"
+        description={`${job.name} and its ${job.members.length === 1 ? "member" : `${job.members.length} members`} go. You can undo it for a few seconds.`}
+        actions={
+          <>
+            <Button variant="secondary" onClick={() => setConfirmDelete(false)}>
+              Keep it
+            </Button>
+            <Button
+              variant="danger"
+              loading={pending}
+              onClick={() =>
+                run(async () => {
+                  const result = await deleteJob({ jobId: job.id });
+                  setConfirmDelete(false);
+                  if (!result.ok) {
+                    setProblem(result.error);
+                    return;
+                  }
+                  toast.show({
+                    message: `${job.name} deleted`,
+                    undo: async () => {
+                      const back = await restoreJob({ jobId: job.id });
+                      if (back.ok) router.push(`/jobs/${job.id}`);
+                    },
+                  });
+                  router.push("/jobs");
+                })
+              }
+            >
+              Delete
+            </Button>
+          </>
+        }
+      />
+    </div>
+  );
+}

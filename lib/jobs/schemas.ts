@@ -1,0 +1,49 @@
+/**
+ * zod schemas of the jobs' server actions: what a job and a saved member may hold. Each rejection
+ * names its field and the reason.
+ */
+import { z } from "zod";
+import { flowStateSchema } from "@/lib/flow/schema";
+import { memberSchema } from "@/lib/solver/design/schema";
+
+export const uuid = (what: string) => z.string().uuid(`${what} is not a valid id`);
+
+export const jobInputSchema = z.object({
+  name: z.string().trim().min(1, "Job name is required").max(120, "Job name must be 120 characters or fewer"),
+  siteAddress: z.string().trim().max(240, "Site address must be 240 characters or fewer").default(""),
+  notes: z.string().trim().max(4000, "Notes must be 4,000 characters or fewer").default(""),
+});
+export type JobInput = z.infer<typeof jobInputSchema>;
+
+export const updateJobSchema = jobInputSchema.extend({ jobId: uuid("Job") });
+export const jobIdSchema = z.object({ jobId: uuid("Job") });
+export const memberIdSchema = z.object({ memberId: uuid("Member") });
+
+const label = z.string().trim().min(1, "Member name is required, e.g. H1 kitchen header").max(120, "Member name must be 120 characters or fewer");
+
+/** Save the flow's answer: to an existing job, or to a new one made on the spot. */
+export const saveMemberSchema = z
+  .object({
+    jobId: uuid("Job").optional(),
+    newJob: jobInputSchema.optional(),
+    label,
+    flowState: flowStateSchema,
+    /** the member chosen on the answer screen; without one the best that passes is saved */
+    chosenMember: memberSchema.nullable().default(null),
+  })
+  .superRefine((v, ctx) => {
+    if ((v.jobId === undefined) === (v.newJob === undefined)) {
+      ctx.addIssue({ code: "custom", path: ["jobId"], message: "Job: pick a job or give a new job's name, not both" });
+    }
+  });
+export type SaveMemberInput = z.infer<typeof saveMemberSchema>;
+
+export const updateMemberSchema = z.object({
+  memberId: uuid("Member"),
+  label: label.optional(),
+  flowState: flowStateSchema.optional(),
+  chosenMember: memberSchema.nullable().optional(),
+  /** the member that carries this one (joists on a beam), in the same job; null to clear */
+  carriedByMemberId: uuid("Carried by").nullable().optional(),
+});
+export type UpdateMemberInput = z.infer<typeof updateMemberSchema>;

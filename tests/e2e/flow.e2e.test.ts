@@ -1,0 +1,110 @@
+// The sizing flow on a phone (390x844), from an empty browser: a 10 ft header under a bearing wall and a
+// 13 ft floor joist at 16 in, both saved to a demo job. Screenshots of every step go to tests/artifacts/.
+import { describe, expect, test } from "vitest";
+import type { Page } from "playwright-core";
+import { setupBrowser } from "./support/browser";
+
+const session = setupBrowser();
+
+// demo builder account seeded by the auth helper (FOUNDATION.md); the job is seeded by seeders/20261201120010-demo-jobs.ts
+const DEMO = { email: "dee@hollisrowe.test", password: "builder-demo-pass" };
+const DEMO_JOB = "Marsh Lane addition";
+
+async function typeLength(page: Page, label: string | RegExp, text: string): Promise<void> {
+  const field = page.getByLabel(label).first();
+  await field.fill(text);
+  await field.blur();
+}
+
+async function next(page: Page, name: RegExp): Promise<void> {
+  await page.getByRole("button", { name }).click();
+  await page.getByRole("heading", { level: 2, name: /^Step \d of 5/ }).waitFor();
+}
+
+async function waitForAnswer(page: Page): Promise<string> {
+  const headline = page.getByTestId("answer-headline");
+  await headline.waitFor({ timeout: 30_000 });
+  // the diagrams come with the chosen member's full check
+  await page.getByRole("img", { name: /^Moment M/ }).waitFor({ timeout: 30_000 });
+  return (await headline.textContent()) ?? "";
+}
+
+describe("sizing flow at 390x844", () => {
+  test("a 10 ft header under a bearing wall and a 13 ft floor joist at 16 in, saved to a job", async () => {
+    const { page, screenshot, consoleErrors, goto } = await session.open("/size", { viewport: "phone", allowConsole: [/401|Unauthorized/] });
+
+    // Step 1: the kind
+    await page.getByRole("heading", { name: /Step 1 of 5/ }).waitFor();
+    await page.getByText("Header", { exact: true }).click();
+    await screenshot("flow-header-1-kind", { fullPage: false });
+    await next(page, /Next: Span and supports/);
+
+    // Step 2: span, typed the way it was measured; echoed back in feet and inches
+    await typeLength(page, /^Span \(between supports\)/, "10'");
+    await expect.poll(() => page.getByText("Header · 10' 0\" span").count()).toBeGreaterThan(0);
+    await screenshot("flow-header-2-span", { fullPage: false });
+    await next(page, /Next: Loads/);
+
+    // Step 3: the header's starting loads: roof over a tributary width, snow, the wall above
+    await page.getByRole("heading", { name: "Posts, walls and partial loads" }).waitFor();
+    expect(await page.getByText(/Wall above/).count()).toBeGreaterThan(0);
+    await screenshot("flow-header-3-loads", { fullPage: false });
+    await next(page, /Next: Material/);
+
+    // Step 4: built-up sawn lumber by default
+    await screenshot("flow-header-4-material", { fullPage: false });
+    await next(page, /See the answer/);
+
+    // Step 5: the answer first, with jack studs
+    const headerAnswer = await waitForAnswer(page);
+    expect(headerAnswer).toMatch(/2x\d+ .*jack stud/);
+    await screenshot("flow-header-5-answer", { fullPage: false });
+    await screenshot("flow-header-5-answer-full");
+
+    // Signed out, saving asks for a sign-in and comes back with nothing lost
+    await page.getByRole("link", { name: "Sign in to save" }).click();
+    await page.getByLabel(/Email/i).fill(DEMO.email);
+    await page.getByLabel(/Password/i).fill(DEMO.password);
+    await page.getByRole("button", { name: /Sign in/i }).click();
+    await page.waitForURL(/\/size\?.*save=1|\/size\?.*step=answer/, { timeout: 30_000 });
+    const dialog = page.getByRole("dialog", { name: "Save to a job" });
+    await dialog.waitFor({ timeout: 30_000 });
+    expect(await waitForAnswer(page)).toBe(headerAnswer);
+    await dialog.getByLabel("Job").selectOption({ label: DEMO_JOB });
+    await dialog.getByLabel(/Member name/).fill("H1 kitchen header");
+    await screenshot("flow-header-6-save", { fullPage: false });
+    await dialog.getByRole("button", { name: "Save" }).click();
+    await page.getByText(`H1 kitchen header saved to ${DEMO_JOB}`).waitFor();
+
+    // The floor joist: from the home page's link
+    await goto("/size?kind=floor-joist");
+    await page.getByRole("heading", { name: /Step 2 of 5/ }).waitFor();
+    await typeLength(page, /^Span \(between supports\)/, "13");
+    await screenshot("flow-joist-2-span", { fullPage: false });
+    await next(page, /Next: Loads/);
+    await expect.poll(() => page.getByRole("radio", { name: "16 in" }).isChecked()).toBe(true);
+    await screenshot("flow-joist-3-loads", { fullPage: false });
+    await next(page, /Next: Material/);
+    await next(page, /See the answer/);
+    const joistAnswer = await waitForAnswer(page);
+    expect(joistAnswer).toMatch(/^2x\d+ /);
+    await screenshot("flow-joist-5-answer", { fullPage: false });
+    await page.getByRole("button", { name: "Save to a job" }).click();
+    const dialog2 = page.getByRole("dialog", { name: "Save to a job" });
+    await dialog2.getByLabel("Job").selectOption({ label: DEMO_JOB });
+    await dialog2.getByLabel(/Member name/).fill("J1 floor joists");
+    await dialog2.getByRole("button", { name: "Save" }).click();
+    await page.getByText(`J1 floor joists saved to ${DEMO_JOB}`).waitFor();
+
+    // Both are on the job's page, with the answers the flow gave
+    await goto("/jobs");
+    await page.getByRole("link", { name: new RegExp(DEMO_JOB) }).first().click();
+    await page.getByRole("heading", { level: 1, name: DEMO_JOB }).waitFor();
+    expect(await page.getByText("H1 kitchen header").count()).toBeGreaterThan(0);
+    expect(await page.getByText("J1 floor joists").count()).toBeGreaterThan(0);
+    expect(await page.getByText(headerAnswer).count()).toBeGreaterThan(0);
+    await screenshot("flow-job-page", { fullPage: false });
+
+    expect(consoleErrors).toEqual([]);
+  });
+});
