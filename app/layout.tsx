@@ -32,6 +32,7 @@ export const metadata: Metadata = {
   title: { default: "Spanlark — size joists, headers and beams on site", template: "%s · Spanlark" },
   description: "Spanlark sizes floor joists, headers, beams, deck framing and rafters in timber and steel, on your phone.",
   applicationName: "Spanlark",
+  manifest: "/manifest.webmanifest",
   formatDetection: { telephone: false },
 };
 

@@ -3,20 +3,21 @@ import { ButtonLink } from "@/components/ui/button";
 import { CardLink } from "@/components/ui/card";
 import { NOT_CHECKED } from "@/components/ui/caution-text";
 import { TapeIcon, WarningIcon } from "@/components/ui/icons";
-import { MemberKindSketch, type MemberKind } from "@/components/shell/member-kind-sketch";
+import { MemberKindSketch } from "@/components/shell/member-kind-sketch";
+import { KIND_LABELS, MEMBER_KINDS, type MemberKind } from "@/lib/flow/state";
 
 export const metadata: Metadata = {
   title: { absolute: "Spanlark — size joists, headers and beams on site" },
 };
 
-const KINDS: ReadonlyArray<{ kind: MemberKind; title: string; body: string }> = [
-  { kind: "floor-joist", title: "Floor joist", body: "Joists under a floor, at the spacing you frame." },
-  { kind: "header", title: "Header", body: "Over a door or window, with the jack studs it needs." },
-  { kind: "beam", title: "Beam or girder", body: "Carries joists or a wall across an open room or basement." },
-  { kind: "deck-joist", title: "Deck joist", body: "Outdoor joists, with overhang past the beam." },
-  { kind: "deck-beam", title: "Deck beam", body: "The beam on posts that the deck joists sit on." },
-  { kind: "rafter", title: "Rafter or ceiling joist", body: "Roof and ceiling framing under snow and dead load." },
-];
+const KIND_NOTES: Readonly<Record<MemberKind, string>> = {
+  "floor-joist": "Joists under a floor, at the spacing you frame.",
+  header: "Over a door or window, with the jack studs it needs.",
+  beam: "Carries joists or a wall across an open room or basement.",
+  "deck-joist": "Outdoor joists, with overhang past the beam.",
+  "deck-beam": "The beam on posts that the deck joists sit on.",
+  rafter: "Roof and ceiling framing under snow and dead load.",
+};
 
 const STEPS: ReadonlyArray<{ title: string; body: string }> = [
   { title: "Say what you are sizing", body: "Pick the member, then type the span the way you measured it: 12' 6\", 12-6 or 150\"." },
@@ -48,10 +49,10 @@ export default function HomePage() {
           What are you sizing?
         </h2>
         <ul className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-          {KINDS.map(({ kind, title, body }) => (
+          {MEMBER_KINDS.map((kind) => (
             <li key={kind} className="flex">
-              <CardLink href={`/size?kind=${kind}`} title={title} media={<MemberKindSketch kind={kind} />} className="flex-1">
-                {body}
+              <CardLink href={`/size?kind=${kind}`} title={KIND_LABELS[kind]} media={<MemberKindSketch kind={kind} />} className="flex-1">
+                {KIND_NOTES[kind]}
               </CardLink>
             </li>
           ))}

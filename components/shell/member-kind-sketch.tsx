@@ -1,9 +1,6 @@
 import type { ReactNode } from "react";
 import { cx } from "@/components/ui/cx";
-
-export type MemberKind = "floor-joist" | "header" | "beam" | "deck-joist" | "deck-beam" | "rafter";
-
-export const MEMBER_KINDS: readonly MemberKind[] = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"];
+import type { MemberKind } from "@/lib/flow/state";
 
 // Small line sketches of each member in its place, drawn in spruce with the member itself in amber.
 const sketches: Record<MemberKind, ReactNode> = {
