@@ -138,7 +138,6 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   // one table lookup per size; other ply counts derive from it
   const onePly = new Map<string, DesignMember | null>();
   for (const spec of specs) {
-    let member: DesignMember;
     const plies = spec.material === "steel" ? 1 : spec.plies;
     const key = spec.material === "sawn" ? `s|${spec.species}|${spec.grade}|${spec.size}` : spec.material === "engineered" ? `e|${spec.product}|${spec.width}|${spec.depth}` : "";
     let base = key ? onePly.get(key) : undefined;
@@ -152,7 +151,7 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
       if (key) onePly.set(key, base);
     }
     if (base === null) continue;
-    member = base.kind === "wood" && plies !== 1 ? withPlies(base, plies) : base;
+    const member: DesignMember = base.kind === "wood" && plies !== 1 ? withPlies(base, plies) : base;
     if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) continue;
     checked++;
     lastMember = member;

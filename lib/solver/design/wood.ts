@@ -17,6 +17,7 @@ import {
   FORMAT_CONVERSION_KF,
   incisingFactorCi,
   repetitiveMemberFactorCr,
+  referenceFbStar,
   RESISTANCE_PHI,
   slendernessRatioRB,
   temperatureFactorCt,
@@ -93,7 +94,8 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const checks: DesignCheck[] = [];
 
   // Bending, per unbraced segment and combination (NDS 2018 §3.3).
-  const fbBase = m.Fb * CM.Fb * Ct.Fb * m.CF * Ci.Fb * Cr * (lrfd ? FORMAT_CONVERSION_KF.Fb * RESISTANCE_PHI.Fb : 1);
+  // Fb* without CD (applied per combination), NDS 2018 §3.3.3.8
+  const fbBase = referenceFbStar(m.Fb, { CD: 1, CM: CM.Fb, Ct: Ct.Fb, CF: m.CF, Ci: Ci.Fb, Cr }) * (lrfd ? FORMAT_CONVERSION_KF.Fb * RESISTANCE_PHI.Fb : 1);
   let bestBend = { ratio: -1, fb: 0, FbPrime: 0, M: 0, x: 0, CD: 1, CL: 1, luFt: 0, combination: "" };
   let worstRB = 0;
   for (const seg of model.segments) {
@@ -144,7 +146,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   // Shear, fv = 3V/2A (NDS 2018 §3.4.2), optionally at d from each support (§3.4.3.1(a)).
   const dFt = m.d / 12;
   const excluded = (x: number) => cond.shearIgnoreLoadsNearSupports && model.supports.some((s) => Math.abs(x - s.x) < dFt);
-  const fvBase = m.Fv * CM.Fv * Ct.Fv * Ci.Fv * (lrfd ? FORMAT_CONVERSION_KF.Fv * RESISTANCE_PHI.Fv : 1);
+  const fvBase = adjustedFv(m.Fv, { CD: 1, CM: CM.Fv, Ct: Ct.Fv, Ci: Ci.Fv }) * (lrfd ? FORMAT_CONVERSION_KF.Fv * RESISTANCE_PHI.Fv : 1);
   let bestShear = { ratio: -1, fv: 0, FvPrime: 0, V: 0, x: 0, combination: "" };
   for (let e = 0; e < ctx.strength.length; e++) {
     const env = ctx.strength[e];
