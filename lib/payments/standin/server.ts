@@ -184,7 +184,8 @@ export async function startStandinServer(options: StandinServerOptions): Promise
         }
         try {
           const view = standin.checkoutView(m[1]);
-          send(res, e.status, "text/html; charset=utf-8", checkoutPage({ ...view, error: e.message, values: { ...card, name: str(form, "name") } }));
+          // The page itself loads fine: the decline is said on it (a 4xx would read as a broken page).
+          send(res, 200, "text/html; charset=utf-8", checkoutPage({ ...view, error: e.message, values: { ...card, name: str(form, "name") } }));
         } catch {
           send(res, 404, "text/html; charset=utf-8", messagePage("Checkout not found", "This checkout link is not valid."));
         }
@@ -276,6 +277,11 @@ export async function startStandinServer(options: StandinServerOptions): Promise
 
   const server = createServer((req, res) => {
     const url = new URL(req.url ?? "/", publicUrl);
+    if (url.pathname === "/favicon.ico") {
+      res.writeHead(204, { "cache-control": "max-age=86400" });
+      res.end();
+      return;
+    }
     const work = url.pathname.startsWith("/v1/")
       ? handleApi(req, res, url)
       : url.pathname.startsWith("/_control/")
