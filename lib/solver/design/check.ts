@@ -135,6 +135,9 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   a.push(`load combinations: ASCE 7-22 ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}; deflection and reactions at service level (§2.4.1)`);
   a.push(c.selfWeight ? `member's own weight counted as dead load: ${Math.round(member.weightPlf * 10) / 10} plf` : "member's own weight not counted");
   a.push(c.unbracedLength > 0 ? `compression edge braced every ${c.unbracedLength} ft and at the supports` : "compression edge braced continuously (sheathing or decking fastened along it)");
+  if (ctx.model.regions.length > 1) {
+    a.push("where the member hogs (over an interior support or at an overhang) the bottom edge is in compression: the same bracing is assumed there (blocking or bracing at the supports)");
+  }
   if (ctx.model.patterned) a.push("live load placed span by span for the worst effect (pattern loading, ASCE 7-22 §4.3.3)");
   a.push(`bearing length ${input.bearing} in at every support`);
   if (member.kind === "wood") {

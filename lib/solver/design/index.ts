@@ -8,3 +8,4 @@ export type { DesignCheck, SupportReaction, CheckName } from "./types";
 export type { WoodFactors } from "./wood";
 export type { SteelFactors } from "./steel";
 export { OCCUPANCY_PRESETS, type AreaLoadPreset } from "../asce7/loads";
+export { EXPOSURE_CE, THERMAL_CT, designFlatRoofSnow, flatRoofSnowPf } from "../asce7/snow";

@@ -84,8 +84,6 @@ export const conditionsSchema = z
     shearIgnoreLoadsNearSupports: z.boolean().default(false),
     /** place live load span by span for the worst case (ASCE 7-22 §4.3.3) */
     patternLiveLoad: z.boolean().default(true),
-    /** load on the wide face (flat use) */
-    flat: z.boolean().default(false),
   })
   .strict();
 

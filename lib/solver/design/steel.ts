@@ -150,10 +150,12 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Des
   model.supports.forEach((sup, j) => {
     const { R, combination } = lrfd ? factoredReaction(ctx, ctx.strength, j, sw) : { R: service[j].maxDown, combination: service[j].maxDownCombination };
     const Rk = R / 1000;
-    const nearEnd = Math.min(sup.x, model.length - sup.x) * 12 <= s.d;
+    const fromEndIn = Math.min(sup.x, model.length - sup.x) * 12;
+    // J10.2: within d of the end; J10.3: less than d/2 from the end
+    const nearEnd = fromEndIn <= s.d;
     const lb = ctx.bearingIn;
     const yieldCap = avail(webLocalYieldingRn(s, Fy, lb, nearEnd), OMEGA_WLY, PHI_WLY);
-    const crippleCap = avail(webCripplingRn(s, Fy, lb, nearEnd), OMEGA_WCR, PHI_WCR);
+    const crippleCap = avail(webCripplingRn(s, Fy, lb, fromEndIn < s.d / 2), OMEGA_WCR, PHI_WCR);
     if (!wly || Rk / yieldCap > wly.ratio) {
       wly = { name: "web-yielding", demand: round(Rk, 3), capacity: round(yieldCap, 3), unit: "kip", ratio: Rk / yieldCap, combination, x: sup.x, note: `web local yielding at the support, lb = ${lb} in (AISC 360-16 §J10.2)` };
     }

@@ -84,7 +84,8 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const Ct = temperatureFactorCt(cond.temperatureF, cond.wet);
   const Ci = m.dimensionLumber ? incisingFactorCi(cond.incised) : { Fb: 1, Fv: 1, FcPerp: 1, E: 1 };
   const Cr = repetitiveMemberFactorCr({ dimensionLumber: m.dimensionLumber, plies: m.plies, repetitiveSystem: cond.repetitive, spacingIn: ctx.spacingIn });
-  const Cfu = m.material === "sawn" && m.dimensionLumber ? flatUseFactorCfu(m.nominalDepth, m.nominalThickness, cond.flat) : 1.0;
+  // members here bend edgewise (about the strong axis), so the flat use factor stays 1.0
+  const Cfu = flatUseFactorCfu(m.nominalDepth, m.nominalThickness, false);
   const KF = lrfd ? FORMAT_CONVERSION_KF : null;
   const phi = lrfd ? RESISTANCE_PHI : null;
   const EPrime = adjustedE(m.E, { CM: CM.E, Ct: Ct.E, Ci: Ci.E });
