@@ -21,11 +21,11 @@ function name(terms: Term[]): string {
 }
 
 /**
- * Keeps the terms of the cases present and drops exact duplicates. A combination written for a
- * variable load that is absent (e.g. 0.6D+0.6W without wind, or D+0.75L+0.75Lr without roof live
- * load) is dropped too: what is left of it is either a duplicate or, for load effects that are
- * linear, lies between two combinations already listed (D+0.75L between D and D+L), so it can
- * never govern.
+ * Keeps the terms of the cases present and drops combinations that can never govern for load
+ * effects that are linear (every effect here is): exact duplicates; a combination written for a
+ * variable load that is absent (e.g. 0.6D+0.6W without wind); and one that adds a single variable
+ * load X at a smaller factor than another combination with the same dead load factor, when that
+ * dead load alone is listed too (D+0.75L lies between D and D+L, so one of those two governs).
  */
 function build(raw: { terms: Term[]; needs: LoadCase[] }[], cases: LoadCase[]): NamedCombination[] {
   const present = new Set(cases);
@@ -42,7 +42,19 @@ function build(raw: { terms: Term[]; needs: LoadCase[] }[], cases: LoadCase[]): 
     seen.add(key);
     out.push({ name: name(terms), factors });
   }
-  return out;
+  const variables = (c: Combination) => LOAD_CASES.filter((k) => k !== "D" && (c[k] ?? 0) !== 0);
+  return out.filter((c) => {
+    const vars = variables(c.factors);
+    if (vars.length !== 1) return true;
+    const x = vars[0];
+    const d = c.factors.D ?? 0;
+    const deadAlone = out.some((o) => variables(o.factors).length === 0 && (o.factors.D ?? 0) === d);
+    const larger = out.some((o) => {
+      const ov = variables(o.factors);
+      return ov.length === 1 && ov[0] === x && (o.factors.D ?? 0) === d && (o.factors[x] ?? 0) > (c.factors[x] ?? 0);
+    });
+    return !(deadAlone && larger);
+  });
 }
 
 const T = (c: LoadCase, f: number): Term => ({ c, f });

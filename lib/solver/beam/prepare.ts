@@ -245,6 +245,9 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   const L = input.length;
   const tol = SAME_POINT * L;
   const EI = (input.E * input.I) / 144;
+  if (!(EI > 0 && EI < Infinity)) {
+    throw new BeamInputError([{ path: "E", message: "E·I is out of range — check the units: E in psi, I in in^4" }]);
+  }
   const loads = input.loads;
   const inSup = input.supports;
 

@@ -3,18 +3,21 @@ import type { BeamInput, Load, LoadCase, Support, SupportType } from "@/lib/solv
 
 const CASES: LoadCase[] = ["D", "L", "Lr", "S", "W"];
 
-/** A stable random layout: two or more distinct supports, or one fixed support. Positions on a 1/200 grid. */
+/**
+ * A stable random layout: two or more distinct supports, or one fixed support. Supports sit on a
+ * grid of 1/50 of the length (no two closer than 2% of it, as on any real member).
+ */
 export const layoutArb = fc
   .record({
     length: fc.oneof(fc.integer({ min: 2, max: 60 }), fc.integer({ min: 100, max: 20_000 }).map((k) => k / 100)),
     cantilever: fc.boolean(),
-    slots: fc.uniqueArray(fc.integer({ min: 0, max: 200 }), { minLength: 2, maxLength: 6 }),
+    slots: fc.uniqueArray(fc.integer({ min: 0, max: 50 }), { minLength: 2, maxLength: 6 }),
     types: fc.array(fc.constantFrom<SupportType>("pin", "roller", "fixed"), { minLength: 6, maxLength: 6 }),
   })
   .map(({ length, cantilever, slots, types }) => {
     const supports: Support[] = cantilever
-      ? [{ x: (slots[0] / 200) * length, type: "fixed" }]
-      : slots.map((s, i) => ({ x: (s / 200) * length, type: types[i] }));
+      ? [{ x: (slots[0] / 50) * length, type: "fixed" }]
+      : slots.map((s, i) => ({ x: (s / 50) * length, type: types[i] }));
     return { length, supports };
   });
 
@@ -57,4 +60,14 @@ export function loadScale(input: BeamInput): number {
     else s += ((Math.abs(ld.w1) + Math.abs(ld.w2)) / 2) * (ld.to - ld.from);
   }
   return s;
+}
+
+/**
+ * Absolute floors for comparing results that should be 0 (roundoff of the load scale S, lb):
+ * V ~ S, M ~ S·L, slope ~ S·L²/EI, deflection ~ S·L³/EI (in), each times 1e-12.
+ */
+export function roundoffFloors(input: BeamInput, S = loadScale(input)): { V: number; M: number; slope: number; deflection: number } {
+  const L = input.length;
+  const EI = (input.E * input.I) / 144;
+  return { V: 1e-12 * S, M: 1e-12 * S * L, slope: (1e-12 * S * L * L) / EI, deflection: ((1e-12 * S * L ** 3) / EI) * 12 };
 }
