@@ -23,8 +23,8 @@ export type BeamDiagramProps = {
 };
 
 export const DIAGRAM_WIDTH = 420;
-export const DIAGRAM_HEIGHT = 180;
-const PAD = { left: 14, right: 14, top: 30, bottom: 30 };
+export const DIAGRAM_HEIGHT = 200;
+const PAD = { left: 14, right: 14, top: 38, bottom: 38 };
 
 const TONES: Record<DiagramQuantity, { stroke: string; fill: string; dash?: string }> = {
   V: { stroke: INK.spruce, fill: INK.spruceLight },
@@ -136,11 +136,11 @@ export function BeamDiagram({ title, quantity, segments, extremes, unit, support
           const py = scales.y(e.value);
           const above = quantity === "deflection" ? e.value < 0 : e.value >= 0;
           const anchor = px < DIAGRAM_WIDTH * 0.22 ? "start" : px > DIAGRAM_WIDTH * 0.78 ? "end" : "middle";
-          const ty = above ? Math.max(14, py - 10) : Math.min(DIAGRAM_HEIGHT - 6, py + 22);
+          const ty = above ? Math.max(18, py - 12) : Math.min(DIAGRAM_HEIGHT - 6, py + 26);
           return (
             <g key={i} aria-hidden="true">
               <circle cx={px} cy={py} r={4.5} fill={INK.ink} />
-              <text x={px} y={ty} textAnchor={anchor} fontSize="15" fontWeight="700" fill={INK.ink} stroke={INK.paper} strokeWidth="4" paintOrder="stroke">
+              <text x={px} y={ty} textAnchor={anchor} fontSize="18" fontWeight="700" fill={INK.ink} stroke={INK.paper} strokeWidth="4" paintOrder="stroke">
                 {`${format(e.value)} ${unit} at ${formatFeetInches(e.x)}`}
               </text>
             </g>

@@ -18,7 +18,7 @@ export type LoadDiagramProps = {
 
 const H = 200;
 const BEAM_Y = 112;
-const BAND = 16;
+const BAND = 19;
 
 /** The loads on the member: line loads as bands stacked by case (each labelled), point loads as arrows, the supports and their reactions. */
 export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subtitle, className }: LoadDiagramProps) {
@@ -49,7 +49,7 @@ export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subti
           return (
             <g key={`l${i}`}>
               <rect x={x0} y={y} width={Math.max(2, x1 - x0)} height={BAND} fill={i % 2 === 0 ? INK.grid : INK.spruceLight} stroke={INK.graphite} strokeWidth={1.25} />
-              <text x={(x0 + x1) / 2} y={y + BAND - 3} textAnchor="middle" fontSize={13} fontWeight={700} fill={INK.ink}>
+              <text x={(x0 + x1) / 2} y={y + BAND - 3} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK.ink}>
                 {`${l.case} ${r0(l.w1)}${l.w2 !== l.w1 ? `–${r0(l.w2)}` : ""} plf`}
               </text>
             </g>
@@ -65,7 +65,7 @@ export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subti
             <g key={`p${i}`}>
               <path d={`M${px} ${top}V${BEAM_Y - 8}`} stroke={INK.ink} strokeWidth={3} />
               <path d={`M${px} ${BEAM_Y - 2}l-7 -12h14z`} fill={INK.ink} />
-              <text x={px} y={top - 6} textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"} fontSize={14} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
+              <text x={px} y={top - 6} textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"} fontSize={16} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
                 {`${p.case ?? "D"} ${r0(p.P)} lb`}
               </text>
             </g>
@@ -83,7 +83,7 @@ export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subti
                 <path d={`M${px} ${BEAM_Y + 12}l-11 18h22z`} fill={INK.paper} stroke={INK.ink} strokeWidth={2.5} />
               )}
               {reaction ? (
-                <text x={px} y={BEAM_Y + 50} textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"} fontSize={14} fontWeight={700} fill={INK.ink}>
+                <text x={px} y={BEAM_Y + 50} textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"} fontSize={16} fontWeight={700} fill={INK.ink}>
                   {`R ${r0(reaction.F)} lb`}
                 </text>
               ) : null}

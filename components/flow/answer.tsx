@@ -129,7 +129,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
         <h2 id="answer-title" className="sr-only">
           The answer
         </h2>
-        <p className="figures text-ink-soft">
+        <p className="text-ink-soft tabular-nums">
           {KIND_LABELS[state.kind]}, {formatFeetInches(mainSpanFt(state))} span
           <span className="ml-2 inline-flex h-5 w-5 align-middle">{busy ? <Spinner size="sm" label="Working out the answer" /> : null}</span>
         </p>
@@ -179,7 +179,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
               {chosenCheck ? (
                 <ul className="grid gap-2 sm:grid-cols-2">
                   {chosenCheck.reactions.map((r, i) => (
-                    <li key={i} className="figures rounded-card border-2 border-rule bg-paper-raised p-3">
+                    <li key={i} className="rounded-card border-2 border-rule bg-paper-raised p-3 tabular-nums">
                       <p className="font-bold">
                         Support {i + 1} at {formatFeetInches(r.x)}
                       </p>

@@ -184,7 +184,7 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
         const mid = (px(d.from) + px(d.to)) / 2;
         const narrow = px(d.to) - px(d.from) < 70;
         return (
-          <text key={i} x={mid} y={narrow ? DIM_Y + 22 : DIM_Y - 6} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke" className="figures">
+          <text key={i} x={mid} y={narrow ? DIM_Y + 22 : DIM_Y - 6} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
             {formatFeetInches(d.to - d.from)}
           </text>
         );

@@ -120,7 +120,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
             <h3 id="section-title" className="mb-2 font-bold">
               Section
             </h3>
-            <p className="figures text-sm">
+            <p className="text-sm tabular-nums">
               {[
                 check.member.section.b !== null ? `b = ${fmt(check.member.section.b)} in` : null,
                 `d = ${fmt(check.member.section.d)} in`,
@@ -139,7 +139,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
             <h3 id="loads-title" className="mb-2 font-bold">
               Loads on the member
             </h3>
-            <ul className="figures list-disc space-y-1 pl-5 text-sm">
+            <ul className="list-disc space-y-1 pl-5 text-sm tabular-nums">
               {check.loads.map((l, i) => (
                 <li key={i}>{l.note}</li>
               ))}
@@ -149,7 +149,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
             <h3 id="reactions-detail-title" className="mb-2 font-bold">
               Supports
             </h3>
-            <ul className="figures space-y-1 text-sm">
+            <ul className="space-y-1 text-sm tabular-nums">
               {check.reactions.map((r, i) => (
                 <li key={i}>
                   At {formatFeetInches(r.x)}: {fmt(r.maxDown)} lb down ({r.maxDownCombination}){r.uplift > 0 ? `, ${fmt(r.uplift)} lb uplift (${r.upliftCombination})` : ""}; bearing needed {fmt(r.requiredBearing)} in of {fmt(r.bearing)} in

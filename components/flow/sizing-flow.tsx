@@ -159,7 +159,7 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
 
   const returnTo = `/size${flowSearch({ state, step: "answer" }, extra)}&save=1`;
   const summaryLine = (
-    <span className="figures">
+    <span className="font-bold tabular-nums">
       {KIND_LABELS[state.kind]} · {formatFeetInches(mainSpanFt(state))} span
     </span>
   );
@@ -224,20 +224,20 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
 
       <BottomActionBar summary={summaryLine}>
         {prev ? (
-          <Button variant="secondary" size="lg" onClick={() => goTo(prev)}>
+          <Button variant="secondary" size="lg" className="px-3" onClick={() => goTo(prev)}>
             Back
           </Button>
         ) : null}
         {next ? (
-          <Button size="lg" onClick={() => goTo(next)}>
+          <Button size="lg" className="px-3" onClick={() => goTo(next)}>
             {next === "answer" ? "See the answer" : `Next: ${STEP_TITLES[next]}`}
           </Button>
         ) : signedIn ? (
-          <Button size="lg" onClick={() => setSaveOpen(true)} disabled={!chosenCheck}>
+          <Button size="lg" className="px-3" onClick={() => setSaveOpen(true)} disabled={!chosenCheck}>
             {editing ? "Save the changes" : "Save to a job"}
           </Button>
         ) : (
-          <ButtonLink size="lg" href={`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`}>
+          <ButtonLink size="lg" className="px-3 whitespace-nowrap" href={`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`}>
             Sign in to save
           </ButtonLink>
         )}

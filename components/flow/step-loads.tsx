@@ -152,7 +152,7 @@ export function StepLoads({ state, update }: StepLoadsProps) {
               <SelectField label="Roof exposure" options={EXPOSURES} value={state.snow.exposure} onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, exposure: e.target.value as RoofExposure } }))} />
               <SelectField label="Building heat" options={THERMALS} value={state.snow.thermal} onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, thermal: e.target.value as RoofThermal } }))} />
             </div>
-            <p className="figures rounded-lg bg-paper-sunk p-3 text-ink">
+            <p className="rounded-lg bg-paper-sunk p-3 text-ink tabular-nums">
               Roof snow {r1(snow.ps)} psf: pf = 0.7 × Ce × Ct × pg = {r1(snow.pf)} psf, at least {r1(snow.pm)} psf (ASCE 7-22 Eq. 7.3-1, §7.3.4) → {r1(snow.ps * widthFt)} plf on this member
             </p>
           </div>
@@ -167,7 +167,7 @@ export function StepLoads({ state, update }: StepLoadsProps) {
         <ul className="flex flex-col gap-2">
           {state.pointLoads.map((p) => (
             <li key={p.id} className="flex items-center justify-between gap-2 rounded-lg border-2 border-rule bg-paper-raised p-2 pl-3">
-              <span className="figures">
+              <span className="tabular-nums">
                 <span className="font-bold">{p.label}</span>: {p.P.toLocaleString("en-US")} lb {p.case} at {formatFeetInches(p.x)}
               </span>
               <span className="flex gap-1">
@@ -182,7 +182,7 @@ export function StepLoads({ state, update }: StepLoadsProps) {
           ))}
           {state.lineLoads.map((l) => (
             <li key={l.id} className="flex items-center justify-between gap-2 rounded-lg border-2 border-rule bg-paper-raised p-2 pl-3">
-              <span className="figures">
+              <span className="tabular-nums">
                 <span className="font-bold">{l.label}</span>: {l.w.toLocaleString("en-US")} plf {l.case}, {formatFeetInches(l.from)} to {formatFeetInches(l.to)}
               </span>
               <span className="flex gap-1">

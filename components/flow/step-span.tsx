@@ -67,7 +67,7 @@ export function StepSpan({ state, update }: StepSpanProps) {
             .map(({ s, i }, n) => (
               <li key={i}>
                 <Button variant={i === sel ? "primary" : "secondary"} aria-pressed={i === sel} onClick={() => setSelected(i === sel ? null : i)}>
-                  <span className="figures">
+                  <span className="tabular-nums">
                     {n + 1}: {s.type} at {formatFeetInches(s.x)}
                   </span>
                 </Button>

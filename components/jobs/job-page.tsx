@@ -106,7 +106,7 @@ export function JobPage({ job, children }: JobPageProps) {
                   <div className="flex flex-wrap items-start justify-between gap-2">
                     <div className="min-w-0">
                       <h3 className="text-lg font-bold">{m.label}</h3>
-                      <p className="figures text-sm text-graphite">
+                      <p className="text-sm text-graphite tabular-nums">
                         {KIND_LABELS[m.kind]}
                         {m.spanFt !== null ? ` · ${formatFeetInches(m.spanFt)} span` : ""}
                         {m.carriedBy ? ` · bears on ${m.carriedBy}` : ""}

@@ -140,7 +140,7 @@ export function formatFeetInches(feet: number): string {
     inchText = `${wholeIn}-${frac / g}/${16 / g}`;
     if (wholeIn === 0 && ft === 0) inchText = `${frac / g}/${16 / g}`;
   }
-  const body = ft === 0 ? `${inchText}"` : `${ft}' ${inchText}"`;
+  const body = ft === 0 && sixteenths > 0 ? `${inchText}"` : `${ft}' ${inchText}"`;
   return negative ? `−${body}` : body;
 }
 

@@ -149,7 +149,39 @@ export const ACCESS_TABLE: AccessRow[] = [
     setup: crewFixture("create"),
   },
   { method: "GET", path: "/api/sheets/[id]/pdf", allowed: ["owner"], note: "404 for anyone else's sheet; 403 for the owner without a subscription", setup: crewFixture("sheet") },
+
+  // Jobs and members (components/jobs/actions.ts): any signed-in account makes its own; everything else belongs
+  // to the job's owner and is a 404 for anyone else, whatever the role (a stranger's real job and member here).
+  { method: "ACTION", path: "components/jobs/actions.ts#createJob", allowed: SIGNED_IN, note: "makes a job of the caller's own", args: [{ name: "Orchard Row deck", siteAddress: "7 Orchard Row, Larkfield" }] },
+  { method: "ACTION", path: "components/jobs/actions.ts#saveMember", allowed: SIGNED_IN, note: "to a new job of the caller's own here; another's job is 404 (tests/jobs)", setup: jobsFixture("save") },
+  { method: "ACTION", path: "components/jobs/actions.ts#updateJob", allowed: ["owner"], note: "404 for a job of someone else", setup: jobsFixture("update-job") },
+  { method: "ACTION", path: "components/jobs/actions.ts#deleteJob", allowed: ["owner"], note: "404 for a job of someone else", setup: jobsFixture("job") },
+  { method: "ACTION", path: "components/jobs/actions.ts#restoreJob", allowed: ["owner"], note: "404 for someone else's deleted job", setup: jobsFixture("deleted-job") },
+  { method: "ACTION", path: "components/jobs/actions.ts#duplicateJob", allowed: ["owner"], note: "404 for a job of someone else", setup: jobsFixture("job") },
+  { method: "ACTION", path: "components/jobs/actions.ts#updateMember", allowed: ["owner"], note: "404 for a member of someone else's job", setup: jobsFixture("update-member") },
+  { method: "ACTION", path: "components/jobs/actions.ts#deleteMember", allowed: ["owner"], note: "404 for a member of someone else's job", setup: jobsFixture("member") },
+  { method: "ACTION", path: "components/jobs/actions.ts#restoreMember", allowed: ["owner"], note: "404 for someone else's deleted member", setup: jobsFixture("deleted-member") },
+  { method: "ACTION", path: "components/jobs/actions.ts#duplicateMember", allowed: ["owner"], note: "404 for a member of someone else's job", setup: jobsFixture("member") },
 ];
+
+/** A job with a member, owned by an account none of the personas is, and valid arguments naming them. */
+function jobsFixture(kind: "save" | "job" | "update-job" | "deleted-job" | "member" | "update-member" | "deleted-member"): () => Promise<AccessFixture> {
+  return async () => {
+    const { defaultFlowState } = await import("@/lib/flow/defaults");
+    const flowState = defaultFlowState("floor-joist");
+    if (kind === "save") return { args: [{ newJob: { name: "Orchard Row deck" }, label: "J1 deck joists", flowState, chosenMember: null }] };
+    if (!process.env.TEST_DATABASE_URL) return {};
+    const { makeAccount, makeJob } = await import("../crew/fixtures");
+    const owner = await makeAccount("subscriber", "access-jobs");
+    const { job, header } = await makeJob(owner.id);
+    if (kind === "deleted-job") await job.update({ deletedAt: new Date() });
+    if (kind === "deleted-member") await header.update({ deletedAt: new Date() });
+    if (kind === "job" || kind === "deleted-job") return { args: [{ jobId: job.id }] };
+    if (kind === "update-job") return { args: [{ jobId: job.id, name: "Taken over", siteAddress: "", notes: "" }] };
+    if (kind === "update-member") return { args: [{ memberId: header.id, label: "Taken over" }] };
+    return { args: [{ memberId: header.id }] };
+  };
+}
 
 /** A job, live crew link and job sheet owned by an account none of the personas is, and the arguments naming them. */
 function crewFixture(kind: "create" | "link" | "send" | "sheet"): () => Promise<AccessFixture> {

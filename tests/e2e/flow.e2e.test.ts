@@ -63,9 +63,9 @@ describe("sizing flow at 390x844", () => {
 
     // Signed out, saving asks for a sign-in and comes back with nothing lost
     await page.getByRole("link", { name: "Sign in to save" }).click();
-    await page.getByLabel(/Email/i).fill(DEMO.email);
-    await page.getByLabel(/Password/i).fill(DEMO.password);
-    await page.getByRole("button", { name: /Sign in/i }).click();
+    await page.getByLabel("E-mail").fill(DEMO.email);
+    await page.getByLabel("Password", { exact: true }).fill(DEMO.password);
+    await page.getByRole("button", { name: "Sign in", exact: true }).click();
     await page.waitForURL(/\/size\?.*save=1|\/size\?.*step=answer/, { timeout: 30_000 });
     const dialog = page.getByRole("dialog", { name: "Save to a job" });
     await dialog.waitFor({ timeout: 30_000 });
