@@ -27,6 +27,7 @@
 import type { BeamInput, Combination, LoadCase, Reaction, Station } from "../types";
 import { makeAnalysis, type BeamAnalysis, type BeamExtremes, type Segment, type SpanResult } from "./analysis";
 import { CAUTION, NOT_CHECKED } from "./caution";
+import { BeamInputError } from "./errors";
 import { prepareBeam, respond, type PreparedBeam } from "./prepare";
 
 export type { BeamAnalysis, BeamExtremes, Segment, SpanResult, StationArrays } from "./analysis";
@@ -68,10 +69,17 @@ export interface SolveOutput {
   caution: string;
 }
 
+function allFinite(v: unknown): boolean {
+  if (typeof v === "number") return Number.isFinite(v);
+  if (Array.isArray(v)) return v.every(allFinite);
+  if (v && typeof v === "object") return Object.values(v).every(allFinite);
+  return true;
+}
+
 /** Every load with factor 1, whatever its case; stations in the order of input.at. */
 export function solve(input: BeamInput): SolveOutput {
   const a = analyzeBeam(input);
-  return {
+  const out: SolveOutput = {
     units: { x: "ft", F: "lb", V: "lb", M: "lb-ft", slope: "rad", deflection: "in" },
     reactions: a.reactions,
     at: (input.at ?? []).map((x) => a.evaluate(x)),
@@ -81,4 +89,10 @@ export function solve(input: BeamInput): SolveOutput {
     notChecked: NOT_CHECKED,
     caution: CAUTION,
   };
+  if (!allFinite(out)) {
+    throw new BeamInputError([
+      { path: "E", message: "the results are too large to represent — check the units of E (psi), I (in^4) and the loads" },
+    ]);
+  }
+  return out;
 }
