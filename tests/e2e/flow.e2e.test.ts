@@ -66,7 +66,7 @@ describe("sizing flow at 390x844", () => {
     await page.getByLabel("E-mail").fill(DEMO.email);
     await page.getByLabel("Password", { exact: true }).fill(DEMO.password);
     await page.getByRole("button", { name: "Sign in", exact: true }).click();
-    await page.waitForURL(/\/size\?.*save=1|\/size\?.*step=answer/, { timeout: 30_000 });
+    await page.waitForURL((url) => url.pathname === "/size", { timeout: 30_000, waitUntil: "commit" });
     const dialog = page.getByRole("dialog", { name: "Save to a job" });
     await dialog.waitFor({ timeout: 30_000 });
     expect(await waitForAnswer(page)).toBe(headerAnswer);
@@ -106,5 +106,5 @@ describe("sizing flow at 390x844", () => {
     await screenshot("flow-job-page", { fullPage: false });
 
     expect(consoleErrors).toEqual([]);
-  });
+  }, 180_000);
 });
