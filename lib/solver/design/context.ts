@@ -56,6 +56,20 @@ export function liveCombinations(service: NamedCombination[]): NamedCombination[
 
 export type DesignProblem = Omit<CheckInput, "member">;
 
+// The combinations depend only on the cases present: built once per set of cases.
+const comboCache = new Map<string, { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] }>();
+
+function combinationsFor(cases: LoadCase[]): { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] } {
+  const key = cases.join(",");
+  let hit = comboCache.get(key);
+  if (!hit) {
+    const asd = asdCombinations(cases);
+    hit = { asd, lrfd: lrfdCombinations(cases), live: liveCombinations(asd) };
+    comboCache.set(key, hit);
+  }
+  return hit;
+}
+
 export function buildContext(input: DesignProblem): DesignContext {
   const loads = takeDown(input.loads, input.length, { spacingIn: input.spacing, tributaryFt: input.tributary });
   const model = buildLoadModel({
@@ -65,9 +79,9 @@ export function buildContext(input: DesignProblem): DesignContext {
     unbracedFt: input.conditions.unbracedLength,
     pattern: input.conditions.patternLiveLoad,
   });
-  const asd = asdCombinations(model.cases);
-  const strengthCombos = input.method === "lrfd" ? lrfdCombinations(model.cases) : asd;
-  const serviceEnv = model.envelopes(asd);
+  const combos = combinationsFor(model.cases);
+  const serviceEnv = model.envelopes(combos.asd);
+  const strengthCombos = input.method === "lrfd" ? combos.lrfd : combos.asd;
   const strength = input.method === "lrfd" ? model.envelopes(strengthCombos) : serviceEnv;
   return {
     model,
@@ -76,7 +90,7 @@ export function buildContext(input: DesignProblem): DesignContext {
     woodDuration: strength.map((e) => (input.method === "lrfd" ? timeEffectFactorLambda(e.factors) : loadDurationFactorCD(e.factors))),
     notes: true,
     service: serviceEnv,
-    live: model.envelopes(liveCombinations(asd)),
+    live: model.envelopes(combos.live),
     conditions: input.conditions,
     limits: resolveLimits(input.limits),
     bearingIn: input.bearing,

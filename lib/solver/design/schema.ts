@@ -41,16 +41,18 @@ export const snowLoadSchema = z
   })
   .strict();
 
-const lineLoadSchema = z.discriminatedUnion("type", [
-  z.object({ type: z.literal("point"), case: loadCase, x: finite("ft"), P: finite("lb") }).strict(),
-  z.object({ type: z.literal("udl"), case: loadCase, from: finite("ft"), to: finite("ft"), w: finite("plf") }).strict(),
-  z.object({ type: z.literal("linear"), case: loadCase, from: finite("ft"), to: finite("ft"), w1: finite("plf"), w2: finite("plf") }).strict(),
-  z.object({ type: z.literal("moment"), case: loadCase, x: finite("ft"), M: finite("lb-ft") }).strict(),
-]);
-
-export const designLoadSchema = z.union([areaLoadSchema, snowLoadSchema, lineLoadSchema], {
-  error: 'must be a load of type "area", "snow", "udl", "point", "linear" or "moment" with its fields',
-});
+export const designLoadSchema = z.discriminatedUnion(
+  "type",
+  [
+    areaLoadSchema,
+    snowLoadSchema,
+    z.object({ type: z.literal("point"), case: loadCase, x: finite("ft"), P: finite("lb") }).strict(),
+    z.object({ type: z.literal("udl"), case: loadCase, from: finite("ft"), to: finite("ft"), w: finite("plf") }).strict(),
+    z.object({ type: z.literal("linear"), case: loadCase, from: finite("ft"), to: finite("ft"), w1: finite("plf"), w2: finite("plf") }).strict(),
+    z.object({ type: z.literal("moment"), case: loadCase, x: finite("ft"), M: finite("lb-ft") }).strict(),
+  ],
+  { error: 'must be a load of type "area", "snow", "udl", "point", "linear" or "moment"' },
+);
 
 const plies = z.number().int("must be a whole number of plies").min(1, "must be 1 to 4 plies").max(4, "must be 1 to 4 plies");
 
