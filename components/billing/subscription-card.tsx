@@ -13,8 +13,14 @@ const ROLE_WORDS: Record<Role, string> = { builder: "Free account", subscriber: 
 /** The account's standing as a word and an icon, never colour alone. */
 export function RoleBadge({ role }: { role: Role }) {
   return (
-    <span data-testid="billing-role" data-role={role}>
-      <StatusBadge status={role === "builder" ? "caution" : "pass"} label={ROLE_WORDS[role]} size="lg" />
+    <span data-testid="billing-role" data-role={role} className="w-fit">
+      {role === "builder" ? (
+        <span className="inline-flex items-center rounded-full border-2 border-rule-strong bg-paper-sunk px-3 py-1 text-lg font-bold text-ink">
+          {ROLE_WORDS[role]}
+        </span>
+      ) : (
+        <StatusBadge status="pass" label={ROLE_WORDS[role]} size="lg" />
+      )}
     </span>
   );
 }
