@@ -28,7 +28,8 @@ export function deflectionCheck(
   const { model } = ctx;
   const scale = (E_REF * I_REF) / (EPsi * IIn4);
   let best = { ratio: -1, demand: 0, allowed: 0, x: 0, i: 0, fD: 0, region: 0, combination: "" };
-  model.regions.forEach((r, ri) => {
+  for (let ri = 0; ri < model.regions.length; ri++) {
+    const r = model.regions[ri];
     const ref = r.kind === "span" ? r.length : 2 * r.length;
     const allowed = (ref * 12) / limit;
     for (const env of envs) {
@@ -37,7 +38,7 @@ export function deflectionCheck(
       const ratio = demand / allowed;
       if (ratio > best.ratio) best = { ratio, demand, allowed, x: p.x, i: p.i, fD: env.fD, region: ri, combination: env.name };
     }
-  });
+  }
   const r = model.regions[best.region];
   const where = !ctx.notes ? "" : r.kind === "span" ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft` : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
   const check: DesignCheck = {

@@ -301,15 +301,14 @@ export function peakAbs(xs: Float64Array, hi: Float64Array, lo: Float64Array, un
   }
   let x = xs[bi];
   if (refine && bi > i0 && bi < i1) {
-    const val = (i: number) => (useHi ? hi[i] + k * unit[i] : -(lo[i] + k * unit[i]));
     const x0 = xs[bi - 1];
     const x1 = xs[bi];
     const x2 = xs[bi + 1];
     const minGap = 1e-4 * (xs[xs.length - 1] - xs[0]);
     if (x1 - x0 > minGap && x2 - x1 > minGap) {
-      const y0 = val(bi - 1);
+      const y0 = useHi ? hi[bi - 1] + k * unit[bi - 1] : -(lo[bi - 1] + k * unit[bi - 1]);
       const y1 = best;
-      const y2 = val(bi + 1);
+      const y2 = useHi ? hi[bi + 1] + k * unit[bi + 1] : -(lo[bi + 1] + k * unit[bi + 1]);
       const d1 = (y1 - y0) / (x1 - x0);
       const d2 = (y2 - y1) / (x2 - x1);
       const c2 = (d2 - d1) / (x2 - x0);

@@ -211,7 +211,8 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const service = reactionsFor(ctx, sw);
   const reactions: SupportReaction[] = [];
   let bestBearing = { ratio: -1, fc: 0, FcPrime: FcBase, R: 0, x: 0, Cb: 1, combination: "" };
-  model.supports.forEach((s, j) => {
+  for (let j = 0; j < model.supports.length; j++) {
+    const s = model.supports[j];
     const { R, combination } = lrfd ? factoredReaction(ctx, ctx.strength, j, sw) : { R: service[j].maxDown, combination: service[j].maxDownCombination };
     const fromEndIn = Math.min(s.x, model.length - s.x) * 12;
     const Cb = bearingAreaFactorCb(ctx.bearingIn, fromEndIn);
@@ -227,7 +228,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       requiredBearing: round(required, 2),
       jackStuds: Math.max(1, Math.ceil(required / JACK_STUD_IN - 1e-9)),
     });
-  });
+  }
   const bearingCb = bestBearing.Cb;
   const bearingFc = bestBearing.FcPrime;
   if (bestBearing.ratio >= 0) {
