@@ -69,7 +69,7 @@ export function UserList({ users, currentUserId }: UserListProps) {
               <p className="mt-1 flex flex-wrap items-center gap-2 text-sm">
                 <span className={`rounded-full border-2 px-2 font-bold ${ROLE_LOOK[user.role]}`}>{ROLE_LABEL[user.role]}</span>
                 <span className="text-graphite">{user.emailVerified ? "E-mail confirmed" : "E-mail not confirmed"}</span>
-                <span className="text-graphite">· opened {user.createdAt.slice(0, 10)}</span>
+                <span className="text-graphite">Opened {user.createdAt.slice(0, 10)}</span>
               </p>
             </div>
             <div className="md:w-56 md:text-right">
