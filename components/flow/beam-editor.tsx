@@ -102,13 +102,7 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
       aria-label={`The member, ${formatFeetInches(L)} long, with ${state.supports.length} support${state.supports.length === 1 ? "" : "s"}. Tap the beam to add a support.`}
       role="group"
     >
-      {/* distributed loads as a band above the beam, point loads as arrows */}
-      {state.lineLoads.map((l) => (
-        <rect key={l.id} x={px(l.from)} y={BEAM_Y - 26} width={Math.max(2, px(l.to) - px(l.from))} height={12} fill={INK.grid} stroke={INK.graphite} strokeWidth={1.5} />
-      ))}
-      {state.areaLoads.length > 0 || state.snow.on ? (
-        <rect x={px(0)} y={BEAM_Y - 12} width={RIGHT - LEFT} height={8} fill={INK.spruceLight} stroke={INK.graphite} strokeWidth={1} />
-      ) : null}
+      {/* posts and other point loads, where they stand on the member */}
       {state.pointLoads.map((p) => (
         <g key={p.id} stroke={INK.graphite} strokeWidth={3} fill={INK.graphite}>
           <path d={`M${px(p.x)} ${BEAM_Y - 46}V${BEAM_Y - 6}`} />

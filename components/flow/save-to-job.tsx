@@ -23,10 +23,12 @@ export type SaveToJobProps = {
   jobs: { id: string; name: string }[];
   /** the member being edited, when the flow was opened from a job */
   editing: SaveTarget | null;
+  /** the job to offer first */
+  preferredJobId?: string | null;
 };
 
 /** Save the answer to a job (an existing one or a new one), or save the changes of the member being edited. */
-export function SaveToJob({ open, onClose, state, chosen, jobs, editing }: SaveToJobProps) {
+export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferredJobId = null }: SaveToJobProps) {
   const toast = useToast();
   const router = useRouter();
   const [serverError, setServerError] = useState<{ message: string; upgrade?: string } | null>(null);
@@ -36,7 +38,7 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing }: SaveT
     <Dialog open={open} onClose={onClose} title={editing ? "Save the changes" : "Save to a job"} description={editing ? `${editing.label} in ${editing.jobName}` : "Keep this member with the job it belongs to."}>
       {open ? (
         <Formik<SaveMemberForm>
-          initialValues={{ jobId: editing ? editing.jobId : (jobs[0]?.id ?? "new"), newJobName: "", newJobAddress: "", label: editing ? editing.label : defaultLabel }}
+          initialValues={{ jobId: editing ? editing.jobId : jobs.some((j) => j.id === preferredJobId) && preferredJobId ? preferredJobId : (jobs[0]?.id ?? "new"), newJobName: "", newJobAddress: "", label: editing ? editing.label : defaultLabel }}
           validationSchema={saveMemberSchema}
           onSubmit={async (values, helpers) => {
             setServerError(null);

@@ -30,6 +30,8 @@ export type SizingFlowProps = {
   openSave: boolean;
   /** the member chosen when the flow was saved (editing a member) */
   initialChosen?: MemberSpec | null;
+  /** the job to offer first when saving (the flow was opened from a job's page) */
+  preferredJobId?: string | null;
 };
 
 function readStorage(): string | null {
@@ -84,7 +86,7 @@ function StepNav({ step, onGo }: { step: FlowStepId; onGo: (step: FlowStepId) =>
 }
 
 /** The sizing flow: one step per screen on a phone, the inputs beside a live answer on a wide screen. */
-export function SizingFlow({ initial, from, params, signedIn, jobs, editing, openSave, initialChosen = null }: SizingFlowProps) {
+export function SizingFlow({ initial, from, params, signedIn, jobs, editing, openSave, initialChosen = null, preferredJobId = null }: SizingFlowProps) {
   const [location, setLocation] = useState<FlowLocation>(initial);
   const [resumed, setResumed] = useState(false);
   const [chosen, setChosen] = useState<MemberSpec | null>(initialChosen);
@@ -95,7 +97,7 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   const fromPop = useRef(false);
   const arrived = useRef(false);
   const { state, step } = location;
-  const extra = editing ? { job: editing.jobId, member: editing.memberId } : {};
+  const extra = editing ? { job: editing.jobId, member: editing.memberId } : preferredJobId ? { for: preferredJobId } : {};
 
   // The URL may hold no state (a plain /size or /size?kind=): resume the stored one when it fits.
   useEffect(() => {
@@ -243,7 +245,7 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
         )}
       </BottomActionBar>
 
-      {signedIn ? <SaveToJob open={saveOpen} onClose={() => setSaveOpen(false)} state={state} chosen={chosenCheck ? chosenCheck.member.spec : chosen} jobs={jobs} editing={editing} /> : null}
+      {signedIn ? <SaveToJob open={saveOpen} onClose={() => setSaveOpen(false)} state={state} chosen={chosenCheck ? chosenCheck.member.spec : chosen} jobs={jobs} editing={editing} preferredJobId={preferredJobId} /> : null}
     </div>
   );
 }

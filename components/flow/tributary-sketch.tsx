@@ -22,9 +22,12 @@ export function TributarySketch({ mode }: TributarySketchProps) {
           ))}
           <path d="M292 40V102M286 40h12M286 102h12" stroke={INK.ink} strokeWidth={2} />
           <path d="M20 40H280M20 102H280" stroke={INK.amberDark} strokeWidth={1.5} strokeDasharray="5 4" />
-          <text x={150} y={33} textAnchor="middle" fontSize={13} fill={INK.ink}>half the joist span</text>
-          <text x={150} y={118} textAnchor="middle" fontSize={13} fill={INK.ink}>half the joist span</text>
-          <text x={150} y={62} textAnchor="middle" fontSize={13} fontWeight={700} fill={INK.ink}>beam</text>
+          <g fontSize={13} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke" textAnchor="middle">
+            <text x={150} y={33}>joists: half their span</text>
+            <text x={150} y={118}>joists: half their span</text>
+            <text x={150} y={62} fontWeight={700}>beam or header</text>
+            <text x={276} y={92} textAnchor="end" fontWeight={700}>width</text>
+          </g>
           <text x={150} y={148} textAnchor="middle" fontSize={12} fill={INK.graphite}>walls or beams at the joists&apos; far ends</text>
         </svg>
         <figcaption className="text-sm text-ink-soft">

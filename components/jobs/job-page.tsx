@@ -79,7 +79,7 @@ export function JobPage({ job, children }: JobPageProps) {
         lead={job.siteAddress || undefined}
         back={{ href: "/jobs", label: "Jobs" }}
         actions={
-          <ButtonLink href="/size" icon={<PlusIcon className="h-5 w-5" />}>
+          <ButtonLink href={`/size?for=${job.id}`} icon={<PlusIcon className="h-5 w-5" />}>
             Size a member
           </ButtonLink>
         }
@@ -96,7 +96,7 @@ export function JobPage({ job, children }: JobPageProps) {
           Members
         </h2>
         {job.members.length === 0 ? (
-          <EmptyState title="No members yet" body="Size a member and save it to this job." action={<ButtonLink href="/size">Size a member</ButtonLink>} />
+          <EmptyState title="No members yet" body="Size a member and save it to this job." action={<ButtonLink href={`/size?for=${job.id}`}>Size a member</ButtonLink>} />
         ) : (
           <ul className="flex flex-col gap-3">
             {job.members.map((m) => {

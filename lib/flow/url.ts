@@ -52,10 +52,11 @@ export function isStep(value: string | null | undefined): value is FlowStepId {
 }
 
 /** The flow's query string for a location, plus any job/member being edited. */
-export function flowSearch(location: FlowLocation, extra: { job?: string; member?: string } = {}): string {
+export function flowSearch(location: FlowLocation, extra: { job?: string; member?: string; for?: string } = {}): string {
   const params = new URLSearchParams();
   if (extra.job) params.set("job", extra.job);
   if (extra.member) params.set("member", extra.member);
+  if (extra.for) params.set("for", extra.for);
   params.set("step", location.step);
   params.set("s", encodeFlowState(location.state));
   return `?${params.toString()}`;

@@ -41,5 +41,17 @@ export default async function SizePage({ searchParams }: SizePageProps) {
   }
 
   const start = resolveFlowStart(params, null);
-  return <SizingFlow initial={start.location} from={start.from} params={params} signedIn={user !== null} jobs={jobs} editing={null} openSave={one(query.save) === "1"} />;
+  const preferred = one(query.for);
+  return (
+    <SizingFlow
+      initial={start.location}
+      from={start.from}
+      params={params}
+      signedIn={user !== null}
+      jobs={jobs}
+      editing={null}
+      openSave={one(query.save) === "1"}
+      preferredJobId={preferred && jobs.some((j) => j.id === preferred) ? preferred : null}
+    />
+  );
 }
