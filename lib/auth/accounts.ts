@@ -11,7 +11,7 @@ import { User, type Role } from "@/models/user";
 import { atLeast, runInBackground } from "./background";
 import { normalizeEmail, sha256Hex } from "./crypto";
 import { hashPassword, verifyPassword } from "./password";
-import { hitAll, type Limit, type LimitResult } from "./rate-limit";
+import { hitAll, refund, type Limit, type LimitResult } from "./rate-limit";
 import type { SessionUser } from "./roles";
 import type { ProfileInput, SignUpInput } from "./schemas";
 import { consumeToken, issueToken, TOKEN_LIFETIME_MS } from "./tokens";
@@ -183,11 +183,14 @@ export type SignInResult =
  * same time (a bcrypt comparison either way). An unconfirmed account is told so only with the right password.
  */
 export async function authenticate(email: string, password: string, ip: string): Promise<SignInResult> {
-  const limited = await hitAll(limitsFor("sign-in", email, ip));
+  const limits = limitsFor("sign-in", email, ip);
+  const limited = await hitAll(limits);
   if (!limited.allowed) return { ok: false, reason: "rate-limited", retryAfterSeconds: limited.retryAfterSeconds };
   const user = await findByEmail(email);
   const match = await verifyPassword(password, user?.passwordHash ?? null);
   if (!user || !match) return { ok: false, reason: "invalid" };
+  // Counted first (atomically, so a burst cannot slip past), given back when the password was right.
+  await refund(limits);
   if (!user.emailVerifiedAt) return { ok: false, reason: "unverified" };
   return { ok: true, user: toSessionUser(user) };
 }

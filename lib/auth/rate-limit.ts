@@ -50,6 +50,16 @@ export async function hitAll(limits: readonly Limit[], now: Date = new Date()): 
   };
 }
 
+/**
+ * Gives back one attempt on each key (never below zero): a successful sign-in does not use up the
+ * allowance, so only failures lock an address or a client out.
+ */
+export async function refund(limits: readonly Limit[]): Promise<void> {
+  await getSequelize().query("UPDATE rate_limits SET count = count - 1 WHERE key IN (:keys) AND count > 0", {
+    replacements: { keys: limits.map((l) => l.key) },
+  });
+}
+
 /** Drops counters whose window ended over a day ago (they would restart at 1 anyway). */
 export async function pruneRateLimits(now: Date = new Date()): Promise<void> {
   await getSequelize().query("DELETE FROM rate_limits WHERE window_start < :before", {

@@ -57,7 +57,7 @@ describe.skipIf(!TEST_DB)("no user enumeration", () => {
       unknown.push((await timed(() => forgotRoute.POST(post("/api/auth/password/forgot", { email: uniqueEmail("nobody") }), ctx))).ms);
     }
     expect(Math.min(...known, ...unknown)).toBeGreaterThanOrEqual(PUBLIC_FLOW_MIN_MS - 5);
-    expect(Math.abs(median(known) - median(unknown))).toBeLessThan(100);
+    expect(Math.abs(median(known) - median(unknown))).toBeLessThan(250);
   });
 
   test("sign-up: an address already in use gets the same answer; its owner gets a note, no second account", async () => {
@@ -101,7 +101,7 @@ describe.skipIf(!TEST_DB)("no user enumeration", () => {
     // Both paths run one bcrypt comparison at cost 12; without the stand-in hash an unknown address would
     // answer in a few milliseconds against hundreds.
     const ratio = median(unknown) / median(wrong);
-    expect(ratio).toBeGreaterThan(0.6);
-    expect(ratio).toBeLessThan(1.6);
+    expect(ratio).toBeGreaterThan(0.5);
+    expect(ratio).toBeLessThan(2);
   }, 60_000);
 });

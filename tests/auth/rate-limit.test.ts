@@ -57,6 +57,21 @@ describe.skipIf(!TEST_DB)("rate limits kept in PostgreSQL", () => {
     expect(blocked.ok === false && blocked.reason === "rate-limited" && blocked.retryAfterSeconds).toBeGreaterThan(0);
   });
 
+  test("sign-in: right passwords give their attempt back; only failures use up the allowance", async () => {
+    const user = await makeUser({ password: "the-right-password" });
+    const ip = uniqueIp();
+    const [perEmail, perIp] = limitsFor("sign-in", user.email, ip);
+    for (let i = 0; i < LIMITS.signInPerEmail.max - 1; i++) await hit(perEmail);
+    // One try left on the address's counter: three right passwords in a row all get in.
+    for (let i = 0; i < 3; i++) expect((await authenticate(user.email, "the-right-password", ip)).ok).toBe(true);
+    expect(await authenticate(user.email, "a-wrong-password", ip)).toEqual({ ok: false, reason: "invalid" });
+    const blocked = await authenticate(user.email, "the-right-password", ip);
+    expect(blocked.ok === false && blocked.reason).toBe("rate-limited");
+    const ipCount = await hit({ ...perIp, max: 1000 });
+    // The per-client counter holds the one failure, the refused try and this probe.
+    expect(ipCount.count).toBe(3);
+  });
+
   test("sign-in: one client address trying many addresses is stopped by the per-client limit", async () => {
     const ip = uniqueIp();
     const [, perIp] = limitsFor("sign-in", uniqueEmail("spray"), ip);
