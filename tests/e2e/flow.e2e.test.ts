@@ -41,7 +41,7 @@ describe("sizing flow at 390x844", () => {
 
     // Step 2: span, typed the way it was measured; echoed back in feet and inches
     await typeLength(page, /^Span \(between supports\)/, "10'");
-    await expect.poll(() => page.getByText("Header · 10' 0\" span").count()).toBeGreaterThan(0);
+    await expect.poll(() => page.getByText("Header · 10' 0\" span").count(), { timeout: 15_000 }).toBeGreaterThan(0);
     await screenshot("flow-header-2-span", { fullPage: false });
     await next(page, /Next: Loads/);
 
@@ -60,6 +60,15 @@ describe("sizing flow at 390x844", () => {
     expect(headerAnswer).toMatch(/2x\d+ .*jack stud/);
     await screenshot("flow-header-5-answer", { fullPage: false });
     await screenshot("flow-header-5-answer-full");
+
+    // Tap a member for its full check: every check with its ratio, the factors, the loads
+    await page.getByRole("button", { name: /Open the full check/ }).first().click();
+    const detail = page.getByRole("dialog");
+    await detail.getByRole("heading", { name: "Factors and design values" }).waitFor();
+    expect(await detail.getByText("CD, load duration").count()).toBe(1);
+    expect(await detail.getByText(/^Bending/).count()).toBeGreaterThan(0);
+    await screenshot("flow-header-5-member-check", { fullPage: false });
+    await detail.getByRole("button", { name: "Close" }).last().click();
 
     // Signed out, saving asks for a sign-in and comes back with nothing lost
     await page.getByRole("link", { name: "Sign in to save" }).click();
@@ -82,7 +91,7 @@ describe("sizing flow at 390x844", () => {
     await typeLength(page, /^Span \(between supports\)/, "13");
     await screenshot("flow-joist-2-span", { fullPage: false });
     await next(page, /Next: Loads/);
-    await expect.poll(() => page.getByRole("radio", { name: "16 in" }).isChecked()).toBe(true);
+    await expect.poll(() => page.getByRole("radio", { name: "16 in" }).isChecked(), { timeout: 15_000 }).toBe(true);
     await screenshot("flow-joist-3-loads", { fullPage: false });
     await next(page, /Next: Material/);
     await next(page, /See the answer/);
@@ -105,6 +114,43 @@ describe("sizing flow at 390x844", () => {
     expect(await page.getByText(headerAnswer).count()).toBeGreaterThan(0);
     await screenshot("flow-job-page", { fullPage: false });
 
+    // Delete with Undo: the member goes, and comes back
+    const deleteJoist = page.getByRole("button", { name: "Delete J1 floor joists" });
+    const joists = await deleteJoist.count();
+    await deleteJoist.last().click();
+    await page.getByText("J1 floor joists deleted").waitFor();
+    await expect.poll(() => deleteJoist.count(), { timeout: 15_000 }).toBe(joists - 1);
+    await screenshot("flow-job-undo", { fullPage: false });
+    await page.getByRole("button", { name: "Undo" }).click();
+    await expect.poll(() => deleteJoist.count(), { timeout: 15_000 }).toBe(joists);
+
+    // Edit reopens the flow with the member's inputs
+    await page.getByRole("heading", { name: "H1 kitchen header" }).last().locator("xpath=ancestor::li").getByRole("link", { name: "Edit" }).click();
+    await page.getByRole("heading", { level: 1, name: "Edit H1 kitchen header" }).waitFor();
+    expect(await page.getByLabel(/^Span \(between supports\)/).inputValue()).toBe(`10' 0"`);
+    await screenshot("flow-edit-member", { fullPage: false });
+
     expect(consoleErrors).toEqual([]);
   }, 180_000);
+
+  test("every step side by side on a desktop (1280x800)", async () => {
+    const { page, screenshot, consoleErrors } = await session.open("/size?kind=header", { viewport: "desktop" });
+    await typeLength(page, /^Span \(between supports\)/, "10-0");
+    // the live answer sits beside the inputs
+    await page.getByRole("complementary", { name: "Answer so far" }).getByTestId("answer-headline").waitFor({ timeout: 30_000 });
+    await screenshot("flow-desktop-2-span", { fullPage: false });
+    await page.getByRole("button", { name: /^3\s*Loads/ }).click();
+    await screenshot("flow-desktop-3-loads", { fullPage: false });
+    await page.getByRole("button", { name: /^4\s*Material/ }).click();
+    await screenshot("flow-desktop-4-material", { fullPage: false });
+    await page.getByRole("button", { name: /^5\s*Answer/ }).click();
+    await waitForAnswer(page);
+    await screenshot("flow-desktop-5-answer", { fullPage: false });
+    await screenshot("flow-desktop-5-answer-full");
+    // a reload loses nothing
+    await page.reload();
+    expect(await waitForAnswer(page)).toMatch(/jack stud/);
+    expect(await page.getByText("Header, 10' 0\" span").count()).toBe(1);
+    expect(consoleErrors).toEqual([]);
+  }, 120_000);
 });
