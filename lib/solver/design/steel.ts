@@ -56,6 +56,29 @@ export interface SteelFactors {
   E: number;
 }
 
+/**
+ * Shortest bearing length (in) for which web local yielding (J10.2) and web crippling (J10.3) both
+ * carry the reaction Rk (kip); both strengths grow with the bearing length, so bisection finds it.
+ * Returns Infinity when even 48 in is not enough.
+ */
+export function requiredSteelBearing(s: { d: number; tw: number; tf: number; kdes: number }, Fy: number, Rk: number, nearEndWly: boolean, nearEndWcr: boolean, lrfd: boolean): number {
+  const ok = (lb: number) => {
+    const wly = webLocalYieldingRn(s, Fy, lb, nearEndWly);
+    const wcr = webCripplingRn(s, Fy, lb, nearEndWcr);
+    return lrfd ? PHI_WLY * wly >= Rk && PHI_WCR * wcr >= Rk : wly / OMEGA_WLY >= Rk && wcr / OMEGA_WCR >= Rk;
+  };
+  if (ok(0)) return 0;
+  let hi = 48;
+  if (!ok(hi)) return Infinity;
+  let lo = 0;
+  while (hi - lo > 1 / 64) {
+    const mid = (lo + hi) / 2;
+    if (ok(mid)) hi = mid;
+    else lo = mid;
+  }
+  return hi;
+}
+
 export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: DesignCheck[]; reactions: SupportReaction[]; factors: SteelFactors } {
   const { model, conditions: cond } = ctx;
   const lrfd = ctx.method === "lrfd";
@@ -162,10 +185,8 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Des
     if (!wcr || Rk / crippleCap > wcr.ratio) {
       wcr = { name: "web-crippling", demand: round(Rk, 3), capacity: round(crippleCap, 3), unit: "kip", ratio: Rk / crippleCap, combination, x: sup.x, note: `web crippling at the support, lb = ${lb} in (AISC 360-16 §J10.3)` };
     }
-    // Bearing length for web local yielding alone: Rn ≥ R·Ω (or R/φ).
-    const needRn = lrfd ? Rk / PHI_WLY : Rk * OMEGA_WLY;
-    const required = Math.max(needRn / (Fy * s.tw) - (nearEnd ? 2.5 : 5) * s.kdes, 0);
-    reactions.push({ ...service[j], bearing: lb, requiredBearing: round(required, 2), jackStuds: null });
+    const required = requiredSteelBearing(s, Fy, Rk, nearEnd, fromEndIn < s.d / 2, lrfd);
+    reactions.push({ ...service[j], bearing: lb, requiredBearing: Number.isFinite(required) ? round(required, 2) : 48, jackStuds: null });
   });
   if (wly) checks.push(wly);
   if (wcr) checks.push(wcr);

@@ -43,8 +43,8 @@ export interface SupportReaction {
   byCase: Partial<Record<"D" | "L" | "Lr" | "S" | "W", number>>;
   /** bearing length given, in */
   bearing: number;
-  /** bearing length the member needs here, in */
+  /** bearing length the member needs here, in (steel: for web local yielding and web crippling; 48 means more than 48 in) */
   requiredBearing: number;
-  /** wood members: 1-1/2 in jack studs needed under this end of a header (bearing on the member only) */
+  /** wood members, supports at the member's ends: 1-1/2 in jack studs needed under this end of a header (bearing on the member only); null otherwise */
   jackStuds: number | null;
 }

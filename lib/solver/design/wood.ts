@@ -226,7 +226,8 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ...service[j],
       bearing: ctx.bearingIn,
       requiredBearing: round(required, 2),
-      jackStuds: Math.max(1, Math.ceil(required / JACK_STUD_IN - 1e-9)),
+      // jack studs hold a header's ends; an interior support is a post or wall, not counted in studs here
+      jackStuds: fromEndIn <= 1e-6 ? Math.max(1, Math.ceil(required / JACK_STUD_IN - 1e-9)) : null,
     });
   }
   const bearingCb = bestBearing.Cb;

@@ -9,7 +9,10 @@ import {
   OMEGA_B,
   PHI_B,
   plasticMomentMp,
+  webCripplingRn,
+  webLocalYieldingRn,
 } from "@/lib/solver/aisc360/aisc360-16";
+import { requiredSteelBearing } from "@/lib/solver/design/steel";
 import { checkMember } from "@/lib/solver/design";
 import type { SteelFactors } from "@/lib/solver/design";
 import { findWShape, STARTER_TABLES } from "@/lib/tables";
@@ -131,5 +134,23 @@ describe("AISC Design Examples v15.0, Example F.1-1A and F.1-2A (W18x50, 35 ft s
     const bending = r.checks.find((c) => c.name === "bending");
     expect(bending?.demand).toBeCloseTo((1.74 * 35 ** 2) / 8, 1);
     expect(Math.round(bending?.capacity ?? 0)).toBe(379);
+  });
+});
+
+describe("bearing length a W-shape needs at its support (AISC 360-16 §J10.2 and §J10.3, ASD)", () => {
+  test("W8x18 at the member end carrying 12 kips: the longer of the two lengths, worked here", () => {
+    const s = findWShape(STARTER_TABLES, "W8x18");
+    const R = 12;
+    // J10.2 at the end: Rn = Fy tw (2.5 k + lb), Ω = 1.50 → lb = 1.5 R / (Fy tw) − 2.5 k
+    const lbYield = Math.max((1.5 * R) / (Fy * s.tw) - 2.5 * s.kdes, 0);
+    // J10.3 at the end (lb/d ≤ 0.2): Rn = 0.40 tw² [1 + 3 (lb/d)(tw/tf)^1.5] √(E Fy tf / tw), Ω = 2.00
+    const root = Math.sqrt((29000 * Fy * s.tf) / s.tw);
+    const ratio = (s.tw / s.tf) ** 1.5;
+    let lbCripple = ((2 * R) / (0.4 * s.tw ** 2 * root) - 1) / (3 * ratio) * s.d;
+    if (lbCripple / s.d > 0.2) lbCripple = (((2 * R) / (0.4 * s.tw ** 2 * root) - 1) / ratio + 0.2) * (s.d / 4); // Eq. J10-5b
+    const expected = Math.max(lbYield, lbCripple, 0);
+    expect(requiredSteelBearing(s, Fy, R, true, true, false)).toBeCloseTo(expected, 1);
+    expect(webCripplingRn(s, Fy, expected, true) / 2).toBeGreaterThanOrEqual(R - 0.05);
+    expect(webLocalYieldingRn(s, Fy, expected, true) / 1.5).toBeGreaterThanOrEqual(R - 0.05);
   });
 });

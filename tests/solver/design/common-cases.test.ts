@@ -136,6 +136,9 @@ describe("overhang, uplift and pattern live load", () => {
     const wT = (50 * 16) / 12;
     const R8 = (wT * 12 * 6) / 8;
     expect(r.reactions[1].maxDown).toBe(Math.round(R8));
+    // jack studs belong to a header's ends; the beam under the joist is an interior support
+    expect(r.reactions[0].jackStuds).toBe(1);
+    expect(r.reactions[1].jackStuds).toBeNull();
   });
 
   test("the overhang tip is checked against twice its length", () => {
