@@ -438,6 +438,8 @@ export interface TableSpec<K extends TableKey = TableKey> {
   description: string;
   fields: FieldSpec[];
   schema: z.ZodType<TableRowMap[K]>;
+  /** the columns a phone shows under each row's key */
+  summary: string[];
   /** the natural key of a row within one version (what an import matches rows on) */
   keyOf(row: TableRowMap[K]): string;
 }
@@ -449,6 +451,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     description: "Dressed sizes and section properties of sawn lumber",
     fields: SAWN_SIZE_FIELDS,
     schema: sawnSizeSchema,
+    summary: ["b_in", "d_in", "Sx_in3", "Ix_in4"],
     keyOf: (r) => r.name,
   },
   "sawn-values": {
@@ -457,6 +460,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     description: "Reference design values by species, grade and size class",
     fields: SAWN_VALUE_FIELDS,
     schema: sawnValuesSchema,
+    summary: ["Fb_psi", "Fv_psi", "E_psi", "Emin_psi"],
     keyOf: (r) => `${r.species}|${r.grade}|${r.sizeClass}|${r.nominalDepth ?? "all"}`,
   },
   "size-factors": {
@@ -465,6 +469,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     description: "Size factors CF by table, grades, depth and thickness",
     fields: SIZE_FACTOR_FIELDS,
     schema: sizeFactorSchema,
+    summary: ["CF_Fb", "CF_Ft", "CF_Fc"],
     keyOf: (r) => `${r.table}|${r.grades.join(";")}|${r.nominalDepth}|${r.nominalThickness}`,
   },
   engineered: {
@@ -473,6 +478,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     description: "LVL, PSL and glulam products with their sizes",
     fields: ENGINEERED_FIELDS,
     schema: engineeredSchema,
+    summary: ["Fb_psi", "Fv_psi", "E_psi", "depths_in"],
     keyOf: (r) => r.name,
   },
   "steel-shapes": {
@@ -481,6 +487,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     description: "W-shape section properties",
     fields: STEEL_SHAPE_FIELDS,
     schema: steelShapeSchema,
+    summary: ["W_plf", "d_in", "Zx_in3", "Ix_in4"],
     keyOf: (r) => r.name,
   },
   "steel-grades": {
@@ -489,6 +496,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     description: "Yield and tensile strength of steel grades",
     fields: STEEL_GRADE_FIELDS,
     schema: steelGradeSchema,
+    summary: ["Fy_ksi", "Fu_ksi"],
     keyOf: (r) => r.name,
   },
   costs: {
@@ -497,6 +505,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     description: "The yard's cost per foot of each stock item, for ranking",
     fields: COST_FIELDS,
     schema: costSchema,
+    summary: ["cost_per_ft_usd"],
     keyOf: (r) => r.itemKey,
   },
 };
