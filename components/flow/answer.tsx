@@ -8,7 +8,7 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { headlineFor, shortLabel } from "@/lib/flow/summary";
+import { headlineFor, shortLabel, spacingOf } from "@/lib/flow/summary";
 import { KIND_LABELS, mainSpanFt, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -121,7 +121,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
   }, [chosenCheck, onChosenCheck]);
 
   const busy = size.isLoading || size.isValidating;
-  const headline = chosenCandidate ? headlineFor(chosenCandidate.member, chosenCandidate.label, chosenCandidate.supports, state.kind) : null;
+  const headline = chosenCandidate ? headlineFor(chosenCandidate.member, chosenCandidate.label, chosenCandidate.supports, state.kind, spacingOf(state)) : null;
 
   return (
     <div className="flex flex-col gap-6" aria-busy={busy}>

@@ -65,11 +65,25 @@ export function shortLabel(spec: MemberSpec, fullLabel: string): string {
   return fullLabel;
 }
 
-/** The answer line from a member and what its supports need. */
-export function headlineFor(spec: MemberSpec, fullLabel: string, reactions: readonly Pick<SummaryReaction, "jackStuds" | "requiredBearing">[], kind: FlowState["kind"]): string {
+/**
+ * The answer line from a member and what its supports need; joists and rafters carry their spacing
+ * ("2x10 No.2 at 16 in o.c. — 1-1/2" bearing each end").
+ */
+export function headlineFor(
+  spec: MemberSpec,
+  fullLabel: string,
+  reactions: readonly Pick<SummaryReaction, "jackStuds" | "requiredBearing">[],
+  kind: FlowState["kind"],
+  spacingIn?: number,
+): string {
   const words = supportWords(reactions.map((r) => ({ ...r, jackStuds: kind === "header" ? r.jackStuds : null })));
-  const name = shortLabel(spec, fullLabel);
+  const name = `${shortLabel(spec, fullLabel)}${spacingIn !== undefined ? ` at ${Math.round(spacingIn * 100) / 100} in o.c.` : ""}`;
   return words ? `${name} — ${words}` : name;
+}
+
+/** The spacing to name in the answer line, when the member is one of many at a spacing. */
+export function spacingOf(state: Pick<FlowState, "width">): number | undefined {
+  return state.width.mode === "spacing" ? state.width.spacingIn : undefined;
 }
 
 export function summarize(state: FlowState, check: CheckOutput, computedAt: Date = new Date()): MemberResultSummary {
@@ -85,7 +99,7 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
   }));
   return {
     memberLabel: check.member.label,
-    headline: headlineFor(check.member.spec, check.member.label, reactions, state.kind),
+    headline: headlineFor(check.member.spec, check.member.label, reactions, state.kind, spacingOf(state)),
     spec: check.member.spec,
     pass: check.pass,
     governing: check.governing,

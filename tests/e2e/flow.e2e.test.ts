@@ -96,7 +96,7 @@ describe("sizing flow at 390x844", () => {
     await next(page, /Next: Material/);
     await next(page, /See the answer/);
     const joistAnswer = await waitForAnswer(page);
-    expect(joistAnswer).toMatch(/^2x\d+ /);
+    expect(joistAnswer).toMatch(/^2x\d+ No\.\d at 16 in o\.c\./);
     await screenshot("flow-joist-5-answer", { fullPage: false });
     await page.getByRole("button", { name: "Save to a job" }).click();
     const dialog2 = page.getByRole("dialog", { name: "Save to a job" });

@@ -128,4 +128,9 @@ describe("the answer line", () => {
     const line = headlineFor({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x12", plies: 3 }, "3-ply 2x12 Douglas Fir-Larch No.2", [{ jackStuds: 2, requiredBearing: 2.4 }, { jackStuds: 2, requiredBearing: 2.4 }], "header");
     expect(line).toBe("3-ply 2x12 No.2 — 2 jack studs each end");
   });
+
+  test("joists name their spacing", () => {
+    const line = headlineFor({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 1 }, "2x10 Douglas Fir-Larch No.2", [{ jackStuds: null, requiredBearing: 0.6 }], "floor-joist", 16);
+    expect(line).toBe(`2x10 No.2 at 16 in o.c. — 1-1/2" bearing each end`);
+  });
 });
