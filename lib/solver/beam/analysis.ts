@@ -132,25 +132,33 @@ class Analysis implements BeamAnalysis {
 
   evaluateMany(xs: ArrayLike<number>, out?: StationArrays): StationArrays {
     const n = xs.length;
-    const r = out ?? {
-      x: new Float64Array(n),
-      V: new Float64Array(n),
-      M: new Float64Array(n),
-      slope: new Float64Array(n),
-      deflection: new Float64Array(n),
-    };
+    let r = out;
+    if (!r) {
+      // one buffer for the five arrays: a large typed array's buffer is costly to allocate
+      const buf = new Float64Array(5 * n);
+      r = { x: buf.subarray(0, n), V: buf.subarray(n, 2 * n), M: buf.subarray(2 * n, 3 * n), slope: buf.subarray(3 * n, 4 * n), deflection: buf.subarray(4 * n) };
+    }
     const f = this.field;
-    const bp = this.prep.bp;
+    const { bp, nseg, tol } = this.prep;
+    const X = r.x;
+    const Vo = r.V;
+    const Mo = r.M;
+    const So = r.slope;
+    const Do = r.deflection;
+    let s = 0;
     for (let i = 0; i < n; i++) {
       const x = xs[i];
-      const s = this.segAt(x);
-      const xi = Math.min(Math.max(x - bp[s], 0), bp[s + 1] - bp[s]);
+      // stations in ascending order walk forward from the last piece; others (and bad x) search
+      if (!(x >= bp[s] - tol && x <= bp[s + 1] + tol)) s = this.segAt(x);
+      while (s + 1 < nseg && bp[s + 1] <= x + tol) s++;
+      let xi = x - bp[s];
+      if (xi < 0) xi = 0;
       const o = s * STRIDE;
-      r.x[i] = x;
-      r.V[i] = f[o] + xi * (f[o + 1] + xi * f[o + 2]);
-      r.M[i] = f[o + 3] + xi * (f[o + 4] + xi * (f[o + 5] + xi * f[o + 6]));
-      r.slope[i] = f[o + 7] + xi * (f[o + 8] + xi * (f[o + 9] + xi * (f[o + 10] + xi * f[o + 11])));
-      r.deflection[i] = f[o + 12] + xi * (f[o + 13] + xi * (f[o + 14] + xi * (f[o + 15] + xi * (f[o + 16] + xi * f[o + 17]))));
+      X[i] = x;
+      Vo[i] = f[o] + xi * (f[o + 1] + xi * f[o + 2]);
+      Mo[i] = f[o + 3] + xi * (f[o + 4] + xi * (f[o + 5] + xi * f[o + 6]));
+      So[i] = f[o + 7] + xi * (f[o + 8] + xi * (f[o + 9] + xi * (f[o + 10] + xi * f[o + 11])));
+      Do[i] = f[o + 12] + xi * (f[o + 13] + xi * (f[o + 14] + xi * (f[o + 15] + xi * (f[o + 16] + xi * f[o + 17]))));
     }
     return r;
   }

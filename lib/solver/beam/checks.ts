@@ -20,20 +20,17 @@ function finite(v: unknown): v is number {
   return typeof v === "number" && Number.isFinite(v);
 }
 
-function needFinite(issues: InputIssue[], path: string, v: unknown, unit: string): void {
-  if (!finite(v)) issues.push({ path, message: `must be a finite number (${unit})` });
+// Paths are built only when there is something to report: this runs on every analysis.
+function needFinite(issues: InputIssue[], list: string, i: number, key: string, v: unknown, unit: string): void {
+  if (!finite(v)) issues.push({ path: `${list}.${i}.${key}`, message: `must be a finite number (${unit})` });
 }
 
-function onMemberIssue(issues: InputIssue[], path: string, x: unknown, L: number): boolean {
-  if (!finite(x)) {
-    issues.push({ path, message: "must be a finite number (ft)" });
-    return false;
-  }
-  if (!onMember(x, L)) {
-    issues.push({ path, message: `must be on the member, between 0 and ${formatFt(L)} ft (got ${formatFt(x)})` });
-    return false;
-  }
-  return true;
+function onMemberIssue(issues: InputIssue[], list: string, i: number, key: string, x: unknown, L: number): boolean {
+  if (finite(x) && onMember(x, L)) return true;
+  const path = key ? `${list}.${i}.${key}` : `${list}.${i}`;
+  if (!finite(x)) issues.push({ path, message: "must be a finite number (ft)" });
+  else issues.push({ path, message: `must be on the member, between 0 and ${formatFt(L)} ft (got ${formatFt(x)})` });
+  return false;
 }
 
 /**
@@ -55,7 +52,7 @@ export function geometryIssues(input: BeamInput): InputIssue[] {
   if (sup.length > LIMITS.maxSupports) issues.push({ path: "supports", message: `at most ${LIMITS.maxSupports} supports` });
   for (let i = 0; i < sup.length; i++) {
     const s = sup[i];
-    if (onMemberIssue(issues, `supports.${i}.x`, s.x, L)) {
+    if (onMemberIssue(issues, "supports", i, "x", s.x, L)) {
       for (let j = 0; j < i; j++) {
         if (Math.abs(sup[j].x - s.x) <= SAME_POINT * L) {
           issues.push({ path: `supports.${i}.x`, message: `another support (supports.${j}) is already at x = ${formatFt(s.x)} ft` });
@@ -72,19 +69,19 @@ export function geometryIssues(input: BeamInput): InputIssue[] {
   for (let i = 0; i < loads.length; i++) {
     const ld = loads[i];
     if (ld.type === "point" || ld.type === "moment") {
-      onMemberIssue(issues, `loads.${i}.x`, ld.x, L);
-      if (ld.type === "point") needFinite(issues, `loads.${i}.P`, ld.P, "lb");
-      else needFinite(issues, `loads.${i}.M`, ld.M, "lb-ft");
+      onMemberIssue(issues, "loads", i, "x", ld.x, L);
+      if (ld.type === "point") needFinite(issues, "loads", i, "P", ld.P, "lb");
+      else needFinite(issues, "loads", i, "M", ld.M, "lb-ft");
     } else if (ld.type === "udl" || ld.type === "linear") {
-      const okFrom = onMemberIssue(issues, `loads.${i}.from`, ld.from, L);
-      const okTo = onMemberIssue(issues, `loads.${i}.to`, ld.to, L);
+      const okFrom = onMemberIssue(issues, "loads", i, "from", ld.from, L);
+      const okTo = onMemberIssue(issues, "loads", i, "to", ld.to, L);
       if (okFrom && okTo && !(ld.to - ld.from > SAME_POINT * L)) {
         issues.push({ path: `loads.${i}.to`, message: `must be greater than from (${formatFt(ld.from)} ft)` });
       }
-      if (ld.type === "udl") needFinite(issues, `loads.${i}.w`, ld.w, "plf");
+      if (ld.type === "udl") needFinite(issues, "loads", i, "w", ld.w, "plf");
       else {
-        needFinite(issues, `loads.${i}.w1`, ld.w1, "plf");
-        needFinite(issues, `loads.${i}.w2`, ld.w2, "plf");
+        needFinite(issues, "loads", i, "w1", ld.w1, "plf");
+        needFinite(issues, "loads", i, "w2", ld.w2, "plf");
       }
     } else {
       issues.push({ path: `loads.${i}.type`, message: 'must be "point", "udl", "linear" or "moment"' });
@@ -93,7 +90,7 @@ export function geometryIssues(input: BeamInput): InputIssue[] {
   const at = input.at;
   if (at) {
     if (at.length > LIMITS.maxStations) issues.push({ path: "at", message: `at most ${LIMITS.maxStations} stations` });
-    for (let i = 0; i < at.length; i++) onMemberIssue(issues, `at.${i}`, at[i], L);
+    for (let i = 0; i < at.length; i++) onMemberIssue(issues, "at", i, "", at[i], L);
   }
   return issues;
 }

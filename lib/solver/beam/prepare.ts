@@ -38,8 +38,8 @@ export interface Piece {
   loadCase: LoadCase;
   region: number;
   /** consistent nodal loads for weight 1 (dof index, value) */
-  fDof: Int32Array;
-  fVal: Float64Array;
+  fDof: number[];
+  fVal: number[];
   /** concentrated pieces: breakpoint index and its jumps in V and M; -1 for distributed */
   bp: number;
   dV: number;
@@ -168,17 +168,17 @@ function concentratedPiece(
   mag: number,
   moment: boolean,
 ): Piece {
-  let fDof: Int32Array;
-  let fVal: Float64Array;
+  let fDof: number[];
+  let fVal: number[];
   if (bpNode[b] >= 0) {
-    fDof = Int32Array.of(2 * bpNode[b] + (moment ? 1 : 0));
-    fVal = Float64Array.of(mag);
+    fDof = [2 * bpNode[b] + (moment ? 1 : 0)];
+    fVal = [mag];
   } else {
     const e = elementOf(nodeX, x);
     shape(x - nodeX[e], nodeX[e + 1] - nodeX[e], N);
-    fDof = Int32Array.of(2 * e, 2 * e + 1, 2 * e + 2, 2 * e + 3);
+    fDof = [2 * e, 2 * e + 1, 2 * e + 2, 2 * e + 3];
     const o = moment ? 4 : 0;
-    fVal = Float64Array.of(mag * N[o], mag * N[o + 1], mag * N[o + 2], mag * N[o + 3]);
+    fVal = [mag * N[o], mag * N[o + 1], mag * N[o + 2], mag * N[o + 3]];
   }
   return { source, loadCase, region, fDof, fVal, bp: b, dV: moment ? 0 : -mag, dM: moment ? mag : 0, segFrom: 0, segTo: 0, xa: 0, wa: 0, k: 0 };
 }
@@ -200,8 +200,8 @@ function distributedPiece(
   const nn = nodeX.length;
   let count = 0;
   for (let e = 0; e < nn - 1; e++) if (Math.min(b, nodeX[e + 1]) - Math.max(a, nodeX[e]) > tol) count++;
-  const fDof = new Int32Array(4 * count);
-  const fVal = new Float64Array(4 * count);
+  const fDof: number[] = new Array<number>(4 * count).fill(0);
+  const fVal: number[] = new Array<number>(4 * count).fill(0);
   let c = 0;
   for (let e = 0; e < nn - 1; e++) {
     const lo = Math.max(a, nodeX[e]);
@@ -304,14 +304,26 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
     const bq = 6 * Le * c;
     const d4 = 4 * Le * Le * c;
     const d2 = 2 * Le * Le * c;
-    const i0 = 2 * e;
-    const add = (i: number, j: number, v: number) => {
-      K[(i0 + i) * ndof + i0 + j] += v;
-    };
-    add(0, 0, a); add(0, 1, bq); add(0, 2, -a); add(0, 3, bq);
-    add(1, 0, bq); add(1, 1, d4); add(1, 2, -bq); add(1, 3, d2);
-    add(2, 0, -a); add(2, 1, -bq); add(2, 2, a); add(2, 3, -bq);
-    add(3, 0, bq); add(3, 1, d2); add(3, 2, -bq); add(3, 3, d4);
+    const r0 = 2 * e * ndof + 2 * e;
+    const r1 = r0 + ndof;
+    const r2 = r1 + ndof;
+    const r3 = r2 + ndof;
+    K[r0] += a;
+    K[r0 + 1] += bq;
+    K[r0 + 2] -= a;
+    K[r0 + 3] += bq;
+    K[r1] += bq;
+    K[r1 + 1] += d4;
+    K[r1 + 2] -= bq;
+    K[r1 + 3] += d2;
+    K[r2] -= a;
+    K[r2 + 1] -= bq;
+    K[r2 + 2] += a;
+    K[r2 + 3] -= bq;
+    K[r3] += bq;
+    K[r3 + 1] += d2;
+    K[r3 + 2] -= bq;
+    K[r3 + 3] += d4;
   }
   const restrained = new Uint8Array(ndof);
   const supports: PreparedSupport[] = [];
