@@ -244,16 +244,3 @@ export async function changeRole(actor: SessionUser, userId: string, role: Extra
   if (user.role !== role) await user.update({ role });
   return toSessionUser(user);
 }
-
-/**
- * For the payment flow only: a paid-up builder becomes a subscriber; a lapsed subscriber becomes a builder
- * again. Admins keep their role either way.
- */
-export async function setSubscriberRole(userId: string, active: boolean): Promise<Role> {
-  getSequelize();
-  const user = await User.findByPk(userId);
-  if (!user) throw new HttpError(404, "account not found");
-  if (active && user.role === "builder") await user.update({ role: "subscriber" });
-  if (!active && user.role === "subscriber") await user.update({ role: "builder" });
-  return user.role;
-}
