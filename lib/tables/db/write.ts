@@ -54,6 +54,9 @@ export async function commitVersion(options: CommitOptions, build: (current: Tab
         currentVersionId: current?.id ?? null,
       });
     }
+    if (!current && options.source !== "seed") {
+      throw new TablesChangeError(409, "the database holds no version of the tables yet; publish the starter tables first (run the seeders)");
+    }
     const before = current ? await readVersionRows(current.id, transaction) : emptyRows();
     const after = await build(before, transaction);
     const summary = diffRows(before, after);

@@ -47,6 +47,9 @@ describe.skipIf(!TEST_DB)("material table versions", () => {
 
   test("an empty database serves the starter tables, and seeding publishes them as version 1 unchanged", async () => {
     expect((await getCurrentTables()).version).toBe(STARTER_TABLES.version);
+    // Nothing can be edited or imported until the starter tables are published.
+    await expect(importRows("steel-grades", [{ name: "A36", Fy: 36, Fu: 58 }], "merge", { actor: admin, note: "too early" })).rejects.toMatchObject({ status: 409 });
+    expect(await versionCount()).toBe(0);
     const seeded = await seedTables(STARTER_TABLES, "Starter tables");
     expect(seeded?.created).toBe(true);
     const current = await getCurrentTables();
