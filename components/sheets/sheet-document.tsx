@@ -182,7 +182,10 @@ export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
           <dt className="font-bold">Saved</dt>
           <dd>{formatSheetDate(s.savedAt)}</dd>
           <dt className="font-bold">Material tables</dt>
-          <dd className="font-mono">{s.tablesVersion}</dd>
+          <dd>
+            {s.tablesLabel}
+            <span className="block font-mono text-xs break-all text-graphite">id {s.tablesVersion}</span>
+          </dd>
           <dt className="font-bold">Method</dt>
           <dd>ASD (service loads)</dd>
         </dl>
@@ -207,6 +210,20 @@ export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
         <h2 id="sheet-schedule" className="mb-2 text-2xl font-bold">
           Member schedule
         </h2>
+        <ul className="flex flex-col gap-2 sm:hidden print:hidden" aria-label="Member schedule">
+          {s.members.map((m) => (
+            <li key={m.id} className="rounded-card border-2 border-rule bg-paper-raised p-3">
+              <p className="font-bold">
+                {m.label} <span className="font-normal text-graphite">· {m.kindLabel}</span>
+              </p>
+              <p className="text-lg font-bold">{m.headline}</p>
+              <p>
+                Span <span className="font-mono tabular-nums">{formatFeetInches(m.spanFt)}</span> · {m.pass ? "OK" : "Over"} {ratioPercent(m.ratio)} ({checkWords(m.governing)})
+              </p>
+            </li>
+          ))}
+        </ul>
+        <div className="hidden sm:block print:block">
         <TableShell caption="Member schedule" head={["Member", "Build", "Span", "Result"]}>
           {s.members.map((m) => (
             <tr key={m.id} className="border-b border-rule align-top">
@@ -223,6 +240,7 @@ export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
             </tr>
           ))}
         </TableShell>
+        </div>
         {s.skipped.length > 0 ? (
           <div className="mt-2 text-sm">
             <p className="font-bold">Not on this sheet:</p>
@@ -242,7 +260,7 @@ export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
       ))}
 
       <footer className="border-t-2 border-rule pt-2 text-sm text-graphite">
-        Spanlark job sheet · {s.job.name} · saved {formatSheetDate(s.savedAt)} · tables {s.tablesVersion}. The numbers on this sheet were
+        Spanlark job sheet · {s.job.name} · saved {formatSheetDate(s.savedAt)} · tables {s.tablesLabel}. The numbers on this sheet were
         worked out when it was saved and are kept as they were.
       </footer>
     </article>

@@ -15,7 +15,7 @@ export function SheetList({ sheets, emptyHint }: SheetListProps) {
       {sheets.map((s) => (
         <li key={s.id}>
           <CardLink href={`/sheets/${s.id}`} title={s.jobName}>
-            Saved {formatSheetDate(s.savedAt)} · {s.memberCount} member{s.memberCount === 1 ? "" : "s"} · tables {s.tablesVersion}
+            Saved {formatSheetDate(s.savedAt)} · {s.memberCount} member{s.memberCount === 1 ? "" : "s"} · tables {s.tablesLabel}
           </CardLink>
         </li>
       ))}

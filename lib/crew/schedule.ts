@@ -11,7 +11,7 @@ export interface ScheduleSupport {
   name: string;
   /** "2,671 lb down" (and uplift when there is one) */
   reaction: string;
-  /** "2 jack studs" or "bearing 3" (needs 15/16")" */
+  /** "2 jack studs" or "3" bearing (needs 15/16")" */
   bearing: string;
 }
 
@@ -48,7 +48,7 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
     const bearing =
       r.jackStuds !== null
         ? `${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"}`
-        : `bearing ${formatInches(r.bearing)} (needs ${formatInches(Math.max(r.requiredBearing, 0))})`;
+        : `${formatInches(r.bearing)} bearing (needs ${formatInches(Math.max(r.requiredBearing, 0))})`;
     return { name: supportName(i, s.reactions.length, r.x), reaction, bearing };
   });
   const pct = `${Math.round(s.ratio * 100)}%`;

@@ -267,7 +267,7 @@ function drawHeader(w: SheetWriter, s: SheetSnapshot): void {
   const by = s.preparedBy.company ? `${s.preparedBy.name}, ${s.preparedBy.company}` : s.preparedBy.name;
   w.table(
     ["Prepared by", "Saved", "Material tables", "Method"],
-    [[by, formatSheetDate(s.savedAt), s.tablesVersion, "ASD (service loads)"]],
+    [[by, formatSheetDate(s.savedAt), `${s.tablesLabel}\nid ${s.tablesVersion}`, "ASD (service loads)"]],
     [0.34, 0.22, 0.26, 0.18],
   );
   if (s.job.notes.trim()) {
@@ -373,7 +373,7 @@ function drawFooters(w: SheetWriter, s: SheetSnapshot): void {
     doc.switchToPage(i);
     const y = w.height - MARGIN + 4;
     doc.font(w.fonts.regular).fontSize(8).fillColor(COLORS.graphite);
-    const left = pdfText(`Spanlark job sheet · ${s.job.name} · saved ${formatSheetDate(s.savedAt)} · tables ${s.tablesVersion}`);
+    const left = pdfText(`Spanlark job sheet · ${s.job.name} · saved ${formatSheetDate(s.savedAt)} · tables ${s.tablesLabel}`);
     doc.text(left, w.left, y, { width: w.contentWidth - 70, lineBreak: false, height: 10 });
     doc.text(`Page ${i - range.start + 1} of ${range.count}`, w.right - 70, y, { width: 70, align: "right", lineBreak: false, height: 10 });
   }

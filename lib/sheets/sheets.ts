@@ -3,6 +3,7 @@ import { Op } from "sequelize";
 import { getSequelize } from "@/lib/db";
 import { HttpError } from "@/lib/http";
 import { getCurrentTables } from "@/lib/tables/current";
+import { getVersionInfo, isVersionId } from "@/lib/tables/db/queries";
 import { JobSheet } from "@/models/job-sheet";
 import { Job } from "@/models/job";
 import { Member } from "@/models/member";
@@ -18,6 +19,7 @@ export interface SheetListItem {
   jobName: string;
   memberCount: number;
   tablesVersion: string;
+  tablesLabel: string;
   /** ISO 8601 */
   savedAt: string;
 }
@@ -34,6 +36,7 @@ function listItem(s: JobSheet): SheetListItem {
     jobName: s.snapshot.job.name,
     memberCount: s.snapshot.members.length,
     tablesVersion: s.tablesVersionId,
+    tablesLabel: s.snapshot.tablesLabel ?? s.tablesVersionId,
     savedAt: s.snapshot.savedAt,
   };
 }
@@ -57,6 +60,8 @@ export async function saveJobSheet(user: SessionUser, jobId: string, now: Date =
   });
   if (members.length === 0) throw new HttpError(400, "this job has no members yet: size a member and save it to the job first");
   const tables = await getCurrentTables();
+  const info = isVersionId(tables.version) ? await getVersionInfo(tables.version) : null;
+  const tablesLabel = info ? `version ${info.number}, published ${formatSheetDate(info.createdAt)}` : tables.version;
   const snapshot = buildSheetSnapshot({
     job: { id: job.id, name: job.name, siteAddress: job.siteAddress, notes: job.notes },
     preparedBy: { name: user.name, company: user.company },
@@ -69,6 +74,7 @@ export async function saveJobSheet(user: SessionUser, jobId: string, now: Date =
       savedTables: m.resultSummary?.tables ?? null,
     })),
     tables,
+    tablesLabel,
     now,
   });
   if (snapshot.members.length === 0) {

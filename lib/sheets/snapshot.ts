@@ -74,7 +74,10 @@ export interface SheetSnapshot {
   savedAt: string;
   job: { id: string; name: string; siteAddress: string; notes: string };
   preparedBy: { name: string; company: string | null };
+  /** the tables version's id (a reprint could load it with getTablesVersion; a sheet never needs to) */
   tablesVersion: string;
+  /** the same version as people read it, e.g. "version 3, published 1 Dec 2026" */
+  tablesLabel: string;
   method: "asd";
   members: SheetMember[];
   skipped: SheetSkipped[];
@@ -97,6 +100,8 @@ export interface SheetSource {
   preparedBy: { name: string; company: string | null };
   members: SheetMemberSource[];
   tables: MaterialTables;
+  /** how the tables version reads on the sheet; its id when not given */
+  tablesLabel?: string;
   now: Date;
 }
 
@@ -315,6 +320,7 @@ export function buildSheetSnapshot(source: SheetSource): SheetSnapshot {
     job: source.job,
     preparedBy: source.preparedBy,
     tablesVersion: source.tables.version,
+    tablesLabel: source.tablesLabel ?? source.tables.version,
     method: "asd",
     members,
     skipped,

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CrewSchedule } from "@/components/crew/crew-schedule";
 import { Caution } from "@/components/ui/caution";
+import { WarningIcon } from "@/components/ui/icons";
 import { openCrewLink } from "@/lib/crew/links";
 import { formatSheetDate } from "@/lib/sheets/format";
 
@@ -31,7 +32,12 @@ export default async function CrewPage({ params }: CrewPageProps) {
         {view.job.siteAddress ? <p className="text-lg text-ink-soft">{view.job.siteAddress}</p> : null}
         {view.expiresAt ? <p className="text-ink-soft">This link works until {formatSheetDate(view.expiresAt)}.</p> : null}
       </header>
-      <Caution variant="full" />
+      <p className="flex items-center gap-2 rounded-card border-2 border-caution bg-caution-bg px-3 py-2 font-bold text-caution-ink">
+        <WarningIcon className="h-5 w-5 shrink-0" />
+        <a href="#caution" className="text-caution-ink">
+          Check before you build: read the caution below the schedule.
+        </a>
+      </p>
       {view.job.notes.trim() ? (
         <section aria-labelledby="crew-notes" className="rounded-card border-2 border-rule bg-paper-raised p-4">
           <h2 id="crew-notes" className="text-lg font-bold">
@@ -46,6 +52,9 @@ export default async function CrewPage({ params }: CrewPageProps) {
         </h2>
         <CrewSchedule rows={view.rows} />
       </section>
+      <div id="caution" className="scroll-mt-20">
+        <Caution variant="full" />
+      </div>
       <p className="text-ink-soft">
         Loads are the largest at each support under the service load combinations. Jack studs are 1-1/2 in studs
         under each end of a header. Ask the builder before changing any size.
