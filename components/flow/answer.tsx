@@ -40,6 +40,26 @@ function stepOfPath(path: string): FlowStepId {
   return "material";
 }
 
+const FIELD_WORDS: Record<string, string> = {
+  length: "Span",
+  supports: "Supports",
+  loads: "Loads",
+  spacing: "Joist spacing",
+  tributary: "Tributary width",
+  bearing: "Bearing length",
+  member: "Material",
+  limits: "Deflection limits",
+  conditions: "Conditions",
+};
+
+/** "supports.1.x" → "Support 2"; "spacing" → "Joist spacing". */
+function fieldWords(path: string): string {
+  const [head, index] = path.split(".");
+  const word = FIELD_WORDS[head] ?? head;
+  if (index !== undefined && /^\d+$/.test(index) && (head === "supports" || head === "loads")) return `${word.slice(0, -1)} ${Number(index) + 1}`;
+  return word;
+}
+
 function Problem({ title, issues, onGoTo }: { title: string; issues: { path: string; message: string }[]; onGoTo: (step: FlowStepId) => void }) {
   return (
     <div role="alert" className="rounded-card border-2 border-over bg-over-bg p-4">
@@ -50,7 +70,7 @@ function Problem({ title, issues, onGoTo }: { title: string; issues: { path: str
         {issues.map((i, n) => (
           <li key={n}>
             <span className="text-ink">
-              {i.path ? <span className="font-bold">{i.path}: </span> : null}
+              {i.path ? <span className="font-bold">{fieldWords(i.path)}: </span> : null}
               {i.message}
             </span>{" "}
             <button type="button" className="min-h-touch font-bold text-spruce underline underline-offset-4" onClick={() => onGoTo(stepOfPath(i.path))}>
@@ -210,7 +230,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
               Members that work, best first
             </h2>
             <p className="text-ink-soft">Lightest first. Tap one for its full check.</p>
-            <ul className="flex flex-col gap-3">
+            <ul className="grid gap-3 lg:grid-cols-2">
               {size.data
                 ? shown.map((c) => <CandidateCard key={JSON.stringify(c.member)} candidate={c} check={checkOf(c.member)} chosen={chosenSpec !== null && sameSpec(c.member, chosenSpec)} onOpen={() => setDetail(c.member)} />)
                 : Array.from({ length: 2 }, (_, i) => <Skeleton key={i} width="100%" height="20rem" />)}
