@@ -38,6 +38,8 @@ export interface MemberSummary {
 }
 
 export interface CheckOutput {
+  /** the answer for the crew in one line, e.g. "3-ply 2x12 Douglas Fir-Larch No.2 — OK 99% (bending); 1 jack stud each end" */
+  answer: string;
   pass: boolean;
   /** the check with the largest ratio */
   governing: CheckName | null;
@@ -64,6 +66,39 @@ export interface Evaluation {
   governing: CheckName | null;
   ratio: number;
   pass: boolean;
+}
+
+const CHECK_WORDS: Record<CheckName, string> = {
+  bending: "bending",
+  shear: "shear",
+  "deflection-live": "live load deflection",
+  "deflection-total": "total load deflection",
+  bearing: "bearing",
+  stability: "lateral stability",
+  "web-yielding": "web yielding at a support",
+  "web-crippling": "web crippling at a support",
+  "web-compactness": "web slenderness",
+};
+
+/** A ratio as a percentage; a failing ratio never shows as 100 % (one decimal where rounding would hide it). */
+export function percent(ratio: number, pass: boolean): string {
+  const whole = Math.round(ratio * 100);
+  if (!pass && whole <= 100) return (Math.ceil(ratio * 1000) / 10).toFixed(1);
+  if (pass && whole > 100) return "100";
+  return String(whole);
+}
+
+/** One line for the crew: the member, OK or Over with the largest ratio, and what to build under it. */
+export function answerLine(label: string, ev: { pass: boolean; ratio: number; governing: CheckName | null; reactions: SupportReaction[] }): string {
+  const head = `${label} — ${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${CHECK_WORDS[ev.governing]})` : ""}`;
+  const studs = ev.reactions.map((r) => r.jackStuds).filter((n): n is number => n !== null);
+  if (studs.length > 0) {
+    const most = Math.max(...studs);
+    const each = studs.length === 2 && studs[0] === studs[1] ? " each end" : " at the end that needs most";
+    return `${head}; ${most} jack stud${most === 1 ? "" : "s"}${studs.length === 2 ? each : ""}`;
+  }
+  const need = Math.max(0, ...ev.reactions.map((r) => r.requiredBearing));
+  return need > 0 ? `${head}; bearing at least ${Math.ceil(need * 4) / 4} in at the supports` : head;
 }
 
 /** Runs every check of one resolved member in a shared context. */
@@ -165,6 +200,7 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
   const ev = evaluateMember(member, ctx);
   const sw = input.conditions.selfWeight ? member.weightPlf : 0;
   return {
+    answer: answerLine(member.label, ev),
     pass: ev.pass,
     governing: ev.governing,
     ratio: ev.ratio,

@@ -6,7 +6,7 @@
 import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
 import { CAUTION } from "../beam";
-import { assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
+import { answerLine, percent, assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
 import { resolveMember, resolveMemberUnchecked, withPlies, type DesignMember } from "./member";
@@ -14,6 +14,8 @@ import { sizeInputSchema, spanInputSchema, type MemberSpec, type SizeFamily, typ
 import type { CheckName, DesignCheck } from "./types";
 
 export interface SizeCandidateResult {
+  /** one line for the crew, as in the check output */
+  answer: string;
   member: MemberSpec;
   label: string;
   governing: CheckName | null;
@@ -102,6 +104,7 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
 
 function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>): SizeCandidateResult {
   return {
+    answer: answerLine(member.label, ev),
     member: member.spec,
     label: member.label,
     governing: ev.governing,
@@ -117,7 +120,7 @@ function reasonOf(c: DesignCheck | undefined): string {
   if (!c) return "no check ran";
   const where = c.x === null ? "" : ` at ${Math.round(c.x * 100) / 100} ft`;
   const combo = c.combination ? ` in ${c.combination}` : "";
-  return `${c.name} ${Math.round(c.ratio * 100)}%${combo}${where}: ${c.demand} ${c.unit} against ${c.capacity} ${c.unit}`;
+  return `${c.name} ${percent(c.ratio, c.ratio <= 1)}%${combo}${where}: ${c.demand} ${c.unit} against ${c.capacity} ${c.unit}`;
 }
 
 const RANKERS: Record<SizeOutput["rank"], (a: SizeCandidateResult, b: SizeCandidateResult) => number> = {
@@ -169,11 +172,31 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     method: input.method,
     candidates: checked,
     passingCount: passing.length,
-    assumptions: lastMember ? assumptionsFor(input, lastMember, ctx).filter((a) => !a.startsWith("member's own weight counted")) : [],
+    assumptions: [
+      `candidates: ${describeFamily(input)}`,
+      ...(lastMember ? assumptionsFor(input, lastMember, ctx).filter((a) => !a.startsWith("member's own weight counted")) : []),
+      ...(input.conditions.selfWeight ? ["each member's own weight counted as dead load"] : []),
+    ],
     notChecked: NOT_CHECKED,
     caution: CAUTION,
     tables: tables.version,
   };
+}
+
+function describeFamily(input: SizeInput): string {
+  const m = input.member;
+  const joists = input.spacing !== undefined;
+  const plies = (given: number[] | undefined) => (given ?? (joists ? [1] : ALL_PLIES)).join(", ");
+  switch (m.material) {
+    case "sawn":
+      return `sawn lumber, ${m.species ?? "every species"}, ${m.grade ?? "every grade"}, every size in the tables, plies ${plies(m.plies)} (timbers 1 ply)`;
+    case "engineered":
+      return `${m.product ?? "every engineered product"}, every width and depth in the tables, LVL plies ${plies(m.plies)}`;
+    case "steel":
+      return `every W-shape in the tables, ${m.grade}`;
+    case "any":
+      return `every sawn size, engineered product and W-shape in the tables, plies ${plies(undefined)} for dimension lumber and LVL`;
+  }
 }
 
 export interface SpanOutput {

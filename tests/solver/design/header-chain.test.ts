@@ -109,6 +109,10 @@ describe("header under a bearing wall with roof snow and a floor above (hand che
     }
   });
 
+  test("the answer line for the crew", () => {
+    expect(r.answer).toBe("2-ply 2x10 Douglas Fir-Larch No.2 — OK 77% (bending); 1 jack stud each end");
+  });
+
   test("the result carries the caution and what is not checked", () => {
     expect(r.caution).toMatch(/^Preliminary sizing for typical house framing/);
     expect(r.notChecked.join(" ")).toMatch(/connections/);
