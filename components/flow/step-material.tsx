@@ -93,8 +93,8 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
           }}
         />
         <div className="grid grid-cols-2 gap-3">
-          <FlowNumberField label="Live load, L /" unit="" value={state.limits.live} min={60} max={2000} onCommit={(live) => update((s) => ({ ...s, limits: { ...s.limits, live } }))} />
-          <FlowNumberField label="Total load, L /" unit="" value={state.limits.total} min={60} max={2000} onCommit={(total) => update((s) => ({ ...s, limits: { ...s.limits, total } }))} />
+          <FlowNumberField label="Live load limit" hint="360 means L/360" unit="L/n" unitSpoken="span divided by this number" value={state.limits.live} min={60} max={2000} onCommit={(live) => update((s) => ({ ...s, limits: { ...s.limits, live } }))} />
+          <FlowNumberField label="Total load limit" hint="240 means L/240" unit="L/n" unitSpoken="span divided by this number" value={state.limits.total} min={60} max={2000} onCommit={(total) => update((s) => ({ ...s, limits: { ...s.limits, total } }))} />
         </div>
       </section>
 
