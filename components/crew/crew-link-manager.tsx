@@ -138,6 +138,8 @@ export function CrewLinkManager({ jobId, links, activeLimit, activeCount }: Crew
   const [expires, setExpires] = useState("0");
   const [error, setError] = useState<string | null>(null);
   const atLimit = activeLimit !== null && activeCount >= activeLimit;
+  const live = links.filter((l) => l.status === "active");
+  const ended = links.filter((l) => l.status !== "active");
 
   const create = (event: FormEvent<HTMLFormElement>) => {
     event.preventDefault();
@@ -184,12 +186,22 @@ export function CrewLinkManager({ jobId, links, activeLimit, activeCount }: Crew
           {error}
         </p>
       ) : null}
-      {links.length > 0 ? (
-        <ul className="flex flex-col gap-2" aria-label="Crew links">
-          {links.map((l) => (
+      {live.length > 0 ? (
+        <ul className="flex flex-col gap-2" aria-label="Live crew links">
+          {live.map((l) => (
             <LinkRow key={l.id} link={l} onChanged={() => router.refresh()} />
           ))}
         </ul>
+      ) : null}
+      {ended.length > 0 ? (
+        <details className="rounded-card border-2 border-rule p-3">
+          <summary className="min-h-touch cursor-pointer content-center font-bold">Revoked and expired links ({ended.length})</summary>
+          <ul className="mt-2 flex flex-col gap-2" aria-label="Revoked and expired crew links">
+            {ended.map((l) => (
+              <LinkRow key={l.id} link={l} onChanged={() => router.refresh()} />
+            ))}
+          </ul>
+        </details>
       ) : null}
     </div>
   );

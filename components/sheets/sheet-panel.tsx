@@ -26,7 +26,7 @@ export async function SheetPanel({ jobId }: SheetPanelProps) {
           <SaveSheetButton jobId={jobId} />
         ) : (
           <p className="rounded-card border-2 border-caution bg-caution-bg p-3" data-testid="sheet-locked">
-            {SHEET_LAPSED_WORDS}{" "}
+            <strong>Saving job sheets needs a subscription.</strong> {SHEET_LAPSED_WORDS}{" "}
             <Link href="/pricing" className="font-bold">
               See plans
             </Link>

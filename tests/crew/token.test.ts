@@ -32,7 +32,12 @@ describe("crew link tokens are unguessable", () => {
     // Shannon entropy of the byte values over all tokens, bits per byte: close to 8 for random bytes.
     const freq = new Array<number>(256).fill(0);
     let total = 0;
-    for (let i = 0; i < n; i++) for (const byte of Buffer.from(newCrewToken(), "base64url")) (freq[byte]++, total++);
+    for (let i = 0; i < n; i++) {
+      for (const byte of Buffer.from(newCrewToken(), "base64url")) {
+        freq[byte]++;
+        total++;
+      }
+    }
     const entropy = -freq.reduce((s, f) => (f === 0 ? s : s + (f / total) * Math.log2(f / total)), 0);
     expect(entropy).toBeGreaterThan(7.99);
   });
