@@ -410,7 +410,7 @@ class Analysis implements BeamAnalysis {
     let min: Extreme = { value: Infinity, x: a };
     const consider = (s: number, xi: number) => {
       const v = polyAt(f, s * STRIDE + OFF_M, 3, xi);
-      const x = bp[s] + xi;
+      const x = Math.min(Math.max(bp[s] + xi, a), b);
       if (v > max.value) max = { value: v, x };
       if (v < min.value) min = { value: v, x };
     };

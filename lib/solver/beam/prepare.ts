@@ -269,7 +269,7 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   raw.sort();
   let nbp = 0;
   for (let i = 0; i < nraw; i++) if (nbp === 0 || raw[i] - raw[nbp - 1] > tol) raw[nbp++] = raw[i];
-  const bp = raw.slice(0, nbp);
+  const bp = raw.subarray(0, nbp);
   bp[0] = 0;
   bp[nbp - 1] = L;
   const nseg = nbp - 1;
@@ -278,14 +278,17 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   const bpNode = new Int32Array(nbp).fill(-1);
   bpNode[0] = 1;
   bpNode[nbp - 1] = 1;
-  const supBp = new Int32Array(inSup.length);
+  const supBp: number[] = new Array<number>(inSup.length);
   for (let i = 0; i < inSup.length; i++) {
     supBp[i] = bpIndex(bp, inSup[i].x, tol);
     bpNode[supBp[i]] = 1;
   }
   let nn = 0;
   for (let b = 0; b < nbp; b++) if (bpNode[b] === 1) nn++;
-  const nodeX = new Float64Array(nn);
+  const ndof = 2 * nn;
+  // nodeX, K, the Cholesky factor and the sorted support positions share one buffer
+  const mats = new Float64Array(nn + 2 * ndof * ndof + inSup.length);
+  const nodeX = mats.subarray(0, nn);
   nn = 0;
   for (let b = 0; b < nbp; b++) {
     if (bpNode[b] === 1) {
@@ -293,10 +296,9 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
       bpNode[b] = nn++;
     }
   }
-  const ndof = 2 * nn;
 
   // Stiffness: dof 2n is the deflection (down), 2n+1 the slope (clockwise) at node n.
-  const K = new Float64Array(ndof * ndof);
+  const K = mats.subarray(nn, nn + ndof * ndof);
   for (let e = 0; e < nn - 1; e++) {
     const Le = nodeX[e + 1] - nodeX[e];
     const c = EI / (Le * Le * Le);
@@ -325,7 +327,7 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
     K[r3 + 2] -= bq;
     K[r3 + 3] += d4;
   }
-  const restrained = new Uint8Array(ndof);
+  const restrained: number[] = new Array<number>(ndof).fill(0);
   const supports: PreparedSupport[] = [];
   for (let i = 0; i < inSup.length; i++) {
     const node = bpNode[supBp[i]];
@@ -340,7 +342,7 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   for (let d = 0; d < ndof; d++) if (!restrained[d]) free[nf++] = d;
 
   // Cholesky factor of K_ff (lower triangle, row-major); a vanishing pivot means a mechanism.
-  const chol = new Float64Array(nf * nf);
+  const chol = mats.subarray(nn + ndof * ndof, nn + ndof * ndof + nf * nf);
   let diagMax = 0;
   for (let i = 0; i < nf; i++) diagMax = Math.max(diagMax, Math.abs(K[free[i] * ndof + free[i]]));
   for (let i = 0; i < nf; i++) for (let j = 0; j <= i; j++) chol[i * nf + j] = K[free[i] * ndof + free[j]];
@@ -363,7 +365,7 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   }
 
   // Regions: overhangs and spans between supports, left to right.
-  const supXs = new Float64Array(supports.length);
+  const supXs = mats.subarray(nn + 2 * ndof * ndof);
   for (let i = 0; i < supports.length; i++) supXs[i] = supports[i].x;
   supXs.sort();
   const ns = supXs.length;
@@ -406,10 +408,17 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
 export function respond(prep: PreparedBeam, weights: ArrayLike<number>): Response {
   const { bp, nseg, bpNode, ndof, K, free, chol, supports, pieces, EI } = prep;
   const nbp = nseg + 1;
-  const f = new Float64Array(ndof);
-  const jumpV = new Float64Array(nbp);
-  const jumpM = new Float64Array(nbp);
-  const q = new Float64Array(2 * nseg);
+  const nf = free.length;
+  // one scratch buffer for the working arrays (a typed array's own buffer is costly to allocate)
+  const scratch = new Float64Array(2 * ndof + 2 * nbp + 2 * nseg + nf);
+  let off = 0;
+  const take = (n: number): Float64Array => scratch.subarray(off, (off += n));
+  const f = take(ndof);
+  const jumpV = take(nbp);
+  const jumpM = take(nbp);
+  const q = take(2 * nseg);
+  const y = take(nf);
+  const d = take(ndof);
   for (let p = 0; p < pieces.length; p++) {
     const c = weights[p];
     if (c === 0) continue;
@@ -426,8 +435,6 @@ export function respond(prep: PreparedBeam, weights: ArrayLike<number>): Respons
     }
   }
   // Solve K_ff d_f = f_f with the Cholesky factor.
-  const nf = free.length;
-  const y = new Float64Array(nf);
   for (let i = 0; i < nf; i++) {
     let s = f[free[i]];
     for (let k = 0; k < i; k++) s -= chol[i * nf + k] * y[k];
@@ -438,7 +445,6 @@ export function respond(prep: PreparedBeam, weights: ArrayLike<number>): Respons
     for (let k = i + 1; k < nf; k++) s -= chol[k * nf + i] * y[k];
     y[i] = s / chol[i * nf + i];
   }
-  const d = new Float64Array(ndof);
   for (let i = 0; i < nf; i++) d[free[i]] = y[i];
 
   // Reactions r = K d − f at the restrained dofs; F is up (the dof is down), M clockwise.
