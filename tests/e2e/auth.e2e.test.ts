@@ -62,6 +62,12 @@ describe("account journey", () => {
     await page.getByTestId("sign-up-sent").waitFor();
     await screenshot("auth-sign-up-sent-phone");
 
+    // Not confirmed yet: the right password is answered with a pointer to the mail (and no session).
+    await goto("/sign-in");
+    await signIn(page, email, firstPassword);
+    await page.getByText("Confirm your e-mail first").waitFor();
+    expect(await page.getByRole("button", { name: "Send the link again" }).isVisible()).toBe(true);
+
     const confirmMail = await waitForMail(email, /Confirm your e-mail/, started);
     await goto(linkIn(confirmMail, "/verify"));
     await page.getByRole("button", { name: "Confirm my e-mail" }).click();
