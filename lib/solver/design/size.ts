@@ -202,8 +202,10 @@ function describeFamily(input: SizeInput): string {
 export interface SpanOutput {
   member: MemberSpec;
   label: string;
-  /** largest length that passes, ft (rounded down to 1/100 ft) */
+  /** largest member length that passes, ft (rounded down to 1/100 ft); supports and loads scale with it */
   largestSpan: number | null;
+  /** at that length: each span between supports and each overhang, ft */
+  spans: { from: number; to: number; length: number }[];
   /** the same in inches, rounded down to 1/16 in */
   largestSpanIn: number | null;
   /** the check that fails just past the largest span */
@@ -246,16 +248,24 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
   const input = parseWith<SpanInput>(spanInputSchema, json);
   const member = resolveMember(input.member, tables);
   const run = (L: number) => checkMember(scaled(input, L), tables);
+  const spansAt = (L: number) => {
+    const xs = [0, ...input.supports.map((sp) => (sp.x * L) / input.length), L].sort((a, b) => a - b);
+    const out: { from: number; to: number; length: number }[] = [];
+    for (let i = 1; i < xs.length; i++) {
+      if (xs[i] - xs[i - 1] > 1e-9) out.push({ from: Math.floor(xs[i - 1] * 100) / 100, to: Math.floor(xs[i] * 100) / 100, length: Math.floor((xs[i] - xs[i - 1]) * 100) / 100 });
+    }
+    return out;
+  };
   const base = { member: member.spec, label: member.label };
   let lo = input.minLength;
   let hi = input.maxLength;
   const atLo = run(lo);
   if (!atLo.pass) {
-    return { ...base, largestSpan: null, largestSpanIn: null, governing: atLo.governing, atMaxLength: false, check: atLo, note: `fails even at ${lo} ft` };
+    return { ...base, largestSpan: null, spans: [], largestSpanIn: null, governing: atLo.governing, atMaxLength: false, check: atLo, note: `fails even at ${lo} ft` };
   }
   const atHi = run(hi);
   if (atHi.pass) {
-    return { ...base, largestSpan: hi, largestSpanIn: hi * 12, governing: null, atMaxLength: true, check: atHi, note: `passes at the search limit of ${hi} ft` };
+    return { ...base, largestSpan: hi, spans: spansAt(hi), largestSpanIn: hi * 12, governing: null, atMaxLength: true, check: atHi, note: `passes at the search limit of ${hi} ft` };
   }
   let best = atLo;
   let failGov = atHi.governing;
@@ -274,11 +284,12 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
   return {
     ...base,
     largestSpan: Math.floor(lo * 100) / 100,
+    spans: spansAt(lo),
     largestSpanIn: inches,
     governing: failGov,
     atMaxLength: false,
     check: best,
-    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in, centre to centre of supports; ${failGov ?? "a check"} governs just beyond`,
+    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.length) ? "centre to centre of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
   };
 }
 
