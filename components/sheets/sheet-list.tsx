@@ -1,6 +1,6 @@
 import { CardLink } from "@/components/ui/card";
 import { EmptyState } from "@/components/ui/empty-state";
-import { formatSheetDate } from "@/lib/sheets/format";
+import { formatSheetDateTime } from "@/lib/sheets/format";
 import type { SheetListItem } from "@/lib/sheets/sheets";
 
 export type SheetListProps = {
@@ -15,7 +15,7 @@ export function SheetList({ sheets, emptyHint }: SheetListProps) {
       {sheets.map((s) => (
         <li key={s.id}>
           <CardLink href={`/sheets/${s.id}`} title={s.jobName}>
-            Saved {formatSheetDate(s.savedAt)} · {s.memberCount} member{s.memberCount === 1 ? "" : "s"} · tables {s.tablesLabel}
+            Saved {formatSheetDateTime(s.savedAt)} · {s.memberCount} member{s.memberCount === 1 ? "" : "s"} · tables {s.tablesLabel}
           </CardLink>
         </li>
       ))}

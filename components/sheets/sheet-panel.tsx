@@ -2,7 +2,7 @@ import Link from "next/link";
 import { Card } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
 import { SHEET_LAPSED_WORDS, sheetAccess } from "@/lib/sheets/access";
-import { formatSheetDate } from "@/lib/sheets/format";
+import { formatSheetDateTime } from "@/lib/sheets/format";
 import { listJobSheets } from "@/lib/sheets/sheets";
 import { SaveSheetButton } from "./save-sheet-button";
 
@@ -37,7 +37,7 @@ export async function SheetPanel({ jobId }: SheetPanelProps) {
             {sheets.map((s) => (
               <li key={s.id}>
                 <Link href={`/sheets/${s.id}`} className="inline-flex min-h-touch items-center font-bold">
-                  Sheet of {formatSheetDate(s.savedAt)} ({s.memberCount} member{s.memberCount === 1 ? "" : "s"})
+                  Sheet of {formatSheetDateTime(s.savedAt)} ({s.memberCount} member{s.memberCount === 1 ? "" : "s"})
                 </Link>
               </li>
             ))}

@@ -46,6 +46,12 @@ export function formatSheetDate(iso: string): string {
   return new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric", timeZone: "UTC" });
 }
 
+/** "1 Dec 2026, 22:31 UTC": tells apart two sheets saved the same day. */
+export function formatSheetDateTime(iso: string): string {
+  const time = new Date(iso).toLocaleTimeString("en-GB", { hour: "2-digit", minute: "2-digit", timeZone: "UTC" });
+  return `${formatSheetDate(iso)}, ${time} UTC`;
+}
+
 /** "Left end", "Right end", or "Support 2 at 8' 0"" for the ones between. */
 export function supportName(index: number, count: number, x: number): string {
   if (count === 2) return index === 0 ? "Left end" : "Right end";
