@@ -10,13 +10,15 @@ export const TOKEN_LIFETIME_MS: Record<AuthTokenPurpose, number> = {
 };
 
 /**
- * Makes a token for a user and returns the secret to mail (never stored). Earlier unused tokens of the same
- * purpose stop working, so only the newest link does.
+ * Makes a token for a user and returns the secret to mail (never stored). Earlier tokens of the same
+ * purpose are deleted, so only the newest link works; the user's spent and expired ones go too.
  */
 export async function issueToken(userId: string, purpose: AuthTokenPurpose, now: Date = new Date()): Promise<string> {
   getSequelize();
   const secret = newTokenSecret();
-  await AuthToken.update({ usedAt: now }, { where: { userId, purpose, usedAt: { [Op.is]: null } } });
+  await AuthToken.destroy({
+    where: { userId, [Op.or]: [{ purpose }, { usedAt: { [Op.not]: null } }, { expiresAt: { [Op.lte]: now } }] },
+  });
   await AuthToken.create({
     userId,
     purpose,
