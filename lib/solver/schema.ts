@@ -4,7 +4,7 @@
  */
 import { z } from "zod";
 import { geometryIssues, LIMITS } from "./beam/checks";
-import type { BeamInput } from "./types";
+import type { BeamInput, LoadCase } from "./types";
 import { LOAD_CASES } from "./types";
 
 function num(unit: string) {
@@ -13,9 +13,9 @@ function num(unit: string) {
   });
 }
 
-const loadCase = z.enum(LOAD_CASES as [string, ...string[]], {
+const loadCase = z.enum(["D", "L", "Lr", "S", "W"] satisfies LoadCase[], {
   error: `must be one of ${LOAD_CASES.map((c) => `"${c}"`).join(", ")}`,
-}) as unknown as z.ZodType<(typeof LOAD_CASES)[number]>;
+});
 
 const supportSchema = z.object({
   x: num("ft"),

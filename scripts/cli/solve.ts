@@ -1,7 +1,6 @@
 // `npm run --silent solve -- FILE`: one beam as JSON in, its analysis as JSON out (issue 3 contract).
 import { BeamInputError, BeamInstabilityError, solve, type SolveOutput } from "../../lib/solver/beam";
 import { beamInputSchema } from "../../lib/solver/schema";
-import type { BeamInput } from "../../lib/solver/types";
 import { CliInputError, describeZodError } from "./errors";
 
 export function run(json: unknown, flags: string[]): SolveOutput {
@@ -9,7 +8,7 @@ export function run(json: unknown, flags: string[]): SolveOutput {
   const parsed = beamInputSchema.safeParse(json);
   if (!parsed.success) throw new CliInputError(describeZodError(parsed.error));
   try {
-    return solve(parsed.data as BeamInput);
+    return solve(parsed.data);
   } catch (err) {
     if (err instanceof BeamInstabilityError || err instanceof BeamInputError) throw new CliInputError(err.message);
     throw err;

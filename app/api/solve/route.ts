@@ -1,7 +1,6 @@
 // POST /api/solve — analyse one beam, no sign-in
 import { BeamInputError, BeamInstabilityError, solve } from "@/lib/solver/beam";
 import { beamInputSchema, issuesOf } from "@/lib/solver/schema";
-import type { BeamInput } from "@/lib/solver/types";
 
 export const runtime = "nodejs";
 
@@ -19,7 +18,7 @@ export async function POST(req: Request): Promise<Response> {
     return Response.json({ error: "invalid input", issues: issuesOf(parsed.error) }, { status: 400 });
   }
   try {
-    return Response.json(solve(parsed.data as BeamInput));
+    return Response.json(solve(parsed.data));
   } catch (err) {
     if (err instanceof BeamInstabilityError) return Response.json({ error: "unstable", message: err.message }, { status: 422 });
     if (err instanceof BeamInputError) return Response.json({ error: "invalid input", issues: err.issues }, { status: 400 });
