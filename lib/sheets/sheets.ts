@@ -72,6 +72,7 @@ export async function saveJobSheet(user: SessionUser, jobId: string, now: Date =
       flowState: m.flowState,
       chosenMember: m.chosenMember ?? m.resultSummary?.spec ?? null,
       savedTables: m.resultSummary?.tables ?? null,
+      savedAnswer: m.resultSummary ? { headline: m.resultSummary.headline, ratio: m.resultSummary.ratio } : null,
     })),
     tables,
     tablesLabel,

@@ -93,6 +93,8 @@ export interface SheetMemberSource {
   chosenMember: MemberSpec | null;
   /** tables version of the answer saved with the member, if any */
   savedTables: string | null;
+  /** the answer saved with the member (Member.resultSummary), to say on the sheet when it has changed since */
+  savedAnswer?: { headline: string; ratio: number } | null;
 }
 
 export interface SheetSource {
@@ -269,16 +271,18 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
   const state = source.flowState;
   const check = checkMember(checkRequest(state, spec), tables);
   const reactions = check.reactions.map((r) => ({ ...r, jackStuds: state.kind === "header" ? r.jackStuds : null }));
-  const note =
-    source.savedTables && source.savedTables !== tables.version
-      ? `This member's saved answer used tables ${source.savedTables}; this sheet checks it again with tables ${tables.version}.`
-      : null;
+  const headline = headlineFor(check.member.spec, check.member.label, reactions, state.kind);
+  const saved = source.savedAnswer;
+  const changed = saved && (saved.headline !== headline || Math.abs(saved.ratio - check.ratio) > 0.005);
+  const note = changed
+    ? `Worked out again for this sheet with the current tables; when the member was saved${source.savedTables ? ` (tables ${source.savedTables})` : ""} it read "${saved.headline}" at ${Math.round(saved.ratio * 100)}%.`
+    : null;
   return {
     id: source.id,
     label: source.label,
     kind: state.kind,
     kindLabel: KIND_LABELS[state.kind],
-    headline: headlineFor(check.member.spec, check.member.label, reactions, state.kind),
+    headline,
     memberLabel: check.member.label,
     pass: check.pass,
     governing: check.governing,

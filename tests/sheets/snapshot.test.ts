@@ -106,6 +106,22 @@ describe("a sheet's snapshot", () => {
     expect(pdfAfter).not.toContain("edited-2026.2");
   });
 
+  test("a member whose answer changed since it was saved says so on the sheet; an unchanged one says nothing", () => {
+    const same = { headline: header.headline, ratio: header.ratio };
+    const build = (savedAnswer: { headline: string; ratio: number }) =>
+      buildSheetSnapshot({
+        job: snap.job,
+        preparedBy: snap.preparedBy,
+        members: [{ id: "m1", label: "H1", kind: "header", flowState: headerState(), chosenMember: HEADER_SPEC, savedTables: "older-tables", savedAnswer }],
+        tables: STARTER_TABLES,
+        now: NOW,
+      }).members[0].note;
+    expect(build(same)).toBeNull();
+    const note = build({ headline: "3-ply 2x12 No.2 — 3 jack studs each end", ratio: 0.5 });
+    expect(note).toContain('it read "3-ply 2x12 No.2 — 3 jack studs each end" at 50%');
+    expect(note).toContain("older-tables");
+  });
+
   test("a member whose inputs no longer check is listed as left out, with the reason", () => {
     const broken = { ...headerState(), supports: [{ x: 0, type: "pin" as const }] };
     const s = snapshotWith(STARTER_TABLES, broken);
