@@ -182,7 +182,7 @@ export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
           <dt className="font-bold">Saved</dt>
           <dd>{formatSheetDate(s.savedAt)}</dd>
           <dt className="font-bold">Material tables</dt>
-          <dd>
+          <dd className="min-w-0">
             {s.tablesLabel}
             <span className="block font-mono text-xs break-all text-graphite">id {s.tablesVersion}</span>
           </dd>

@@ -43,6 +43,9 @@ export async function SheetPanel({ jobId }: SheetPanelProps) {
             ))}
           </ul>
         ) : null}
+        <Link href="/sheets" className="inline-flex min-h-touch w-fit items-center">
+          All your job sheets
+        </Link>
       </div>
     </Card>
   );
