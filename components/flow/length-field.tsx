@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useId, useState } from "react";
+import { useId, useState } from "react";
 import { TextField } from "@/components/ui/field";
 import { formatFeetInches, parseLength } from "@/lib/flow/length";
 
@@ -38,15 +38,13 @@ export function lengthProblem(label: string, text: string, opts: { minFt?: numbe
 export const LENGTH_HINT = `As you measured it: 12' 6", 12-6, 12.5, 150" or 3.8 m`;
 
 export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, exclusiveMin, id, containerClassName }: LengthFieldProps) {
-  const [text, setText] = useState(() => formatFeetInches(valueFt));
-  const [focused, setFocused] = useState(false);
+  // what is being typed; null when the field is not being edited (it then shows the value in feet and inches)
+  const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [echo, setEcho] = useState<string | null>(null);
   const echoId = useId();
-
-  useEffect(() => {
-    if (!focused) setText(formatFeetInches(valueFt));
-  }, [valueFt, focused]);
+  const focused = draft !== null;
+  const text = draft ?? formatFeetInches(valueFt);
 
   const check = (value: string, showError: boolean) => {
     const result = lengthProblem(label, value, { minFt, maxFt, exclusiveMin });
@@ -74,14 +72,14 @@ export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, excl
         spellCheck={false}
         enterKeyHint="done"
         className="figures text-lg"
-        onFocus={() => setFocused(true)}
+        onFocus={() => setDraft(formatFeetInches(valueFt))}
         onChange={(event) => {
-          setText(event.target.value);
+          setDraft(event.target.value);
           check(event.target.value, false);
         }}
         onBlur={() => {
-          setFocused(false);
           check(text, true);
+          setDraft(null);
         }}
         onKeyDown={(event) => {
           if (event.key === "Enter") {

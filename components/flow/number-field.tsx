@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useState } from "react";
+import { useState } from "react";
 import { NumberWithUnitField } from "@/components/ui/field";
 
 export type FlowNumberFieldProps = {
@@ -20,13 +20,10 @@ export type FlowNumberFieldProps = {
 
 /** A number with its unit; each good value is used as it is typed, a bad one says why and is not used. */
 export function FlowNumberField({ label, value, unit, unitSpoken, onCommit, min = 0, max = 1e9, exclusiveMin = false, hint, integer = false, containerClassName }: FlowNumberFieldProps) {
-  const [text, setText] = useState(String(value));
-  const [focused, setFocused] = useState(false);
+  // what is being typed; null when the field is not being edited (it then shows the value itself)
+  const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-
-  useEffect(() => {
-    if (!focused) setText(String(value));
-  }, [value, focused]);
+  const text = draft ?? String(value);
 
   const problem = (raw: string): string | null => {
     const t = raw.trim().replace(/,/g, "");
@@ -61,14 +58,14 @@ export function FlowNumberField({ label, value, unit, unitSpoken, onCommit, min 
       containerClassName={containerClassName}
       inputMode={integer ? "numeric" : "decimal"}
       enterKeyHint="done"
-      onFocus={() => setFocused(true)}
+      onFocus={() => setDraft(String(value))}
       onChange={(event) => {
-        setText(event.target.value);
+        setDraft(event.target.value);
         check(event.target.value, false);
       }}
       onBlur={() => {
-        setFocused(false);
         check(text, true);
+        setDraft(null);
       }}
     />
   );

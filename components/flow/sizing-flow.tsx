@@ -95,23 +95,26 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   const headingRef = useRef<HTMLHeadingElement>(null);
   const lastStep = useRef<FlowStepId>(initial.step);
   const fromPop = useRef(false);
-  const arrived = useRef(false);
+  const storedAtArrival = useRef<string | null | undefined>(undefined);
+  const resumedOnce = useRef(false);
   const { state, step } = location;
   const extra = editing ? { job: editing.jobId, member: editing.memberId } : preferredJobId ? { for: preferredJobId } : {};
 
-  // The URL may hold no state (a plain /size or /size?kind=): resume the stored one when it fits.
+  // The URL may hold no state (a plain /size or /size?kind=): resume the stored one when it fits. Local storage
+  // exists only in the browser, so it is read once the page is there, before this page first writes to it.
   useEffect(() => {
-    if (arrived.current) return;
-    arrived.current = true;
+    if (storedAtArrival.current === undefined) storedAtArrival.current = readStorage();
     if (editing || (from !== "new" && from !== "kind")) return;
-    const start = resolveFlowStart(params, readStorage());
-    if (start.from === "storage") {
+    const frame = requestAnimationFrame(() => {
+      const start = resolveFlowStart(params, storedAtArrival.current ?? null);
+      if (start.from !== "storage" || resumedOnce.current) return;
+      resumedOnce.current = true;
+      lastStep.current = start.location.step;
       setLocation(start.location);
       setResumed(true);
-    }
-    // runs once, on arrival
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, []);
+    });
+    return () => cancelAnimationFrame(frame);
+  }, [editing, from, params]);
 
   // Keep the address bar and local storage in step with every change; a new step is a new history entry.
   useEffect(() => {
