@@ -12,7 +12,7 @@
  * - Deflection is positive downward, in inches; slope is positive clockwise (deflection growing
  *   to the right), in radians.
  * - At a station where V or M jumps, the value just to the right is reported (at the right end,
- *   the value just to the left).
+ *   the value just to the left). Two positions closer than 1e-9 of the length are one point.
  *
  * Worked example: a 10 ft simple span (pin at 0, roller at 10) with P = 1000 lb down at 4 ft.
  * Reactions F = +600 lb at 0 and +400 lb at 10 (both up, M = 0). V = +600 lb left of the load and

@@ -347,9 +347,11 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   for (let i = 0; i < nf; i++) diagMax = Math.max(diagMax, Math.abs(K[free[i] * ndof + free[i]]));
   for (let i = 0; i < nf; i++) for (let j = 0; j <= i; j++) chol[i * nf + j] = K[free[i] * ndof + free[j]];
   for (let j = 0; j < nf; j++) {
-    let d = chol[j * nf + j];
+    // a pivot that vanishes against its own diagonal term means the dof is not held (scale-free test)
+    const kjj = chol[j * nf + j];
+    let d = kjj;
     for (let k = 0; k < j; k++) d -= chol[j * nf + k] * chol[j * nf + k];
-    if (!(d > 1e-11 * diagMax)) {
+    if (!(d > 1e-11 * kjj && kjj > 0 && diagMax > 0)) {
       const n = free[j] >> 1;
       throw new BeamInstabilityError(
         `unstable: the beam can move freely at x = ${formatFt(nodeX[n])} ft — add a support or make one fixed`,

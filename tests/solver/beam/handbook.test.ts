@@ -107,7 +107,7 @@ describe("beams overhanging one support", () => {
     },
   );
 
-  test.each([{ l: 12, a: 4, P: 900 }, { l: 8, a: 2, P: 300 }])(
+  test.each([{ l: 12, a: 4, P: 900 }, { l: 8, a: 2, P: 300 }, { l: 0.5, a: 150, P: 10 }])(
     "Table 3-23 case 26, beam overhanging one support — concentrated load at end of overhang (l=$l, a=$a)",
     ({ l, a, P }) => {
       const r = analyzeBeam(beam(l + a, [pin(0), roller(l)], [{ type: "point", x: l + a, P }]));
