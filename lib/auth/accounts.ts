@@ -195,6 +195,26 @@ export async function authenticate(email: string, password: string, ip: string):
   return { ok: true, user: toSessionUser(user) };
 }
 
+/**
+ * A signed-in account changes its password, giving the current one. Wrong tries count against the same
+ * limits as sign-in. Every session, this one included, ends: the person signs in again with the new one.
+ */
+export async function changePassword(
+  userId: string,
+  currentPassword: string,
+  newPassword: string,
+  ip: string,
+): Promise<"changed" | "wrong-password"> {
+  getSequelize();
+  const user = await User.findByPk(userId);
+  if (!user) throw new HttpError(404, "account not found");
+  const result = await authenticate(user.email, currentPassword, ip);
+  if (!result.ok && result.reason === "rate-limited") throw new RateLimitedError(result.retryAfterSeconds);
+  if (!result.ok && result.reason === "invalid") return "wrong-password";
+  await user.update({ passwordHash: await hashPassword(newPassword), passwordChangedAt: new Date() });
+  return "changed";
+}
+
 export async function updateProfile(userId: string, input: ProfileInput): Promise<SessionUser> {
   getSequelize();
   const user = await User.findByPk(userId);

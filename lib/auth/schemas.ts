@@ -42,6 +42,11 @@ export const VerifySchema = z.object({ token });
 
 export const ResetPasswordSchema = z.object({ token, password: newPassword });
 
+export const ChangePasswordSchema = z.object({
+  currentPassword: z.string({ error: "enter your current password" }).min(1, "enter your current password").max(200, "that password is too long"),
+  newPassword,
+});
+
 export const ProfileSchema = z.object({ name, company });
 export type ProfileInput = z.infer<typeof ProfileSchema>;
 

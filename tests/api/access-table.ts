@@ -81,6 +81,13 @@ export const ACCESS_TABLE: AccessRow[] = [
   },
   {
     method: "ACTION",
+    path: "components/auth/actions.ts#changePassword",
+    allowed: SIGNED_IN,
+    note: "the caller's own password, given the current one",
+    args: [{ currentPassword: "builder-demo-pass", newPassword: "a new long password" }],
+  },
+  {
+    method: "ACTION",
     path: "components/admin/users/actions.ts#changeUserRole",
     allowed: ["admin"],
     args: [{ userId: "8f0c2a34-8d47-4c1e-9a55-3f6c1b2d4e5f", role: "admin" }],

@@ -5,7 +5,7 @@ import { TEST_DB, lastMailTo, makeUser, outbox, sendMailMock, tokenFrom, uniqueE
 vi.mock("@/lib/mail", () => ({ sendMail: sendMailMock }));
 
 const { issueToken, consumeToken, TOKEN_LIFETIME_MS } = await import("@/lib/auth/tokens");
-const { authenticate, requestPasswordReset, resetPassword, signUp, verifyEmail } = await import("@/lib/auth/accounts");
+const { authenticate, changePassword, requestPasswordReset, resetPassword, signUp, verifyEmail } = await import("@/lib/auth/accounts");
 const { settleBackground } = await import("@/lib/auth/background");
 const { AuthToken } = await import("@/models/auth-token");
 const { User } = await import("@/models/user");
@@ -117,5 +117,15 @@ describe.skipIf(!TEST_DB)("the flows that use them", () => {
     const token = await issueToken(user.id, "reset-password", new Date(Date.now() - 2 * HOUR));
     expect(await resetPassword(token, "the-new-password")).toBe(false);
     expect((await authenticate(user.email, "the-old-password", uniqueIp())).ok).toBe(true);
+  });
+
+  test("change password while signed in: the current one is needed; afterwards only the new one works", async () => {
+    const user = await makeUser({ password: "the-old-password" });
+    expect(await changePassword(user.id, "not-the-old-one", "the-new-password", uniqueIp())).toBe("wrong-password");
+    expect(await changePassword(user.id, "the-old-password", "the-new-password", uniqueIp())).toBe("changed");
+    expect(await authenticate(user.email, "the-old-password", uniqueIp())).toEqual({ ok: false, reason: "invalid" });
+    expect((await authenticate(user.email, "the-new-password", uniqueIp())).ok).toBe(true);
+    await user.reload();
+    expect(user.passwordChangedAt).toBeInstanceOf(Date);
   });
 });

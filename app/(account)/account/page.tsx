@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import { ChangePasswordForm } from "@/components/auth/change-password-form";
 import { ProfileForm } from "@/components/auth/profile-form";
 import { SignOutButton } from "@/components/auth/sign-out-button";
 import { Card, CardLink } from "@/components/ui/card";
@@ -31,6 +32,10 @@ export default async function AccountPage() {
 
       <Card title="Name and company">
         <ProfileForm name={user.name} company={user.company} />
+      </Card>
+
+      <Card title="Password">
+        <ChangePasswordForm />
       </Card>
 
       <Card title="Plan">
