@@ -94,7 +94,7 @@ async function makePersonas(): Promise<void> {
       await getSequelize().query(
         `INSERT INTO users (id, email, password_hash, name, company, role, email_verified_at, created_at, updated_at)
          VALUES (:id, :email, 'not-a-hash', :name, NULL, :role, now(), now(), now())`,
-        { replacements: user },
+        { replacements: { ...user } },
       );
     }
     personas.set(role, user);
