@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useMemo, useState } from "react";
+import { useEffect, useMemo, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
 import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
 import { Skeleton, Spinner } from "@/components/ui/spinner";
@@ -28,6 +28,8 @@ export type AnswerProps = {
   onGoTo: (step: FlowStepId) => void;
   /** "full" on the answer step; "live" beside the inputs on a wide screen */
   variant?: "full" | "live";
+  /** an action beside the answer on wide screens (on a phone it sits in the bottom bar) */
+  action?: ReactNode;
 };
 
 const SHOWN = 5;
@@ -116,7 +118,7 @@ function CandidateCard({ candidate, check, chosen, onOpen }: { candidate: SizeCa
 }
 
 /** Step 5: the answer first, then the members that work, the supports and the diagrams. */
-export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant = "full" }: AnswerProps) {
+export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant = "full", action }: AnswerProps) {
   const size = useSize(state);
   const passing = size.data?.passing ?? [];
   const shown = passing.slice(0, variant === "full" ? SHOWN : 1);
@@ -168,6 +170,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                   {checkTitle(chosenCandidate.governing)} governs · {chosenCandidate.label}
                 </span>
               </p>
+              {action ? <div className="mt-3 hidden md:block">{action}</div> : null}
             </>
           ) : size.data ? (
             <>

@@ -169,13 +169,23 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
     </span>
   );
 
+  const saveAction = signedIn ? (
+    <Button size="lg" className="px-3" onClick={() => setSaveOpen(true)} disabled={!chosenCheck}>
+      {editing ? "Save the changes" : "Save to a job"}
+    </Button>
+  ) : (
+    <ButtonLink size="lg" className="px-3 whitespace-nowrap" href={`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`}>
+      Sign in to save
+    </ButtonLink>
+  );
+
   const stepBody = (
     <>
       {step === "kind" ? <StepKind kind={state.kind} onChange={onKind} /> : null}
       {step === "span" ? <StepSpan state={state} update={update} /> : null}
       {step === "loads" ? <StepLoads state={state} update={update} /> : null}
       {step === "material" ? <StepMaterial state={state} update={update} /> : null}
-      {step === "answer" ? <Answer state={state} chosen={chosen} onChoose={setChosen} onChosenCheck={setChosenCheck} onGoTo={goTo} /> : null}
+      {step === "answer" ? <Answer state={state} chosen={chosen} onChoose={setChosen} onChosenCheck={setChosenCheck} onGoTo={goTo} action={saveAction} /> : null}
     </>
   );
 
@@ -237,14 +247,8 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
           <Button size="lg" className="px-3" onClick={() => goTo(next)}>
             {next === "answer" ? "See the answer" : `Next: ${STEP_TITLES[next]}`}
           </Button>
-        ) : signedIn ? (
-          <Button size="lg" className="px-3" onClick={() => setSaveOpen(true)} disabled={!chosenCheck}>
-            {editing ? "Save the changes" : "Save to a job"}
-          </Button>
         ) : (
-          <ButtonLink size="lg" className="px-3 whitespace-nowrap" href={`/sign-in?callbackUrl=${encodeURIComponent(returnTo)}`}>
-            Sign in to save
-          </ButtonLink>
+          saveAction
         )}
       </BottomActionBar>
 
