@@ -31,7 +31,10 @@ async function waitForAnswer(page: Page): Promise<string> {
 
 describe("sizing flow at 390x844", () => {
   test("a 10 ft header under a bearing wall and a 13 ft floor joist at 16 in, saved to a job", async () => {
-    const { page, screenshot, consoleErrors, goto } = await session.open("/size", { viewport: "phone", allowConsole: [/401|Unauthorized/, /favicon\.ico/] });
+    const { page, context, screenshot, consoleErrors, goto } = await session.open(null, { viewport: "phone", allowConsole: [/401|Unauthorized/] });
+    // the browser asks for /favicon.ico on its own; the app's icon is app/icon.svg
+    await context.route("**/favicon.ico", (route) => route.fulfill({ status: 204 }));
+    await goto("/size");
 
     // Step 1: the kind
     await page.getByRole("heading", { name: /Step 1 of 5/ }).waitFor();
@@ -134,7 +137,9 @@ describe("sizing flow at 390x844", () => {
   }, 180_000);
 
   test("every step side by side on a desktop (1280x800)", async () => {
-    const { page, screenshot, consoleErrors } = await session.open("/size?kind=header", { viewport: "desktop", allowConsole: [/favicon\.ico/] });
+    const { page, context, screenshot, consoleErrors, goto } = await session.open(null, { viewport: "desktop" });
+    await context.route("**/favicon.ico", (route) => route.fulfill({ status: 204 }));
+    await goto("/size?kind=header");
     await typeLength(page, /^Span \(between supports\)/, "10-0");
     // the live answer sits beside the inputs
     await page.getByRole("complementary", { name: "Answer so far" }).getByTestId("answer-headline").waitFor({ timeout: 30_000 });
