@@ -1,14 +1,16 @@
-// Crew links and job sheets in Chromium at 390x844: the demo subscriber makes a crew link on the job page,
+// Crew links and job sheets in Chromium at 390x844: the demo subscriber makes a crew link on the job page and
+// e-mails it (read back from the mail sink),
 // a crew member opens it signed out (schedule and caution, nothing to edit), the link is revoked (404); the
 // subscriber saves a job sheet and downloads its PDF; a free builder is told what sheets need. Screenshots go
 // to tests/artifacts/, with the PDF and, where poppler is installed, its first pages as PNG.
 import { execFileSync } from "node:child_process";
 import { readFile, writeFile } from "node:fs/promises";
 import path from "node:path";
+import { randomUUID } from "node:crypto";
 import { describe, expect, test } from "vitest";
 import { CAUTION_TEXT } from "@/components/ui/caution-text";
 import { ARTIFACTS_DIR, baseUrl, setupBrowser } from "./support/browser";
-import { signIn } from "./support/payments";
+import { signIn, waitForMail } from "./support/payments";
 import { hasPdftotext, isPdf, pdfStreamText } from "../sheets/pdf-text";
 
 const session = setupBrowser();
@@ -39,8 +41,18 @@ describe("crew link at 390x844", () => {
     await expect.poll(() => rows.count(), { timeout: 15_000 }).toBe(before + 1);
     const link = await rows.first().getByTestId("crew-link-url").inputValue();
     expect(link).toMatch(/\/crew\/[A-Za-z0-9_-]{43}$/);
-    await panel.scrollIntoViewIfNeeded();
-    await owner.screenshot("crew-sheets-1-job-page-crew-link", { fullPage: true });
+    // e-mail it (template job-shared, through the local mail sink)
+    const framer = `framer-${randomUUID().slice(0, 8)}@larkfield-crew.test`;
+    await rows.first().getByRole("button", { name: "E-mail it" }).click();
+    await rows.first().getByLabel("Send to").fill(framer);
+    await rows.first().getByLabel("Note (optional)").fill("Headers go in Monday.");
+    await rows.first().getByRole("button", { name: "Send" }).click();
+    await owner.page.getByText(`Crew link sent to ${framer}.`).waitFor();
+    const mail = await waitForMail(framer, /Marsh Lane addition/);
+    expect(mail.text).toContain(link);
+    expect(mail.text).toContain("Headers go in Monday.");
+    await rows.first().scrollIntoViewIfNeeded();
+    await owner.screenshot("crew-sheets-1-job-page-crew-link", { fullPage: false });
 
     // the crew: a fresh browser, no account
     const crewPath = new URL(link).pathname;
