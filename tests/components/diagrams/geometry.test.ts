@@ -140,6 +140,6 @@ describe("overhang and partial loads", () => {
     expect(d.match(/M/g)?.length).toBe(1);
     expect(d.match(/C/g)?.length).toBe(chain.pieces.length);
     const numbers = d.match(/-?\d+(\.\d+)?(e-?\d+)?/g)?.map(Number) ?? [];
-    expect(numbers.every((n) => Number.isFinite(n) && n >= -1 && n <= 641)).toBe(true);
+    expect(numbers.every((n) => Number.isFinite(n) && n >= -1 && n <= 421)).toBe(true);
   });
 });
