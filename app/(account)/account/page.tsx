@@ -34,10 +34,6 @@ export default async function AccountPage() {
         <ProfileForm name={user.name} company={user.company} />
       </Card>
 
-      <Card title="Password">
-        <ChangePasswordForm />
-      </Card>
-
       <Card title="Plan">
         <p className="font-bold" data-testid="account-role">
           {role.name}
@@ -55,6 +51,10 @@ export default async function AccountPage() {
           </CardLink>
         ) : null}
       </div>
+
+      <Card title="Password">
+        <ChangePasswordForm />
+      </Card>
 
       <Card title="Sign out">
         <p className="mb-3 text-ink-soft">Signs out on this device only. Your jobs stay saved.</p>
