@@ -8,8 +8,8 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { headlineFor, shortLabel, spacingOf } from "@/lib/flow/summary";
-import { KIND_LABELS, mainSpanFt, type FlowState, type FlowStepId } from "@/lib/flow/state";
+import { headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
+import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
@@ -152,7 +152,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
           The answer
         </h2>
         <p className="text-ink-soft tabular-nums">
-          {KIND_LABELS[state.kind]}, {formatFeetInches(mainSpanFt(state))} span
+          {KIND_LABELS[state.kind]}, {spanWords(state)}
           <span className="ml-2 inline-flex h-5 w-5 align-middle">{busy ? <Spinner size="sm" label="Working out the answer" /> : null}</span>
         </p>
         <div className="min-h-[7.5rem] rounded-card border-2 border-ink bg-paper-raised p-4" aria-live="polite">

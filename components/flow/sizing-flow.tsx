@@ -6,8 +6,8 @@ import { Button, ButtonLink } from "@/components/ui/button";
 import { CheckIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { defaultFlowState } from "@/lib/flow/defaults";
-import { formatFeetInches } from "@/lib/flow/length";
-import { FLOW_STEPS, KIND_LABELS, STEP_TITLES, mainSpanFt, type FlowLocation, type FlowState, type FlowStepId, type MemberKind } from "@/lib/flow/state";
+import { FLOW_STEPS, KIND_LABELS, STEP_TITLES, type FlowLocation, type FlowState, type FlowStepId, type MemberKind } from "@/lib/flow/state";
+import { spanWords } from "@/lib/flow/summary";
 import { flowSearch, resolveFlowStart, STORAGE_KEY, storeLocation, type FlowStart } from "@/lib/flow/url";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -165,7 +165,7 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   const returnTo = `/size${flowSearch({ state, step: "answer" }, extra)}&save=1`;
   const summaryLine = (
     <span className="font-bold tabular-nums">
-      {KIND_LABELS[state.kind]} · {formatFeetInches(mainSpanFt(state))} span
+      {KIND_LABELS[state.kind]} · {spanWords(state)}
     </span>
   );
 

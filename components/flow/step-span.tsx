@@ -102,14 +102,14 @@ export function StepSpan({ state, update }: StepSpanProps) {
             maxFt={state.lengthFt}
             onCommit={(ft) => moveSupport(sel, ft)}
           />
-          <div className="flex flex-wrap gap-2" role="group" aria-label="Nudge the support">
+          <div className="grid grid-cols-4 gap-2" role="group" aria-label="Nudge the support">
             {[
               { d: -1, t: "← 1 ft" },
               { d: -1 / 12, t: "← 1 in" },
               { d: 1 / 12, t: "1 in →" },
               { d: 1, t: "1 ft →" },
             ].map(({ d, t }) => (
-              <Button key={t} variant="secondary" onClick={() => moveSupport(sel, state.supports[sel].x + d)}>
+              <Button key={t} variant="secondary" className="px-1 whitespace-nowrap" onClick={() => moveSupport(sel, state.supports[sel].x + d)}>
                 {t}
               </Button>
             ))}

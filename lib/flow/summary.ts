@@ -6,7 +6,7 @@
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import { formatFeetInches, formatInches } from "./length";
-import { mainSpanFt, type FlowState } from "./state";
+import { mainSpanFt, overhangs, spansFt, type FlowState } from "./state";
 
 export interface SummaryReaction {
   /** ft from the left end */
@@ -113,7 +113,11 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
   };
 }
 
-/** "10' 0" span" with any overhangs, for list rows. */
+/** "10' 0" span", "spans 7' 0" + 5' 0"", with any overhang: "12' 0" span, 1' 6" overhang". */
 export function spanWords(state: FlowState): string {
-  return `${formatFeetInches(mainSpanFt(state))} span`;
+  const spans = spansFt(state);
+  const hang = overhangs(state);
+  const main = spans.length > 1 ? `spans ${spans.map(formatFeetInches).join(" + ")}` : `${formatFeetInches(spans[0] ?? state.lengthFt)} span`;
+  const hangs = [hang.left, hang.right].filter((h) => h > 1e-9).map((h) => `${formatFeetInches(h)} overhang`);
+  return [main, ...hangs].join(", ");
 }

@@ -3,7 +3,7 @@ import { defaultFlowState } from "@/lib/flow/defaults";
 import { combinationFactors, designLoads, sizeFamily, sizeRequest } from "@/lib/flow/request";
 import { flowStateIssues, parseFlowState } from "@/lib/flow/schema";
 import { mainSpanFt, MEMBER_KINDS, overhangs, withMainSpan, withOverhang, type FlowState } from "@/lib/flow/state";
-import { headlineFor, supportWords } from "@/lib/flow/summary";
+import { headlineFor, spanWords, supportWords } from "@/lib/flow/summary";
 import { decodeFlowState, encodeFlowState, readStoredLocation, resolveFlowStart, storeLocation } from "@/lib/flow/url";
 import { sizeInputSchema } from "@/lib/solver/design/schema";
 import { asdCombinations } from "@/lib/solver/asce7/combinations";
@@ -52,6 +52,13 @@ describe("span and overhang edits keep the layout", () => {
     expect(overhangs(s)).toEqual({ left: 2, right: 1.5 });
     expect(mainSpanFt(s)).toBe(11);
     expect(s.lengthFt).toBe(14.5);
+  });
+
+  test("the span in words: one span, two spans, an overhang", () => {
+    expect(spanWords(withMainSpan(defaultFlowState("header"), 10))).toBe(`10' 0" span`);
+    const twoSpans: FlowState = { ...withMainSpan(defaultFlowState("floor-joist"), 12), supports: [{ x: 0, type: "pin" }, { x: 7, type: "roller" }, { x: 12, type: "roller" }] };
+    expect(spanWords(twoSpans)).toBe(`spans 7' 0" + 5' 0"`);
+    expect(spanWords(withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5))).toBe(`11' 0" span, 1' 6" overhang`);
   });
 
   test("point loads stay on the member when it gets shorter", () => {
