@@ -87,7 +87,7 @@ class Analysis implements BeamAnalysis {
   private segCache: Segment[] | null = null;
   private extCache: BeamExtremes | null = null;
   private spanCache: SpanResult[] | null = null;
-  private perSeg: Float64Array | null = null;
+  private perSeg: number[] | null = null;
 
   constructor(prep: PreparedBeam, resp: Response) {
     this.prep = prep;
@@ -184,11 +184,11 @@ class Analysis implements BeamAnalysis {
   }
 
   /** Per segment: Mmax, x, Mmin, x, V (largest |V|), x, Dmax, x, Dmin, x. */
-  private segmentExtremes(): Float64Array {
+  private segmentExtremes(): number[] {
     if (this.perSeg) return this.perSeg;
     const { bp, nseg } = this.prep;
     const f = this.field;
-    const out = new Float64Array(nseg * SEG_FIELDS);
+    const out: number[] = new Array<number>(nseg * SEG_FIELDS).fill(0);
     for (let s = 0; s < nseg; s++) {
       const o = s * STRIDE;
       const x0 = bp[s];

@@ -64,15 +64,19 @@ export interface PreparedBeam {
   /** lb·ft² */
   EI: number;
   tol: number;
-  bp: Float64Array;
+  // Plain arrays, not typed arrays: allocating many small typed arrays costs more than the
+  // arithmetic of a small beam.
+  bp: number[];
   nseg: number;
   /** node index at a breakpoint, or -1 */
-  bpNode: Int32Array;
-  nodeX: Float64Array;
+  bpNode: number[];
+  nodeX: number[];
   ndof: number;
-  K: Float64Array;
-  free: Int32Array;
-  chol: Float64Array;
+  /** stiffness, row-major ndof × ndof */
+  K: number[];
+  free: number[];
+  /** Cholesky factor of K_ff, row-major, lower triangle */
+  chol: number[];
   supports: PreparedSupport[];
   regions: Region[];
   pieces: Piece[];
@@ -85,7 +89,7 @@ export interface Response {
   reactions: Float64Array;
 }
 
-function lowerBound(a: Float64Array, x: number): number {
+function lowerBound(a: readonly number[], x: number): number {
   let lo = 0;
   let hi = a.length;
   while (lo < hi) {
@@ -97,7 +101,7 @@ function lowerBound(a: Float64Array, x: number): number {
 }
 
 /** Index of the breakpoint at x (within the same-point tolerance). */
-export function bpIndex(bp: Float64Array, x: number, tol: number): number {
+export function bpIndex(bp: readonly number[], x: number, tol: number): number {
   const i = lowerBound(bp, x - tol);
   return i < bp.length && Math.abs(bp[i] - x) <= tol ? i : Math.min(i, bp.length - 1);
 }
@@ -135,7 +139,24 @@ function shape(t: number, Le: number, out: Float64Array): void {
   out[7] = -2 * r + 3 * r2;
 }
 
-function elementOf(nodeX: Float64Array, x: number): number {
+/** Ascending sort in place; insertion sort for the short lists of a beam (no runtime call). */
+function sortAscending(a: number[], n: number): void {
+  if (n > 48) {
+    a.sort((p, q) => p - q);
+    return;
+  }
+  for (let i = 1; i < n; i++) {
+    const v = a[i];
+    let j = i - 1;
+    while (j >= 0 && a[j] > v) {
+      a[j + 1] = a[j];
+      j--;
+    }
+    a[j + 1] = v;
+  }
+}
+
+function elementOf(nodeX: readonly number[], x: number): number {
   let e = 0;
   while (e < nodeX.length - 2 && x >= nodeX[e + 1]) e++;
   return e;
@@ -146,7 +167,7 @@ function regionOf(regions: Region[], x: number, tol: number): number {
   return regions.length - 1;
 }
 
-function addRegion(regions: Region[], bp: Float64Array, tol: number, from: number, to: number, kind: RegionKind): void {
+function addRegion(regions: Region[], bp: readonly number[], tol: number, from: number, to: number, kind: RegionKind): void {
   let spanNo = 0;
   if (kind === "span") {
     spanNo = 1;
@@ -162,8 +183,8 @@ function concentratedPiece(
   loadCase: LoadCase,
   region: number,
   b: number,
-  bpNode: Int32Array,
-  nodeX: Float64Array,
+  bpNode: readonly number[],
+  nodeX: readonly number[],
   x: number,
   mag: number,
   moment: boolean,
@@ -188,9 +209,9 @@ function distributedPiece(
   source: number,
   loadCase: LoadCase,
   region: number,
-  bp: Float64Array,
+  bp: readonly number[],
   tol: number,
-  nodeX: Float64Array,
+  nodeX: readonly number[],
   a: number,
   b: number,
   x0: number,
@@ -254,7 +275,7 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   // Breakpoints: ends, supports, load points and load ends, merged within tol.
   let nraw = 2 + inSup.length;
   for (const ld of loads) nraw += ld.type === "point" || ld.type === "moment" ? 1 : 2;
-  const raw = new Float64Array(nraw);
+  const raw: number[] = new Array<number>(nraw);
   let r = 0;
   raw[r++] = 0;
   raw[r++] = L;
@@ -266,16 +287,17 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
       raw[r++] = ld.to;
     }
   }
-  raw.sort();
+  sortAscending(raw, nraw);
   let nbp = 0;
   for (let i = 0; i < nraw; i++) if (nbp === 0 || raw[i] - raw[nbp - 1] > tol) raw[nbp++] = raw[i];
-  const bp = raw.subarray(0, nbp);
+  raw.length = nbp;
+  const bp = raw;
   bp[0] = 0;
   bp[nbp - 1] = L;
   const nseg = nbp - 1;
 
   // Nodes: member ends and supports.
-  const bpNode = new Int32Array(nbp).fill(-1);
+  const bpNode: number[] = new Array<number>(nbp).fill(-1);
   bpNode[0] = 1;
   bpNode[nbp - 1] = 1;
   const supBp: number[] = new Array<number>(inSup.length);
@@ -286,9 +308,7 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   let nn = 0;
   for (let b = 0; b < nbp; b++) if (bpNode[b] === 1) nn++;
   const ndof = 2 * nn;
-  // nodeX, K, the Cholesky factor and the sorted support positions share one buffer
-  const mats = new Float64Array(nn + 2 * ndof * ndof + inSup.length);
-  const nodeX = mats.subarray(0, nn);
+  const nodeX: number[] = new Array<number>(nn).fill(0);
   nn = 0;
   for (let b = 0; b < nbp; b++) {
     if (bpNode[b] === 1) {
@@ -298,7 +318,7 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   }
 
   // Stiffness: dof 2n is the deflection (down), 2n+1 the slope (clockwise) at node n.
-  const K = mats.subarray(nn, nn + ndof * ndof);
+  const K: number[] = new Array<number>(ndof * ndof).fill(0);
   for (let e = 0; e < nn - 1; e++) {
     const Le = nodeX[e + 1] - nodeX[e];
     const c = EI / (Le * Le * Le);
@@ -337,12 +357,12 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   }
   let nf = 0;
   for (let d = 0; d < ndof; d++) if (!restrained[d]) nf++;
-  const free = new Int32Array(nf);
+  const free: number[] = new Array<number>(nf).fill(0);
   nf = 0;
   for (let d = 0; d < ndof; d++) if (!restrained[d]) free[nf++] = d;
 
   // Cholesky factor of K_ff (lower triangle, row-major); a vanishing pivot means a mechanism.
-  const chol = mats.subarray(nn + ndof * ndof, nn + ndof * ndof + nf * nf);
+  const chol: number[] = new Array<number>(nf * nf).fill(0);
   let diagMax = 0;
   for (let i = 0; i < nf; i++) diagMax = Math.max(diagMax, Math.abs(K[free[i] * ndof + free[i]]));
   for (let i = 0; i < nf; i++) for (let j = 0; j <= i; j++) chol[i * nf + j] = K[free[i] * ndof + free[j]];
@@ -367,9 +387,9 @@ export function prepareBeam(input: BeamInput): PreparedBeam {
   }
 
   // Regions: overhangs and spans between supports, left to right.
-  const supXs = mats.subarray(nn + 2 * ndof * ndof);
+  const supXs: number[] = new Array<number>(supports.length).fill(0);
   for (let i = 0; i < supports.length; i++) supXs[i] = supports[i].x;
-  supXs.sort();
+  sortAscending(supXs, supXs.length);
   const ns = supXs.length;
   const regions: Region[] = [];
   if (supXs[0] > 0) addRegion(regions, bp, tol, 0, supXs[0], "overhang-left");
@@ -411,59 +431,58 @@ export function respond(prep: PreparedBeam, weights: ArrayLike<number>): Respons
   const { bp, nseg, bpNode, ndof, K, free, chol, supports, pieces, EI } = prep;
   const nbp = nseg + 1;
   const nf = free.length;
-  // one scratch buffer for the working arrays (a typed array's own buffer is costly to allocate)
-  const scratch = new Float64Array(2 * ndof + 2 * nbp + 2 * nseg + nf);
-  let off = 0;
-  const take = (n: number): Float64Array => scratch.subarray(off, (off += n));
-  const f = take(ndof);
-  const jumpV = take(nbp);
-  const jumpM = take(nbp);
-  const q = take(2 * nseg);
-  const y = take(nf);
-  const d = take(ndof);
+  // One scratch array with fixed offsets (no views: creating a typed-array view costs more than
+  // the arithmetic here): f | jumpV | jumpM | q | y | d.
+  const w: number[] = new Array<number>(2 * ndof + 2 * nbp + 2 * nseg + nf).fill(0);
+  const F0 = 0;
+  const JV = ndof;
+  const JM = JV + nbp;
+  const Q = JM + nbp;
+  const Y = Q + 2 * nseg;
+  const D = Y + nf;
   for (let p = 0; p < pieces.length; p++) {
     const c = weights[p];
     if (c === 0) continue;
     const pc = pieces[p];
-    for (let i = 0; i < pc.fDof.length; i++) f[pc.fDof[i]] += c * pc.fVal[i];
+    for (let i = 0; i < pc.fDof.length; i++) w[F0 + pc.fDof[i]] += c * pc.fVal[i];
     if (pc.bp >= 0) {
-      jumpV[pc.bp] += c * pc.dV;
-      jumpM[pc.bp] += c * pc.dM;
+      w[JV + pc.bp] += c * pc.dV;
+      w[JM + pc.bp] += c * pc.dM;
     } else {
       for (let s = pc.segFrom; s < pc.segTo; s++) {
-        q[2 * s] += c * (pc.wa + pc.k * (bp[s] - pc.xa));
-        q[2 * s + 1] += c * pc.k;
+        w[Q + 2 * s] += c * (pc.wa + pc.k * (bp[s] - pc.xa));
+        w[Q + 2 * s + 1] += c * pc.k;
       }
     }
   }
   // Solve K_ff d_f = f_f with the Cholesky factor.
   for (let i = 0; i < nf; i++) {
-    let s = f[free[i]];
-    for (let k = 0; k < i; k++) s -= chol[i * nf + k] * y[k];
-    y[i] = s / chol[i * nf + i];
+    let s = w[F0 + free[i]];
+    for (let k = 0; k < i; k++) s -= chol[i * nf + k] * w[Y + k];
+    w[Y + i] = s / chol[i * nf + i];
   }
   for (let i = nf - 1; i >= 0; i--) {
-    let s = y[i];
-    for (let k = i + 1; k < nf; k++) s -= chol[k * nf + i] * y[k];
-    y[i] = s / chol[i * nf + i];
+    let s = w[Y + i];
+    for (let k = i + 1; k < nf; k++) s -= chol[k * nf + i] * w[Y + k];
+    w[Y + i] = s / chol[i * nf + i];
   }
-  for (let i = 0; i < nf; i++) d[free[i]] = y[i];
+  for (let i = 0; i < nf; i++) w[D + free[i]] = w[Y + i];
 
   // Reactions r = K d − f at the restrained dofs; F is up (the dof is down), M clockwise.
   const reactions = new Float64Array(2 * supports.length);
   for (let i = 0; i < supports.length; i++) {
     const s = supports[i];
     const rowV = 2 * s.node * ndof;
-    let rv = -f[2 * s.node];
-    for (let j = 0; j < ndof; j++) rv += K[rowV + j] * d[j];
+    let rv = -w[F0 + 2 * s.node];
+    for (let j = 0; j < ndof; j++) rv += K[rowV + j] * w[D + j];
     reactions[2 * i] = -rv;
-    jumpV[s.bp] -= rv;
+    w[JV + s.bp] -= rv;
     if (s.type === "fixed") {
       const rowT = rowV + ndof;
-      let rt = -f[2 * s.node + 1];
-      for (let j = 0; j < ndof; j++) rt += K[rowT + j] * d[j];
+      let rt = -w[F0 + 2 * s.node + 1];
+      for (let j = 0; j < ndof; j++) rt += K[rowT + j] * w[D + j];
       reactions[2 * i + 1] = rt;
-      jumpM[s.bp] += rt;
+      w[JM + s.bp] += rt;
     }
   }
 
@@ -475,15 +494,15 @@ export function respond(prep: PreparedBeam, weights: ArrayLike<number>): Respons
   let th = 0;
   let yv = 0;
   for (let s = 0; s < nseg; s++) {
-    V += jumpV[s];
-    M += jumpM[s];
+    V += w[JV + s];
+    M += w[JM + s];
     const node = bpNode[s];
     if (node >= 0) {
-      yv = d[2 * node];
-      th = d[2 * node + 1];
+      yv = w[D + 2 * node];
+      th = w[D + 2 * node + 1];
     }
-    const q0 = q[2 * s];
-    const q1 = q[2 * s + 1];
+    const q0 = w[Q + 2 * s];
+    const q1 = w[Q + 2 * s + 1];
     const h = bp[s + 1] - bp[s];
     const o = s * STRIDE;
     field[o + OFF_V] = V;
