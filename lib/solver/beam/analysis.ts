@@ -66,7 +66,10 @@ export interface BeamAnalysis {
   reactions: Reaction[];
   /** V, M, slope, deflection at x (ft); just to the right of a jump (just to the left at the right end) */
   evaluate(x: number): Station;
-  /** the same for many stations, written into parallel arrays */
+  /**
+   * The same for many stations, written into parallel arrays; pass `out` (arrays at least
+   * xs.length long, e.g. from an earlier call) to allocate nothing. Ascending stations are fastest.
+   */
   evaluateMany(xs: ArrayLike<number>, out?: StationArrays): StationArrays;
   segments: Segment[];
   extremes: BeamExtremes;
