@@ -5,6 +5,7 @@ import { useRouter } from "next/navigation";
 import { useState, useTransition, type ReactNode } from "react";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
+import { SelectField } from "@/components/ui/field";
 import { EmptyState } from "@/components/ui/empty-state";
 import { PageHeader } from "@/components/ui/page-header";
 import { StatusBadge } from "@/components/ui/status-badge";
@@ -13,7 +14,7 @@ import { ratioVerdict } from "@/components/ui/ratio-bar";
 import { PlusIcon } from "@/components/ui/icons";
 import { formatFeetInches } from "@/lib/flow/length";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
-import { deleteJob, deleteMember, duplicateJob, duplicateMember, restoreJob, restoreMember } from "./actions";
+import { deleteJob, deleteMember, duplicateJob, duplicateMember, restoreJob, restoreMember, updateMember } from "./actions";
 import { JobForm } from "./job-form";
 
 export type JobPageMember = {
@@ -27,6 +28,7 @@ export type JobPageMember = {
   spanFt: number | null;
   /** the label of the member that carries this one */
   carriedBy: string | null;
+  carriedById?: string | null;
 };
 
 export type JobPageProps = {
@@ -115,6 +117,22 @@ export function JobPage({ job, children }: JobPageProps) {
                     {verdict ? <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} /> : <StatusBadge status="caution" label="Not sized" />}
                   </div>
                   <p className="text-xl font-bold text-ink">{m.headline ?? "Nothing in the tables worked for these inputs."}</p>
+                  {job.members.length > 1 ? (
+                    <SelectField
+                      label="Bears on"
+                      options={[{ value: "", label: "A wall, post or footing" }, ...job.members.filter((c) => c.id !== m.id).map((c) => ({ value: c.id, label: c.label }))]}
+                      value={m.carriedById ?? ""}
+                      disabled={pending}
+                      onChange={(event) => {
+                        const carriedByMemberId = event.target.value || null;
+                        run(async () => {
+                          const result = await updateMember({ memberId: m.id, carriedByMemberId });
+                          if (!result.ok) setProblem(result.error);
+                          router.refresh();
+                        });
+                      }}
+                    />
+                  ) : null}
                   <div className="flex flex-wrap gap-2">
                     <ButtonLink href={`/size?job=${job.id}&member=${m.id}`} variant="secondary">
                       Edit

@@ -34,6 +34,7 @@ export default async function JobRoute({ params }: JobRouteProps) {
           governing: m.resultSummary?.governing ?? null,
           spanFt: m.resultSummary?.spanFt ?? null,
           carriedBy: m.carriedByMemberId ? (job.members.find((c) => c.id === m.carriedByMemberId)?.label ?? null) : null,
+          carriedById: m.carriedByMemberId,
         })),
       }}
     >
