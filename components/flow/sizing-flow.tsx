@@ -1,6 +1,6 @@
 "use client";
 
-import { useCallback, useEffect, useRef, useState } from "react";
+import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { BottomActionBar } from "@/components/ui/bottom-action-bar";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { CheckIcon } from "@/components/ui/icons";
@@ -98,7 +98,13 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   const storedAtArrival = useRef<string | null | undefined>(undefined);
   const resumedOnce = useRef(false);
   const { state, step } = location;
-  const extra = editing ? { job: editing.jobId, member: editing.memberId } : preferredJobId ? { for: preferredJobId } : {};
+  const editJob = editing?.jobId;
+  const editMember = editing?.memberId;
+  const extra = useMemo(
+    () => (editJob && editMember ? { job: editJob, member: editMember } : preferredJobId ? { for: preferredJobId } : {}),
+    [editJob, editMember, preferredJobId],
+  );
+  const isEditing = editing !== null;
 
   // The URL may hold no state (a plain /size or /size?kind=): resume the stored one when it fits. Local storage
   // exists only in the browser, so it is read once the page is there, before this page first writes to it.
@@ -127,9 +133,8 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
       window.history.replaceState(null, "", url);
     }
     lastStep.current = location.step;
-    if (!editing) writeStorage(storeLocation(location));
-    // eslint-disable-next-line react-hooks/exhaustive-deps
-  }, [location]);
+    if (!isEditing) writeStorage(storeLocation(location));
+  }, [location, extra, isEditing]);
 
   useEffect(() => {
     const onPop = () => {
