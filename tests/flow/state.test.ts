@@ -7,6 +7,8 @@ import { headlineFor, spanWords, supportWords } from "@/lib/flow/summary";
 import { decodeFlowState, encodeFlowState, readStoredLocation, resolveFlowStart, storeLocation } from "@/lib/flow/url";
 import { sizeInputSchema } from "@/lib/solver/design/schema";
 import { asdCombinations } from "@/lib/solver/asce7/combinations";
+import { sizeMember } from "@/lib/solver/design";
+import { STARTER_TABLES } from "@/lib/tables";
 
 describe("defaults per kind", () => {
   test.each(MEMBER_KINDS.map((k) => [k]))("%s: a valid state the design route accepts as it is", (kind) => {
@@ -14,6 +16,12 @@ describe("defaults per kind", () => {
     expect(flowStateIssues(state)).toEqual([]);
     const parsed = sizeInputSchema.safeParse(sizeRequest(state));
     expect(parsed.success ? [] : parsed.error.issues).toEqual([]);
+  });
+
+  test.each(MEMBER_KINDS.map((k) => [k]))("%s: the starting inputs have an answer in the starter tables", (kind) => {
+    const out = sizeMember(sizeRequest(defaultFlowState(kind)), STARTER_TABLES);
+    expect(out.passing.length).toBeGreaterThan(0);
+    expect(out.passing[0].ratio).toBeLessThanOrEqual(1);
   });
 
   test("floor joist: 16 in, 40 psf live, 10 psf dead (IRC 2021 Table R301.5), L/360 live", () => {
