@@ -92,13 +92,11 @@ export function StepLoads({ state, update }: StepLoadsProps) {
               legend="Spacing, centre to centre"
               name="spacing"
               look="segments"
-              value={SPACINGS.includes(state.width.spacingIn) ? String(state.width.spacingIn) : "other"}
-              onChange={(v) => {
-                if (v !== "other") update((s) => ({ ...s, width: { mode: "spacing", spacingIn: Number(v) } }));
-              }}
-              choices={[...SPACINGS.map((n) => ({ value: String(n), label: `${n} in` })), { value: "other", label: "Other" }]}
+              value={SPACINGS.includes(state.width.spacingIn) ? String(state.width.spacingIn) : ""}
+              onChange={(v) => update((s) => ({ ...s, width: { mode: "spacing", spacingIn: Number(v) } }))}
+              choices={SPACINGS.map((n) => ({ value: String(n), label: `${n} in` }))}
             />
-            <FlowNumberField label="Spacing" unit="in" unitSpoken="inches" value={state.width.spacingIn} min={0} exclusiveMin max={96} onCommit={(spacingIn) => update((s) => ({ ...s, width: { mode: "spacing", spacingIn } }))} />
+            <FlowNumberField label="Or type the spacing" unit="in" unitSpoken="inches" value={state.width.spacingIn} min={0} exclusiveMin max={96} onCommit={(spacingIn) => update((s) => ({ ...s, width: { mode: "spacing", spacingIn } }))} />
           </div>
         ) : (
           <LengthField label="Tributary width" valueFt={state.width.tributaryFt} minFt={0} exclusiveMin maxFt={60} hint="Half the joist span on each side, added together" onCommit={(tributaryFt) => update((s) => ({ ...s, width: { mode: "tributary", tributaryFt } }))} />

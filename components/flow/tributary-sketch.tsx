@@ -38,14 +38,14 @@ export function TributarySketch({ mode }: TributarySketchProps) {
   }
   return (
     <figure className="flex flex-col gap-1">
-      <svg viewBox={`0 0 ${W} ${H - 30}`} className="h-auto w-full max-w-sm rounded-lg border-2 border-rule bg-paper-raised" aria-hidden="true">
-        <rect x={110} y={12} width={80} height={86} fill={INK.amberLight} />
+      <svg viewBox={`0 0 ${W} ${H - 22}`} className="h-auto w-full max-w-sm rounded-lg border-2 border-rule bg-paper-raised" aria-hidden="true">
+        <rect x={110} y={22} width={80} height={86} fill={INK.amberLight} />
         {[70, 150, 230].map((x) => (
-          <rect key={x} x={x - 5} y={12} width={10} height={86} fill={x === 150 ? INK.amber : INK.paper} stroke={x === 150 ? INK.amberDark : INK.graphite} strokeWidth={2} />
+          <rect key={x} x={x - 5} y={22} width={10} height={86} fill={x === 150 ? INK.amber : INK.paper} stroke={x === 150 ? INK.amberDark : INK.graphite} strokeWidth={2} />
         ))}
-        <path d="M110 108H190M110 102v12M190 102v12" stroke={INK.ink} strokeWidth={2} />
-        <path d="M110 12V98M190 12V98" stroke={INK.amberDark} strokeWidth={1.5} strokeDasharray="5 4" />
-        <text x={150} y={8} textAnchor="middle" fontSize={12} fill={INK.ink}>one joist carries one spacing</text>
+        <path d="M110 118H190M110 112v12M190 112v12" stroke={INK.ink} strokeWidth={2} />
+        <path d="M110 22V108M190 22V108" stroke={INK.amberDark} strokeWidth={1.5} strokeDasharray="5 4" />
+        <text x={150} y={15} textAnchor="middle" fontSize={13} fill={INK.ink}>one joist carries one spacing</text>
       </svg>
       <figcaption className="text-sm text-ink-soft">Joist spacing: centre to centre. Each joist holds the strip of floor from halfway to its neighbours.</figcaption>
     </figure>
