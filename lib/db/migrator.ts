@@ -31,7 +31,12 @@ function runner(sequelize: Sequelize, folder: "migrations" | "seeders"): Umzug<M
       },
     },
     context: { queryInterface: sequelize.getQueryInterface(), sequelize },
-    storage: new SequelizeStorage({ sequelize, tableName: folder === "migrations" ? "schema_migrations" : "schema_seeds" }),
+    // Distinct model names: two storages sharing Sequelize's default model name would share one table.
+    storage: new SequelizeStorage(
+      folder === "migrations"
+        ? { sequelize, tableName: "schema_migrations", modelName: "SchemaMigration" }
+        : { sequelize, tableName: "schema_seeds", modelName: "SchemaSeed" },
+    ),
     logger: undefined,
   });
 }
