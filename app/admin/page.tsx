@@ -14,7 +14,7 @@ export default async function AdminHomePage() {
       <PageHeader title="Admin" lead="The material tables every answer depends on, and the accounts that use Spanlark." />
       <div className="flex flex-col gap-3">
         <CardLink href="/admin/tables" title="Material tables">
-          Lumber and steel values, drafts and published versions
+          Lumber and steel values, CSV import, and every published version with its history
         </CardLink>
         <CardLink href="/admin/users" title="Accounts">
           Find an account, give or take away the admin role

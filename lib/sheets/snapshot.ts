@@ -7,7 +7,7 @@ import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/cautio
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest, combinationFactors, diagramBeam } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, type FlowState, type MemberKind } from "@/lib/flow/state";
-import { headlineFor } from "@/lib/flow/summary";
+import { headlineFor, spacingOf } from "@/lib/flow/summary";
 import { analyzeBeam, type Segment } from "@/lib/solver/beam";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -271,7 +271,7 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
   const state = source.flowState;
   const check = checkMember(checkRequest(state, spec), tables);
   const reactions = check.reactions.map((r) => ({ ...r, jackStuds: state.kind === "header" ? r.jackStuds : null }));
-  const headline = headlineFor(check.member.spec, check.member.label, reactions, state.kind);
+  const headline = headlineFor(check.member.spec, check.member.label, reactions, state.kind, spacingOf(state));
   const saved = source.savedAnswer;
   const changed = saved && (saved.headline !== headline || Math.abs(saved.ratio - check.ratio) > 0.005);
   const note = changed
