@@ -72,6 +72,10 @@ if [ "$QUICK" = 0 ]; then
   fi
 fi
 
+# Stop the services first, so the summary line is the last thing printed.
+stop_services >/dev/null 2>&1
+trap - EXIT
+
 node --input-type=module - "$RESULTS" "${STAGES[@]}" <<'JS'
 import { existsSync, readFileSync } from "node:fs";
 const [dir, ...stages] = process.argv.slice(2);
