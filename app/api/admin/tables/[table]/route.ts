@@ -1,8 +1,6 @@
 import { NextResponse } from "next/server";
-import { HttpError, route } from "@/lib/http";
-import { getCurrentTables, getTablesVersion, TablesVersionNotFoundError } from "@/lib/tables/current";
-import { requireTablesAdmin, tableFromParam } from "@/lib/tables/db/admin-http";
-import { versionQuery } from "@/lib/tables/db/admin-schemas";
+import { route } from "@/lib/http";
+import { requireTablesAdmin, tableFromParam, tablesForVersionQuery } from "@/lib/tables/db/admin-http";
 import { getVersionInfo, isVersionId } from "@/lib/tables/db/queries";
 import { tablesToRows } from "@/lib/tables/db/rows";
 import { rowsOf } from "@/lib/tables/db/validate";
@@ -16,14 +14,7 @@ type Ctx = { params: Promise<{ table: string }> };
 export const GET = route(async (req: Request, ctx: Ctx) => {
   await requireTablesAdmin();
   const table = tableFromParam((await ctx.params).table);
-  const { version } = versionQuery.parse(Object.fromEntries(new URL(req.url).searchParams));
-  let tables;
-  try {
-    tables = version ? await getTablesVersion(version) : await getCurrentTables();
-  } catch (err) {
-    if (err instanceof TablesVersionNotFoundError) throw new HttpError(404, "no such version of the tables");
-    throw err;
-  }
+  const tables = await tablesForVersionQuery(req);
   const spec = TABLE_SPECS[table];
   const rows = rowsOf(tablesToRows(tables), table);
   return NextResponse.json({
