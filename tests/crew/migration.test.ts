@@ -1,41 +1,28 @@
 import { randomUUID } from "node:crypto";
-import { DataTypes, QueryTypes, Sequelize } from "sequelize";
+import { DataTypes, QueryTypes } from "sequelize";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { down, up } from "@/migrations/20261201125000-create-crew-links-and-job-sheets";
+import { createMigrationSchema, type MigrationSchema } from "../support/migration-schema";
 import { TEST_DB } from "./fixtures";
 
 // The crew link and job sheet migration, up and down, in a schema of its own (search_path), so the shared
 // test database's tables are never touched.
 describe.skipIf(!TEST_DB)("migration 20261201125000-create-crew-links-and-job-sheets", () => {
-  const schema = `crew_mig_${randomUUID().slice(0, 8)}`;
-  let admin: Sequelize;
-  let scoped: Sequelize;
-
-  const tables = async () =>
-    (
-      await scoped.query<{ name: string }>("SELECT table_name AS name FROM information_schema.tables WHERE table_schema = :schema ORDER BY table_name", {
-        replacements: { schema },
-        type: QueryTypes.SELECT,
-      })
-    ).map((r) => r.name);
+  let own: MigrationSchema;
 
   beforeAll(async () => {
-    admin = new Sequelize(TEST_DB ?? "", { dialect: "postgres", logging: false });
-    await admin.query(`CREATE SCHEMA "${schema}"`);
-    scoped = new Sequelize(TEST_DB ?? "", { dialect: "postgres", logging: false, dialectOptions: { options: `-c search_path=${schema}` } });
-    const qi = scoped.getQueryInterface();
+    own = await createMigrationSchema(TEST_DB ?? "", "crew_mig");
+    const qi = own.sequelize.getQueryInterface();
     await qi.createTable("users", { id: { type: DataTypes.UUID, primaryKey: true } });
     await qi.createTable("jobs", { id: { type: DataTypes.UUID, primaryKey: true } });
   });
 
   afterAll(async () => {
-    await scoped?.close();
-    await admin?.query(`DROP SCHEMA IF EXISTS "${schema}" CASCADE`);
-    await admin?.close();
+    await own?.drop();
   });
 
   test("up creates both tables (token hash unique; a sheet outlives its job); down removes them; up runs again", async () => {
-    const context = { queryInterface: scoped.getQueryInterface(), sequelize: scoped };
+    const { sequelize: scoped, context, tables } = own;
     await up({ context });
     expect(await tables()).toEqual(["crew_links", "job_sheets", "jobs", "users"]);
 
