@@ -5,7 +5,7 @@ import Link from "next/link";
 import { useState } from "react";
 import * as yup from "yup";
 import { Button } from "@/components/ui/button";
-import { TextField } from "@/components/ui/field";
+import { EmailField } from "./email-field";
 import { FormAlert } from "./form-alert";
 import { emailRule, issuesToErrors, postJson } from "./form-support";
 
@@ -42,16 +42,7 @@ export function ForgotPasswordForm() {
   return (
     <form onSubmit={form.handleSubmit} noValidate className="flex flex-col gap-4">
       {formError ? <FormAlert tone="error">{formError}</FormAlert> : null}
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
-        error={form.touched.email ? form.errors.email : undefined}
-        {...form.getFieldProps("email")}
-      />
+      <EmailField error={form.touched.email ? form.errors.email : undefined} {...form.getFieldProps("email")} />
       <Button type="submit" size="lg" fullWidth loading={form.isSubmitting}>
         Send me a link
       </Button>

@@ -7,6 +7,7 @@ import { useState } from "react";
 import * as yup from "yup";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
+import { EmailField } from "./email-field";
 import { FormAlert } from "./form-alert";
 import { emailRule, postJson, safeReturnPath } from "./form-support";
 
@@ -78,16 +79,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
           {resent === "failed" ? <p className="mt-2">The link could not be sent just now; try again in a few minutes.</p> : null}
         </FormAlert>
       ) : null}
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
-        error={fieldError("email")}
-        {...form.getFieldProps("email")}
-      />
+      <EmailField error={fieldError("email")} {...form.getFieldProps("email")} />
       <TextField
         label="Password"
         type="password"

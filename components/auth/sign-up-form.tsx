@@ -6,6 +6,7 @@ import { useState } from "react";
 import * as yup from "yup";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
+import { EmailField } from "./email-field";
 import { FormAlert } from "./form-alert";
 import { companyRule, emailRule, issuesToErrors, nameRule, newPasswordRule, PASSWORD_MIN, postJson } from "./form-support";
 
@@ -73,17 +74,7 @@ export function SignUpForm() {
         error={fieldError("company")}
         {...form.getFieldProps("company")}
       />
-      <TextField
-        label="E-mail"
-        type="email"
-        autoComplete="email"
-        inputMode="email"
-        autoCapitalize="none"
-        spellCheck={false}
-        required
-        error={fieldError("email")}
-        {...form.getFieldProps("email")}
-      />
+      <EmailField required error={fieldError("email")} {...form.getFieldProps("email")} />
       <TextField
         label="Password"
         type="password"
