@@ -3,6 +3,7 @@
 import { useId, useState } from "react";
 import { TextField } from "@/components/ui/field";
 import { formatFeetInches, parseLength } from "@/lib/flow/length";
+import { useTypedDraft } from "./use-typed-draft";
 
 export type LengthFieldProps = {
   label: string;
@@ -38,13 +39,9 @@ export function lengthProblem(label: string, text: string, opts: { minFt?: numbe
 export const LENGTH_HINT = `As you measured it: 12' 6", 12-6, 12.5, 150" or 3.8 m`;
 
 export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, exclusiveMin, id, containerClassName }: LengthFieldProps) {
-  // what is being typed; null when the field is not being edited (it then shows the value in feet and inches)
-  const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
   const [echo, setEcho] = useState<string | null>(null);
   const echoId = useId();
-  const focused = draft !== null;
-  const text = draft ?? formatFeetInches(valueFt);
 
   const check = (value: string, showError: boolean) => {
     const result = lengthProblem(label, value, { minFt, maxFt, exclusiveMin });
@@ -57,6 +54,8 @@ export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, excl
       if (showError) setError(result.message);
     }
   };
+  // away from the field it shows the value in feet and inches
+  const { text, editing: focused, inputProps } = useTypedDraft(formatFeetInches(valueFt), check);
 
   return (
     <div className={containerClassName}>
@@ -64,7 +63,6 @@ export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, excl
         id={id}
         label={label}
         hint={hint}
-        value={text}
         error={error}
         autoComplete="off"
         autoCapitalize="off"
@@ -72,15 +70,7 @@ export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, excl
         spellCheck={false}
         enterKeyHint="done"
         className="figures text-lg"
-        onFocus={() => setDraft(formatFeetInches(valueFt))}
-        onChange={(event) => {
-          setDraft(event.target.value);
-          check(event.target.value, false);
-        }}
-        onBlur={() => {
-          check(text, true);
-          setDraft(null);
-        }}
+        {...inputProps}
         onKeyDown={(event) => {
           if (event.key === "Enter") {
             event.preventDefault();

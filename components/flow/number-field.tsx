@@ -2,6 +2,7 @@
 
 import { useState } from "react";
 import { NumberWithUnitField } from "@/components/ui/field";
+import { useTypedDraft } from "./use-typed-draft";
 
 export type FlowNumberFieldProps = {
   label: string;
@@ -20,10 +21,7 @@ export type FlowNumberFieldProps = {
 
 /** A number with its unit; each good value is used as it is typed, a bad one says why and is not used. */
 export function FlowNumberField({ label, value, unit, unitSpoken, onCommit, min = 0, max = 1e9, exclusiveMin = false, hint, integer = false, containerClassName }: FlowNumberFieldProps) {
-  // what is being typed; null when the field is not being edited (it then shows the value itself)
-  const [draft, setDraft] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const text = draft ?? String(value);
 
   const problem = (raw: string): string | null => {
     const t = raw.trim().replace(/,/g, "");
@@ -46,6 +44,7 @@ export function FlowNumberField({ label, value, unit, unitSpoken, onCommit, min 
       setError(p);
     }
   };
+  const { inputProps } = useTypedDraft(String(value), check);
 
   return (
     <NumberWithUnitField
@@ -53,20 +52,11 @@ export function FlowNumberField({ label, value, unit, unitSpoken, onCommit, min 
       unit={unit}
       unitSpoken={unitSpoken}
       hint={hint}
-      value={text}
       error={error}
       containerClassName={containerClassName}
       inputMode={integer ? "numeric" : "decimal"}
       enterKeyHint="done"
-      onFocus={() => setDraft(String(value))}
-      onChange={(event) => {
-        setDraft(event.target.value);
-        check(event.target.value, false);
-      }}
-      onBlur={() => {
-        check(text, true);
-        setDraft(null);
-      }}
+      {...inputProps}
     />
   );
 }
