@@ -4,7 +4,8 @@ import { Form, Formik } from "formik";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
 import { saveMember, updateMember } from "@/components/jobs/actions";
-import { Button, ButtonLink } from "@/components/ui/button";
+import { JobActionAlert, type JobActionProblem } from "@/components/jobs/job-action-alert";
+import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
 import { SelectField, TextField } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
@@ -31,7 +32,7 @@ export type SaveToJobProps = {
 export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferredJobId = null }: SaveToJobProps) {
   const toast = useToast();
   const router = useRouter();
-  const [serverError, setServerError] = useState<{ message: string; upgrade?: string } | null>(null);
+  const [serverError, setServerError] = useState<JobActionProblem | null>(null);
   const defaultLabel = `${KIND_LABELS[state.kind]}`;
 
   return (
@@ -80,18 +81,7 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
                 </>
               ) : null}
               <TextField label="Member name" hint="What the crew calls it, e.g. H1 kitchen header" required {...form.getFieldProps("label")} error={form.touched.label ? form.errors.label : undefined} />
-              {serverError ? (
-                <div role="alert" className="rounded-lg border-2 border-over bg-over-bg p-3 font-bold text-over-ink">
-                  {serverError.message}
-                  {serverError.upgrade ? (
-                    <div className="mt-2">
-                      <ButtonLink href={serverError.upgrade} variant="secondary">
-                        See the plans
-                      </ButtonLink>
-                    </div>
-                  ) : null}
-                </div>
-              ) : null}
+              {serverError ? <JobActionAlert problem={serverError} /> : null}
               <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
                 <Button variant="secondary" onClick={onClose}>
                   Cancel

@@ -3,10 +3,11 @@
 import { Form, Formik } from "formik";
 import { useRouter } from "next/navigation";
 import { useState } from "react";
-import { Button, ButtonLink } from "@/components/ui/button";
+import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { jobFormSchema, type JobForm as JobFormValues } from "@/lib/flow/forms";
 import { createJob, updateJob } from "./actions";
+import { JobActionAlert, type JobActionProblem } from "./job-action-alert";
 
 export type JobFormProps = {
   /** the job being changed, or null for a new one */
@@ -17,7 +18,7 @@ export type JobFormProps = {
 /** A job's name, site address and notes: a new job, or changes to one. */
 export function JobForm({ job, onDone }: JobFormProps) {
   const router = useRouter();
-  const [serverError, setServerError] = useState<{ message: string; upgrade?: string } | null>(null);
+  const [serverError, setServerError] = useState<JobActionProblem | null>(null);
   return (
     <Formik<JobFormValues>
       initialValues={{ name: job?.name ?? "", siteAddress: job?.siteAddress ?? "", notes: job?.notes ?? "" }}
@@ -52,18 +53,7 @@ export function JobForm({ job, onDone }: JobFormProps) {
             />
             {form.touched.notes && form.errors.notes ? <p className="text-sm font-bold text-over-ink">{form.errors.notes}</p> : null}
           </div>
-          {serverError ? (
-            <div role="alert" className="rounded-lg border-2 border-over bg-over-bg p-3 font-bold text-over-ink">
-              {serverError.message}
-              {serverError.upgrade ? (
-                <div className="mt-2">
-                  <ButtonLink href={serverError.upgrade} variant="secondary">
-                    See the plans
-                  </ButtonLink>
-                </div>
-              ) : null}
-            </div>
-          ) : null}
+          {serverError ? <JobActionAlert problem={serverError} /> : null}
           <div className="flex gap-2">
             <Button type="submit" loading={form.isSubmitting}>
               {job ? "Save the job" : "Make the job"}
