@@ -37,6 +37,20 @@ export async function parseJson<T>(req: Request, schema: ZodType<T>): Promise<T>
   return parsed.data;
 }
 
+/** 400 { error: "invalid input", issues }: how the public solver routes (which answer without `route()`) refuse input. */
+export function invalidInput(issues: FieldIssue[]): Response {
+  return Response.json({ error: "invalid input", issues }, { status: 400 });
+}
+
+/** A public solver route's request body as JSON, or its 400 when the body is not JSON (path "" names the whole body). */
+export async function readJsonBody(req: Request): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
+  try {
+    return { ok: true, body: JSON.parse(await req.text()) };
+  } catch {
+    return { ok: false, response: invalidInput([{ path: "", message: "the body is not valid JSON" }]) };
+  }
+}
+
 type Handler<C> = (req: Request, ctx: C) => Promise<Response>;
 
 /**

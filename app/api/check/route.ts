@@ -1,3 +1,4 @@
+import { invalidInput, readJsonBody } from "@/lib/http";
 import { checkMember, DesignInputError } from "@/lib/solver/design";
 import { getCurrentTables } from "@/lib/tables/current";
 
@@ -5,16 +6,13 @@ export const runtime = "nodejs";
 
 // POST /api/check — check one member against its loads with the current published tables, no sign-in
 export async function POST(req: Request): Promise<Response> {
-  let body: unknown;
-  try {
-    body = JSON.parse(await req.text());
-  } catch {
-    return Response.json({ error: "invalid input", issues: [{ path: "", message: "the body is not valid JSON" }] }, { status: 400 });
-  }
+  const read = await readJsonBody(req);
+  if (!read.ok) return read.response;
+  const { body } = read;
   try {
     return Response.json(checkMember(body, await getCurrentTables()));
   } catch (err) {
-    if (err instanceof DesignInputError) return Response.json({ error: "invalid input", issues: err.issues }, { status: 400 });
+    if (err instanceof DesignInputError) return invalidInput(err.issues);
     throw err;
   }
 }

@@ -1,3 +1,4 @@
+import { invalidInput, readJsonBody } from "@/lib/http";
 import { DesignInputError, largestSpan, sizeMember } from "@/lib/solver/design";
 import { getCurrentTables } from "@/lib/tables/current";
 
@@ -5,21 +6,18 @@ export const runtime = "nodejs";
 
 // POST /api/size — rank the members that pass with the current published tables (?find=span: largest span of one member), no sign-in
 export async function POST(req: Request): Promise<Response> {
-  let body: unknown;
-  try {
-    body = JSON.parse(await req.text());
-  } catch {
-    return Response.json({ error: "invalid input", issues: [{ path: "", message: "the body is not valid JSON" }] }, { status: 400 });
-  }
+  const read = await readJsonBody(req);
+  if (!read.ok) return read.response;
+  const { body } = read;
   const find = new URL(req.url).searchParams.get("find");
   if (find !== null && find !== "members" && find !== "span") {
-    return Response.json({ error: "invalid input", issues: [{ path: "find", message: 'must be "members" or "span"' }] }, { status: 400 });
+    return invalidInput([{ path: "find", message: 'must be "members" or "span"' }]);
   }
   try {
     const tables = await getCurrentTables();
     return Response.json(find === "span" ? largestSpan(body, tables) : sizeMember(body, tables));
   } catch (err) {
-    if (err instanceof DesignInputError) return Response.json({ error: "invalid input", issues: err.issues }, { status: 400 });
+    if (err instanceof DesignInputError) return invalidInput(err.issues);
     throw err;
   }
 }
