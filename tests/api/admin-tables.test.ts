@@ -1,5 +1,4 @@
 import { afterAll, beforeAll, describe, expect, test, vi } from "vitest";
-import type { SessionUser } from "@/lib/auth/roles";
 import { getSequelize } from "@/lib/db";
 import { STARTER_TABLES } from "@/lib/tables";
 import { getCurrentTables, getTablesVersion, resetTablesCache } from "@/lib/tables/current";
@@ -7,20 +6,13 @@ import { expectedHeader, MAX_CSV_BYTES } from "@/lib/tables/csv/format";
 import { seedTables } from "@/lib/tables/db/write";
 import { TableVersion } from "@/models/material-tables";
 import { makeAdmin, TEST_DB, useOwnMigratedDatabase, type OwnDatabase } from "../tables/db/support";
+import { who } from "../support/session-mock";
 
 // The admin table routes, called directly with a mocked session, on a database of this file's own.
 
 process.env.NEXTAUTH_SECRET ??= "test-secret-for-vitest-only-0123456789";
-const who = vi.hoisted(() => ({ current: null as SessionUser | null }));
 
-vi.mock("@/lib/auth/session", async () => {
-  const { assertRole } = await import("@/lib/auth/roles");
-  return {
-    getSessionUser: async () => who.current,
-    requireUser: async () => assertRole(who.current, []),
-    requireRole: async (...roles: SessionUser["role"][]) => assertRole(who.current, roles),
-  };
-});
+vi.mock("@/lib/auth/session", () => import("../support/session-mock"));
 
 const overview = await import("@/app/api/admin/tables/route");
 const tableRoute = await import("@/app/api/admin/tables/[table]/route");

@@ -5,20 +5,12 @@ import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { renderToStaticMarkup } from "react-dom/server";
 import { beforeEach, describe, expect, test, vi } from "vitest";
-import type { SessionUser } from "@/lib/auth/roles";
 import { CAUTION_TEXT } from "@/components/ui/caution-text";
 import { ACCESS_TABLE } from "../api/access-table";
 import { TEST_DB, makeAccount, makeJob } from "./fixtures";
+import { who } from "../support/session-mock";
 
-const who = vi.hoisted(() => ({ current: null as SessionUser | null }));
-vi.mock("@/lib/auth/session", async () => {
-  const { assertRole } = await import("@/lib/auth/roles");
-  return {
-    getSessionUser: async () => who.current,
-    requireUser: async () => assertRole(who.current, []),
-    requireRole: async (...roles: SessionUser["role"][]) => assertRole(who.current, roles),
-  };
-});
+vi.mock("@/lib/auth/session", () => import("../support/session-mock"));
 vi.mock("next/cache", () => ({ revalidatePath: vi.fn() }));
 
 const page = await import("@/app/(public)/crew/[token]/page");

@@ -1,18 +1,10 @@
 import { beforeEach, describe, expect, test, vi } from "vitest";
-import type { SessionUser } from "@/lib/auth/roles";
 import { TEST_DB, asSessionUser, makeAccount, makeJob } from "./fixtures";
+import { who } from "../support/session-mock";
 
-const who = vi.hoisted(() => ({ current: null as SessionUser | null }));
 const mail = vi.hoisted(() => ({ sent: [] as { to: string; subject: string; text: string; html: string }[] }));
 
-vi.mock("@/lib/auth/session", async () => {
-  const { assertRole } = await import("@/lib/auth/roles");
-  return {
-    getSessionUser: async () => who.current,
-    requireUser: async () => assertRole(who.current, []),
-    requireRole: async (...roles: SessionUser["role"][]) => assertRole(who.current, roles),
-  };
-});
+vi.mock("@/lib/auth/session", () => import("../support/session-mock"));
 vi.mock("@/lib/mail", () => ({
   sendMail: vi.fn(async (m: { to: string; subject: string; text: string; html: string }) => {
     mail.sent.push(m);

@@ -6,20 +6,13 @@ import type { SessionUser } from "@/lib/auth/roles";
 import { defaultFlowState } from "@/lib/flow/defaults";
 import { withMainSpan, type FlowState } from "@/lib/flow/state";
 import { FREE_LIMITS } from "@/lib/payments/plans";
+import { who } from "../support/session-mock";
 
 const TEST_DB = process.env.TEST_DATABASE_URL;
 if (TEST_DB) process.env.DATABASE_URL = TEST_DB;
 process.env.NEXTAUTH_SECRET ??= "test-secret-for-vitest-only-0123456789";
 
-const who = vi.hoisted(() => ({ current: null as SessionUser | null }));
-vi.mock("@/lib/auth/session", async () => {
-  const { assertRole } = await import("@/lib/auth/roles");
-  return {
-    getSessionUser: async () => who.current,
-    requireUser: async () => assertRole(who.current, []),
-    requireRole: async (...roles: SessionUser["role"][]) => assertRole(who.current, roles),
-  };
-});
+vi.mock("@/lib/auth/session", () => import("../support/session-mock"));
 vi.mock("next/cache", () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn() }));
 
 type Actions = typeof import("@/components/jobs/actions");

@@ -1,20 +1,12 @@
 import { beforeEach, describe, expect, test, vi } from "vitest";
-import type { SessionUser } from "@/lib/auth/roles";
 import type { MaterialTables } from "@/lib/tables/types";
 import { TEST_DB, asSessionUser, headerState, makeAccount, makeJob } from "../crew/fixtures";
 import { isPdf, pdfStreamText } from "./pdf-text";
+import { who } from "../support/session-mock";
 
-const who = vi.hoisted(() => ({ current: null as SessionUser | null }));
 const tables = vi.hoisted(() => ({ current: null as MaterialTables | null }));
 
-vi.mock("@/lib/auth/session", async () => {
-  const { assertRole } = await import("@/lib/auth/roles");
-  return {
-    getSessionUser: async () => who.current,
-    requireUser: async () => assertRole(who.current, []),
-    requireRole: async (...roles: SessionUser["role"][]) => assertRole(who.current, roles),
-  };
-});
+vi.mock("@/lib/auth/session", () => import("../support/session-mock"));
 vi.mock("@/lib/tables/current", async () => {
   const { STARTER_TABLES } = await import("@/lib/tables");
   return { getCurrentTables: async () => tables.current ?? STARTER_TABLES };
