@@ -1,4 +1,3 @@
-import { randomUUID } from "node:crypto";
 import pg from "pg";
 import { QueryTypes, Sequelize } from "sequelize";
 import { afterAll, describe, expect, test } from "vitest";
@@ -6,12 +5,12 @@ import type { MigrationContext } from "@/lib/db/migrator";
 import * as createUsers from "@/migrations/20261201000000-create-users";
 import * as authTables from "@/migrations/20261201100000-create-auth-tokens-and-rate-limits";
 import * as demoAccounts from "@/seeders/20261201100000-demo-accounts";
+import { createOwnDatabase, type OwnDatabase } from "../tables/db/support";
 import { TEST_DB } from "./support";
 
 // Up, down and up again in a database of this test's own (made and dropped here), so the shared test
 // database is left alone.
-const database = `spanlark_authmig_${randomUUID().slice(0, 8)}`;
-let admin: Sequelize | undefined;
+let db: OwnDatabase | undefined;
 let sequelize: Sequelize | undefined;
 
 function open(url: string): Sequelize {
@@ -29,18 +28,13 @@ async function tables(s: Sequelize): Promise<string[]> {
 
 afterAll(async () => {
   await sequelize?.close();
-  if (!admin) return;
-  await admin.query(`DROP DATABASE IF EXISTS "${database}"`);
-  await admin.close();
+  await db?.drop();
 });
 
 describe.skipIf(!TEST_DB)("auth migration and demo seed", () => {
   test("up creates the tables, the seed adds three confirmed accounts at cost 12, down undoes both", async () => {
-    admin = open(TEST_DB!);
-    await admin.query(`CREATE DATABASE "${database}"`);
-    const url = new URL(TEST_DB!);
-    url.pathname = `/${database}`;
-    sequelize = open(url.toString());
+    db = await createOwnDatabase("authmig");
+    sequelize = open(db.url);
     const context: MigrationContext = { queryInterface: sequelize.getQueryInterface(), sequelize };
 
     await createUsers.up({ context });
