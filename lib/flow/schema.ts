@@ -4,12 +4,12 @@
  */
 import { z } from "zod";
 import { LOAD_CASES } from "@/lib/solver/types";
-import { MATERIAL_FAMILIES, MEMBER_KINDS, type FlowState } from "./state";
+import { MATERIAL_FAMILIES, MAX_LENGTH_FT, MEMBER_KINDS, type FlowState } from "./state";
 
 const SPECIES = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"] as const;
 const GRADES = ["Select Structural", "No.1", "No.2", "No.3"] as const;
 
-export const MAX_LENGTH_FT = 200;
+export { MAX_LENGTH_FT };
 const position = z.number().min(0, "must be 0 or more").max(MAX_LENGTH_FT, `must be ${MAX_LENGTH_FT} ft or less`);
 const loadCase = z.enum(LOAD_CASES as unknown as ["D", "L", "Lr", "S", "W"]);
 const label = z.string().trim().max(80, "must be 80 characters or fewer");

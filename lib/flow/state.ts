@@ -8,6 +8,9 @@ import type { LoadCase, SupportType } from "@/lib/solver/types";
 import type { SawnGrade, Species } from "@/lib/tables/types";
 import type { RoofExposure, RoofThermal } from "@/lib/solver/asce7/snow";
 
+/** The longest member the flow takes, ft (the solver's limit). */
+export const MAX_LENGTH_FT = 200;
+
 export const MEMBER_KINDS = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"] as const;
 export type MemberKind = (typeof MEMBER_KINDS)[number];
 
@@ -179,12 +182,12 @@ export function withMainSpan(state: FlowState, spanFt: number): FlowState {
     lengthFt: state.lengthFt + delta,
     supports: state.supports.map((s) => ({ ...s, x: shift(s.x) })),
     pointLoads: state.pointLoads.map((p) => ({ ...p, x: clamp(shift(p.x), 0, state.lengthFt + delta) })),
-    lineLoads: state.lineLoads.map((l) => fitLine(l, state.lengthFt, state.lengthFt + delta)),
+    lineLoads: keepOnMember(state.lineLoads.map((l) => fitLine(l, state.lengthFt, state.lengthFt + delta))),
   };
 }
 
 /** Sets the overhang past the last support (right) or before the first (left), ft. */
-export function withOverhang(state: FlowState, side: "left" | "right", overhangFt: number): FlowState {
+export function withOverhang(state: FlowState, side: MemberEnd, overhangFt: number): FlowState {
   const sorted = sortedSupports(state.supports);
   if (sorted.length === 0) return state;
   if (side === "right") {
@@ -193,7 +196,7 @@ export function withOverhang(state: FlowState, side: "left" | "right", overhangF
       ...state,
       lengthFt: newLength,
       pointLoads: state.pointLoads.map((p) => ({ ...p, x: clamp(p.x, 0, newLength) })),
-      lineLoads: state.lineLoads.map((l) => fitLine(l, state.lengthFt, newLength)),
+      lineLoads: keepOnMember(state.lineLoads.map((l) => fitLine(l, state.lengthFt, newLength))),
     };
   }
   const delta = overhangFt - sorted[0].x;
@@ -203,17 +206,80 @@ export function withOverhang(state: FlowState, side: "left" | "right", overhangF
     lengthFt: newLength,
     supports: state.supports.map((s) => ({ ...s, x: s.x + delta })),
     pointLoads: state.pointLoads.map((p) => ({ ...p, x: clamp(p.x + delta, 0, newLength) })),
-    lineLoads: state.lineLoads.map((l) => {
-      const wasFull = l.from <= 1e-9 && l.to >= state.lengthFt - 1e-9;
-      return wasFull ? { ...l, from: 0, to: newLength } : { ...l, from: clamp(l.from + delta, 0, newLength), to: clamp(l.to + delta, 0, newLength) };
-    }),
+    lineLoads: keepOnMember(
+      state.lineLoads.map((l) => {
+        const wasFull = l.from <= 1e-9 && l.to >= state.lengthFt - 1e-9;
+        return wasFull ? { ...l, from: 0, to: newLength } : { ...l, from: clamp(l.from + delta, 0, newLength), to: clamp(l.to + delta, 0, newLength) };
+      }),
+    ),
   };
+}
+
+export type MemberEnd = "left" | "right";
+
+/** The overhang a tap adds: 2 ft, a usual deck joist overhang and inside a quarter of a 12 ft back span (common practice). */
+export const DEFAULT_OVERHANG_FT = 2;
+
+/** How close a moved support may come to its neighbour, ft (1 in): two supports at one point are refused by the solver. */
+export const SUPPORT_GAP_FT = 1 / 12;
+
+/** The longest overhang an end can take before the whole member passes MAX_LENGTH_FT, ft. */
+export function maxOverhangFt(state: FlowState, end: MemberEnd): number {
+  if (state.supports.length === 0) return 0;
+  return Math.max(0, MAX_LENGTH_FT - (state.lengthFt - overhangs(state)[end]));
+}
+
+/**
+ * Gives one end an overhang of `lengthFt` (to the nearest 1/16 in, at most maxOverhangFt) by lengthening the
+ * member past its end support. Supports and loads keep their places on the rest of the member; for a left
+ * overhang every position moves right by the overhang, as it is measured from the new left end. An overhang
+ * already there takes the new length. Example: a 12 ft simple span, addOverhang(s, "right", 2) → a 14 ft
+ * member on supports at 0 and 12 ft.
+ */
+export function addOverhang(state: FlowState, end: MemberEnd, lengthFt: number = DEFAULT_OVERHANG_FT): FlowState {
+  if (state.supports.length === 0 || !Number.isFinite(lengthFt) || lengthFt <= 0) return state;
+  return withOverhang(state, end, clamp(snapFt(lengthFt), 0, maxOverhangFt(state, end)));
+}
+
+/** Cuts the member off at its end support, so that end has no overhang: a line load only on the overhang goes, a post on it moves to the new end. */
+export function removeOverhang(state: FlowState, end: MemberEnd): FlowState {
+  return withOverhang(state, end, 0);
+}
+
+/** Where a support may go, ft from the left end: on the member and at least SUPPORT_GAP_FT from either neighbour. */
+export function supportRange(state: FlowState, index: number): { min: number; max: number } {
+  const here = state.supports[index];
+  if (!here) return { min: 0, max: state.lengthFt };
+  const others = state.supports.filter((_, i) => i !== index).map((s) => s.x);
+  const before = others.filter((x) => x <= here.x);
+  const after = others.filter((x) => x > here.x);
+  const min = before.length > 0 ? Math.max(...before) + SUPPORT_GAP_FT : 0;
+  const max = after.length > 0 ? Math.min(...after) - SUPPORT_GAP_FT : state.lengthFt;
+  return { min: clamp(min, 0, state.lengthFt), max: clamp(max, 0, state.lengthFt) };
+}
+
+/**
+ * Moves one support (by its index in state.supports) to `x` ft from the left end, to the nearest 1/16 in. It
+ * stays on the member and does not pass or touch a neighbour; the member's length does not change, so moving an
+ * end support inward makes an overhang.
+ */
+export function moveSupport(state: FlowState, index: number, x: number): FlowState {
+  if (!state.supports[index] || !Number.isFinite(x)) return state;
+  const { min, max } = supportRange(state, index);
+  if (min > max) return state;
+  const to = clamp(snapFt(x), min, max);
+  return { ...state, supports: state.supports.map((s, i) => (i === index ? { ...s, x: to } : s)) };
 }
 
 function fitLine(l: FlowLineLoad, oldLength: number, newLength: number): FlowLineLoad {
   const wasFull = l.from <= 1e-9 && l.to >= oldLength - 1e-9;
   if (wasFull) return { ...l, from: 0, to: newLength };
   return { ...l, from: clamp(l.from, 0, newLength), to: clamp(l.to, 0, newLength) };
+}
+
+/** Line loads left with no length (they were only on a part of the member that was cut off) are dropped. */
+function keepOnMember(lines: FlowLineLoad[]): FlowLineLoad[] {
+  return lines.filter((l) => l.to - l.from > 1e-9);
 }
 
 export function clamp(x: number, lo: number, hi: number): number {

@@ -113,11 +113,27 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
   };
 }
 
-/** "10' 0" span", "spans 7' 0" + 5' 0"", with any overhang: "12' 0" span, 1' 6" overhang". */
+/**
+ * The span as a builder says it: "10' 0" span", "spans 7' 0" + 5' 0"", "12' 0" span with 2' 0" overhang",
+ * "12' 0" span with 2' 0" overhang each end", "12' 0" span with overhangs 2' 0" left, 1' 6" right";
+ * on a single support, "6' 0" cantilever".
+ */
 export function spanWords(state: FlowState): string {
   const spans = spansFt(state);
-  const hang = overhangs(state);
-  const main = spans.length > 1 ? `spans ${spans.map(formatFeetInches).join(" + ")}` : `${formatFeetInches(spans[0] ?? state.lengthFt)} span`;
-  const hangs = [hang.left, hang.right].filter((h) => h > 1e-9).map((h) => `${formatFeetInches(h)} overhang`);
-  return [main, ...hangs].join(", ");
+  if (spans.length === 0) {
+    const hang = overhangs(state);
+    const arms = [hang.left, hang.right].filter((h) => h > 1e-9);
+    return arms.length > 1 ? `cantilevers ${arms.map(formatFeetInches).join(" + ")}` : `${formatFeetInches(state.lengthFt)} cantilever`;
+  }
+  const main = spans.length > 1 ? `spans ${spans.map(formatFeetInches).join(" + ")}` : `${formatFeetInches(spans[0])} span`;
+  const { left, right } = overhangs(state);
+  const hasLeft = left > 1e-9;
+  const hasRight = right > 1e-9;
+  if (hasLeft && hasRight) {
+    const l = formatFeetInches(left);
+    const r = formatFeetInches(right);
+    return l === r ? `${main} with ${l} overhang each end` : `${main} with overhangs ${l} left, ${r} right`;
+  }
+  if (hasLeft || hasRight) return `${main} with ${formatFeetInches(hasLeft ? left : right)} overhang`;
+  return main;
 }

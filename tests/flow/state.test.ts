@@ -66,7 +66,7 @@ describe("span and overhang edits keep the layout", () => {
     expect(spanWords(withMainSpan(defaultFlowState("header"), 10))).toBe(`10' 0" span`);
     const twoSpans: FlowState = { ...withMainSpan(defaultFlowState("floor-joist"), 12), supports: [{ x: 0, type: "pin" }, { x: 7, type: "roller" }, { x: 12, type: "roller" }] };
     expect(spanWords(twoSpans)).toBe(`spans 7' 0" + 5' 0"`);
-    expect(spanWords(withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5))).toBe(`11' 0" span, 1' 6" overhang`);
+    expect(spanWords(withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5))).toBe(`11' 0" span with 1' 6" overhang`);
   });
 
   test("point loads stay on the member when it gets shorter", () => {
