@@ -1,33 +1,14 @@
 // The sizing flow on a phone (390x844), from an empty browser: a 10 ft header under a bearing wall and a
 // 13 ft floor joist at 16 in, both saved to a demo job. Screenshots of every step go to tests/artifacts/.
 import { describe, expect, test } from "vitest";
-import type { Page } from "playwright-core";
 import { setupBrowser } from "./support/browser";
+import { nextStep as next, typeLength, waitForAnswer } from "./support/flow";
 
 const session = setupBrowser();
 
 // demo builder account seeded by the auth helper (FOUNDATION.md); the job is seeded by seeders/20261201120010-demo-jobs.ts
 const DEMO = { email: "dee@hollisrowe.test", password: "builder-demo-pass" };
 const DEMO_JOB = "Marsh Lane addition";
-
-async function typeLength(page: Page, label: string | RegExp, text: string): Promise<void> {
-  const field = page.getByLabel(label).first();
-  await field.fill(text);
-  await field.blur();
-}
-
-async function next(page: Page, name: RegExp): Promise<void> {
-  await page.getByRole("button", { name }).click();
-  await page.getByRole("heading", { level: 2, name: /^Step \d of 5/ }).waitFor();
-}
-
-async function waitForAnswer(page: Page): Promise<string> {
-  const headline = page.getByTestId("answer-headline");
-  await headline.waitFor({ timeout: 30_000 });
-  // the diagrams come with the chosen member's full check
-  await page.getByRole("img", { name: /^Moment M/ }).waitFor({ timeout: 30_000 });
-  return (await headline.textContent()) ?? "";
-}
 
 describe("sizing flow at 390x844", () => {
   test("a 10 ft header under a bearing wall and a 13 ft floor joist at 16 in, saved to a job", async () => {
@@ -157,5 +138,67 @@ describe("sizing flow at 390x844", () => {
     expect(await waitForAnswer(page)).toMatch(/jack stud/);
     expect(await page.getByText("Header, 10' 0\" span").count()).toBe(1);
     expect(consoleErrors).toEqual([]);
+  }, 120_000);
+
+  test("a deck joist: tap to add an overhang, type its length, move a support, and the answer names it", async () => {
+    const { page, context, screenshot, consoleErrors, goto } = await session.open(null, { viewport: "phone" });
+    await context.route("**/favicon.ico", (route) => route.fulfill({ status: 204 }));
+    await goto("/size?kind=deck-joist");
+    await page.getByRole("heading", { name: /Step 2 of 5/ }).waitFor();
+    expect(await page.getByLabel("Overhang past the right support").count()).toBe(0);
+
+    // a tap on the handle at the drawing's right end: 2 ft past the far support, its length field appears
+    const add = page.getByRole("button", { name: "Add an overhang at the right end" });
+    const box = await add.boundingBox();
+    expect(box && box.height >= 44 && box.width >= 44).toBe(true);
+    await add.tap();
+    const overhang = page.getByLabel("Overhang past the right support");
+    await expect.poll(() => overhang.inputValue(), { timeout: 15_000 }).toBe(`2' 0"`);
+    await expect.poll(() => page.getByText(`Deck joist · 12' 0" span with 2' 0" overhang`).count(), { timeout: 15_000 }).toBeGreaterThan(0);
+
+    // typed the way it was measured, echoed in feet and inches
+    await overhang.fill("22-1/2\"");
+    expect(await page.getByText(`Reads as 1' 10-1/2"`).count()).toBe(1);
+    await overhang.blur();
+    expect(await overhang.inputValue()).toBe(`1' 10-1/2"`);
+
+    // a support moved from its small editor by taps, then by the keyboard on the drawing
+    await page.getByRole("button", { name: /^2: roller at 12' 0"/ }).tap();
+    await page.getByRole("button", { name: "Move 1 in left" }).tap();
+    expect(await page.getByLabel("Position from the left end").inputValue()).toBe(`11' 11"`);
+    await page.getByRole("button", { name: /^Support 2: roller at 11' 11"/ }).focus();
+    await page.keyboard.press("ArrowRight");
+    expect(await page.getByLabel("Position from the left end").inputValue()).toBe(`12' 0"`);
+    await page.getByRole("button", { name: "Done", exact: true }).tap();
+    await screenshot("flow-overhang-2-span", { fullPage: false });
+    await screenshot("flow-overhang-2-span-full");
+
+    // removed and added back by taps, then on to the answer
+    await page.getByRole("button", { name: "Remove the right overhang" }).tap();
+    await expect.poll(() => page.getByText(`Deck joist · 12' 0" span`, { exact: true }).count(), { timeout: 15_000 }).toBeGreaterThan(0);
+    await page.getByRole("button", { name: "Add an overhang at the right end" }).tap();
+    await next(page, /Next: Loads/);
+    await next(page, /Next: Material/);
+    await next(page, /See the answer/);
+    const answer = await waitForAnswer(page);
+    expect(answer).toMatch(/^2x\d+ No\.\d at 16 in o\.c\./);
+    expect(await page.getByText(`Deck joist, 12' 0" span with 2' 0" overhang`).count()).toBe(1);
+    expect(await page.getByText(/Support 2 at 12' 0"/).count()).toBe(1);
+    await screenshot("flow-overhang-5-answer", { fullPage: false });
+    await screenshot("flow-overhang-5-answer-full");
+
+    // the same inputs on a desktop, from the address bar
+    const desk = await session.open(null, { viewport: "desktop" });
+    await desk.context.route("**/favicon.ico", (route) => route.fulfill({ status: 204 }));
+    await desk.goto(new URL(page.url()).pathname + new URL(page.url()).search.replace(/step=answer/, "step=span"));
+    await desk.page.getByLabel("Overhang past the right support").waitFor();
+    await desk.page.getByRole("complementary", { name: "Answer so far" }).getByTestId("answer-headline").waitFor({ timeout: 30_000 });
+    await desk.screenshot("flow-overhang-desktop-2-span", { fullPage: false });
+    await desk.page.getByRole("button", { name: /^5\s*Answer/ }).click();
+    await waitForAnswer(desk.page);
+    await desk.screenshot("flow-overhang-desktop-5-answer", { fullPage: false });
+
+    expect(consoleErrors).toEqual([]);
+    expect(desk.consoleErrors).toEqual([]);
   }, 120_000);
 });
