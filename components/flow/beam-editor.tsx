@@ -3,7 +3,8 @@
 import { useRef, type KeyboardEvent, type PointerEvent } from "react";
 import { INK } from "@/components/diagrams/palette";
 import { formatFeetInches } from "@/lib/flow/length";
-import { clamp, snapFt, sortedSupports, type FlowState, type FlowSupport } from "@/lib/flow/state";
+import { clamp, overhangs, snapFt, sortedSupports, type FlowState, type FlowSupport } from "@/lib/flow/state";
+import { spanWords } from "@/lib/flow/summary";
 
 export type BeamEditorProps = {
   state: FlowState;
@@ -73,6 +74,7 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
   };
 
   const sorted = sortedSupports(state.supports);
+  const hang = overhangs(state);
   const dims: { from: number; to: number }[] = [];
   const marks = [0, ...sorted.map((s) => s.x), L].filter((x, i, all) => i === 0 || x - all[i - 1] > 1e-9);
   for (let i = 1; i < marks.length; i++) dims.push({ from: marks[i - 1], to: marks[i] });
@@ -99,7 +101,7 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
       ref={svgRef}
       viewBox={`0 0 ${W} ${H}`}
       className="block h-auto w-full touch-none rounded-lg border-2 border-rule bg-paper-raised select-none"
-      aria-label={`The member, ${formatFeetInches(L)} long, with ${state.supports.length} support${state.supports.length === 1 ? "" : "s"}. Tap the beam to add a support.`}
+      aria-label={`The member, ${formatFeetInches(L)} long: ${spanWords(state)}, on ${state.supports.length} support${state.supports.length === 1 ? "" : "s"}. Tap the beam to add a support.`}
       role="group"
     >
       {/* posts and other point loads, where they stand on the member */}
@@ -177,10 +179,18 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
       {dims.map((d, i) => {
         const mid = (px(d.from) + px(d.to)) / 2;
         const narrow = px(d.to) - px(d.from) < 70;
+        const isOverhang = (i === 0 && hang.left > 1e-9 && sorted.length > 1) || (i === dims.length - 1 && hang.right > 1e-9 && sorted.length > 1);
         return (
-          <text key={i} x={mid} y={narrow ? DIM_Y + 22 : DIM_Y - 6} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
-            {formatFeetInches(d.to - d.from)}
-          </text>
+          <g key={i}>
+            <text x={mid} y={narrow ? DIM_Y + 22 : DIM_Y - 6} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
+              {formatFeetInches(d.to - d.from)}
+            </text>
+            {isOverhang ? (
+              <text x={mid} y={narrow ? DIM_Y - 6 : DIM_Y + 20} textAnchor="middle" fontSize={14} fill={INK.graphite} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
+                overhang
+              </text>
+            ) : null}
+          </g>
         );
       })}
     </svg>

@@ -26,7 +26,8 @@ export function lengthProblem(label: string, text: string, opts: { minFt?: numbe
   if (!parsed.ok) return { message: `${label} ${parsed.message}` };
   const { minFt = 0, maxFt = 200, exclusiveMin = false } = opts;
   if (exclusiveMin ? parsed.feet <= minFt : parsed.feet < minFt) {
-    return { message: `${label} must be more than ${minFt === 0 ? "0" : formatFeetInches(minFt)}` };
+    const least = minFt === 0 ? "0" : formatFeetInches(minFt);
+    return { message: exclusiveMin ? `${label} must be more than ${least}` : `${label} must be ${least} or more` };
   }
   if (parsed.feet > maxFt + 1e-9) return { message: `${label} must be ${formatFeetInches(maxFt)} or less` };
   return { feet: parsed.feet };

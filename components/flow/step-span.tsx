@@ -1,10 +1,26 @@
 "use client";
 
-import { useState } from "react";
+import { useId, useState, type MouseEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { formatFeetInches } from "@/lib/flow/length";
 import { MAX_LENGTH_FT } from "@/lib/flow/schema";
-import { clamp, mainSpanFt, overhangs, snapFt, sortedSupports, withMainSpan, withOverhang, type FlowState, type FlowSupport } from "@/lib/flow/state";
+import {
+  addOverhang,
+  DEFAULT_OVERHANG_FT,
+  mainSpanFt,
+  maxOverhangFt,
+  moveSupport,
+  overhangs,
+  removeOverhang,
+  snapFt,
+  sortedSupports,
+  supportRange,
+  withMainSpan,
+  withOverhang,
+  type FlowState,
+  type FlowSupport,
+  type MemberEnd,
+} from "@/lib/flow/state";
 import { BeamEditor } from "./beam-editor";
 import { ChoiceGroup } from "./choice-group";
 import { LENGTH_HINT, LengthField } from "./length-field";
@@ -18,15 +34,44 @@ const SUPPORT_TYPES: { value: FlowSupport["type"]; label: string; detail: string
   { value: "fixed", label: "Fixed", detail: "built in, cannot turn" },
 ];
 
+const ENDS: readonly MemberEnd[] = ["left", "right"];
+
+/** A click from the keyboard (Enter or Space) has no pointer detail; a tap or a mouse click has. */
+const fromKeyboard = (event: MouseEvent) => event.detail === 0;
+
 /** Step 2: the span, overhangs and supports, typed or tapped on the drawing. */
 export function StepSpan({ state, update }: StepSpanProps) {
   const [selected, setSelected] = useState<number | null>(null);
+  // an end whose overhang field stays open while its length is typed, even through a 0
+  const [openEnds, setOpenEnds] = useState<Record<MemberEnd, boolean>>({ left: false, right: false });
+  const [said, setSaid] = useState("");
+  const idBase = useId();
   const sorted = sortedSupports(state.supports);
   const hang = overhangs(state);
   const sel = selected !== null && selected < state.supports.length ? selected : null;
+  const range = sel !== null ? supportRange(state, sel) : null;
+  const canOverhang = sorted.length >= 2;
+  const hasOverhang = (end: MemberEnd) => canOverhang && (hang[end] > 1e-9 || openEnds[end]);
+  const fieldId = (end: MemberEnd) => `${idBase}-overhang-${end}`;
+  const addId = (end: MemberEnd) => `${idBase}-add-${end}`;
 
-  const moveSupport = (index: number, x: number) =>
-    update((s) => ({ ...s, supports: s.supports.map((sup, i) => (i === index ? { ...sup, x: clamp(snapFt(x), 0, s.lengthFt) } : sup)) }));
+  const move = (index: number, x: number) => update((s) => moveSupport(s, index, x));
+
+  const onAddOverhang = (end: MemberEnd, event: MouseEvent) => {
+    const length = Math.min(DEFAULT_OVERHANG_FT, maxOverhangFt(state, end));
+    update((s) => addOverhang(s, end, length));
+    setOpenEnds((o) => ({ ...o, [end]: true }));
+    setSaid(`${end === "left" ? "Left" : "Right"} overhang added, ${formatFeetInches(length)}. Its length can be typed below the drawing.`);
+    // from the keyboard, go on to its length; a tap leaves the phone's keyboard down and the drawing in view
+    if (fromKeyboard(event)) requestAnimationFrame(() => document.getElementById(fieldId(end))?.focus());
+  };
+
+  const onRemoveOverhang = (end: MemberEnd) => {
+    update((s) => removeOverhang(s, end));
+    setOpenEnds((o) => ({ ...o, [end]: false }));
+    setSaid(`${end === "left" ? "Left" : "Right"} overhang removed.`);
+    requestAnimationFrame(() => document.getElementById(addId(end))?.focus());
+  };
 
   return (
     <div className="flex flex-col gap-5">
@@ -42,7 +87,7 @@ export function StepSpan({ state, update }: StepSpanProps) {
 
       <section aria-labelledby="beam-drawing-title" className="flex flex-col gap-2">
         <h3 id="beam-drawing-title" className="font-bold">
-          The member — tap the beam to add a support, tap a support to change it
+          The member — tap the beam to add a support, tap a support to move or change it, tap “+ Overhang” to run the member past an end support
         </h3>
         <BeamEditor
           state={state}
@@ -52,7 +97,7 @@ export function StepSpan({ state, update }: StepSpanProps) {
             update((s) => ({ ...s, supports: [...s.supports, { x, type: "roller" }] }));
             setSelected(state.supports.length);
           }}
-          onMove={moveSupport}
+          onMove={move}
           onSetType={(index, type) => update((s) => ({ ...s, supports: s.supports.map((sup, i) => (i === index ? { ...sup, type } : sup)) }))}
           onRemove={(index) => {
             if (state.supports.length <= 1) return;
@@ -60,6 +105,39 @@ export function StepSpan({ state, update }: StepSpanProps) {
             setSelected(null);
           }}
         />
+        {canOverhang ? (
+          <div className="grid grid-cols-2 items-start gap-3" role="group" aria-label="Overhangs at the ends">
+            {ENDS.map((end) =>
+              hasOverhang(end) ? (
+                <div key={end} className="flex min-w-0 flex-col gap-1">
+                  <LengthField
+                    id={fieldId(end)}
+                    label={`Overhang past the ${end} support`}
+                    valueFt={hang[end]}
+                    minFt={0}
+                    maxFt={maxOverhangFt(state, end)}
+                    onCommit={(ft) => {
+                      setOpenEnds((o) => ({ ...o, [end]: true }));
+                      update((s) => withOverhang(s, end, snapFt(ft)));
+                    }}
+                  />
+                  <Button variant="secondary" className={end === "right" ? "self-end" : "self-start"} aria-label={`Remove the ${end} overhang`} onClick={() => onRemoveOverhang(end)}>
+                    Remove
+                  </Button>
+                </div>
+              ) : (
+                <div key={end} className={end === "right" ? "flex justify-end" : "flex justify-start"}>
+                  <Button id={addId(end)} variant="secondary" className="px-3" aria-label={`Add an overhang at the ${end} end`} onClick={(event) => onAddOverhang(end, event)}>
+                    <span aria-hidden="true">{end === "left" ? "← " : ""}+ Overhang{end === "right" ? " →" : ""}</span>
+                  </Button>
+                </div>
+              ),
+            )}
+          </div>
+        ) : null}
+        <p className="sr-only" aria-live="polite">
+          {said}
+        </p>
         <ul className="flex flex-wrap gap-2" aria-label="Supports">
           {state.supports
             .map((s, i) => ({ s, i }))
@@ -98,18 +176,26 @@ export function StepSpan({ state, update }: StepSpanProps) {
           <LengthField
             label="Position from the left end"
             valueFt={state.supports[sel].x}
-            minFt={0}
-            maxFt={state.lengthFt}
-            onCommit={(ft) => moveSupport(sel, ft)}
+            minFt={range?.min ?? 0}
+            maxFt={range?.max ?? state.lengthFt}
+            hint={range ? `Anywhere from ${formatFeetInches(range.min)} to ${formatFeetInches(range.max)}: on the member, and not past the next support.` : undefined}
+            onCommit={(ft) => move(sel, ft)}
           />
-          <div className="grid grid-cols-4 gap-2" role="group" aria-label="Nudge the support">
+          <div className="grid grid-cols-4 gap-2" role="group" aria-label="Move the support">
             {[
-              { d: -1, t: "← 1 ft" },
-              { d: -1 / 12, t: "← 1 in" },
-              { d: 1 / 12, t: "1 in →" },
-              { d: 1, t: "1 ft →" },
-            ].map(({ d, t }) => (
-              <Button key={t} variant="secondary" className="px-1 whitespace-nowrap" onClick={() => moveSupport(sel, state.supports[sel].x + d)}>
+              { d: -1, t: "← 1 ft", say: "Move 1 ft left" },
+              { d: -1 / 12, t: "← 1 in", say: "Move 1 in left" },
+              { d: 1 / 12, t: "1 in →", say: "Move 1 in right" },
+              { d: 1, t: "1 ft →", say: "Move 1 ft right" },
+            ].map(({ d, t, say }) => (
+              <Button
+                key={t}
+                variant="secondary"
+                className="px-1 whitespace-nowrap"
+                aria-label={say}
+                disabled={range !== null && (d < 0 ? state.supports[sel].x <= range.min + 1e-9 : state.supports[sel].x >= range.max - 1e-9)}
+                onClick={() => move(sel, state.supports[sel].x + d)}
+              >
                 {t}
               </Button>
             ))}
@@ -140,11 +226,6 @@ export function StepSpan({ state, update }: StepSpanProps) {
           </div>
         </section>
       ) : null}
-
-      <div className="grid gap-4 sm:grid-cols-2">
-        <LengthField label="Overhang past the left support" valueFt={hang.left} minFt={0} maxFt={MAX_LENGTH_FT / 2} hint="0 for none" onCommit={(ft) => update((s) => withOverhang(s, "left", ft))} />
-        <LengthField label="Overhang past the right support" valueFt={hang.right} minFt={0} maxFt={MAX_LENGTH_FT / 2} hint="0 for none" onCommit={(ft) => update((s) => withOverhang(s, "right", ft))} />
-      </div>
 
       <FlowNumberField
         label="Bearing length at each support"
