@@ -2,13 +2,14 @@
 // and the signed webhooks between them (issue 8), and what they pay for: a new builder is told job sheets
 // need a subscription, subscribes, sizes a member, saves a job sheet and downloads its PDF.
 import { describe, expect, test } from "vitest";
+import { execFileSync } from "node:child_process";
 import { mkdir, readFile } from "node:fs/promises";
 import path from "node:path";
 import type { Page } from "playwright-core";
 import { ARTIFACTS_DIR, setupBrowser, type OpenedPage } from "./support/browser";
 import { sizeAndSaveMember } from "./support/flow";
 import { endBillingPeriod, payWithCard, signUpBuilder, standinUrl, subscribe, TEST_CARDS, waitForMail } from "./support/payments";
-import { isPdf, pdfStreamText } from "../sheets/pdf-text";
+import { hasPdftotext, isPdf, pdfStreamText } from "../sheets/pdf-text";
 
 const session = setupBrowser();
 
@@ -16,9 +17,9 @@ const session = setupBrowser();
  * A full-page screenshot that leaves the text caret alone: Playwright hides it with an inline style, which
  * React reports as a hydration mismatch when the shot lands before the page has hydrated.
  */
-async function shoot(page: Page, name: string): Promise<void> {
+async function shoot(page: Page, name: string, fullPage = true): Promise<void> {
   await mkdir(ARTIFACTS_DIR, { recursive: true });
-  await page.screenshot({ path: path.join(ARTIFACTS_DIR, `${name}.png`), fullPage: true, caret: "initial" });
+  await page.screenshot({ path: path.join(ARTIFACTS_DIR, `${name}.png`), fullPage, caret: "initial" });
 }
 
 // Windows-1252's characters at 0x80-0x9F, where Latin-1 has control codes (Windows-1252 code page, as published by Microsoft)
@@ -157,7 +158,7 @@ describe("subscriptions", () => {
     expect(await locked.textContent()).toContain("Saving job sheets needs a subscription.");
     expect(await page.getByTestId("sheet-save").count()).toBe(0);
     await locked.scrollIntoViewIfNeeded();
-    await shoot(page, "payments-sheet-1-free-locked");
+    await shoot(page, "payments-sheet-1-free-locked", false);
 
     // Its "See plans" leads to the plans; the success card pays and the account is a subscriber
     await Promise.all([page.waitForURL(/\/pricing$/), locked.getByRole("link", { name: "See plans" }).click()]);
@@ -171,7 +172,7 @@ describe("subscriptions", () => {
 
     // A deck joist sized through the flow at 390x844 and saved to a new job
     const member = { kind: "deck-joist", span: "11' 6\"", label: "DJ1 deck joists", newJob: { name: "Ashdown back deck", siteAddress: "9 Fenwick Close, Larkfield" } } as const;
-    const headline = await sizeAndSaveMember(page, member, (step) => shoot(page, `payments-sheet-3-flow-${step}`));
+    const headline = await sizeAndSaveMember(page, member, (step) => shoot(page, `payments-sheet-3-flow-${step}`, false));
     expect(headline).toMatch(/^2x\d+ .* at \d+ in o\.c\./);
 
     // The new job's page: the member with its answer, and now a button to save a sheet
@@ -181,6 +182,8 @@ describe("subscriptions", () => {
     expect(await page.getByText(member.label).count()).toBeGreaterThan(0);
     expect(await page.getByText(headline).count()).toBeGreaterThan(0);
     expect(await page.getByTestId("sheet-locked").count()).toBe(0);
+    await page.getByTestId("sheet-save").scrollIntoViewIfNeeded();
+    await shoot(page, "payments-sheet-4-job-paid", false);
     await Promise.all([page.waitForURL(/\/sheets\/[0-9a-f-]{36}$/, { timeout: 30_000 }), page.getByTestId("sheet-save").click()]);
 
     // The sheet: one member, its answer line, the caution
@@ -188,12 +191,13 @@ describe("subscriptions", () => {
     const sheetMembers = page.getByTestId("sheet-member");
     expect(await sheetMembers.count()).toBe(1);
     expect(await sheetMembers.first().textContent()).toContain(headline);
-    await shoot(page, "payments-sheet-4-sheet");
+    await shoot(page, "payments-sheet-5-sheet", false);
+    await shoot(page, "payments-sheet-5-sheet-full");
 
     // The PDF: a whole file with the member's name, its answer line, the caution and the builder's company
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("sheet-pdf-letter").click()]);
     expect(download.suggestedFilename()).toMatch(/^Ashdown-back-deck-.*\.pdf$/);
-    const file = path.join(ARTIFACTS_DIR, "payments-sheet-5.pdf");
+    const file = path.join(ARTIFACTS_DIR, "payments-sheet-6.pdf");
     await download.saveAs(file);
     const pdf = await readFile(file);
     expect(pdf.subarray(0, 4).toString("latin1")).toBe("%PDF");
@@ -201,8 +205,10 @@ describe("subscriptions", () => {
     const text = fromWinAnsi(pdfStreamText(pdf));
     expect(text).toContain(member.label);
     expect(text).toContain(headline);
+    expect(text).toContain(member.span);
     expect(text).toContain("Check before you build");
     expect(text).toContain("Ashdown Decks");
+    if (hasPdftotext()) execFileSync("pdftoppm", ["-r", "70", "-png", "-f", "1", "-l", "2", file, path.join(ARTIFACTS_DIR, "payments-sheet-6-pdf")]);
     expect(consoleErrors).toEqual([]);
   }, 180_000);
 });
