@@ -63,7 +63,14 @@ export function StepSpan({ state, update }: StepSpanProps) {
     setOpenEnds((o) => ({ ...o, [end]: true }));
     setSaid(`${end === "left" ? "Left" : "Right"} overhang added, ${formatFeetInches(length)}. Its length can be typed below the drawing.`);
     // from the keyboard, go on to its length; a tap leaves the phone's keyboard down and the drawing in view
-    if (fromKeyboard(event)) requestAnimationFrame(() => document.getElementById(fieldId(end))?.focus());
+    if (fromKeyboard(event)) {
+      requestAnimationFrame(() => {
+        const field = document.getElementById(fieldId(end));
+        if (!(field instanceof HTMLInputElement)) return;
+        field.focus();
+        field.select();
+      });
+    }
   };
 
   const onRemoveOverhang = (end: MemberEnd) => {
