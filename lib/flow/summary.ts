@@ -44,18 +44,22 @@ export interface MemberResultSummary {
   computedAt: string;
 }
 
-/** "2 jack studs each end", "2 jack studs left, 3 right", or the bearing needed when no studs apply. */
+/**
+ * "2 jack studs each end", "2 jack studs at support 1, 3 jack studs at support 2", or the bearing needed when no
+ * studs apply; "each end" only for a member on two supports, "at each support" on three or more.
+ */
 export function supportWords(reactions: readonly Pick<SummaryReaction, "jackStuds" | "requiredBearing">[]): string {
   if (reactions.length === 0) return "";
+  const where = reactions.length === 2 ? "each end" : reactions.length === 1 ? "at the support" : "at each support";
   const studs = reactions.map((r) => r.jackStuds);
   if (studs.every((s) => s !== null)) {
     const counts = studs as number[];
-    if (counts.every((c) => c === counts[0])) return `${counts[0]} jack stud${counts[0] === 1 ? "" : "s"} each end`;
+    if (counts.every((c) => c === counts[0])) return `${counts[0]} jack stud${counts[0] === 1 ? "" : "s"} ${where}`;
     return counts.map((c, i) => `${c} jack stud${c === 1 ? "" : "s"} at support ${i + 1}`).join(", ");
   }
   // never less than 1-1/2 in: the least bearing IRC 2021 R502.6 allows for joists and beams on wood or metal
   const need = Math.max(1.5, ...reactions.map((r) => r.requiredBearing));
-  return `${formatInches(need)} bearing each end`;
+  return `${formatInches(need)} bearing ${where}`;
 }
 
 /** The member as a builder says it: "3-ply 2x12 No.2", "W8x18", "1-3/4 x 11-7/8 LVL 2.0E". */

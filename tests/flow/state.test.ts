@@ -135,8 +135,10 @@ describe("the answer line", () => {
   });
 
   test("no studs: the bearing, never under 1-1/2 in (IRC 2021 R502.6)", () => {
-    expect(supportWords([{ jackStuds: null, requiredBearing: 0.4 }])).toBe(`1-1/2" bearing each end`);
-    expect(supportWords([{ jackStuds: null, requiredBearing: 2.3 }])).toBe(`2-5/16" bearing each end`);
+    expect(supportWords([{ jackStuds: null, requiredBearing: 0.4 }])).toBe(`1-1/2" bearing at the support`);
+    expect(supportWords([{ jackStuds: null, requiredBearing: 2.3 }, { jackStuds: null, requiredBearing: 1 }])).toBe(`2-5/16" bearing each end`);
+    const three = [0.4, 2.3, 0.9].map((b) => ({ jackStuds: null, requiredBearing: b }));
+    expect(supportWords(three)).toBe(`2-5/16" bearing at each support`);
   });
 
   test("a built-up header reads the way a builder says it", () => {
@@ -145,7 +147,7 @@ describe("the answer line", () => {
   });
 
   test("joists name their spacing", () => {
-    const line = headlineFor({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 1 }, "2x10 Douglas Fir-Larch No.2", [{ jackStuds: null, requiredBearing: 0.6 }], "floor-joist", 16);
+    const line = headlineFor({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 1 }, "2x10 Douglas Fir-Larch No.2", [{ jackStuds: null, requiredBearing: 0.6 }, { jackStuds: null, requiredBearing: 0.6 }], "floor-joist", 16);
     expect(line).toBe(`2x10 No.2 at 16 in o.c. — 1-1/2" bearing each end`);
   });
 });
