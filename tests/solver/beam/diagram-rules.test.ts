@@ -126,8 +126,11 @@ describe("common practice: a clockwise couple is an upward step in the moment di
  * there, so each side is compared with its own one-sided limit.
  */
 function isLocalExtreme(a: BeamAnalysis, z: number, L: number, tol: number): boolean {
-  const h = 1e-4 * L;
-  const lim = 1e-7 * L;
+  // Probe no further than halfway to the next reported zero-shear point: two can sit a hair apart
+  // (a crossing just left of a support where V jumps back), and a wider probe would step over the other.
+  const gaps = a.extremes.zeroShear.map((p) => Math.abs(p - z)).filter((d) => d > 1e-12 * L);
+  const h = Math.min(1e-4 * L, 0.5 * Math.min(Infinity, ...gaps));
+  const lim = Math.min(1e-7 * L, h / 10);
   const leftLim = a.evaluate(Math.max(z - lim, 0)).M;
   const left = a.evaluate(Math.max(z - h, 0)).M;
   const rightLim = a.evaluate(z).M;
@@ -153,5 +156,25 @@ describe("common practice: the moment has a local extreme where the shear crosse
       }),
       { numRuns: 300 },
     );
+  });
+
+  test("a crossing 0.0075 in left of a support where the shear jumps back: both are extremes", () => {
+    // found by the random test above: a maximum at x = 3.98325 ft and a minimum at the support at 3.984 ft
+    const input: BeamInput = {
+      length: 33.2,
+      E: 1_000_000,
+      I: 5,
+      supports: [
+        { x: 23.904, type: "roller" }, { x: 2.656, type: "roller" }, { x: 25.232, type: "fixed" },
+        { x: 15.272, type: "fixed" }, { x: 3.984, type: "pin" }, { x: 7.304, type: "roller" },
+      ],
+      loads: [
+        { type: "udl", from: 0.913, to: 4.648, w: 2, case: "D" },
+        { type: "point", x: 6.391, P: 5.58, case: "D" },
+      ],
+    };
+    const a = analyzeBeam(input);
+    expect(a.extremes.zeroShear.some((z) => z > 3.983 && z < 3.9839)).toBe(true);
+    for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input.length, 1e-12)).toBe(true);
   });
 });
