@@ -44,7 +44,7 @@ const TABLE_4A: SawnDesignValues[] = [
   row("Hem-Fir", "No.2", "dimension", [850, 525, 150, 405, 1300, 1_300_000, 470_000], 0.43, T4A),
   row("Hem-Fir", "No.3", "dimension", [500, 300, 150, 405, 725, 1_200_000, 440_000], 0.43, T4A),
   // Spruce-Pine-Fir: Table 4A prints one "No.1/No.2" line; it is entered under both grades.
-  // Select Structural Fb: memory says 1250, one open-source transcription of Table 4A gives 1150.
+  // Select Structural Fb: memory says 1250, one open-source copy of Table 4A gives 1150.
   // The lower figure is kept until someone checks the printed table.
   row("Spruce-Pine-Fir", "Select Structural", "dimension", [1150, 700, 135, 425, 1400, 1_500_000, 550_000], 0.42, T4A),
   row("Spruce-Pine-Fir", "No.1", "dimension", [875, 450, 135, 425, 1150, 1_400_000, 510_000], 0.42, T4A),
