@@ -50,12 +50,7 @@ export function PointLoadDialog({ open, lengthFt, initial, onClose, onSave }: Po
               <TextField label="Position from the left end" hint={`0 to ${formatFeetInches(lengthFt)}`} {...form.getFieldProps("x")} error={fieldError(form, "x")} className="figures" autoComplete="off" />
               <NumberWithUnitField label="Load" unit="lb" unitSpoken="pounds" {...form.getFieldProps("P")} error={fieldError(form, "P")} />
               <SelectField label="Load case" options={caseOptions} {...form.getFieldProps("case")} error={fieldError(form, "case")} />
-              <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-                <Button variant="secondary" onClick={onClose}>
-                  Cancel
-                </Button>
-                <Button type="submit">{initial ? "Save the load" : "Add the load"}</Button>
-              </div>
+              <LoadFormActions editing={initial !== null} onCancel={onClose} />
             </Form>
           )}
         </Formik>
@@ -99,16 +94,23 @@ export function LineLoadDialog({ open, lengthFt, initial, onClose, onSave }: Lin
               </div>
               <NumberWithUnitField label="Load" unit="plf" unitSpoken="pounds per foot" hint="Pounds per foot of member" {...form.getFieldProps("w")} error={fieldError(form, "w")} />
               <SelectField label="Load case" options={caseOptions} {...form.getFieldProps("case")} error={fieldError(form, "case")} />
-              <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
-                <Button variant="secondary" onClick={onClose}>
-                  Cancel
-                </Button>
-                <Button type="submit">{initial ? "Save the load" : "Add the load"}</Button>
-              </div>
+              <LoadFormActions editing={initial !== null} onCancel={onClose} />
             </Form>
           )}
         </Formik>
       ) : null}
     </Dialog>
+  );
+}
+
+/** Cancel and Save/Add at the foot of both load forms. */
+function LoadFormActions({ editing, onCancel }: { editing: boolean; onCancel: () => void }) {
+  return (
+    <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
+      <Button variant="secondary" onClick={onCancel}>
+        Cancel
+      </Button>
+      <Button type="submit">{editing ? "Save the load" : "Add the load"}</Button>
+    </div>
   );
 }
