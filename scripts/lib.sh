@@ -48,13 +48,15 @@ wait_for_url() {
 
 port_busy() { (exec 3<>"/dev/tcp/127.0.0.1/$1") 2>/dev/null; }
 
-# The local mail sink (maildev): SMTP 1025, web and API 1080, loopback only.
+# The local mail sink (maildev): SMTP 1025, web and API 1080 (MAIL_WEB_PORT), loopback only.
 start_mail_sink() {
+  local web="${MAIL_WEB_PORT:-1080}"
+  export MAILDEV_URL="http://127.0.0.1:$web"
   if port_busy "${SMTP_PORT:-1025}"; then log "mail sink already listening on ${SMTP_PORT:-1025}"; return 0; fi
-  node_modules/.bin/maildev --smtp "${SMTP_PORT:-1025}" --web 1080 --ip 127.0.0.1 --web-ip 127.0.0.1 \
+  node_modules/.bin/maildev --smtp "${SMTP_PORT:-1025}" --web "$web" --ip 127.0.0.1 --web-ip 127.0.0.1 \
     > .data/logs/maildev.log 2>&1 &
   SERVICE_PIDS+=($!)
-  wait_for_url "http://127.0.0.1:1080/api/healthz" "mail sink" && log "mail sink: SMTP 127.0.0.1:${SMTP_PORT:-1025}, inbox http://127.0.0.1:1080"
+  wait_for_url "$MAILDEV_URL/api/healthz" "mail sink" && log "mail sink: SMTP 127.0.0.1:${SMTP_PORT:-1025}, inbox $MAILDEV_URL"
 }
 
 # The Stripe stand-in (scripts/stripe-standin.ts) unless a real Stripe key is configured.

@@ -30,7 +30,7 @@ cat >&2 <<MSG
     admin       admin@spanlark.test   / admin-demo-pass
     subscriber  sam@hollisrowe.test   / subscriber-demo-pass
     builder     dee@hollisrowe.test   / builder-demo-pass
-  Mail sink (every e-mail the app sends): http://127.0.0.1:1080
+  Mail sink (every e-mail the app sends): ${MAILDEV_URL}
 
 MSG
 
