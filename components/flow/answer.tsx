@@ -8,7 +8,7 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
+import { answerFacts, headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
 import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -170,6 +170,13 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                   {checkTitle(chosenCandidate.governing)} governs · {chosenCandidate.label}
                 </span>
               </p>
+              {chosenCheck ? (
+                <ul className="mt-3 flex flex-col gap-1 border-t-2 border-rule pt-2 text-ink" data-testid="answer-facts">
+                  {answerFacts(chosenCheck).map((f) => (
+                    <li key={f}>{f}</li>
+                  ))}
+                </ul>
+              ) : null}
               {action ? <div className="mt-3 hidden md:block">{action}</div> : null}
             </>
           ) : size.data ? (

@@ -29,6 +29,9 @@ export type JobPageMember = {
   /** the label of the member that carries this one */
   carriedBy: string | null;
   carriedById?: string | null;
+  /** the load basis the saved answer was worked on, and whether the member carries snow */
+  loadStandard?: "ASCE 7-16" | "ASCE 7-22";
+  carriesSnow?: boolean;
 };
 
 export type JobPageProps = {
@@ -117,6 +120,33 @@ export function JobPage({ job, children }: JobPageProps) {
                     {verdict ? <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} /> : <StatusBadge status="caution" label="Not sized" />}
                   </div>
                   <p className="text-xl font-bold text-ink">{m.headline ?? "Nothing in the tables worked for these inputs."}</p>
+                  {m.loadStandard === "ASCE 7-22" && m.carriesSnow ? (
+                    <div className="flex flex-col gap-2 rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-3 text-ink" data-testid="recheck-basis">
+                      <p>
+                        Worked out with ground snow from the newer risk-based map (ASCE 7-22, counted at 0.7). Most building departments still give the number from the
+                        map in the 2021 code or older, counted in full.
+                      </p>
+                      <div>
+                        <Button
+                          variant="secondary"
+                          disabled={pending}
+                          onClick={() =>
+                            run(async () => {
+                              const result = await updateMember({ memberId: m.id, loadStandard: "ASCE 7-16" });
+                              if (!result.ok) {
+                                setProblem(result.error);
+                                return;
+                              }
+                              router.refresh();
+                              toast.show({ message: `${m.label} re-checked on the older map (ASCE 7-16)` });
+                            })
+                          }
+                        >
+                          Re-check on the older map
+                        </Button>
+                      </div>
+                    </div>
+                  ) : null}
                   {job.members.length > 1 ? (
                     <SelectField
                       label="Bears on"

@@ -50,6 +50,13 @@ function MemberSection({ m, index }: { m: SheetMember; index: number }) {
         <p className="mt-2">
           <StatusBadge status={m.pass ? "pass" : "fail"} label={`${m.pass ? "OK" : "Over"} ${ratioPercent(m.ratio)}, ${checkWords(m.governing)} governs`} />
         </p>
+        {m.facts && m.facts.length > 0 ? (
+          <ul className="mt-2 flex flex-col gap-0.5" data-testid="sheet-facts">
+            {m.facts.map((f) => (
+              <li key={f}>{f}</li>
+            ))}
+          </ul>
+        ) : null}
         {m.note ? <p className="mt-2 text-sm text-ink-soft">{m.note}</p> : null}
       </header>
 

@@ -3,6 +3,7 @@
  * names its field and the reason.
  */
 import { z } from "zod";
+import { LOAD_STANDARDS } from "@/lib/solver/asce7/standard";
 import { flowStateSchema } from "@/lib/flow/schema";
 import { memberSchema } from "@/lib/solver/design/schema";
 
@@ -45,5 +46,7 @@ export const updateMemberSchema = z.object({
   chosenMember: memberSchema.nullable().optional(),
   /** the member that carries this one (joists on a beam), in the same job; null to clear */
   carriedByMemberId: uuid("Carried by").nullable().optional(),
+  /** work the member out again on this load basis (the job page's one-tap re-check) */
+  loadStandard: z.enum(LOAD_STANDARDS, { error: `Load basis: must be one of ${LOAD_STANDARDS.join(", ")}` }).optional(),
 });
 export type UpdateMemberInput = z.infer<typeof updateMemberSchema>;

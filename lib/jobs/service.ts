@@ -189,8 +189,9 @@ export async function updateMember(ownerId: string, input: UpdateMemberInput): P
     }
     member.carriedByMemberId = input.carriedByMemberId;
   }
-  if (input.flowState !== undefined || input.chosenMember !== undefined) {
-    const state = (input.flowState ?? member.flowState) as FlowState;
+  if (input.flowState !== undefined || input.chosenMember !== undefined || input.loadStandard !== undefined) {
+    const given = (input.flowState ?? member.flowState) as FlowState;
+    const state: FlowState = input.loadStandard !== undefined ? { ...given, loadStandard: input.loadStandard } : given;
     const { summary, chosen } = await computeSummary(state, input.chosenMember !== undefined ? input.chosenMember : member.chosenMember);
     member.flowState = state;
     member.kind = state.kind;

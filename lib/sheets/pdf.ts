@@ -300,6 +300,7 @@ function drawMember(w: SheetWriter, m: SheetMember, index: number): void {
     color: m.pass ? COLORS.sound : COLORS.over,
     bold: true,
   });
+  for (const f of m.facts ?? []) w.text(f, { size: 10 });
   if (m.note) w.text(m.note, { size: 9, color: COLORS.graphite });
 
   w.heading("Inputs", 11);

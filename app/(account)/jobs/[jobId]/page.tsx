@@ -35,6 +35,8 @@ export default async function JobRoute({ params }: JobRouteProps) {
           spanFt: m.resultSummary?.spanFt ?? null,
           carriedBy: m.carriedByMemberId ? (job.members.find((c) => c.id === m.carriedByMemberId)?.label ?? null) : null,
           carriedById: m.carriedByMemberId,
+          loadStandard: m.flowState.loadStandard ?? "ASCE 7-16",
+          carriesSnow: m.flowState.snow.on || [...m.flowState.areaLoads, ...m.flowState.pointLoads, ...m.flowState.lineLoads].some((l) => l.case === "S"),
         })),
       }}
     >
