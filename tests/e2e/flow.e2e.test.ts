@@ -35,7 +35,8 @@ describe("sizing flow at 390x844", () => {
     await screenshot("flow-header-3-loads", { fullPage: false });
     await next(page, /Next: Material/);
 
-    // Step 4: built-up sawn lumber by default
+    // Step 4: built-up sawn lumber by default; a 10 ft header under full snow needs three plies, so a 2x6 wall
+    await page.getByText("2x6 wall", { exact: true }).click();
     await screenshot("flow-header-4-material", { fullPage: false });
     await next(page, /See the answer/);
 
