@@ -10,6 +10,8 @@ import type { CheckOutput } from "@/lib/solver/design/check";
 import { LOAD_CASES, type BeamInput, type Combination, type Load, type LoadCase } from "@/lib/solver/types";
 import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import type { MemberKind, WallFraming } from "@/lib/solver/design/kinds";
+import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
+import type { DeflectionPresetId } from "@/lib/solver/design/schema";
 import { mainSpanFt, overhangs, sortedSupports, wallOf, type FlowMaterial, type FlowState } from "./state";
 
 /** The size family the search is limited to. */
@@ -29,7 +31,8 @@ export interface DesignRequestBase {
   loads: DesignLoad[];
   bearing: number;
   conditions: { wet: boolean; incised?: boolean; repetitive?: boolean; unbracedLength: number; selfWeight: boolean };
-  limits: { live: number; total: number };
+  /** a preset (so the answer cites its source) when the flow's numbers are one, else the numbers */
+  limits: { preset: DeflectionPresetId } | { live: number; total: number };
   method: "asd";
   loadStandard: LoadStandard;
   kind: MemberKind;
@@ -66,6 +69,17 @@ export function designLoads(state: FlowState): DesignLoad[] {
   return loads;
 }
 
+/**
+ * The deflection limits as a preset when the flow's numbers are one (floors for floor and deck members,
+ * the roof presets for headers and rafters), so the answer and sheet cite IRC R301.7 / IBC 1604.3.
+ */
+export function limitsFor(state: FlowState): DesignRequestBase["limits"] {
+  const matches = DEFLECTION_PRESETS.filter((p) => p.live === state.limits.live && p.total === state.limits.total);
+  const roof = state.kind === "rafter" || state.kind === "header";
+  const pick = matches.find((p) => (roof ? p.id.startsWith("ceiling") || p.id.startsWith("roof") : p.id.startsWith("floor"))) ?? matches[0];
+  return pick ? { preset: pick.id } : { live: state.limits.live, total: state.limits.total };
+}
+
 /** The rough opening to send, when the builder gave one and the member is still a simple span of that size. */
 export function roughOpeningToSend(state: FlowState): number | undefined {
   const ro = state.roughOpeningFt;
@@ -93,7 +107,7 @@ export function designBase(state: FlowState): DesignRequestBase {
       unbracedLength: state.unbracedFt,
       selfWeight: state.selfWeight,
     },
-    limits: { live: state.limits.live, total: state.limits.total },
+    limits: limitsFor(state),
     method: "asd",
     loadStandard: state.loadStandard ?? "ASCE 7-16",
     kind: state.kind,

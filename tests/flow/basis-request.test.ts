@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { defaultFlowState } from "@/lib/flow/defaults";
-import { checkRequest, designBase, sizeRequest } from "@/lib/flow/request";
+import { checkRequest, designBase, limitsFor, sizeRequest } from "@/lib/flow/request";
 import { parseFlowState } from "@/lib/flow/schema";
 import { spanFromRoughOpeningFt, withMainSpan, type FlowState } from "@/lib/flow/state";
 import { answerFacts } from "@/lib/flow/summary";
@@ -66,5 +66,15 @@ describe("what the flow sends", () => {
     const deckSize = sizeMember(sizeRequest(hf), STARTER_TABLES);
     const deckCheck = checkMember(checkRequest(hf, deckSize.passing[0].member), STARTER_TABLES);
     expect(answerFacts(deckCheck).some((f) => /^Lumber: treated Hem-Fir assumed incised/.test(f))).toBe(true);
+  });
+
+  test("deflection limits go as the preset they match, so the answer cites IRC 2021 Table R301.7 and IBC 2021 Table 1604.3", () => {
+    expect(limitsFor(defaultFlowState("floor-joist"))).toEqual({ preset: "floor" });
+    expect(limitsFor(defaultFlowState("rafter"))).toEqual({ preset: "ceiling-flexible" });
+    expect(limitsFor({ ...defaultFlowState("beam"), limits: { live: 300, total: 200 } })).toEqual({ live: 300, total: 200 });
+    const j = defaultFlowState("floor-joist");
+    const size = sizeMember(sizeRequest(j), STARTER_TABLES);
+    const check = checkMember(checkRequest(j, size.passing[0].member), STARTER_TABLES);
+    expect(check.limits.source).toMatch(/IRC 2021 Table R301\.7.*IBC 2021 Table 1604\.3.*footnote d not applied/);
   });
 });
