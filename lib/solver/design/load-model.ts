@@ -4,7 +4,7 @@
  * once with a reference stiffness, and every combination is formed by superposition. The member's
  * own weight is a separate unit load, scaled per candidate; deflections scale with EI_REF/(E'·I).
  *
- * Pattern live load (ASCE 7-22 §4.3.3): at each station the live load of a region is counted where
+ * Pattern live load (ASCE 7 §4.3.3, 7-16 and 7-22 alike): at each station the live load of a region is counted where
  * it makes that station's value worse, which is the worst of every on/off arrangement of the regions.
  *
  * Units: x in ft, V and reactions in lb, M in lb-ft, deflection in in (positive down), as in the solver.

@@ -95,7 +95,7 @@ export const conditionsSchema = z
     temperatureF: z.number().refine((v) => Number.isFinite(v) && v <= 150, "must be at most 150 °F").default(70),
     /** leave out uniform loads within d of each support in the shear check (NDS 2018 §3.4.3.1(a)) */
     shearIgnoreLoadsNearSupports: z.boolean().default(false),
-    /** place live load span by span for the worst case (ASCE 7-22 §4.3.3) */
+    /** place live load span by span for the worst case (ASCE 7 §4.3.3, the same in 7-16 and 7-22) */
     patternLiveLoad: z.boolean().default(true),
   })
   .strict();
