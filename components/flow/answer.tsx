@@ -185,7 +185,10 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                 <WarningIcon className="h-7 w-7" /> Nothing in the tables works
               </p>
               <p className="mt-1 text-ink">
-                None of the {size.data.candidates} members checked carries this load over this span. Try another material, more plies, a shorter span or another support.
+                {size.data.candidates === 0 && size.data.notFittingWall > 0
+                  ? `None of these members fills a ${size.data.wallFraming} wall. Try other plies, another material or the other wall framing.`
+                  : `None of the ${size.data.candidates} members checked carries this load over this span. Try another material, more plies, a shorter span or another support.`}
+                {size.data.candidates > 0 && size.data.notFittingWall > 0 ? ` Members that do not fill a ${size.data.wallFraming} wall were left out.` : ""}
               </p>
             </>
           ) : (
