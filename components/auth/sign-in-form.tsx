@@ -9,7 +9,8 @@ import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { EmailField } from "./email-field";
 import { FormAlert } from "./form-alert";
-import { emailRule, postJson, safeReturnPath } from "./form-support";
+import { safeReturnPath } from "@/lib/auth/return-path";
+import { emailRule, postJson } from "./form-support";
 
 const schema = yup.object({
   email: emailRule,
@@ -27,7 +28,6 @@ type Problem = { kind: "invalid" } | { kind: "unverified"; email: string } | { k
 export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
   const [problem, setProblem] = useState<Problem | null>(null);
   const [resent, setResent] = useState<"idle" | "sending" | "sent" | "failed">("idle");
-  const target = safeReturnPath(callbackUrl);
 
   const form = useFormik({
     initialValues: { email: "", password: "" },
@@ -36,6 +36,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
       setProblem(null);
       setResent("idle");
       const email = values.email.trim();
+      const target = safeReturnPath(callbackUrl, window.location.origin);
       const result = await signIn("credentials", { email, password: values.password, redirect: false, callbackUrl: target }).catch(
         () => undefined,
       );

@@ -4,6 +4,7 @@ import CredentialsProvider from "next-auth/providers/credentials";
 import { env } from "@/lib/env";
 import { authenticate } from "./accounts";
 import { clientIp } from "./client-ip";
+import { sameOriginRedirect } from "./return-path";
 import { SignInSchema } from "./schemas";
 
 /** A session lasts 14 days from sign-in; it is not extended by use. */
@@ -45,6 +46,10 @@ export function authOptions(): NextAuthOptions {
       }),
     ],
     callbacks: {
+      // next-auth's own check passes any value starting with "/"; ours reads it as a browser would.
+      redirect({ url, baseUrl }) {
+        return sameOriginRedirect(url, baseUrl);
+      },
       async jwt({ token, user }) {
         if (user) {
           token.sub = user.id;
