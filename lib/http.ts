@@ -2,6 +2,7 @@ import "server-only";
 import { randomUUID } from "node:crypto";
 import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
+import { databaseUnavailableResponse, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { logger } from "@/lib/logger";
 
 /** An error with an HTTP status and a message fit to show a user (never a raw internal error). */
@@ -131,7 +132,8 @@ type Handler<C> = (req: Request, ctx: C) => Promise<Response>;
 
 /**
  * Wraps a route handler: gives each request an id, logs one line per request, turns HttpError and
- * ZodError into JSON 4xx answers, and any other error into a plain 500 that hides the details.
+ * ZodError into JSON 4xx answers, a database that cannot be reached into a JSON 503 (Retry-After), and any
+ * other error into a plain 500 that hides the details.
  */
 export function route<C>(handler: Handler<C>): Handler<C> {
   return async (req, ctx) => {
@@ -146,6 +148,9 @@ export function route<C>(handler: Handler<C>): Handler<C> {
         res = NextResponse.json({ error: err.message, ...err.details }, { status: err.status });
       } else if (err instanceof ZodError) {
         res = NextResponse.json({ error: "invalid input", issues: zodIssues(err) }, { status: 400 });
+      } else if (isDatabaseUnavailable(err)) {
+        logger.warn({ err, requestId, method: req.method, path: url.pathname }, "database unavailable");
+        res = databaseUnavailableResponse();
       } else {
         logger.error({ err, requestId, method: req.method, path: url.pathname }, "request failed");
         res = NextResponse.json({ error: "something went wrong on our side; try again", requestId }, { status: 500 });

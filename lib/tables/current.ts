@@ -1,5 +1,6 @@
 import type { Sequelize } from "sequelize";
 import { getSequelize } from "@/lib/db";
+import { isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { logger } from "@/lib/logger";
 import { clearTablesCache, invalidateCurrent, rememberVersion, tablesCache } from "./db/cache";
 import { currentVersionId, isVersionId, loadVersion } from "./db/queries";
@@ -62,6 +63,8 @@ function listener(): ListenerState {
 }
 
 const RETRY_MS = 5_000;
+/** After the database fails to answer, how long the last known version is served before asking it again. */
+const UNREACHABLE_HOLD_MS = 5_000;
 
 /**
  * Starts listening for new versions on one connection from the pool (idempotent). Called by the app
@@ -101,6 +104,14 @@ export async function startTablesListener(sequelize: Sequelize = getSequelize())
     logger.warn({ err }, "material tables listener could not start; reading the current version from the database on each request");
     if (connection) await sequelize.connectionManager.destroyConnection(connection).catch(() => undefined);
     state.status = "off";
+    // Try again later rather than on every request while the database is down.
+    if (!state.retry && state.sequelize === sequelize) {
+      state.retry = setTimeout(() => {
+        state.retry = null;
+        if (state.sequelize) void startTablesListener(state.sequelize);
+      }, RETRY_MS);
+      state.retry.unref?.();
+    }
   }
 }
 
@@ -157,7 +168,20 @@ export async function getCurrentTables(): Promise<MaterialTables> {
     if (held) return held;
   }
   const generation = cache.generation;
-  const id = known ?? (await currentVersionId());
+  const lastKnown = cache.lastCurrentId ? cache.byId.get(cache.lastCurrentId) : undefined;
+  if (!known && lastKnown && Date.now() < cache.unreachableUntil) return lastKnown;
+  let id: string | null;
+  try {
+    id = known ?? (await currentVersionId());
+  } catch (err) {
+    // The database is down: keep sizing with the version that was current when it was last reached.
+    if (!isDatabaseUnavailable(err) || !lastKnown) throw err;
+    if (cache.unreachableUntil === 0) logger.warn({ version: lastKnown.version }, "database unreachable; serving the material tables last known to be current");
+    cache.unreachableUntil = Date.now() + UNREACHABLE_HOLD_MS;
+    return lastKnown;
+  }
+  if (cache.unreachableUntil !== 0) logger.info("database reachable again; reading the current material tables from it");
+  cache.unreachableUntil = 0;
   if (!id) {
     if (!warnedEmpty) logger.warn("the database holds no version of the material tables (run the seeders); using the starter tables");
     warnedEmpty = true;
@@ -165,7 +189,9 @@ export async function getCurrentTables(): Promise<MaterialTables> {
   }
   // Keep the answer only if no change was announced while the query ran.
   if (cache.generation === generation) cache.currentId = id;
-  return getTablesVersion(id);
+  const tables = await getTablesVersion(id);
+  cache.lastCurrentId = id;
+  return tables;
 }
 
 /**
