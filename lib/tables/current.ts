@@ -53,6 +53,8 @@ interface ListenerState {
   sequelize: Sequelize | null;
   connection: object | null;
   retry: ReturnType<typeof setTimeout> | null;
+  /** the last start failed (so the next failure is not logged again) */
+  failing?: boolean;
 }
 
 const holder = globalThis as unknown as { spanlarkTablesListener?: ListenerState };
@@ -98,10 +100,14 @@ export async function startTablesListener(sequelize: Sequelize = getSequelize())
     await client.query(`LISTEN ${TABLE_VERSIONS_CHANNEL}`);
     state.connection = client;
     state.status = "listening";
+    if (state.failing) logger.info("material tables listener is back");
+    state.failing = false;
     // A version published before LISTEN took effect would otherwise go unnoticed.
     invalidateCurrent();
   } catch (err) {
-    logger.warn({ err }, "material tables listener could not start; reading the current version from the database on each request");
+    // Said once per outage, not at every retry.
+    if (!state.failing) logger.warn({ err }, "material tables listener could not start; reading the current version from the database on each request");
+    state.failing = true;
     if (connection) await sequelize.connectionManager.destroyConnection(connection).catch(() => undefined);
     state.status = "off";
     // Try again later rather than on every request while the database is down.
