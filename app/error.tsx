@@ -51,7 +51,7 @@ export default function PageError({ error, retry }: { error: unknown; retry: () 
         </h1>
         <p className="text-lg">
           Spanlark cannot reach its saved records right now: jobs, sheets and accounts are out of reach for a moment.
-          Nothing was changed. This page reloads by itself when they are back.
+          This page reloads by itself when they are back.
         </p>
         <p className="text-lg">Sizing a member still works: what you enter in the sizing steps is kept on this phone.</p>
         <div className="flex flex-col gap-2 sm:flex-row">

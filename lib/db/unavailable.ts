@@ -5,7 +5,7 @@
  */
 
 /** What a user reads while the database is down (routes' JSON error, server actions, the page shown instead). */
-export const DATABASE_DOWN_MESSAGE = "Spanlark cannot reach its saved records right now. Nothing was changed; try again in a minute.";
+export const DATABASE_DOWN_MESSAGE = "Spanlark cannot reach its saved records right now. Try again in a minute.";
 
 /** Seconds a client is told to wait (Retry-After). */
 export const DATABASE_RETRY_AFTER_SECONDS = 60;
