@@ -76,7 +76,7 @@ describe("readBodyBytes", () => {
   });
 });
 
-describe("engine routes refuse a body over BODY_LIMITS.engine with a JSON 413", () => {
+describe("routes refuse a body over their cap with a JSON 413", () => {
   test.each([
     ["solve", solvePost, "http://localhost/api/solve"],
     ["check", checkPost, "http://localhost/api/check"],
@@ -90,6 +90,16 @@ describe("engine routes refuse a body over BODY_LIMITS.engine with a JSON 413", 
     expect(body.error).toMatch(/too large.*64 KB/);
     expect(body.limitBytes).toBe(BODY_LIMITS.engine);
     expect(pulled()).toBeLessThanOrEqual(BODY_LIMITS.engine + 2 * CHUNK);
+  });
+
+  test("next-auth's POST (sign-in, sign-out) is capped at the JSON limit before next-auth reads it", async () => {
+    const { POST } = await import("@/app/api/auth/[...nextauth]/route");
+    const { stream, pulled } = meteredBody(HUNDRED_MB);
+    const req = streamingRequest("http://localhost/api/auth/callback/credentials", stream, { "content-type": "application/x-www-form-urlencoded" });
+    const res = await POST(req, { params: Promise.resolve({ nextauth: ["callback", "credentials"] }) });
+    expect(res.status).toBe(413);
+    expect((await res.json()).limitBytes).toBe(BODY_LIMITS.json);
+    expect(pulled()).toBeLessThanOrEqual(BODY_LIMITS.json + 2 * CHUNK);
   });
 
   test("the largest valid solve input fits under the cap", async () => {
