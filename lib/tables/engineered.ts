@@ -4,9 +4,12 @@ import type { EngineeredProduct, EngineeredSizeRule } from "./types";
  * Generic engineered lumber rows: LVL, PSL and glulam. Units: psi, in, lb/ft³.
  *
  * These are not one maker's product. LVL and PSL values are typical of published literature for
- * the named E grade; every maker publishes its own, and the maker's values govern. Glulam values
- * are the NDS Supplement (2018 edition) Table 5A reference values for the named combination,
- * from memory — verify against the printed table.
+ * the named E grade; every maker publishes its own, and the maker's values govern. The 2.0E LVL and
+ * PSL rows agree with one maker's published 2.0E values as an open-source data file transcribes
+ * them (qsaad/stroogle data/wood/EngineeredSpecies.js); the 1.9E LVL row was not checked. Glulam
+ * values are the NDS Supplement (2018 edition) Table 5A reference values for the named combination;
+ * the open-source transcriptions found disagree on Fbx− (1,450 vs 1,850 psi for 24F-V4; balanced or
+ * not for 24F-1.8E), so the glulam rows stay from memory and flagged.
  */
 
 export const SUPPLIER_NOTE = "typical values — confirm with the supplier's published values";
@@ -53,8 +56,9 @@ const GLULAM_WESTERN_DEPTHS = [9, 10.5, 12, 13.5, 15, 16.5, 18, 19.5, 21, 22.5, 
 const GLULAM_FRAMING_DEPTHS = [9.25, 11.25, 11.875, 14, 16, 18];
 
 const SCL_SOURCE =
-  "typical of published literature for LVL/PSL of this E grade; size rule (12/d)^n typical of published literature";
-const T5A = "NDS Supplement 2018, Table 5A (from memory — verify against the printed table)";
+  "typical values for this E grade — confirm with the supplier; Fb, Fv, Fc⊥, E checked against one maker's published 2.0E values (qsaad/stroogle EngineeredSpecies.js)";
+const SCL_SOURCE_UNCHECKED = "typical values for this E grade — confirm with the supplier; from memory — verify against the supplier's published values";
+const T5A = "NDS Supplement 2018, Table 5A; from memory — verify against the printed table (open-source copies disagree on Fbx−)";
 
 export const ENGINEERED: EngineeredProduct[] = [
   {
@@ -70,7 +74,7 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: LVL_DEPTHS,
     density: 42,
     note: SUPPLIER_NOTE,
-    source: SCL_SOURCE,
+    source: SCL_SOURCE_UNCHECKED,
   },
   {
     name: "LVL 2.0E",
