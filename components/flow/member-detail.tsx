@@ -6,6 +6,7 @@ import { RatioBar } from "@/components/ui/ratio-bar";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { CheckOutput } from "@/lib/solver/design/check";
+import { citationOf } from "@/lib/tables/citations";
 import { checkDetail, checkTitle } from "./words";
 
 export type MemberDetailProps = {
@@ -133,7 +134,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
                 .join(" · ")}
             </p>
             {check.member.note ? <p className="mt-1 text-sm text-caution-ink">{check.member.note}</p> : null}
-            <p className="mt-1 text-sm text-graphite">{check.member.sources.join("; ")}</p>
+            <p className="mt-1 text-sm text-graphite">{[...new Set(check.member.sources.map(citationOf))].join("; ")}</p>
           </section>
           <section aria-labelledby="loads-title">
             <h3 id="loads-title" className="mb-2 font-bold">

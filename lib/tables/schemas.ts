@@ -11,6 +11,8 @@ import type {
   SteelGrade,
   WShape,
 } from "./types";
+import { SAWN_SIZES_SOURCE } from "./sawn-sizes";
+import { STEEL_GRADES_SOURCE } from "./steel";
 
 /**
  * The row schemas of the material tables, shared by the admin edit form (its yup schema is built from
@@ -442,6 +444,8 @@ export interface TableSpec<K extends TableKey = TableKey> {
   summary: string[];
   /** the natural key of a row within one version (what an import matches rows on) */
   keyOf(row: TableRowMap[K]): string;
+  /** where the starter rows come from, for a table whose rows carry no source column */
+  tableSource?: string;
 }
 
 export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
@@ -453,6 +457,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     schema: sawnSizeSchema,
     summary: ["b_in", "d_in", "Sx_in3", "Ix_in4"],
     keyOf: (r) => r.name,
+    tableSource: SAWN_SIZES_SOURCE,
   },
   "sawn-values": {
     key: "sawn-values",
@@ -498,6 +503,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     schema: steelGradeSchema,
     summary: ["Fy_ksi", "Fu_ksi"],
     keyOf: (r) => r.name,
+    tableSource: STEEL_GRADES_SOURCE,
   },
   costs: {
     key: "costs",
