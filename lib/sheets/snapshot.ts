@@ -137,6 +137,8 @@ function materialWords(state: FlowState): string {
       return `Built-up plies, ${m.species} ${m.grade}${m.plies > 0 ? `, ${m.plies} plies` : ""}`;
     case "engineered":
       return m.product ? `Engineered, ${m.product}` : "Engineered lumber (any product)";
+    case "ijoist":
+      return m.product ? `Wood I-joists, ${m.product}` : "Wood I-joists (any series)";
     case "steel":
       return "Steel W-shape, A992";
   }
