@@ -127,7 +127,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
                 `d = ${fmt(check.member.section.d)} in`,
                 check.member.section.A !== null ? `A = ${fmt(check.member.section.A)} in²` : null,
                 check.member.section.S !== null ? `S = ${fmt(check.member.section.S)} in³` : null,
-                `I = ${fmt(check.member.section.I)} in⁴`,
+                check.member.section.EI !== undefined ? `EI = ${fmt(check.member.section.EI / 1e6)} × 10⁶ lbf-in²` : `I = ${fmt(check.member.section.I)} in⁴`,
                 `weight ${fmt(check.member.weightPlf)} plf`,
               ]
                 .filter(Boolean)
