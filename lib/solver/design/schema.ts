@@ -64,8 +64,11 @@ export const engineeredMemberSchema = z
   .object({ material: z.literal("engineered"), product: z.string().min(1), width: positive("in").optional(), depth: positive("in"), plies: plies.default(1) })
   .strict();
 
-export const memberSchema = z.discriminatedUnion("material", [sawnMemberSchema, steelMemberSchema, engineeredMemberSchema], {
-  error: 'must name a material: "sawn", "steel" or "engineered"',
+/** a wood I-joist by its table name, e.g. "PRI-40 11-7/8"; stiffeners = web stiffeners at the end bearings */
+export const iJoistMemberSchema = z.object({ material: z.literal("ijoist"), joist: z.string().min(1), stiffeners: z.boolean().default(false) }).strict();
+
+export const memberSchema = z.discriminatedUnion("material", [sawnMemberSchema, steelMemberSchema, engineeredMemberSchema, iJoistMemberSchema], {
+  error: 'must name a material: "sawn", "steel", "engineered" or "ijoist"',
 });
 
 export const DEFLECTION_PRESET_IDS = ["floor", "floor-tile", "roof-no-ceiling", "ceiling-flexible", "ceiling-brittle", "other"] as const;
@@ -172,9 +175,11 @@ export const sizeFamilySchema = z.discriminatedUnion(
       .strict(),
     z.object({ material: z.literal("steel"), grade: z.string().min(1).default("A992") }).strict(),
     z.object({ material: z.literal("engineered"), product: z.string().min(1).optional(), plies: z.array(plies).min(1).optional() }).strict(),
+    /** wood I-joists, one series or every one */
+    z.object({ material: z.literal("ijoist"), series: z.string().min(1).optional(), stiffeners: z.boolean().default(false) }).strict(),
     z.object({ material: z.literal("any") }).strict(),
   ],
-  { error: 'must name a family: material "sawn", "engineered", "steel" or "any"' },
+  { error: 'must name a family: material "sawn", "engineered", "ijoist", "steel" or "any"' },
 );
 
 export const sizeInputSchema = z
