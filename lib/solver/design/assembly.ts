@@ -37,11 +37,15 @@ const SPACER_WORDS = ["", "with 1/2 in spacer", "with two 1/2 in spacers", "with
 
 /** The assembly of a member in a wall (or not), with the spacers that bring sawn plies out to the wall. */
 export function assemblyFor(m: DesignMember, wall: WallFraming | null): Assembly {
-  const name = m.kind === "steel" ? m.label : m.label.replace(/^\d+-ply /, "");
+  const name = m.kind === "wood" ? m.label.replace(/^\d+-ply /, "") : m.label;
   const size = m.kind === "wood" && m.material === "sawn" && m.spec.material === "sawn" ? m.spec.size : name;
   if (m.kind === "steel") {
     const fits = wall === null ? null : m.shape.bf <= WALL_DEPTH_IN[wall];
     return { plies: 1, spacers: 0, spacerIn: SPACER_IN, widthIn: m.shape.bf, wallFraming: wall, fits, words: m.label };
+  }
+  if (m.kind === "ijoist") {
+    // an I-joist is a joist, not a header: it never fills a wall (its web cannot take the studs' load)
+    return { plies: 1, spacers: 0, spacerIn: SPACER_IN, widthIn: m.joist.flangeWidth, wallFraming: wall, fits: wall === null ? null : false, words: m.label };
   }
   const solid = m.plies * m.plyWidth;
   let spacers = 0;
