@@ -9,6 +9,7 @@ import type {
   SizeFactorRow,
   Species,
   SteelGrade,
+  StockLengthRow,
   WShape,
 } from "./types";
 
@@ -20,7 +21,7 @@ import type {
  * refused). No server-only imports: the browser form reads these specs too.
  */
 
-export const TABLE_KEYS = ["sawn-sizes", "sawn-values", "size-factors", "engineered", "steel-shapes", "steel-grades", "costs"] as const;
+export const TABLE_KEYS = ["sawn-sizes", "sawn-values", "size-factors", "engineered", "steel-shapes", "steel-grades", "costs", "stock-lengths"] as const;
 export type TableKey = (typeof TABLE_KEYS)[number];
 
 export function isTableKey(value: string): value is TableKey {
@@ -43,6 +44,7 @@ export interface TableRowMap {
   "steel-shapes": WShape;
   "steel-grades": SteelGrade;
   costs: CostRow;
+  "stock-lengths": StockLengthRow;
 }
 
 export type TableRows = { [K in TableKey]: TableRowMap[K][] };
@@ -430,6 +432,32 @@ export const costSchema: z.ZodType<CostRow> = z.object({
 });
 
 // ---------------------------------------------------------------------------------------------------
+// Stock lengths (the lengths the yard sells each material family in, edited beside the costs)
+
+export const STOCK_MATERIAL_CHOICES = ["sawn", "engineered", "steel"] as const;
+
+const STOCK_LENGTH_FIELDS: FieldSpec[] = [
+  { name: "material", path: "material", label: "Material", kind: "choice", choices: STOCK_MATERIAL_CHOICES },
+  {
+    name: "lengths_ft",
+    path: "lengthsFt",
+    label: "Stock lengths",
+    unit: "ft",
+    kind: "numberList",
+    min: 1,
+    max: 80,
+    hint: "separated by ; e.g. 8;10;12;14;16",
+  },
+];
+const SL = spec(STOCK_LENGTH_FIELDS);
+
+export const stockLengthSchema: z.ZodType<StockLengthRow> = z
+  .object({ material: choice(SL.material, STOCK_MATERIAL_CHOICES), lengthsFt: numList(SL.lengthsFt) })
+  .superRefine((r, ctx) => {
+    if (new Set(r.lengthsFt).size !== r.lengthsFt.length) ctx.addIssue({ code: "custom", path: ["lengthsFt"], message: "Stock lengths must not repeat a length" });
+  });
+
+// ---------------------------------------------------------------------------------------------------
 
 export interface TableSpec<K extends TableKey = TableKey> {
   key: K;
@@ -507,6 +535,15 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     schema: costSchema,
     summary: ["cost_per_ft_usd"],
     keyOf: (r) => r.itemKey,
+  },
+  "stock-lengths": {
+    key: "stock-lengths",
+    title: "Stock lengths",
+    description: "The lengths the yard sells each material in, for order lists; sawn lumber without a row is 8 to 24 ft in 2 ft steps",
+    fields: STOCK_LENGTH_FIELDS,
+    schema: stockLengthSchema,
+    summary: ["lengths_ft"],
+    keyOf: (r) => r.material,
   },
 };
 
