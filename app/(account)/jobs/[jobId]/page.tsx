@@ -35,6 +35,7 @@ export default async function JobRoute({ params }: JobRouteProps) {
           spanFt: m.resultSummary?.spanFt ?? null,
           carriedBy: m.carriedByMemberId ? (job.members.find((c) => c.id === m.carriedByMemberId)?.label ?? null) : null,
           carriedById: m.carriedByMemberId,
+          orderDetails: m.orderDetails,
         })),
       }}
     >
