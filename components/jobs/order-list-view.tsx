@@ -1,4 +1,3 @@
-import { Caution } from "@/components/ui/caution";
 import { formatDollars, formatStockLength, type OrderList } from "@/lib/orders/order-list";
 
 export type OrderListViewProps = {
@@ -65,8 +64,9 @@ export function OrderListView({ list }: OrderListViewProps) {
             </tbody>
           </table>
           <p className="text-right text-ink-soft">
-            {group.name}: {formatDollars(group.subtotal)}
-            {group.unpriced > 0 ? ` + ${group.unpriced} unpriced` : ""}
+            {group.unpriced === group.lines.length
+              ? `${group.name}: no prices on file`
+              : `${group.name}: ${formatDollars(group.subtotal)}${group.unpriced > 0 ? ` + ${group.unpriced} unpriced` : ""}`}
           </p>
         </section>
       ))}
@@ -84,7 +84,6 @@ export function OrderListView({ list }: OrderListViewProps) {
         Each piece is rounded up to a stock length; jack and king studs (two king studs each end), rims at both ends of joists, a row of
         blocking at least every 8 ft and 10% extra concrete follow common practice. Check the list against the plans before you order.
       </p>
-      <Caution />
     </div>
   );
 }

@@ -10,8 +10,26 @@ export type OrderToolbarProps = {
   jobId: string;
 };
 
-/** Print, CSV, PDF and "E-mail to the yard" for a job's order list. */
+/** Print, CSV and PDF of a job's order list. */
 export function OrderToolbar({ jobId }: OrderToolbarProps) {
+  return (
+    <div className="no-print grid grid-cols-3 gap-2 sm:flex sm:flex-wrap">
+      {/* plain links: the browser downloads the file; the app's router must not try to render it */}
+      <a href={`/api/jobs/${jobId}/order?format=pdf`} download className={buttonClasses()} data-testid="order-pdf">
+        PDF
+      </a>
+      <a href={`/api/jobs/${jobId}/order?format=csv`} download className={buttonClasses({ variant: "secondary" })} data-testid="order-csv">
+        CSV
+      </a>
+      <Button variant="secondary" onClick={() => window.print()}>
+        Print
+      </Button>
+    </div>
+  );
+}
+
+/** "E-mail it to the yard": the list in the mail's body, CSV and PDF attached. */
+export function OrderEmailForm({ jobId }: OrderToolbarProps) {
   const toast = useToast();
   const [pending, startTransition] = useTransition();
   const [to, setTo] = useState("");
@@ -33,19 +51,7 @@ export function OrderToolbar({ jobId }: OrderToolbarProps) {
   };
 
   return (
-    <div className="no-print flex flex-col gap-4">
-      <div className="grid grid-cols-2 gap-2 sm:flex sm:flex-wrap">
-        {/* plain links: the browser downloads the file; the app's router must not try to render it */}
-        <a href={`/api/jobs/${jobId}/order?format=pdf`} download className={buttonClasses()} data-testid="order-pdf">
-          PDF
-        </a>
-        <a href={`/api/jobs/${jobId}/order?format=csv`} download className={buttonClasses({ variant: "secondary" })} data-testid="order-csv">
-          CSV
-        </a>
-        <Button variant="secondary" onClick={() => window.print()} className="col-span-2 sm:col-span-1">
-          Print
-        </Button>
-      </div>
+    <div className="no-print">
       <form onSubmit={send} noValidate className="flex flex-col gap-2 rounded-card border-2 border-rule bg-paper-raised p-4" aria-label="E-mail the order list">
         <h2 className="text-lg font-bold">E-mail it to the yard</h2>
         <TextField label="Send to" type="email" inputMode="email" autoComplete="email" value={to} onChange={(e) => setTo(e.target.value)} error={error ?? undefined} data-testid="order-mail-to" />

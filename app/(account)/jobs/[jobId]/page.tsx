@@ -39,7 +39,7 @@ export default async function JobRoute({ params }: JobRouteProps) {
         })),
       }}
     >
-      <CrewLinkPanel jobId={job.id} />
+      <CrewLinkPanel jobId={job.id} jobName={job.name} />
       <SheetPanel jobId={job.id} />
     </JobPage>
   );

@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { OrderListView } from "@/components/jobs/order-list-view";
-import { OrderToolbar } from "@/components/jobs/order-toolbar";
+import { OrderEmailForm, OrderToolbar } from "@/components/jobs/order-toolbar";
 import { PageHeader } from "@/components/ui/page-header";
 import { userForPage } from "@/lib/auth/guard";
 import { getJobOrder } from "@/lib/orders/queries";
@@ -37,6 +37,7 @@ export default async function OrderRoute({ params }: OrderRouteProps) {
       />
       <OrderToolbar jobId={order.job.id} />
       <OrderListView list={order.list} />
+      <OrderEmailForm jobId={order.job.id} />
     </div>
   );
 }
