@@ -259,6 +259,26 @@ export class SheetWriter {
   }
 }
 
+/** The job's live crew link on a sheet: the address and its QR code (PNG). */
+export interface SheetCrewLink {
+  url: string;
+  qrPng: Buffer;
+}
+
+function drawCrewLink(w: SheetWriter, crew: SheetCrewLink): void {
+  const { doc } = w;
+  const size = 72;
+  w.ensure(size + 10);
+  const top = doc.y + 4;
+  doc.image(crew.qrPng, w.left, top, { width: size, height: size });
+  doc.y = top + 10;
+  w.text("Crew link", { size: 11, bold: true, x: w.left + size + 10, width: w.contentWidth - size - 10 });
+  w.text("Scan for the live member schedule, read only.", { size: 9.5, x: w.left + size + 10, width: w.contentWidth - size - 10 });
+  w.text(crew.url, { size: 8, color: PDF_COLORS.graphite, x: w.left + size + 10, width: w.contentWidth - size - 10 });
+  doc.x = w.left;
+  doc.y = top + size + 6;
+}
+
 function drawHeader(w: SheetWriter, s: SheetSnapshot): void {
   const { doc } = w;
   w.text("Job sheet", { size: 10, bold: true, color: PDF_COLORS.spruce });
@@ -381,7 +401,7 @@ function drawFooters(w: SheetWriter, s: SheetSnapshot): void {
 }
 
 /** The sheet's PDF. The same snapshot gives the same pages (only the file's own id differs). */
-export function renderSheetPdf(snapshot: SheetSnapshot, paper: Paper = "letter"): Promise<Buffer> {
+export function renderSheetPdf(snapshot: SheetSnapshot, paper: Paper = "letter", crew: SheetCrewLink | null = null): Promise<Buffer> {
   return new Promise((resolve, reject) => {
     const doc = new PDFDocument({
       size: PAPER_SIZE[paper],
@@ -404,6 +424,7 @@ export function renderSheetPdf(snapshot: SheetSnapshot, paper: Paper = "letter")
     try {
       const w = new SheetWriter(doc, FONTS, paper);
       drawHeader(w, snapshot);
+      if (crew) drawCrewLink(w, crew);
       w.caution(snapshot);
       drawSchedule(w, snapshot);
       snapshot.members.forEach((m, i) => drawMember(w, m, i));
