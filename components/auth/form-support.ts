@@ -60,3 +60,11 @@ export function safeReturnPath(value: string | null | undefined): string {
   if (!value || !value.startsWith("/") || value.startsWith("//") || value.startsWith("/\\")) return "/account";
   return value;
 }
+
+/** Signs this browser in with the ticket a spent mailed link answered with; false when it did not take (then sign in as usual). */
+export async function signInWithTicket(ticket: unknown): Promise<boolean> {
+  if (typeof ticket !== "string" || !ticket) return false;
+  const { signIn } = await import("next-auth/react");
+  const result = await signIn("ticket", { ticket, redirect: false }).catch(() => undefined);
+  return Boolean(result?.ok && !result.error);
+}

@@ -4,6 +4,7 @@ import { SignInForm } from "@/components/auth/sign-in-form";
 import { safeReturnPath } from "@/components/auth/form-support";
 import { PageHeader } from "@/components/ui/page-header";
 import { getSessionUser } from "@/lib/auth/session";
+import { env } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Sign in" };
 export const dynamic = "force-dynamic";
@@ -15,9 +16,20 @@ const NOTICES: Record<string, string> = {
   reset: "Password changed. Sign in with the new one.",
 };
 
+/**
+ * next-auth hands back its callbackUrl as a full address of this app (http://host/jobs/…): keep only the path
+ * so it returns there; anything else goes on as it came, through safeReturnPath.
+ */
+function ownPath(value: string | undefined): string | undefined {
+  if (!value) return value;
+  const origin = new URL(env().APP_URL).origin;
+  if (value.startsWith(`${origin}/`)) return value.slice(origin.length);
+  return value;
+}
+
 export default async function SignInPage({ searchParams }: SignInPageProps) {
   const params = await searchParams;
-  const callbackUrl = typeof params.callbackUrl === "string" ? params.callbackUrl : undefined;
+  const callbackUrl = ownPath(typeof params.callbackUrl === "string" ? params.callbackUrl : undefined);
   if (await getSessionUser()) redirect(safeReturnPath(callbackUrl));
   const from = typeof params.from === "string" ? params.from : "";
   return (
