@@ -639,13 +639,15 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
       setPath(draft, f.path, raw);
     }
   }
-  if (issues.length > 0) return { ok: false, issues };
+  // The schema runs even when some cells did not read, so every problem of the line is listed at once; a
+  // column already reported is not reported again, and no message is repeated.
   const parsed = table.schema.safeParse(draft);
-  if (parsed.success) return { ok: true, row: parsed.data };
+  if (parsed.success && issues.length === 0) return { ok: true, row: parsed.data };
   const byPath = new Map(table.fields.map((f) => [f.path, f.name]));
-  return {
-    ok: false,
-    issues: parsed.error.issues.map((issue) => {
+  const reported = new Set(issues.map((i) => i.column));
+  const schemaIssues = parsed.success
+    ? []
+    : parsed.error.issues.map((issue) => {
       const segments = issue.path.filter((p): p is string => typeof p === "string");
       let column = "(row)";
       for (let n = segments.length; n > 0; n -= 1) {
@@ -657,8 +659,10 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
       }
       if (column === "(row)" && segments[0] === "sizeRule") column = "size_rule";
       return { column, message: issue.message };
-    }),
-  };
+    });
+  const all = [...issues, ...schemaIssues.filter((i) => !reported.has(i.column))];
+  const seen = new Set<string>();
+  return { ok: false, issues: all.filter((i) => (seen.has(`${i.column}\u0000${i.message}`) ? false : (seen.add(`${i.column}\u0000${i.message}`), true))) };
 }
 
 /** The natural key of a row (TABLE_SPECS[table].keyOf, callable with a table key known only at run time). */
