@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useEffect, useState, useTransition, type FormEvent } from "react";
+import { useState, useSyncExternalStore, useTransition, type FormEvent } from "react";
 import { Button, buttonClasses } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
@@ -39,6 +39,8 @@ const EXPIRY_OPTIONS = [
   { value: "90", label: "90 days" },
 ];
 
+const noChange = () => () => undefined;
+
 const STATUS_WORDS: Record<CrewLinkView["status"], string> = { active: "Live", revoked: "Revoked", expired: "Expired" };
 
 function dateWords(iso: string): string {
@@ -47,9 +49,13 @@ function dateWords(iso: string): string {
 
 function LinkRow({ link, onChanged, jobName, qrSvg }: { link: CrewLinkView; onChanged: () => void; jobName: string; qrSvg?: string }) {
   const toast = useToast();
-  const [canShare, setCanShare] = useState(false);
+  // the share sheet exists only in some browsers, and only in the browser: false on the server
+  const canShare = useSyncExternalStore(
+    noChange,
+    () => typeof navigator.share === "function",
+    () => false,
+  );
   const [qrOpen, setQrOpen] = useState(true);
-  useEffect(() => setCanShare(typeof navigator !== "undefined" && typeof navigator.share === "function"), []);
 
   const share = async () => {
     if (!link.url) return;
