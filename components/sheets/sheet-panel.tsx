@@ -44,7 +44,7 @@ export async function SheetPanel({ jobId, saveOnArrival = false, savedSheetId }:
               Save job sheet
             </ButtonLink>
             <p className="text-ink-soft">
-              Saving job sheets needs a subscription: choose a plan and you come back here with the sheet saved. {SHEET_LAPSED_WORDS}
+              Saving job sheets needs a subscription. Choose a plan and you come back here with the sheet saved. {SHEET_LAPSED_WORDS}
             </p>
           </div>
         )}
