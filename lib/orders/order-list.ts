@@ -4,7 +4,7 @@
  * priced from the cost table where it holds a price. Computed from the members every time (never stored),
  * so a changed member changes the list. Pure: plain data in, plain data out.
  */
-import { formatInches } from "@/lib/flow/length";
+import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import type { FlowState, MemberKind } from "@/lib/flow/state";
 import { overhangs, sortedSupports, spansFt } from "@/lib/flow/state";
 import type { MemberResultSummary } from "@/lib/flow/summary";
@@ -340,7 +340,7 @@ function postPieces(m: OrderMember, tables: MaterialTables, missing: string[]): 
       lengthFt: stock.pieceFt,
       quantity: posts * stock.pieces,
       unit: "pcs",
-      use: `${m.label}: ${plural(posts, "post")}, ${formatInches(d.postHeightFt * 12)} tall`,
+      use: `${m.label}: ${plural(posts, "post")}, ${formatFeetInches(d.postHeightFt)} tall`,
       note: "post size is the builder's choice: Spanlark does not check posts",
       ref: species ? { material: "sawn", species: species as Species, grade: "No.2", size } : null,
       sortKey: depth * 100 + t,

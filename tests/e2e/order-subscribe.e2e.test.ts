@@ -156,7 +156,8 @@ describe("sharing on site", () => {
     await crew.goto(new URL(link).pathname);
     await crew.page.getByRole("heading", { level: 1, name: DECK }).waitFor();
     expect(await crew.page.getByRole("navigation", { name: "Main" }).count()).toBe(0);
-    expect(await crew.page.getByRole("link", { name: "Jobs" }).count()).toBe(0);
+    expect(await crew.page.getByRole("link", { name: "Jobs", exact: true }).count()).toBe(0);
+    expect(await crew.page.getByRole("link", { name: "Account", exact: true }).count()).toBe(0);
     await crew.screenshot("order-7-crew-page-phone", { fullPage: false });
     const [download] = await Promise.all([crew.page.waitForEvent("download"), crew.page.getByTestId("crew-board-pdf").click()]);
     const pdfFile = path.join(ARTIFACTS_DIR, "order-8-crew.pdf");
