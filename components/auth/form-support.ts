@@ -55,12 +55,6 @@ export function capitalise(message: string): string {
   return message ? message[0].toUpperCase() + message.slice(1) : message;
 }
 
-/** A same-site path to return to after signing in; anything else (another host, //evil) becomes /account. */
-export function safeReturnPath(value: string | null | undefined): string {
-  if (!value || !value.startsWith("/") || value.startsWith("//") || value.startsWith("/\\")) return "/account";
-  return value;
-}
-
 /** Signs this browser in with the ticket a spent mailed link answered with; false when it did not take (then sign in as usual). */
 export async function signInWithTicket(ticket: unknown): Promise<boolean> {
   if (typeof ticket !== "string" || !ticket) return false;

@@ -15,6 +15,7 @@ export type SizeFamilyRequest =
   | { material: "any" }
   | { material: "sawn"; species: string; grade: string; plies: number[] }
   | { material: "engineered"; product?: string }
+  | { material: "ijoist"; series?: string; stiffeners: boolean }
   | { material: "steel"; grade: string };
 
 export interface DesignRequestBase {
@@ -42,6 +43,8 @@ export function sizeFamily(material: FlowMaterial): SizeFamilyRequest {
       return { material: "sawn", species: material.species, grade: material.grade, plies: material.plies > 0 ? [material.plies] : [2, 3, 4] };
     case "engineered":
       return material.product ? { material: "engineered", product: material.product } : { material: "engineered" };
+    case "ijoist":
+      return material.product ? { material: "ijoist", series: material.product, stiffeners: false } : { material: "ijoist", stiffeners: false };
     case "steel":
       return { material: "steel", grade: "A992" };
   }
@@ -108,6 +111,9 @@ export function diagramBeam(state: FlowState, check: CheckOutput): BeamInput {
   const width = state.width.mode === "spacing" ? { spacingIn: state.width.spacingIn } : { tributaryFt: state.width.tributaryFt };
   const loads: Load[] = takeDown(base.loads, state.lengthFt, width).map((t) => t.load);
   if (state.selfWeight && check.member.weightPlf > 0) loads.push({ type: "udl", case: "D", from: 0, to: state.lengthFt, w: check.member.weightPlf });
+  // an I-joist gives its EI, not a section: the diagram's bending deflection from EI (shear deflection is in the check)
+  const EI = check.member.section.EI;
+  if (EI !== undefined && EI > 0) return { length: state.lengthFt, E: EI, I: 1, supports: base.supports, loads };
   const factors = check.factors as { EPrime?: number };
   const E = typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : 29_000_000;
   return { length: state.lengthFt, E, I: check.member.section.I, supports: base.supports, loads };

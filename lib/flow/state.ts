@@ -81,7 +81,7 @@ export interface FlowLineLoad {
   case: LoadCase;
 }
 
-export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "steel"] as const;
+export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "ijoist", "steel"] as const;
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
 
 export interface FlowMaterial {
@@ -91,7 +91,7 @@ export interface FlowMaterial {
   grade: SawnGrade;
   /** built-up: 2 to 4 plies, 0 = let the search pick */
   plies: number;
-  /** engineered: a product name from the table, "" = any product */
+  /** engineered: a product name from the table, "" = any product; ijoist: a series such as "PRI-40", "" = any series */
   product: string;
 }
 

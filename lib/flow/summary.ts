@@ -66,6 +66,11 @@ export function supportWords(reactions: readonly Pick<SummaryReaction, "jackStud
 export function shortLabel(spec: MemberSpec, fullLabel: string): string {
   if (spec.material === "sawn") return `${spec.plies > 1 ? `${spec.plies}-ply ` : ""}${spec.size} ${spec.grade}`;
   if (spec.material === "steel") return spec.shape;
+  if (spec.material === "ijoist") {
+    // "PRI-40 11-7/8" → "11-7/8 in PRI-40", as a framer orders it
+    const [series, ...depth] = spec.joist.split(" ");
+    return `${depth.length > 0 ? `${depth.join(" ")} in ` : ""}${series}${spec.stiffeners ? " with web stiffeners" : ""}`;
+  }
   return fullLabel;
 }
 

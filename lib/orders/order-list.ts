@@ -174,7 +174,7 @@ function memberPieces(m: OrderMember, tables: MaterialTables, missing: string[],
     }
   }
   const what = repeated ? (m.kind === "rafter" ? "rafters" : "joists") : "";
-  const plies = spec.material === "steel" ? 1 : spec.plies;
+  const plies = spec.material === "steel" || spec.material === "ijoist" ? 1 : spec.plies;
 
   if (spec.material === "sawn") {
     const stock = stockLengthFor(cut, stockLengthsOf(tables, "sawn"));
@@ -218,6 +218,39 @@ function memberPieces(m: OrderMember, tables: MaterialTables, missing: string[],
       sortKey: spec.depth * 100 + widthIn,
     });
     if (m.kind === "header") missing.push(`${m.label}: jack and king studs for an engineered header are not listed; add them with the wall's studs.`);
+    return pieces;
+  }
+
+  if (spec.material === "ijoist") {
+    // I-joists come from the engineered lumber yard: its stock lengths, else cut to length
+    const joist = tables.iJoists.find((j) => j.name === spec.joist);
+    const stock = stockLengthFor(cut, stockLengthsOf(tables, "engineered"));
+    const depthIn = joist?.d ?? 0;
+    pieces.push({
+      group: "Wood I-joists",
+      item: spec.joist,
+      lengthFt: stock.pieceFt,
+      quantity: count * stock.pieces,
+      unit: "pcs",
+      use: repeated ? `${m.label}: ${plural(count, what.slice(0, -1), what)}` : m.label,
+      note: stock.stocked ? undefined : "cut to length (no stock lengths in the tables)",
+      ref: { material: "ijoist", joist: spec.joist },
+      sortKey: depthIn,
+    });
+    if (FRAMED_FLOOR.includes(m.kind) && width && width > 0) {
+      const rim = stockLengthFor(width, stockLengthsOf(tables, "engineered"));
+      pieces.push({
+        group: "Wood I-joists",
+        item: `Rim board ${depthIn ? formatInches(depthIn) : ""} deep`.replace("  ", " "),
+        lengthFt: rim.pieceFt,
+        quantity: 2 * rim.pieces,
+        unit: "pcs",
+        use: `${m.label}: rim board at both ends${rim.pieces > 1 ? `, ${rim.pieces} pieces each` : ""}`,
+        note: "blocking and web stiffeners for I-joists follow the maker's details: not listed",
+        ref: null,
+        sortKey: depthIn + 0.5,
+      });
+    }
     return pieces;
   }
 

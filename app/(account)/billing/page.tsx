@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
-import { safeReturnPath } from "@/components/auth/form-support";
+import { safeReturnPath } from "@/lib/auth/return-path";
+import { env } from "@/lib/env";
 import { openPortalAction } from "@/components/billing/actions";
 import { BillingActionForm } from "@/components/billing/action-form";
 import { FreeTier } from "@/components/billing/plan-cards";
@@ -30,7 +31,7 @@ export default async function BillingPage({ searchParams }: BillingPageProps) {
   if (!overview) redirect("/sign-in?callbackUrl=%2Fbilling");
   const { role, subscription, limits, hasCustomer } = overview;
   // Back from a checkout that started on a job's "Save job sheet": once paid, straight back to the job.
-  const next = typeof params.next === "string" && params.next ? safeReturnPath(params.next) : null;
+  const next = typeof params.next === "string" && params.next ? safeReturnPath(params.next, env().APP_URL) : null;
   if (params.checkout === "success" && next && subscription?.active) redirect(next);
   const live = Boolean(subscription && subscription.status !== "canceled" && subscription.status !== "incomplete_expired");
 

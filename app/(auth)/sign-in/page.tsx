@@ -1,8 +1,8 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { SignInForm } from "@/components/auth/sign-in-form";
-import { safeReturnPath } from "@/components/auth/form-support";
 import { PageHeader } from "@/components/ui/page-header";
+import { safeReturnPath } from "@/lib/auth/return-path";
 import { getSessionUser } from "@/lib/auth/session";
 import { env } from "@/lib/env";
 
@@ -16,21 +16,10 @@ const NOTICES: Record<string, string> = {
   reset: "Password changed. Sign in with the new one.",
 };
 
-/**
- * next-auth hands back its callbackUrl as a full address of this app (http://host/jobs/…): keep only the path
- * so it returns there; anything else goes on as it came, through safeReturnPath.
- */
-function ownPath(value: string | undefined): string | undefined {
-  if (!value) return value;
-  const origin = new URL(env().APP_URL).origin;
-  if (value.startsWith(`${origin}/`)) return value.slice(origin.length);
-  return value;
-}
-
 export default async function SignInPage({ searchParams }: SignInPageProps) {
   const params = await searchParams;
-  const callbackUrl = ownPath(typeof params.callbackUrl === "string" ? params.callbackUrl : undefined);
-  if (await getSessionUser()) redirect(safeReturnPath(callbackUrl));
+  const callbackUrl = typeof params.callbackUrl === "string" ? params.callbackUrl : undefined;
+  if (await getSessionUser()) redirect(safeReturnPath(callbackUrl, env().APP_URL));
   const from = typeof params.from === "string" ? params.from : "";
   return (
     <>

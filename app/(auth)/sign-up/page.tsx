@@ -2,7 +2,8 @@ import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { SignUpForm } from "@/components/auth/sign-up-form";
 import { PageHeader } from "@/components/ui/page-header";
-import { safeReturnPath } from "@/components/auth/form-support";
+import { safeReturnPath } from "@/lib/auth/return-path";
+import { env } from "@/lib/env";
 import { getSessionUser } from "@/lib/auth/session";
 import { FREE_LIMITS } from "@/lib/payments/plans";
 
@@ -14,7 +15,7 @@ type SignUpPageProps = { searchParams: Promise<Record<string, string | string[] 
 export default async function SignUpPage({ searchParams }: SignUpPageProps) {
   const params = await searchParams;
   const callbackUrl = typeof params.callbackUrl === "string" ? params.callbackUrl : undefined;
-  if (await getSessionUser()) redirect(safeReturnPath(callbackUrl));
+  if (await getSessionUser()) redirect(safeReturnPath(callbackUrl, env().APP_URL));
   return (
     <>
       <PageHeader

@@ -7,7 +7,7 @@ import { TABLE_SPECS, type TableKey } from "@/lib/tables/schemas";
  */
 
 const SIZE_CLASS_WORDS: Record<string, string> = { dimension: "dimension lumber", "beams-stringers": "beams and stringers" };
-const MATERIAL_WORDS: Record<string, string> = { sawn: "Sawn lumber", engineered: "Engineered lumber", steel: "Steel" };
+const MATERIAL_WORDS: Record<string, string> = { sawn: "Sawn lumber", engineered: "Engineered lumber and I-joists", steel: "Steel" };
 
 function inches(value: string): string {
   const n = Number(value);
@@ -28,6 +28,7 @@ export function itemWords(itemKey: string): string {
     return `${rest[0]} ${inches(w)} x ${inches(d)} in`;
   }
   if (material === "steel" && rest.length === 1) return `${rest[0]} steel`;
+  if (material === "ijoist" && rest.length === 1) return `${rest[0]} I-joist`;
   return itemKey.replaceAll("|", " ");
 }
 
