@@ -16,6 +16,8 @@ import { formatFeetInches } from "@/lib/flow/length";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
 import { deleteJob, deleteMember, duplicateJob, duplicateMember, restoreJob, restoreMember, updateMember } from "./actions";
 import { JobForm } from "./job-form";
+import { OrderDetailsForm } from "./order-details-form";
+import type { OrderDetails } from "@/lib/orders/order-list";
 
 export type JobPageMember = {
   id: string;
@@ -32,6 +34,7 @@ export type JobPageMember = {
   /** the load basis the saved answer was worked on, and whether the member carries snow */
   loadStandard?: "ASCE 7-16" | "ASCE 7-22";
   carriesSnow?: boolean;
+  orderDetails?: OrderDetails;
 };
 
 export type JobPageProps = {
@@ -163,6 +166,7 @@ export function JobPage({ job, children }: JobPageProps) {
                       }}
                     />
                   ) : null}
+                  {m.orderDetails ? <OrderDetailsForm memberId={m.id} label={m.label} kind={m.kind} details={m.orderDetails} /> : null}
                   <div className="flex flex-wrap gap-2">
                     <ButtonLink href={`/size?job=${job.id}&member=${m.id}`} variant="secondary">
                       Edit
@@ -180,6 +184,18 @@ export function JobPage({ job, children }: JobPageProps) {
           </ul>
         )}
       </section>
+
+      {job.members.length > 0 ? (
+        <section aria-labelledby="order-title" className="flex flex-col gap-2 rounded-card border-2 border-rule bg-paper-raised p-4">
+          <h2 id="order-title" className="text-2xl font-bold">
+            Order list
+          </h2>
+          <p className="text-ink-soft">The lumber, studs, posts and concrete these members take, by size and stock length, priced where the yard&apos;s prices are on file.</p>
+          <ButtonLink href={`/jobs/${job.id}/order`} className="w-full sm:w-fit" data-testid="open-order">
+            Open the order list
+          </ButtonLink>
+        </section>
+      ) : null}
 
       {children}
 
