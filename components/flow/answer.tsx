@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useMemo, useState, type ReactNode } from "react";
+import { useEffect, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
 import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
 import { Skeleton, Spinner } from "@/components/ui/spinner";
@@ -15,7 +15,7 @@ import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
 import { AnswerDiagrams } from "./answer-diagrams";
 import { MemberDetail } from "./member-detail";
-import { useChecks, useSize } from "./use-design";
+import { useSize } from "./use-design";
 import { checkDetail, checkTitle } from "./words";
 
 export type AnswerProps = {
@@ -123,16 +123,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
   const passing = size.data?.passing ?? [];
   const shown = passing.slice(0, variant === "full" ? SHOWN : 1);
   const chosenSpec = chosen && passing.some((p) => sameSpec(p.member, chosen)) ? chosen : (passing[0]?.member ?? null);
-  const specs = useMemo(() => {
-    const list = shown.map((c) => c.member);
-    if (chosenSpec && !list.some((s) => sameSpec(s, chosenSpec))) list.push(chosenSpec);
-    return list;
-  }, [shown, chosenSpec]);
-  const checks = useChecks(state, specs);
-  const checkOf = (spec: MemberSpec) => {
-    const i = specs.findIndex((s) => sameSpec(s, spec));
-    return i >= 0 ? checks.data?.[i] : undefined;
-  };
+  const checkOf = (spec: MemberSpec) => passing.find((p) => sameSpec(p.member, spec))?.check;
   const chosenCheck = chosenSpec ? checkOf(chosenSpec) : undefined;
   const chosenCandidate = chosenSpec ? passing.find((p) => sameSpec(p.member, chosenSpec)) : undefined;
   const [detail, setDetail] = useState<MemberSpec | null>(null);
@@ -258,7 +249,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
             <h2 id="diagrams-title" className="text-2xl font-bold">
               Diagrams{chosenCandidate ? ` for ${shortLabel(chosenCandidate.member, chosenCandidate.label)}` : ""}
             </h2>
-            <div className="min-h-[40rem]">{chosenCheck ? <AnswerDiagrams state={state} check={chosenCheck} /> : <Skeleton width="100%" height="40rem" />}</div>
+            <div className="min-h-[40rem]">{chosenCheck ? <AnswerDiagrams check={chosenCheck} /> : <Skeleton width="100%" height="40rem" />}</div>
           </section>
         </>
       ) : null}

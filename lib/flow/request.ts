@@ -1,13 +1,9 @@
 /**
- * The flow's state as the design routes' JSON (issue 4 contract: POST /api/size and /api/check),
- * and the pieces the answer screen needs to draw the diagrams of the chosen member. Pure.
+ * The flow's state as the design routes' JSON (POST /api/size, and the check the server runs when a
+ * member is saved or a sheet is made). Pure.
  */
 import { EXPOSURE_CE, THERMAL_CT } from "@/lib/solver/asce7/snow";
-import { asdCombinations } from "@/lib/solver/asce7/combinations";
-import { takeDown } from "@/lib/solver/design/take-down";
 import type { DesignLoad, MemberSpec } from "@/lib/solver/design/schema";
-import type { CheckOutput } from "@/lib/solver/design/check";
-import { LOAD_CASES, type BeamInput, type Combination, type Load, type LoadCase } from "@/lib/solver/types";
 import { sortedSupports, type FlowMaterial, type FlowState } from "./state";
 
 /** The size family the search is limited to. */
@@ -29,7 +25,7 @@ export interface DesignRequestBase {
   method: "asd";
 }
 
-export type SizeRequest = DesignRequestBase & { member: SizeFamilyRequest; limit: number; failures: number };
+export type SizeRequest = DesignRequestBase & { member: SizeFamilyRequest; limit: number; failures: number; fullChecks: number };
 export type CheckRequest = DesignRequestBase & { member: MemberSpec };
 
 export function sizeFamily(material: FlowMaterial): SizeFamilyRequest {
@@ -73,42 +69,13 @@ export function designBase(state: FlowState): DesignRequestBase {
   };
 }
 
+/** How many passing members the flow asks for, each with its whole check (any of them may be chosen). */
+const SIZE_LIMIT = 12;
+
 export function sizeRequest(state: FlowState): SizeRequest {
-  return { ...designBase(state), member: sizeFamily(state.material), limit: 12, failures: 3 };
+  return { ...designBase(state), member: sizeFamily(state.material), limit: SIZE_LIMIT, failures: 3, fullChecks: SIZE_LIMIT };
 }
 
 export function checkRequest(state: FlowState, member: MemberSpec): CheckRequest {
   return { ...designBase(state), member };
-}
-
-/**
- * Factors of a combination from its name ("D+0.75L+0.75S" → { D: 1, L: 0.75, S: 0.75 }), as the
- * ASCE 7-22 generator names them; a nested factor such as 0.75(0.6W) multiplies out.
- */
-export function combinationFactors(name: string): Combination | null {
-  const known = asdCombinations([...LOAD_CASES]).find((c) => c.name === name);
-  if (known) return known.factors;
-  const factors: Combination = {};
-  for (const term of name.split("+")) {
-    const m = /^\s*(\d*\.?\d*)\s*(?:\(\s*(\d*\.?\d*)\s*)?(D|L|Lr|S|W)\s*\)?\s*$/.exec(term);
-    if (!m) return null;
-    const f = (m[1] ? Number(m[1]) : 1) * (m[2] ? Number(m[2]) : 1);
-    const c = m[3] as LoadCase;
-    factors[c] = (factors[c] ?? 0) + f;
-  }
-  return factors;
-}
-
-/**
- * The beam the diagrams draw for a checked member: the taken-down loads with their cases, the
- * member's own weight as dead load when counted, its E′ (or 29,000 ksi for steel) and I.
- */
-export function diagramBeam(state: FlowState, check: CheckOutput): BeamInput {
-  const base = designBase(state);
-  const width = state.width.mode === "spacing" ? { spacingIn: state.width.spacingIn } : { tributaryFt: state.width.tributaryFt };
-  const loads: Load[] = takeDown(base.loads, state.lengthFt, width).map((t) => t.load);
-  if (state.selfWeight && check.member.weightPlf > 0) loads.push({ type: "udl", case: "D", from: 0, to: state.lengthFt, w: check.member.weightPlf });
-  const factors = check.factors as { EPrime?: number };
-  const E = typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : 29_000_000;
-  return { length: state.lengthFt, E, I: check.member.section.I, supports: base.supports, loads };
 }

@@ -108,7 +108,7 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     pass: check.pass,
     governing: check.governing,
     ratio: check.ratio,
-    checks: check.checks.map((c) => ({ name: c.name, ratio: c.ratio, demand: c.demand, capacity: c.capacity, unit: c.unit, combination: c.combination })),
+    checks: check.checks.map((c) => ({ name: c.name, ratio: c.ratio, demand: c.demand, capacity: c.capacity, unit: c.unit, combination: c.combination?.name ?? null })),
     reactions,
     spanFt: mainSpanFt(state),
     lengthFt: state.lengthFt,

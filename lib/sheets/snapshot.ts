@@ -5,10 +5,10 @@
  */
 import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/caution-text";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { checkRequest, combinationFactors, diagramBeam } from "@/lib/flow/request";
+import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, type FlowState, type MemberKind } from "@/lib/flow/state";
 import { headlineFor, spacingOf } from "@/lib/flow/summary";
-import { analyzeBeam, type Segment } from "@/lib/solver/beam";
+import type { Segment } from "@/lib/solver/beam";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { DesignCheck, SupportReaction } from "@/lib/solver/design/types";
@@ -32,6 +32,8 @@ export interface SheetDiagram {
   extremes: SheetExtreme[];
 }
 
+export type SheetCheck = Omit<DesignCheck, "combination"> & { combination: string | null };
+
 export interface SheetMember {
   id: string;
   label: string;
@@ -51,7 +53,8 @@ export interface SheetMember {
   /** the inputs as the flow holds them (for reference; never recomputed) */
   flowState: FlowState;
   loads: CheckOutput["loads"];
-  checks: DesignCheck[];
+  /** the checks, each combination by its name */
+  checks: SheetCheck[];
   reactions: SupportReaction[];
   /** adjustment factors and design values, [symbol, value] */
   factors: [string, string][];
@@ -107,10 +110,6 @@ export interface SheetSource {
   now: Date;
 }
 
-const round = (v: number, digits = 4) => {
-  const f = 10 ** digits;
-  return Math.round(v * f) / f;
-};
 
 function fmtNumber(v: number): string {
   if (!Number.isFinite(v)) return "—";
@@ -215,55 +214,16 @@ export function factorRows(factors: object): [string, string][] {
   return rows;
 }
 
-function strengthCombination(check: CheckOutput): string | null {
-  const order = ["bending", "shear", "stability"];
-  for (const name of order) {
-    const c = check.checks.find((k) => k.name === name && k.combination);
-    if (c?.combination) return c.combination;
-  }
-  return check.checks.find((k) => k.combination && !k.name.startsWith("deflection"))?.combination ?? null;
-}
-
-function diagramsFor(state: FlowState, check: CheckOutput): SheetDiagram[] {
-  const beam = diagramBeam(state, check);
-  const diagrams: SheetDiagram[] = [];
-  const strength = strengthCombination(check);
-  const strengthFactors = strength ? combinationFactors(strength) : null;
-  if (strength && strengthFactors) {
-    const a = analyzeBeam(beam, strengthFactors);
-    const e = a.extremes;
-    diagrams.push({
-      quantity: "V",
-      title: "Shear",
-      unit: "lb",
-      combination: strength,
-      segments: a.segments,
-      extremes: [{ x: e.Vabs.x, value: e.Vabs.value, label: "largest" }],
-    });
-    const m: SheetExtreme[] = [{ x: e.Mpos.x, value: e.Mpos.value, label: "largest" }];
-    if (e.Mneg.value < -1e-6) m.push({ x: e.Mneg.x, value: e.Mneg.value, label: "hogging" });
-    diagrams.push({ quantity: "M", title: "Moment", unit: "lb-ft", combination: strength, segments: a.segments, extremes: m });
-  }
-  const total = check.checks.find((c) => c.name === "deflection-total" && c.combination)?.combination ?? null;
-  const totalFactors = total ? combinationFactors(total) : null;
-  if (total && totalFactors) {
-    const a = analyzeBeam(beam, totalFactors);
-    const e = a.extremes;
-    const d: SheetExtreme[] = [{ x: e.deflDown.x, value: e.deflDown.value, label: "down" }];
-    if (e.deflUp.value < -1e-6) d.push({ x: e.deflUp.x, value: e.deflUp.value, label: "up" });
-    diagrams.push({ quantity: "deflection", title: "Deflection", unit: "in", combination: total, segments: a.segments, extremes: d });
-  }
-  return diagrams;
-}
-
-function roundSegments(diagrams: SheetDiagram[]): SheetDiagram[] {
-  // Coefficients keep 12 significant figures: far below what a drawing or a label can show, and the JSON stays small.
-  const sig = (v: number) => (v === 0 ? 0 : Number(v.toPrecision(12)));
-  return diagrams.map((d) => ({
-    ...d,
-    segments: d.segments.map((s) => ({ x0: s.x0, x1: s.x1, V: s.V.map(sig), M: s.M.map(sig), slope: s.slope.map(sig), deflection: s.deflection.map(sig) })),
-    extremes: d.extremes.map((x) => ({ ...x, x: round(x.x, 6), value: round(x.value, 6) })),
-  }));
+/** The diagrams the check carries, as the sheet keeps them: shear and moment under the strength combination, deflection under the service one. */
+function diagramsFor(check: CheckOutput): SheetDiagram[] {
+  const d = check.diagrams;
+  if (!d) return [];
+  const strength = d.strength.combination.name;
+  return [
+    { quantity: "V", title: "Shear", unit: "lb", combination: strength, segments: d.strength.segments, extremes: d.strength.shear },
+    { quantity: "M", title: "Moment", unit: "lb-ft", combination: strength, segments: d.strength.segments, extremes: d.strength.moment },
+    { quantity: "deflection", title: "Deflection", unit: "in", combination: d.service.combination.name, segments: d.service.segments, extremes: d.service.deflection },
+  ];
 }
 
 /** Works one member out for the sheet; throws the design's input error when its inputs no longer check. */
@@ -293,12 +253,12 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
     inputs: inputRows(state),
     flowState: state,
     loads: check.loads,
-    checks: check.checks,
+    checks: check.checks.map((c) => ({ ...c, combination: c.combination?.name ?? null })),
     reactions,
     factors: factorRows(check.factors),
     limits: check.limits,
     assumptions: check.assumptions,
-    diagrams: roundSegments(diagramsFor(state, check)),
+    diagrams: diagramsFor(check),
     note,
   };
 }

@@ -10,7 +10,9 @@ import { DesignInputError, type DesignIssue } from "./errors";
 import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
 import { evaluateSteel, type SteelFactors } from "./steel";
-import type { CheckName, DesignCheck, SupportReaction } from "./types";
+import { E_STEEL_KSI } from "../aisc360/aisc360-16";
+import { memberDiagrams, type MemberDiagrams } from "./diagrams";
+import type { CheckName, CombinationRef, DesignCheck, SupportReaction } from "./types";
 import { evaluateWood, type WoodFactors } from "./wood";
 
 export { CAUTION };
@@ -57,6 +59,8 @@ export interface CheckOutput {
   caution: string;
   /** version of the material tables used */
   tables: string;
+  /** loads, shear, moment, deflection and reactions as drawn, with their combinations; null when nothing names a combination */
+  diagrams: MemberDiagrams | null;
 }
 
 export interface Evaluation {
@@ -112,8 +116,9 @@ export function evaluateMember(member: DesignMember, ctx: DesignContext): Evalua
       governing = c.name;
     }
   }
-  for (const c of r.checks) c.ratio = Math.round(c.ratio * 1e4) / 1e4;
-  return { ...r, governing, ratio: Math.round(ratio * 1e4) / 1e4, pass: ratio <= 1 };
+  const named = (name: string | null): CombinationRef | null => (name === null ? null : { name, factors: ctx.combinations.get(name) ?? {} });
+  const checks: DesignCheck[] = r.checks.map((c) => ({ ...c, ratio: Math.round(c.ratio * 1e4) / 1e4, combination: named(c.combination) }));
+  return { ...r, checks, governing, ratio: Math.round(ratio * 1e4) / 1e4, pass: ratio <= 1 };
 }
 
 function issuesFromZod(error: ZodError): DesignIssue[] {
@@ -196,16 +201,33 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
   if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) {
     throw new DesignInputError([{ path: "conditions.wet", message: "LVL and PSL are for dry service only here; use sawn lumber or glulam in wet service, or the maker's published wet-use values" }]);
   }
-  const ctx = contextFor(input);
+  return fullCheck(input, member, contextFor(input), tables);
+}
+
+/** The whole check of one resolved member in a built context (notes on): what /api/check answers and /api/size gives its top members. */
+export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMember, ctx: DesignContext, tables: MaterialTables): CheckOutput {
   const ev = evaluateMember(member, ctx);
   const sw = input.conditions.selfWeight ? member.weightPlf : 0;
+  const summary = summarizeMember(member);
+  const factors = ev.factors as { EPrime?: number };
+  const diagrams = memberDiagrams({
+    lengthFt: ctx.model.length,
+    supports: ctx.model.supports,
+    loads: ctx.loads.map((l) => l.load),
+    selfWeightPlf: sw,
+    EPsi: member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : E_STEEL_KSI * 1000,
+    IIn4: summary.section.I,
+    checks: ev.checks,
+    reactions: ev.reactions,
+    combinations: ctx.combinations,
+  });
   return {
     answer: answerLine(member.label, ev),
     pass: ev.pass,
     governing: ev.governing,
     ratio: ev.ratio,
     method: input.method,
-    member: summarizeMember(member),
+    member: summary,
     checks: ev.checks,
     reactions: ev.reactions,
     factors: ev.factors,
@@ -218,5 +240,6 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
     notChecked: NOT_CHECKED,
     caution: CAUTION,
     tables: tables.version,
+    diagrams,
   };
 }

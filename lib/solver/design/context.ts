@@ -29,6 +29,8 @@ export interface DesignContext {
   spacingIn?: number;
   tributaryFt?: number;
   loads: TakenDownLoad[];
+  /** every combination the checks may name (strength, service, live-only), by name */
+  combinations: ReadonlyMap<string, Combination>;
 }
 
 const CASE_ORDER: LoadCase[] = ["D", "L", "Lr", "S", "W"];
@@ -57,14 +59,25 @@ export function liveCombinations(service: NamedCombination[]): NamedCombination[
 export type DesignProblem = Omit<CheckInput, "member">;
 
 // The combinations depend only on the cases present: built once per set of cases.
-const comboCache = new Map<string, { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] }>();
+interface CombinationSet {
+  asd: NamedCombination[];
+  lrfd: NamedCombination[];
+  live: NamedCombination[];
+  byName: Map<string, Combination>;
+}
 
-function combinationsFor(cases: LoadCase[]): { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] } {
+const comboCache = new Map<string, CombinationSet>();
+
+function combinationsFor(cases: LoadCase[]): CombinationSet {
   const key = cases.join(",");
   let hit = comboCache.get(key);
   if (!hit) {
     const asd = asdCombinations(cases);
-    hit = { asd, lrfd: lrfdCombinations(cases), live: liveCombinations(asd) };
+    const lrfd = lrfdCombinations(cases);
+    const live = liveCombinations(asd);
+    const byName = new Map<string, Combination>();
+    for (const c of [...asd, ...lrfd, ...live]) if (!byName.has(c.name)) byName.set(c.name, c.factors);
+    hit = { asd, lrfd, live, byName };
     comboCache.set(key, hit);
   }
   return hit;
@@ -97,5 +110,6 @@ export function buildContext(input: DesignProblem): DesignContext {
     spacingIn: input.spacing,
     tributaryFt: input.tributary,
     loads,
+    combinations: combos.byName,
   };
 }

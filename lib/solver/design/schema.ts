@@ -184,6 +184,8 @@ export const sizeInputSchema = z
     /** how many passing members and how many nearest failures to return */
     limit: z.number().int().min(1).max(500).default(20),
     failures: z.number().int().min(0).max(100).default(5),
+    /** how many of the best passing members carry their whole check (checks, diagrams, answer), as /api/check gives it */
+    fullChecks: z.number().int("must be a whole number").min(0, "must be 0 to 20").max(20, "must be 0 to 20").default(0),
   })
   .strict()
   .superRefine(crossFieldIssues);

@@ -6,7 +6,7 @@
 import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
 import { CAUTION } from "../beam";
-import { answerLine, percent, assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
+import { answerLine, percent, assumptionsFor, checkMember, contextFor, evaluateMember, fullCheck, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
 import { resolveMember, resolveMemberUnchecked, withPlies, type DesignMember } from "./member";
@@ -27,6 +27,8 @@ export interface SizeCandidateResult {
   costPerFoot: number | null;
   /** jack studs per support (wood) and bearing needed, for the answer line */
   supports: { x: number; maxDown: number; uplift: number; requiredBearing: number; jackStuds: number | null }[];
+  /** the whole check, for the first `fullChecks` passing members */
+  check?: CheckOutput;
 }
 
 export interface SizeFailure extends SizeCandidateResult {
@@ -119,7 +121,7 @@ function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>): 
 function reasonOf(c: DesignCheck | undefined): string {
   if (!c) return "no check ran";
   const where = c.x === null ? "" : ` at ${Math.round(c.x * 100) / 100} ft`;
-  const combo = c.combination ? ` in ${c.combination}` : "";
+  const combo = c.combination ? ` in ${c.combination.name}` : "";
   return `${c.name} ${percent(c.ratio, c.ratio <= 1)}%${combo}${where}: ${c.demand} ${c.unit} against ${c.capacity} ${c.unit}`;
 }
 
@@ -165,8 +167,11 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   }
   passing.sort(RANKERS[input.rank]);
   failing.sort((a, b) => a.ratio - b.ratio);
+  const top = passing.slice(0, input.limit);
+  const full: DesignContext = { ...ctx, notes: true };
+  for (const row of top.slice(0, input.fullChecks)) row.check = fullCheck(input, resolveMember(row.member, tables), full, tables);
   return {
-    passing: passing.slice(0, input.limit),
+    passing: top,
     failing: failing.slice(0, input.failures),
     rank: input.rank,
     method: input.method,

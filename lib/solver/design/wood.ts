@@ -28,7 +28,7 @@ import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common
 import type { DesignContext } from "./context";
 import { peakAbs } from "./load-model";
 import type { WoodMember } from "./member";
-import type { DesignCheck, SupportReaction } from "./types";
+import type { NamedCheck, SupportReaction } from "./types";
 
 /** Width of one jack stud, in (a 2x stud's dressed thickness). */
 export const JACK_STUD_IN = 1.5;
@@ -69,7 +69,7 @@ export interface WoodFactors {
 }
 
 export interface MemberEvaluation {
-  checks: DesignCheck[];
+  checks: NamedCheck[];
   reactions: SupportReaction[];
   factors: WoodFactors;
 }
@@ -92,7 +92,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const EminPrime = adjustedEmin(m.Emin, { CM: CM.E, Ct: Ct.E, Ci: Ci.E }) * (lrfd ? FORMAT_CONVERSION_KF.Emin * RESISTANCE_PHI.Emin : 1);
   const longest = Math.max(...model.regions.map((r) => r.length));
   const CV = m.volumeX !== undefined ? volumeFactorCV(longest, m.d, m.plyWidth, m.volumeX) : null;
-  const checks: DesignCheck[] = [];
+  const checks: NamedCheck[] = [];
 
   // Bending, per unbraced segment and combination (NDS 2018 §3.3).
   // Fb* without CD (applied per combination), NDS 2018 §3.3.3.8
