@@ -8,7 +8,8 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
+import { shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
+import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -134,7 +135,8 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
   }, [chosenCheck, onChosenCheck]);
 
   const busy = size.isLoading || size.isValidating;
-  const headline = chosenCandidate ? headlineFor(chosenCandidate.member, chosenCandidate.label, chosenCandidate.supports, state.kind, spacingOf(state)) : null;
+  const headline = chosenCandidate?.answer ?? null;
+  const studs = jackStudsApply(state.kind, spacingOf(state));
 
   return (
     <div className="flex flex-col gap-6" aria-busy={busy}>
@@ -206,7 +208,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                         </p>
                       ) : null}
                       <p>
-                        {state.kind === "header" && r.jackStuds !== null
+                        {studs && r.jackStuds !== null
                           ? `${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"} (needs ${formatInches(r.requiredBearing)} of bearing)`
                           : `Bearing: needs ${formatInches(r.requiredBearing)}, you have ${formatInches(r.bearing)}`}
                       </p>

@@ -5,7 +5,7 @@
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
 import type { MemberResultSummary } from "@/lib/flow/summary";
-import { formatLb, supportName } from "@/lib/sheets/format";
+import { checkWords, formatLb, supportName } from "@/lib/sheets/format";
 
 export interface ScheduleSupport {
   name: string;
@@ -60,6 +60,6 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
     memberLabel: s.memberLabel,
     span,
     supports,
-    verdict: { pass: s.pass, words: s.pass ? `OK ${pct}${s.governing ? `, ${s.governing.replace(/-/g, " ")} governs` : ""}` : `Over ${pct}: do not build this` },
+    verdict: { pass: s.pass, words: s.pass ? `OK ${pct}${s.governing ? `, ${checkWords(s.governing)} governs` : ""}` : `Over ${pct}: do not build this` },
   };
 }

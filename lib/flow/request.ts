@@ -3,7 +3,9 @@
  * member is saved or a sheet is made). Pure.
  */
 import { EXPOSURE_CE, THERMAL_CT } from "@/lib/solver/asce7/snow";
-import type { DesignLoad, MemberSpec } from "@/lib/solver/design/schema";
+import type { MemberKind } from "@/lib/solver/design/kinds";
+import { deflectionPreset } from "@/lib/solver/design/presets";
+import type { DeflectionPresetId, DesignLoad, MemberSpec } from "@/lib/solver/design/schema";
 import { sortedSupports, type FlowMaterial, type FlowState } from "./state";
 
 /** The size family the search is limited to. */
@@ -21,8 +23,9 @@ export interface DesignRequestBase {
   loads: DesignLoad[];
   bearing: number;
   conditions: { wet: boolean; incised: boolean; repetitive: boolean; unbracedLength: number; selfWeight: boolean };
-  limits: { live: number; total: number };
+  limits: { preset: DeflectionPresetId; live?: number; total?: number };
   method: "asd";
+  kind: MemberKind;
 }
 
 export type SizeRequest = DesignRequestBase & { member: SizeFamilyRequest; limit: number; failures: number; fullChecks: number };
@@ -55,6 +58,26 @@ export function designLoads(state: FlowState): DesignLoad[] {
   return loads;
 }
 
+/** The deflection preset a kind of member starts from (so the answer names the right row of the table). */
+const KIND_LIMITS: Record<MemberKind, DeflectionPresetId> = {
+  "floor-joist": "floor",
+  "deck-joist": "floor",
+  "deck-beam": "floor",
+  beam: "floor",
+  header: "other",
+  rafter: "ceiling-flexible",
+};
+
+/** The preset for the kind, with the builder's numbers only where they differ from it. */
+function limitsFor(state: FlowState): DesignRequestBase["limits"] {
+  const preset = deflectionPreset(KIND_LIMITS[state.kind]);
+  return {
+    preset: preset.id,
+    ...(state.limits.live !== preset.live ? { live: state.limits.live } : {}),
+    ...(state.limits.total !== preset.total ? { total: state.limits.total } : {}),
+  };
+}
+
 export function designBase(state: FlowState): DesignRequestBase {
   const width = state.width.mode === "spacing" ? { spacing: state.width.spacingIn } : { tributary: state.width.tributaryFt };
   return {
@@ -64,8 +87,9 @@ export function designBase(state: FlowState): DesignRequestBase {
     loads: designLoads(state),
     bearing: state.bearingIn,
     conditions: { wet: state.wet, incised: false, repetitive: state.repetitive, unbracedLength: state.unbracedFt, selfWeight: state.selfWeight },
-    limits: { live: state.limits.live, total: state.limits.total },
+    limits: limitsFor(state),
     method: "asd",
+    kind: state.kind,
   };
 }
 

@@ -11,17 +11,8 @@ import type { RoofExposure, RoofThermal } from "@/lib/solver/asce7/snow";
 /** The longest member the flow takes, ft (the solver's limit). */
 export const MAX_LENGTH_FT = 200;
 
-export const MEMBER_KINDS = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"] as const;
-export type MemberKind = (typeof MEMBER_KINDS)[number];
-
-export const KIND_LABELS: Readonly<Record<MemberKind, string>> = {
-  "floor-joist": "Floor joist",
-  header: "Header",
-  beam: "Beam or girder",
-  "deck-joist": "Deck joist",
-  "deck-beam": "Deck beam",
-  rafter: "Rafter or ceiling joist",
-};
+export { KIND_LABELS, MEMBER_KINDS, type MemberKind } from "@/lib/solver/design/kinds";
+import type { MemberKind } from "@/lib/solver/design/kinds";
 
 export const FLOW_STEPS = ["kind", "span", "loads", "material", "answer"] as const;
 export type FlowStepId = (typeof FLOW_STEPS)[number];

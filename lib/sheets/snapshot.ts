@@ -7,7 +7,9 @@ import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/cautio
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, type FlowState, type MemberKind } from "@/lib/flow/state";
-import { headlineFor, spacingOf } from "@/lib/flow/summary";
+import { spacingOf } from "@/lib/flow/summary";
+import { jackStudsApply } from "@/lib/solver/design/answer-line";
+import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
 import type { Segment } from "@/lib/solver/beam";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -150,7 +152,9 @@ function inputRows(state: FlowState): [string, string][] {
   ];
   for (const a of state.areaLoads) if (a.psf > 0) rows.push([`Area load (${a.case})`, `${a.label || a.preset}: ${fmtNumber(a.psf)} psf`]);
   if (state.snow.on && state.snow.groundPsf > 0) {
-    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf, ${state.snow.exposure}, ${state.snow.thermal}`]);
+    const exposure = EXPOSURE_WORDS[state.snow.exposure].toLowerCase();
+    const heat = THERMAL_WORDS[state.snow.thermal].toLowerCase();
+    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf; roof ${exposure} (Ce ${EXPOSURE_CE[state.snow.exposure]}); building ${heat} (Ct ${THERMAL_CT[state.snow.thermal]})`]);
   }
   for (const p of state.pointLoads) rows.push([`Point load (${p.case})`, `${p.label ? `${p.label}: ` : ""}${fmtNumber(p.P)} lb at ${formatFeetInches(p.x)}`]);
   for (const l of state.lineLoads) {
@@ -230,8 +234,9 @@ function diagramsFor(check: CheckOutput): SheetDiagram[] {
 export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables: MaterialTables): SheetMember {
   const state = source.flowState;
   const check = checkMember(checkRequest(state, spec), tables);
-  const reactions = check.reactions.map((r) => ({ ...r, jackStuds: state.kind === "header" ? r.jackStuds : null }));
-  const headline = headlineFor(check.member.spec, check.member.label, reactions, state.kind, spacingOf(state));
+  const studs = jackStudsApply(state.kind, spacingOf(state));
+  const reactions = check.reactions.map((r) => ({ ...r, jackStuds: studs ? r.jackStuds : null }));
+  const headline = check.answer;
   const saved = source.savedAnswer;
   const changed = saved && (saved.headline !== headline || Math.abs(saved.ratio - check.ratio) > 0.005);
   const note = changed

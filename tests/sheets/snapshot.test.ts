@@ -4,6 +4,9 @@ import { renderSheetPdf } from "@/lib/sheets/pdf";
 import { buildSheetSnapshot, type SheetSnapshot } from "@/lib/sheets/snapshot";
 import { valueIn } from "@/components/diagrams/geometry";
 import { STARTER_TABLES } from "@/lib/tables";
+import { defaultFlowState } from "@/lib/flow/defaults";
+import { sizeRequest } from "@/lib/flow/request";
+import { sizeMember } from "@/lib/solver/design";
 import type { MaterialTables } from "@/lib/tables/types";
 import { HEADER_SPEC, JOIST_SPEC, headerState, joistState } from "../crew/fixtures";
 import { hasPdftotext, isPdf, pdfStreamText, pdftotext } from "./pdf-text";
@@ -169,5 +172,35 @@ describe("the sheet's PDF", () => {
       curves += (content.match(/ c\n/g) ?? []).length;
     }
     expect(curves).toBeGreaterThan(20);
+  });
+});
+
+describe("a roof member on the sheet", () => {
+  const rafter = defaultFlowState("rafter");
+  const snow = { ...rafter, snow: { ...rafter.snow, on: true, groundPsf: 30, exposure: "partially-exposed" as const, thermal: "cold-ventilated" as const } };
+  const size = sizeMember(sizeRequest(snow), STARTER_TABLES);
+  const snap = buildSheetSnapshot({
+    job: { id: "job-2", name: "Fern Row porch", siteAddress: "", notes: "" },
+    preparedBy: { name: "Sam Hollis", company: null },
+    members: [{ id: "r1", label: "R1 porch rafters", kind: "rafter", flowState: snow, chosenMember: size.passing[0].member, savedTables: null }],
+    tables: STARTER_TABLES,
+    now: NOW,
+  });
+  const m = snap.members[0];
+
+  test("its deflection note names the roof row of IRC 2021 Table R301.7, not floors", () => {
+    expect(m.limits.source).toMatch(/^Roofs and ceilings/);
+    expect(m.limits.source).not.toMatch(/floor/i);
+  });
+
+  test("the snow inputs are in words, with no internal codes", () => {
+    const snowRow = m.inputs.find(([k]) => k === "Snow (S)")![1];
+    expect(snowRow).toBe("ground snow 30 psf; roof partially exposed (Ce 1); building cold, ventilated (Ct 1.1)");
+    expect(m.inputs.map(([, v]) => v).join(" ")).not.toMatch(/[a-z]+-[a-z]+ed\b/);
+  });
+
+  test("the answer line is the sizing search's, word for word, with the bearing on the plate", () => {
+    expect(m.headline).toBe(size.passing[0].answer);
+    expect(m.headline).toMatch(/ at \d+ in o\.c\. — .* bearing each end on the plate, beam or hanger$/);
   });
 });

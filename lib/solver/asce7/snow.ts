@@ -11,6 +11,18 @@ export type RoofExposure = keyof typeof EXPOSURE_CE;
 export const THERMAL_CT = { heated: 1.0, "cold-ventilated": 1.1, unheated: 1.2 } as const;
 export type RoofThermal = keyof typeof THERMAL_CT;
 
+/** The exposure and the building's heat in a builder's words (the flow's choices, the sheet's inputs). */
+export const EXPOSURE_WORDS: Readonly<Record<RoofExposure, string>> = {
+  "fully-exposed": "Fully exposed",
+  "partially-exposed": "Partially exposed",
+  sheltered: "Sheltered by trees or buildings",
+};
+export const THERMAL_WORDS: Readonly<Record<RoofThermal, string>> = {
+  heated: "Heated, unventilated",
+  "cold-ventilated": "Cold, ventilated",
+  unheated: "Unheated",
+};
+
 export interface FlatRoofSnowInput {
   /** ground snow load for the site's risk category, psf (ASCE 7-22 §7.2, Figs. 7.2-1) */
   pg: number;

@@ -11,6 +11,7 @@ import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
 import { evaluateSteel, type SteelFactors } from "./steel";
 import { E_STEEL_KSI } from "../aisc360/aisc360-16";
+import { answerLine, shortLabel } from "./answer-line";
 import { memberDiagrams, type MemberDiagrams } from "./diagrams";
 import type { CheckName, CombinationRef, DesignCheck, SupportReaction } from "./types";
 import { evaluateWood, type WoodFactors } from "./wood";
@@ -40,8 +41,10 @@ export interface MemberSummary {
 }
 
 export interface CheckOutput {
-  /** the answer for the crew in one line, e.g. "3-ply 2x12 Douglas Fir-Larch No.2 — OK 99% (bending); 1 jack stud each end" */
+  /** what to build, for the crew, in one line, e.g. "3-ply 2x12 No.2 — 2 jack studs each end" (a member that does not work says so) */
   answer: string;
+  /** e.g. "OK 99% (bending)" */
+  verdict: string;
   pass: boolean;
   /** the check with the largest ratio */
   governing: CheckName | null;
@@ -92,17 +95,18 @@ export function percent(ratio: number, pass: boolean): string {
   return String(whole);
 }
 
-/** One line for the crew: the member, OK or Over with the largest ratio, and what to build under it. */
-export function answerLine(label: string, ev: { pass: boolean; ratio: number; governing: CheckName | null; reactions: SupportReaction[] }): string {
-  const head = `${label} — ${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${CHECK_WORDS[ev.governing]})` : ""}`;
-  const studs = ev.reactions.map((r) => r.jackStuds).filter((n): n is number => n !== null);
-  if (studs.length > 0) {
-    const most = Math.max(...studs);
-    const each = studs.length === 2 && studs[0] === studs[1] ? " each end" : " at the end that needs most";
-    return `${head}; ${most} jack stud${most === 1 ? "" : "s"}${studs.length === 2 ? each : ""}`;
-  }
-  const need = Math.max(0, ...ev.reactions.map((r) => r.requiredBearing));
-  return need > 0 ? `${head}; bearing at least ${Math.ceil(need * 4) / 4} in at the supports` : head;
+/** "OK 77% (bending)" or "Over 113% (shear)": the verdict with the largest ratio and the check it is in. */
+export function verdictWords(ev: { pass: boolean; ratio: number; governing: CheckName | null }): string {
+  return `${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${CHECK_WORDS[ev.governing]})` : ""}`;
+}
+
+/**
+ * The answer for the crew in one line (lib/solver/design/answer-line.ts); a member that does not
+ * work says so instead: "Over 130% (live load deflection): do not build 2x8 No.2".
+ */
+export function answerFor(input: Pick<CheckInput, "kind" | "spacing">, member: Pick<DesignMember, "spec" | "label">, ev: Pick<Evaluation, "pass" | "ratio" | "governing" | "reactions">): string {
+  if (!ev.pass) return `${verdictWords(ev)}: do not build ${shortLabel(member.spec, member.label)}`;
+  return answerLine({ spec: member.spec, label: member.label, kind: input.kind, spacingIn: input.spacing, supports: ev.reactions });
 }
 
 /** Runs every check of one resolved member in a shared context. */
@@ -222,7 +226,8 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     combinations: ctx.combinations,
   });
   return {
-    answer: answerLine(member.label, ev),
+    answer: answerFor(input, member, ev),
+    verdict: verdictWords(ev),
     pass: ev.pass,
     governing: ev.governing,
     ratio: ev.ratio,

@@ -7,6 +7,7 @@
 import { z } from "zod";
 import { geometryIssues, LIMITS } from "../beam/checks";
 import type { BeamInput, Load } from "../types";
+import { MEMBER_KINDS } from "./kinds";
 
 const loadCase = z.enum(["D", "L", "Lr", "S", "W"], { error: 'must be one of "D", "L", "Lr", "S", "W"' });
 const finite = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine(Number.isFinite, `must be a finite number (${unit})`);
@@ -99,6 +100,8 @@ export const limitsSchema = z
   .strict();
 
 const designFields = {
+  /** what the member is in the house: sets what the answer line tells the crew to build under it */
+  kind: z.enum(MEMBER_KINDS, { error: `must be one of ${MEMBER_KINDS.map((k) => `"${k}"`).join(", ")}` }).optional(),
   length: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
   supports: z
     .array(z.object({ x: finite("ft"), type: z.enum(["pin", "roller", "fixed"], { error: 'must be "pin", "roller" or "fixed"' }) }).strict())

@@ -6,7 +6,7 @@
 import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
 import { CAUTION } from "../beam";
-import { answerLine, percent, assumptionsFor, checkMember, contextFor, evaluateMember, fullCheck, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
+import { answerFor, percent, verdictWords, assumptionsFor, checkMember, contextFor, evaluateMember, fullCheck, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
 import { resolveMember, resolveMemberUnchecked, withPlies, type DesignMember } from "./member";
@@ -16,6 +16,8 @@ import type { CheckName, DesignCheck } from "./types";
 export interface SizeCandidateResult {
   /** one line for the crew, as in the check output */
   answer: string;
+  /** e.g. "OK 77% (bending)" */
+  verdict: string;
   member: MemberSpec;
   label: string;
   governing: CheckName | null;
@@ -104,9 +106,10 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
   return out;
 }
 
-function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>): SizeCandidateResult {
+function describe(input: SizeInput, member: DesignMember, ev: ReturnType<typeof evaluateMember>): SizeCandidateResult {
   return {
-    answer: answerLine(member.label, ev),
+    answer: answerFor(input, member, ev),
+    verdict: verdictWords(ev),
     member: member.spec,
     label: member.label,
     governing: ev.governing,
@@ -161,7 +164,7 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     checked++;
     lastMember = member;
     const ev = evaluateMember(member, ctx);
-    const row = describe(member, ev);
+    const row = describe(input, member, ev);
     if (ev.pass) passing.push(row);
     else failing.push({ ...row, reason: reasonOf(ev.checks.find((c) => c.name === ev.governing)) });
   }

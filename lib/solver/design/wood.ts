@@ -226,8 +226,9 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ...service[j],
       bearing: ctx.bearingIn,
       requiredBearing: round(required, 2),
-      // jack studs hold a header's ends; an interior support is a post or wall, not counted in studs here
-      jackStuds: fromEndIn <= 1e-6 ? Math.max(1, Math.ceil(required / JACK_STUD_IN - 1e-9)) : null,
+      // jack studs hold a header's ends; an interior support is a post or wall, not counted in studs here.
+      // Enough studs for the bearing the check assumed and for the bearing needed: the count and the check read the same numbers.
+      jackStuds: fromEndIn <= 1e-6 ? Math.max(1, Math.ceil(Math.max(required, ctx.bearingIn) / JACK_STUD_IN - 1e-9)) : null,
     });
   }
   const bearingCb = bestBearing.Cb;
