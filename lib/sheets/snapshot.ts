@@ -3,7 +3,7 @@
  * Reprinting (the page, the PDF) reads only this: no solver, no tables, no member rows. So a sheet prints
  * the same numbers after the tables are edited or the member is changed. Pure: no database, no React.
  */
-import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/caution-text";
+import { CAUTION, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, type FlowState, type MemberKind } from "@/lib/flow/state";
@@ -293,6 +293,6 @@ export function buildSheetSnapshot(source: SheetSource): SheetSnapshot {
     method: "asd",
     members,
     skipped,
-    caution: { title: CAUTION_TITLE, text: CAUTION_TEXT, notChecked: [...NOT_CHECKED] },
+    caution: { title: CAUTION_TITLE, text: CAUTION, notChecked: [...NOT_CHECKED] },
   };
 }

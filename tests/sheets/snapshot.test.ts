@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { asdCombinations } from "@/lib/solver/asce7/combinations";
 import { renderSheetPdf } from "@/lib/sheets/pdf";
 import { buildSheetSnapshot, type SheetSnapshot } from "@/lib/sheets/snapshot";
-import { valueIn } from "@/components/diagrams/geometry";
+import { valueIn } from "@/lib/diagrams/geometry";
 import { STARTER_TABLES } from "@/lib/tables";
 import { defaultFlowState } from "@/lib/flow/defaults";
 import { sizeRequest } from "@/lib/flow/request";

@@ -5,7 +5,7 @@ import { authorizeAction, type ActionDenied } from "@/lib/auth/action";
 import { changeRole } from "@/lib/auth/accounts";
 import { ChangeRoleSchema } from "@/lib/auth/schemas";
 import { HttpError, zodIssues, type FieldIssue } from "@/lib/http";
-import type { Role } from "@/models/user";
+import type { Role } from "@/lib/auth/role-list";
 
 export type ChangeRoleResult = { ok: true; userId: string; role: Role } | { ok: false; error: string; issues?: FieldIssue[] } | ActionDenied;
 

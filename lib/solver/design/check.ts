@@ -3,7 +3,8 @@
  * Pure: the caller passes the material tables (starter data in the CLI, the published version in the app).
  */
 import type { MaterialTables } from "@/lib/tables/types";
-import { BeamInputError, BeamInstabilityError, CAUTION } from "../beam";
+import { CAUTION, NOT_CHECKED } from "@/lib/caution";
+import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
 import { buildContext, type DesignContext } from "./context";
 import { DesignInputError, type DesignIssue } from "./errors";
@@ -16,18 +17,7 @@ import { memberDiagrams, type MemberDiagrams } from "./diagrams";
 import type { CheckName, CombinationRef, DesignCheck, SupportReaction } from "./types";
 import { evaluateWood, type WoodFactors } from "./wood";
 
-export { CAUTION };
-
-/** What the member checks leave to others; carried by every result. */
-export const NOT_CHECKED: readonly string[] = [
-  "connections, fasteners and hangers",
-  "posts, studs, columns and the plates, walls or footings under the bearing (bearing is checked on this member only)",
-  "lateral loads (wind and seismic on the building), and wind on this member beyond the load cases given",
-  "point loads on joists without blocking or a beam under them",
-  "notches, holes and cuts in the member",
-  "floor vibration, ponding on flat roofs, drift, sliding and unbalanced snow",
-  "fire resistance and decay or insect protection",
-];
+export { CAUTION, NOT_CHECKED };
 
 export interface MemberSummary {
   spec: MemberSpec;

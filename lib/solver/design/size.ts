@@ -5,7 +5,7 @@
  */
 import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
-import { CAUTION } from "../beam";
+import { CAUTION } from "@/lib/caution";
 import { answerFor, percent, verdictWords, assumptionsFor, checkMember, contextFor, evaluateMember, fullCheck, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
