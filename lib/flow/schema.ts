@@ -2,6 +2,7 @@
  * zod schemas of the flow's state, for the server (saving a member) and for reading a state back
  * from the URL or local storage. Limits follow the solver's (200 ft, 20 supports, 200 loads).
  */
+import { zodIssues, type FieldIssue } from "@/lib/zod-issues";
 import { z } from "zod";
 import { LOAD_CASES } from "@/lib/solver/types";
 import { MATERIAL_FAMILIES, MAX_LENGTH_FT, MEMBER_KINDS, type FlowState } from "./state";
@@ -83,8 +84,7 @@ export function parseFlowState(value: unknown): FlowState | null {
 }
 
 /** Field-by-field problems of a state, as "field: reason" lines (for the flow's warning and the server's 400). */
-export function flowStateIssues(value: unknown): { path: string; message: string }[] {
+export function flowStateIssues(value: unknown): FieldIssue[] {
   const parsed = flowStateSchema.safeParse(value);
-  if (parsed.success) return [];
-  return parsed.error.issues.map((i) => ({ path: i.path.join("."), message: i.message }));
+  return parsed.success ? [] : zodIssues(parsed.error);
 }

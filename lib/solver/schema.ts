@@ -70,7 +70,3 @@ export const beamInputSchema = z
 
 export type BeamInputParsed = z.infer<typeof beamInputSchema>;
 
-/** Field-level issues as `{ path: "supports.1.x", message }`. */
-export function issuesOf(error: z.ZodError): { path: string; message: string }[] {
-  return error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }));
-}

@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { POST } from "@/app/api/check/route";
 
 const post = (body: unknown) =>
-  POST(new Request("http://localhost/api/check", { method: "POST", headers: { "content-type": "application/json" }, body: typeof body === "string" ? body : JSON.stringify(body) }));
+  POST(new Request("http://localhost/api/check", { method: "POST", headers: { "content-type": "application/json" }, body: typeof body === "string" ? body : JSON.stringify(body) }), { params: Promise.resolve({}) });
 
 const joist = {
   member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10", plies: 1 },

@@ -6,8 +6,9 @@ import type { MaterialTables } from "@/lib/tables/types";
 import { CAUTION, NOT_CHECKED } from "@/lib/caution";
 import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
+import { zodIssues } from "@/lib/zod-issues";
 import { buildContext, type DesignContext } from "./context";
-import { DesignInputError, type DesignIssue } from "./errors";
+import { DesignInputError } from "./errors";
 import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
 import { evaluateSteel, type SteelFactors } from "./steel";
@@ -115,14 +116,10 @@ export function evaluateMember(member: DesignMember, ctx: DesignContext): Evalua
   return { ...r, checks, governing, ratio: Math.round(ratio * 1e4) / 1e4, pass: ratio <= 1 };
 }
 
-function issuesFromZod(error: ZodError): DesignIssue[] {
-  return error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }));
-}
-
 /** Parses with a schema; a failure becomes a DesignInputError naming every field. */
 export function parseWith<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: ZodError } }, json: unknown): T {
   const r = schema.safeParse(json);
-  if (!r.success) throw new DesignInputError(issuesFromZod(r.error));
+  if (!r.success) throw new DesignInputError(zodIssues(r.error));
   return r.data;
 }
 
