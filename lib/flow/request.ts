@@ -5,31 +5,15 @@
 import { EXPOSURE_CE, THERMAL_CT } from "@/lib/solver/asce7/snow";
 import type { MemberKind } from "@/lib/solver/design/kinds";
 import { deflectionPreset } from "@/lib/solver/design/presets";
-import type { DeflectionPresetId, DesignLoad, MemberSpec } from "@/lib/solver/design/schema";
+import type { z } from "zod";
+import type { checkInputSchema, DeflectionPresetId, DesignLoad, MemberSpec, sizeFamilySchema, sizeInputSchema } from "@/lib/solver/design/schema";
 import { sortedSupports, type FlowMaterial, type FlowState } from "./state";
 
-/** The size family the search is limited to. */
-export type SizeFamilyRequest =
-  | { material: "any" }
-  | { material: "sawn"; species: string; grade: string; plies: number[] }
-  | { material: "engineered"; product?: string }
-  | { material: "steel"; grade: string };
-
-export interface DesignRequestBase {
-  length: number;
-  supports: { x: number; type: "pin" | "roller" | "fixed" }[];
-  spacing?: number;
-  tributary?: number;
-  loads: DesignLoad[];
-  bearing: number;
-  conditions: { wet: boolean; incised: boolean; repetitive: boolean; unbracedLength: number; selfWeight: boolean };
-  limits: { preset: DeflectionPresetId; live?: number; total?: number };
-  method: "asd";
-  kind: MemberKind;
-}
-
-export type SizeRequest = DesignRequestBase & { member: SizeFamilyRequest; limit: number; failures: number; fullChecks: number };
-export type CheckRequest = DesignRequestBase & { member: MemberSpec };
+/** The request bodies, typed by the server's own schemas (what /api/size and /api/check accept). */
+export type SizeFamilyRequest = z.input<typeof sizeFamilySchema>;
+export type SizeRequest = z.input<typeof sizeInputSchema>;
+export type CheckRequest = z.input<typeof checkInputSchema>;
+export type DesignRequestBase = Omit<CheckRequest, "member">;
 
 export function sizeFamily(material: FlowMaterial): SizeFamilyRequest {
   switch (material.family) {
@@ -69,7 +53,7 @@ const KIND_LIMITS: Record<MemberKind, DeflectionPresetId> = {
 };
 
 /** The preset for the kind, with the builder's numbers only where they differ from it. */
-function limitsFor(state: FlowState): DesignRequestBase["limits"] {
+function limitsFor(state: FlowState): { preset: DeflectionPresetId; live?: number; total?: number } {
   const preset = deflectionPreset(KIND_LIMITS[state.kind]);
   return {
     preset: preset.id,

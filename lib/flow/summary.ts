@@ -5,6 +5,7 @@
  */
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { SupportType } from "@/lib/solver/types";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { formatFeetInches } from "./length";
 import { mainSpanFt, overhangs, spansFt, type FlowState } from "./state";
@@ -12,7 +13,7 @@ import { mainSpanFt, overhangs, spansFt, type FlowState } from "./state";
 export interface SummaryReaction {
   /** ft from the left end */
   x: number;
-  type: "pin" | "roller" | "fixed";
+  type: SupportType;
   /** largest downward reaction over the service combinations, lb */
   maxDown: number;
   maxDownCombination: string;

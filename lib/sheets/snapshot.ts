@@ -11,6 +11,7 @@ import { spacingOf } from "@/lib/flow/summary";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
 import type { Segment } from "@/lib/solver/beam";
+import type { SupportType } from "@/lib/solver/types";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { DesignCheck, SupportReaction } from "@/lib/solver/design/types";
@@ -49,7 +50,7 @@ export interface SheetMember {
   ratio: number;
   spanFt: number;
   lengthFt: number;
-  supports: { x: number; type: "pin" | "roller" | "fixed" }[];
+  supports: { x: number; type: SupportType }[];
   /** the inputs in words, in order: [what, value] */
   inputs: [string, string][];
   /** the inputs as the flow holds them (for reference; never recomputed) */

@@ -22,8 +22,7 @@ export { beamsStringersCF, SAWN_VALUES, SIZE_FACTORS } from "./sawn-values";
 export { depthSizeFactor, eminFromE, ENGINEERED, glulamVolumeFactorCV, SUPPLIER_NOTE } from "./engineered";
 export { STEEL_GRADES, W_SHAPES } from "./steel";
 
-export const SPECIES: readonly Species[] = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"];
-export const SAWN_GRADES: readonly SawnGrade[] = ["Select Structural", "No.1", "No.2", "No.3"];
+export { SAWN_GRADES, SPECIES } from "./types";
 export const SAWN_SIZE_CLASSES: readonly SawnSizeClass[] = ["dimension", "beams-stringers"];
 
 /** A member as the design input names it; extra fields (plies, grade of steel) are ignored. */

@@ -4,7 +4,7 @@
  */
 import { asdCombinations, lrfdCombinations } from "../asce7/combinations";
 import { loadDurationFactorCD, timeEffectFactorLambda } from "../nds/nds-2018";
-import type { Combination, LoadCase, NamedCombination } from "../types";
+import { LOAD_CASES, type Combination, type LoadCase, type NamedCombination } from "../types";
 import { buildLoadModel, type ComboEnvelope, type LoadModel } from "./load-model";
 import { resolveLimits } from "./presets";
 import type { CheckInput, DesignConditions } from "./schema";
@@ -33,10 +33,9 @@ export interface DesignContext {
   combinations: ReadonlyMap<string, Combination>;
 }
 
-const CASE_ORDER: LoadCase[] = ["D", "L", "Lr", "S", "W"];
 
 function comboName(f: Combination): string {
-  return CASE_ORDER.filter((c) => (f[c] ?? 0) !== 0)
+  return LOAD_CASES.filter((c) => (f[c] ?? 0) !== 0)
     .map((c) => `${f[c] === 1 ? "" : String(Math.round((f[c] as number) * 1e4) / 1e4)}${c}`)
     .join("+");
 }

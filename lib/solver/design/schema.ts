@@ -6,10 +6,10 @@
  */
 import { z } from "zod";
 import { geometryIssues, LIMITS } from "../beam/checks";
-import type { BeamInput, Load } from "../types";
+import { eitherMessage, LOAD_CASES, oneOfMessage, SUPPORT_TYPES, type BeamInput, type Load, type SupportType } from "../types";
 import { MEMBER_KINDS } from "./kinds";
 
-const loadCase = z.enum(["D", "L", "Lr", "S", "W"], { error: 'must be one of "D", "L", "Lr", "S", "W"' });
+const loadCase = z.enum(LOAD_CASES, { error: oneOfMessage(LOAD_CASES) });
 const finite = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine(Number.isFinite, `must be a finite number (${unit})`);
 const positive = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine((v) => Number.isFinite(v) && v > 0, `must be a number greater than 0 (${unit})`);
 
@@ -101,10 +101,10 @@ export const limitsSchema = z
 
 const designFields = {
   /** what the member is in the house: sets what the answer line tells the crew to build under it */
-  kind: z.enum(MEMBER_KINDS, { error: `must be one of ${MEMBER_KINDS.map((k) => `"${k}"`).join(", ")}` }).optional(),
+  kind: z.enum(MEMBER_KINDS, { error: oneOfMessage(MEMBER_KINDS) }).optional(),
   length: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
   supports: z
-    .array(z.object({ x: finite("ft"), type: z.enum(["pin", "roller", "fixed"], { error: 'must be "pin", "roller" or "fixed"' }) }).strict())
+    .array(z.object({ x: finite("ft"), type: z.enum(SUPPORT_TYPES, { error: eitherMessage(SUPPORT_TYPES) }) }).strict())
     .min(1, "give at least one support"),
   /** joist spacing, in on centre */
   spacing: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
@@ -121,7 +121,7 @@ const designFields = {
 type RefineCtx = z.RefinementCtx;
 
 /** Checks that need more than one field: spacing vs tributary, positions on the member, area load fields. */
-function crossFieldIssues(v: { length: number; supports: { x: number; type: "pin" | "roller" | "fixed" }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[] }, ctx: RefineCtx): void {
+function crossFieldIssues(v: { length: number; supports: { x: number; type: SupportType }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[] }, ctx: RefineCtx): void {
   const hasArea = v.loads.some((l) => (l.type === "area" || l.type === "snow") && l.tributary === undefined);
   if (v.spacing !== undefined && v.tributary !== undefined) {
     ctx.addIssue({ code: "custom", path: ["tributary"], message: "give either spacing (in, for joists) or tributary (ft, for beams and headers), not both" });

@@ -1,5 +1,5 @@
 /** Output shapes of the design checks (`npm run check`, POST /api/check) and the sizing search. */
-import type { Combination } from "../types";
+import type { Combination, SupportType } from "../types";
 
 /** A load combination as the checks used it: its name ("D+0.75L+0.75S") and its factors by case. */
 export interface CombinationRef {
@@ -39,7 +39,7 @@ export interface DesignCheck {
 export interface SupportReaction {
   /** ft */
   x: number;
-  type: "pin" | "roller" | "fixed";
+  type: SupportType;
   /** largest downward reaction over the service (ASD) combinations, lb (the support pushes up) */
   maxDown: number;
   maxDownCombination: string;
