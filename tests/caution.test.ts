@@ -7,12 +7,12 @@ import { STARTER_TABLES } from "@/lib/tables";
 
 const member = {
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10" },
-  length: 10,
+  lengthFt: 10,
   supports: [
     { x: 0, type: "pin" },
     { x: 10, type: "roller" },
   ],
-  spacing: 16,
+  spacingIn: 16,
   loads: [{ type: "area", case: "L", psf: 40 }],
 };
 

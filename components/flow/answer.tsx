@@ -38,24 +38,24 @@ const sameSpec = (a: MemberSpec, b: MemberSpec) => JSON.stringify(a) === JSON.st
 
 /** Which step holds the field an issue names. */
 function stepOfPath(path: string): FlowStepId {
-  if (/^(length|supports|bearing)/.test(path)) return "span";
-  if (/^(loads|spacing|tributary)/.test(path)) return "loads";
+  if (/^(lengthFt|supports|bearingIn)/.test(path)) return "span";
+  if (/^(loads|spacingIn|tributaryFt)/.test(path)) return "loads";
   return "material";
 }
 
 const FIELD_WORDS: Record<string, string> = {
-  length: "Span",
+  lengthFt: "Span",
   supports: "Supports",
   loads: "Loads",
-  spacing: "Joist spacing",
-  tributary: "Tributary width",
-  bearing: "Bearing length",
+  spacingIn: "Joist spacing",
+  tributaryFt: "Tributary width",
+  bearingIn: "Bearing length",
   member: "Material",
   limits: "Deflection limits",
   conditions: "Conditions",
 };
 
-/** "supports.1.x" → "Support 2"; "spacing" → "Joist spacing". */
+/** "supports.1.x" → "Support 2"; "spacingIn" → "Joist spacing". */
 function fieldWords(path: string): string {
   const [head, index] = path.split(".");
   const word = FIELD_WORDS[head] ?? head;

@@ -63,14 +63,14 @@ function limitsFor(state: FlowState): { preset: DeflectionPresetId; live?: numbe
 }
 
 export function designBase(state: FlowState): DesignRequestBase {
-  const width = state.width.mode === "spacing" ? { spacing: state.width.spacingIn } : { tributary: state.width.tributaryFt };
+  const width = state.width.mode === "spacing" ? { spacingIn: state.width.spacingIn } : { tributaryFt: state.width.tributaryFt };
   return {
-    length: state.lengthFt,
+    lengthFt: state.lengthFt,
     supports: sortedSupports(state.supports),
     ...width,
     loads: designLoads(state),
-    bearing: state.bearingIn,
-    conditions: { wet: state.wet, incised: false, repetitive: state.repetitive, unbracedLength: state.unbracedFt, selfWeight: state.selfWeight },
+    bearingIn: state.bearingIn,
+    conditions: { wet: state.wet, incised: false, repetitive: state.repetitive, unbracedLengthFt: state.unbracedFt, selfWeight: state.selfWeight },
     limits: limitsFor(state),
     method: "asd",
     kind: state.kind,

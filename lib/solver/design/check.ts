@@ -95,9 +95,9 @@ export function verdictWords(ev: { pass: boolean; ratio: number; governing: Chec
  * The answer for the crew in one line (lib/solver/design/answer-line.ts); a member that does not
  * work says so instead: "Over 130% (live load deflection): do not build 2x8 No.2".
  */
-export function answerFor(input: Pick<CheckInput, "kind" | "spacing">, member: Pick<DesignMember, "spec" | "label">, ev: Pick<Evaluation, "pass" | "ratio" | "governing" | "reactions">): string {
+export function answerFor(input: Pick<CheckInput, "kind" | "spacingIn">, member: Pick<DesignMember, "spec" | "label">, ev: Pick<Evaluation, "pass" | "ratio" | "governing" | "reactions">): string {
   if (!ev.pass) return `${verdictWords(ev)}: do not build ${shortLabel(member.spec, member.label)}`;
-  return answerLine({ spec: member.spec, label: member.label, kind: input.kind, spacingIn: input.spacing, supports: ev.reactions });
+  return answerLine({ spec: member.spec, label: member.label, kind: input.kind, spacingIn: input.spacingIn, supports: ev.reactions });
 }
 
 /** Runs every check of one resolved member in a shared context. */
@@ -126,7 +126,8 @@ export function parseWith<T>(schema: { safeParse(v: unknown): { success: true; d
 /** Turns the solver's own input errors (instability, geometry) into design input errors. */
 export function asDesignError(err: unknown): unknown {
   if (err instanceof BeamInstabilityError) return new DesignInputError([{ path: "supports", message: err.message }]);
-  if (err instanceof BeamInputError) return new DesignInputError(err.issues);
+  // the beam names the member's length "length"; the design input, "lengthFt"
+  if (err instanceof BeamInputError) return new DesignInputError(err.issues.map((i) => (i.path === "length" ? { ...i, path: "lengthFt" } : i)));
   return err;
 }
 
@@ -165,12 +166,12 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   const c = input.conditions;
   a.push(`load combinations: ASCE 7-22 ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}; deflection and reactions at service level (§2.4.1)`);
   a.push(c.selfWeight ? `member's own weight counted as dead load: ${Math.round(member.weightPlf * 10) / 10} plf` : "member's own weight not counted");
-  a.push(c.unbracedLength > 0 ? `compression edge braced every ${c.unbracedLength} ft and at the supports` : "compression edge braced continuously (sheathing or decking fastened along it)");
+  a.push(c.unbracedLengthFt > 0 ? `compression edge braced every ${c.unbracedLengthFt} ft and at the supports` : "compression edge braced continuously (sheathing or decking fastened along it)");
   if (ctx.model.regions.length > 1) {
     a.push("where the member hogs (over an interior support or at an overhang) the bottom edge is in compression: the same bracing is assumed there (blocking or bracing at the supports)");
   }
   if (ctx.model.patterned) a.push("live load placed span by span for the worst effect (pattern loading, ASCE 7-22 §4.3.3)");
-  a.push(`bearing length ${input.bearing} in at every support`);
+  a.push(`bearing length ${input.bearingIn} in at every support`);
   if (member.kind === "wood") {
     a.push(c.wet ? "wet service" : "dry service (moisture content 19 % or less for sawn lumber, 16 % for glulam)");
     a.push(`temperature up to ${c.temperatureF} °F`);

@@ -83,12 +83,12 @@ function combinationsFor(cases: LoadCase[]): CombinationSet {
 }
 
 export function buildContext(input: DesignProblem): DesignContext {
-  const loads = takeDown(input.loads, input.length, { spacingIn: input.spacing, tributaryFt: input.tributary });
+  const loads = takeDown(input.loads, input.lengthFt, { spacingIn: input.spacingIn, tributaryFt: input.tributaryFt });
   const model = buildLoadModel({
-    length: input.length,
+    length: input.lengthFt,
     supports: input.supports,
     loads: loads.map((l) => l.load),
-    unbracedFt: input.conditions.unbracedLength,
+    unbracedFt: input.conditions.unbracedLengthFt,
     pattern: input.conditions.patternLiveLoad,
   });
   const combos = combinationsFor(model.cases);
@@ -105,9 +105,9 @@ export function buildContext(input: DesignProblem): DesignContext {
     live: model.envelopes(combos.live),
     conditions: input.conditions,
     limits: resolveLimits(input.limits),
-    bearingIn: input.bearing,
-    spacingIn: input.spacing,
-    tributaryFt: input.tributary,
+    bearingIn: input.bearingIn,
+    spacingIn: input.spacingIn,
+    tributaryFt: input.tributaryFt,
     loads,
     combinations: combos.byName,
   };

@@ -1,8 +1,9 @@
 /**
  * Input of the member design checks and of the sizing search, parsed at every boundary (CLI,
- * route handlers) by these zod schemas. Units: ft for positions and lengths, in for spacing,
- * bearing and member dimensions, psf for area loads, plf for line loads, lb for point loads,
- * lb-ft for couples. Loads keep the solver contract's signs (positive downward).
+ * route handlers) by these zod schemas. The member's own fields carry their unit in their name
+ * (lengthFt, spacingIn, tributaryFt, bearingIn, unbracedLengthFt), as the flow's state does, so an
+ * error's path names the flow's field. Within a load the solver contract's units hold: ft for
+ * positions (x, from, to), psf, plf (w), lb (P), lb-ft (M), positive downward.
  */
 import { z } from "zod";
 import { geometryIssues, LIMITS } from "../beam/checks";
@@ -24,7 +25,7 @@ export const areaLoadSchema = z
     from: finite("ft").optional(),
     to: finite("ft").optional(),
     /** this load's own tributary width, ft (e.g. roof and floor above a header); default the member's spacing or tributary */
-    tributary: positive("ft").optional(),
+    tributaryFt: positive("ft").optional(),
   })
   .strict();
 
@@ -38,7 +39,7 @@ export const snowLoadSchema = z
     Is: positive("importance factor").optional(),
     from: finite("ft").optional(),
     to: finite("ft").optional(),
-    tributary: positive("ft").optional(),
+    tributaryFt: positive("ft").optional(),
   })
   .strict();
 
@@ -79,7 +80,7 @@ export const conditionsSchema = z
     /** member in a repetitive system (joists or rafters at 24 in or less, at least 3, sheathed) */
     repetitive: z.boolean().default(false),
     /** unbraced length of the compression edge, ft; 0 = continuously braced */
-    unbracedLength: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)").default(0),
+    unbracedLengthFt: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)").default(0),
     selfWeight: z.boolean().default(true),
     /** sustained temperature, °F (NDS Table 2.3.3) */
     temperatureF: z.number().refine((v) => Number.isFinite(v) && v <= 150, "must be at most 150 °F").default(70),
@@ -102,17 +103,17 @@ export const limitsSchema = z
 const designFields = {
   /** what the member is in the house: sets what the answer line tells the crew to build under it */
   kind: z.enum(MEMBER_KINDS, { error: oneOfMessage(MEMBER_KINDS) }).optional(),
-  length: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
+  lengthFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
   supports: z
     .array(z.object({ x: finite("ft"), type: z.enum(SUPPORT_TYPES, { error: eitherMessage(SUPPORT_TYPES) }) }).strict())
     .min(1, "give at least one support"),
   /** joist spacing, in on centre */
-  spacing: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
+  spacingIn: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
   /** tributary width, ft */
-  tributary: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
+  tributaryFt: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
   loads: z.array(designLoadSchema).max(LIMITS.maxLoads),
   /** bearing length at each support, in; default 1-1/2 in (IRC R502.6 minimum on wood or metal) */
-  bearing: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
+  bearingIn: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
   conditions: conditionsSchema.default(() => conditionsSchema.parse({})),
   limits: limitsSchema.default({}),
   method: z.enum(["asd", "lrfd"], { error: 'must be "asd" or "lrfd"' }).default("asd"),
@@ -121,12 +122,12 @@ const designFields = {
 type RefineCtx = z.RefinementCtx;
 
 /** Checks that need more than one field: spacing vs tributary, positions on the member, area load fields. */
-function crossFieldIssues(v: { length: number; supports: { x: number; type: SupportType }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[] }, ctx: RefineCtx): void {
-  const hasArea = v.loads.some((l) => (l.type === "area" || l.type === "snow") && l.tributary === undefined);
-  if (v.spacing !== undefined && v.tributary !== undefined) {
-    ctx.addIssue({ code: "custom", path: ["tributary"], message: "give either spacing (in, for joists) or tributary (ft, for beams and headers), not both" });
-  } else if (hasArea && v.spacing === undefined && v.tributary === undefined) {
-    ctx.addIssue({ code: "custom", path: ["spacing"], message: "area loads (psf) need spacing (in, for joists) or tributary (ft, for beams and headers), here or on each area load" });
+function crossFieldIssues(v: { lengthFt: number; supports: { x: number; type: SupportType }[]; spacingIn?: number; tributaryFt?: number; loads: z.infer<typeof designLoadSchema>[] }, ctx: RefineCtx): void {
+  const hasArea = v.loads.some((l) => (l.type === "area" || l.type === "snow") && l.tributaryFt === undefined);
+  if (v.spacingIn !== undefined && v.tributaryFt !== undefined) {
+    ctx.addIssue({ code: "custom", path: ["tributaryFt"], message: "give either spacingIn (joists) or tributaryFt (beams and headers), not both" });
+  } else if (hasArea && v.spacingIn === undefined && v.tributaryFt === undefined) {
+    ctx.addIssue({ code: "custom", path: ["spacingIn"], message: "area loads (psf) need spacingIn (joists) or tributaryFt (beams and headers), here or on each area load" });
   }
   v.loads.forEach((l, i) => {
     if (l.type === "area") {
@@ -139,16 +140,16 @@ function crossFieldIssues(v: { length: number; supports: { x: number; type: Supp
     }
     if ((l.type === "area" || l.type === "snow") && (l.from !== undefined || l.to !== undefined)) {
       const from = l.from ?? 0;
-      const to = l.to ?? v.length;
-      if (!(from >= 0 && to <= v.length && to > from)) {
-        ctx.addIssue({ code: "custom", path: ["loads", i, l.to !== undefined ? "to" : "from"], message: `must lie on the member, 0 to ${v.length} ft, with to > from` });
+      const to = l.to ?? v.lengthFt;
+      if (!(from >= 0 && to <= v.lengthFt && to > from)) {
+        ctx.addIssue({ code: "custom", path: ["loads", i, l.to !== undefined ? "to" : "from"], message: `must lie on the member, 0 to ${v.lengthFt} ft, with to > from` });
       }
     }
   });
   const lineLoads: Load[] = v.loads.filter((l): l is Exclude<typeof l, { type: "area" } | { type: "snow" }> => l.type !== "area" && l.type !== "snow");
   const lineIndex = v.loads.map((l, i) => (l.type !== "area" && l.type !== "snow" ? i : -1)).filter((i) => i >= 0);
-  const beam: BeamInput = { length: v.length, E: 1, I: 1, supports: v.supports, loads: lineLoads };
-  if (!(Number.isFinite(v.length) && v.length > 0)) return;
+  const beam: BeamInput = { length: v.lengthFt, E: 1, I: 1, supports: v.supports, loads: lineLoads };
+  if (!(Number.isFinite(v.lengthFt) && v.lengthFt > 0)) return;
   for (const issue of geometryIssues(beam)) {
     if (issue.path === "length") continue;
     const parts = issue.path.split(".");
@@ -198,8 +199,8 @@ export const spanInputSchema = z
     member: memberSchema,
     ...designFields,
     /** search range for the largest span, ft */
-    minLength: positive("ft").default(1),
-    maxLength: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).default(40),
+    minLengthFt: positive("ft").default(1),
+    maxLengthFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).default(40),
     /** bisection stops when the bracket is narrower than this, in */
     toleranceIn: positive("in").default(0.05),
   })

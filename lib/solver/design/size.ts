@@ -137,7 +137,7 @@ const RANKERS: Record<SizeOutput["rank"], (a: SizeCandidateResult, b: SizeCandid
 /** Sizes a member: `npm run size` and POST /api/size. Throws DesignInputError on bad input. */
 export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   const input = parseWith<SizeInput>(sizeInputSchema, json);
-  const specs = candidateSpecs(input.member, tables, input.spacing !== undefined);
+  const specs = candidateSpecs(input.member, tables, input.spacingIn !== undefined);
   const ctx: DesignContext = { ...contextFor(input), notes: false };
   const passing: SizeCandidateResult[] = [];
   const failing: SizeFailure[] = [];
@@ -193,7 +193,7 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
 
 function describeFamily(input: SizeInput): string {
   const m = input.member;
-  const joists = input.spacing !== undefined;
+  const joists = input.spacingIn !== undefined;
   const plies = (given: number[] | undefined) => (given ?? (joists ? [1] : ALL_PLIES)).join(", ");
   switch (m.material) {
     case "sawn":
@@ -227,7 +227,7 @@ export interface SpanOutput {
 
 /** Positions scaled with the length: supports and loads keep their place as a fraction of the member. */
 function scaled(input: SpanInput, length: number): Record<string, unknown> {
-  const k = length / input.length;
+  const k = length / input.lengthFt;
   const at = (x: number) => Math.min(length, Math.max(0, x * k));
   const loads = input.loads.map((l) => {
     switch (l.type) {
@@ -241,11 +241,11 @@ function scaled(input: SpanInput, length: number): Record<string, unknown> {
         return { ...l, from: at(l.from), to: at(l.to) };
     }
   });
-  const { minLength: _min, maxLength: _max, toleranceIn: _tol, ...rest } = input;
+  const { minLengthFt: _min, maxLengthFt: _max, toleranceIn: _tol, ...rest } = input;
   void _min;
   void _max;
   void _tol;
-  return { ...rest, length, supports: input.supports.map((s) => ({ ...s, x: at(s.x) })), loads };
+  return { ...rest, lengthFt: length, supports: input.supports.map((s) => ({ ...s, x: at(s.x) })), loads };
 }
 
 /**
@@ -257,7 +257,7 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
   const member = resolveMember(input.member, tables);
   const run = (L: number) => checkMember(scaled(input, L), tables);
   const spansAt = (L: number) => {
-    const xs = [0, ...input.supports.map((sp) => (sp.x * L) / input.length), L].sort((a, b) => a - b);
+    const xs = [0, ...input.supports.map((sp) => (sp.x * L) / input.lengthFt), L].sort((a, b) => a - b);
     const out: { from: number; to: number; length: number }[] = [];
     for (let i = 1; i < xs.length; i++) {
       if (xs[i] - xs[i - 1] > 1e-9) out.push({ from: Math.floor(xs[i - 1] * 100) / 100, to: Math.floor(xs[i] * 100) / 100, length: Math.floor((xs[i] - xs[i - 1]) * 100) / 100 });
@@ -265,8 +265,8 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
     return out;
   };
   const base = { member: member.spec, label: member.label };
-  let lo = input.minLength;
-  let hi = input.maxLength;
+  let lo = input.minLengthFt;
+  let hi = input.maxLengthFt;
   const atLo = run(lo);
   if (!atLo.pass) {
     return { ...base, largestSpan: null, spans: [], largestSpanIn: null, governing: atLo.governing, atMaxLength: false, check: atLo, note: `fails even at ${lo} ft` };
@@ -297,7 +297,7 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
     governing: failGov,
     atMaxLength: false,
     check: best,
-    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.length) ? "centre to centre of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
+    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.lengthFt) ? "centre to centre of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
   };
 }
 

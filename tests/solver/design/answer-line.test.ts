@@ -51,12 +51,12 @@ describe("the answer line follows the kind of member", () => {
 describe("the routes' answer is the same line", () => {
   const joist = {
     member: dfl("2x10"),
-    length: 12,
+    lengthFt: 12,
     supports: [
       { x: 0, type: "pin" },
       { x: 12, type: "roller" },
     ],
-    spacing: 16,
+    spacingIn: 16,
     loads: [
       { type: "area", case: "D", psf: 10 },
       { type: "area", case: "L", psf: 40 },
@@ -70,12 +70,12 @@ describe("the routes' answer is the same line", () => {
     expect(r.answer).not.toMatch(/jack stud/);
   });
 
-  test("a header with 3 in of bearing: the jack studs cover the bearing the check used (two 1-1/2 in studs)", () => {
-    const header = { ...joist, member: dfl("2x10", 2), kind: "header", spacing: undefined, tributary: 4, bearing: 3, length: 5, supports: [{ x: 0, type: "pin" }, { x: 5, type: "roller" }] };
+  test("a header with 3 in of bearingIn: the jack studs cover the bearing the check used (two 1-1/2 in studs)", () => {
+    const header = { ...joist, member: dfl("2x10", 2), kind: "header", spacingIn: undefined, tributaryFt: 4, bearingIn: 3, lengthFt: 5, supports: [{ x: 0, type: "pin" }, { x: 5, type: "roller" }] };
     const r = checkMember(header, STARTER_TABLES);
     const bearing = r.checks.find((c) => c.name === "bearing")!;
     expect(bearing.ratio).toBeLessThan(1);
-    for (const x of r.reactions) expect(x.jackStuds! * 1.5).toBeGreaterThanOrEqual(header.bearing);
+    for (const x of r.reactions) expect(x.jackStuds! * 1.5).toBeGreaterThanOrEqual(header.bearingIn);
     expect(r.answer).toBe(`2-ply 2x10 No.2 — ${r.reactions[0].jackStuds} jack studs each end`);
   });
 

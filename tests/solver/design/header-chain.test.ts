@@ -39,19 +39,19 @@ import { STARTER_TABLES } from "@/lib/tables";
 const header = {
   kind: "header",
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 2 },
-  length: 6,
+  lengthFt: 6,
   supports: [
     { x: 0, type: "pin" },
     { x: 6, type: "roller" },
   ],
   loads: [
-    { type: "area", case: "D", psf: 15, tributary: 14 },
-    { type: "snow", pg: 30, tributary: 14 },
-    { type: "area", case: "D", psf: 10, tributary: 6 },
-    { type: "area", preset: "living", tributary: 6 },
+    { type: "area", case: "D", psf: 15, tributaryFt: 14 },
+    { type: "snow", pg: 30, tributaryFt: 14 },
+    { type: "area", case: "D", psf: 10, tributaryFt: 6 },
+    { type: "area", preset: "living", tributaryFt: 6 },
     { type: "udl", case: "D", from: 0, to: 6, w: 80 },
   ],
-  bearing: 3,
+  bearingIn: 3,
   conditions: { repetitive: false, selfWeight: true },
   limits: { live: 360, total: 240 },
 };

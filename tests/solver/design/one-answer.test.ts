@@ -11,12 +11,12 @@ import { STARTER_TABLES } from "@/lib/tables";
 const polyValue = (c: number[], xi: number) => c.reduceRight((v, k) => v * xi + k, 0);
 
 const problem = {
-  length: 8,
+  lengthFt: 8,
   supports: [
     { x: 0, type: "pin" },
     { x: 8, type: "roller" },
   ],
-  tributary: 6,
+  tributaryFt: 6,
   loads: [
     { type: "area", case: "D", psf: 15 },
     { type: "area", case: "L", psf: 40 },
