@@ -1,6 +1,7 @@
 import type { Sequelize } from "sequelize";
 import { CostRowModel, initCost } from "./cost";
 import { EngineeredProductRow, initEngineeredProduct } from "./engineered-product";
+import { IJoistRow, initIJoist } from "./i-joist";
 import { initSawnSize, SawnSizeRow } from "./sawn-size";
 import { initSawnValue, SawnValueRow } from "./sawn-value";
 import { initSizeFactor, SizeFactorRow } from "./size-factor";
@@ -8,7 +9,7 @@ import { initSteelGrade, SteelGradeRow } from "./steel-grade";
 import { initSteelShape, SteelShapeRow } from "./steel-shape";
 import { initTableVersion, TableVersion, TABLE_VERSION_SOURCES, type TableVersionSource } from "./table-version";
 
-export { CostRowModel, EngineeredProductRow, SawnSizeRow, SawnValueRow, SizeFactorRow, SteelGradeRow, SteelShapeRow, TableVersion };
+export { CostRowModel, EngineeredProductRow, IJoistRow, SawnSizeRow, SawnValueRow, SizeFactorRow, SteelGradeRow, SteelShapeRow, TableVersion };
 export { TABLE_VERSION_SOURCES, type TableVersionSource };
 
 /** The material table models: one version table and one row table per material table. */
@@ -18,6 +19,7 @@ export function initMaterialTableModels(sequelize: Sequelize): void {
   initSawnValue(sequelize);
   initSizeFactor(sequelize);
   initEngineeredProduct(sequelize);
+  initIJoist(sequelize);
   initSteelShape(sequelize);
   initSteelGrade(sequelize);
   initCost(sequelize);

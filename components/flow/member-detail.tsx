@@ -6,6 +6,7 @@ import { RatioBar } from "@/components/ui/ratio-bar";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { CheckOutput } from "@/lib/solver/design/check";
+import { citationOf } from "@/lib/tables/citations";
 import { checkDetail, checkTitle } from "./words";
 
 export type MemberDetailProps = {
@@ -126,14 +127,14 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
                 `d = ${fmt(check.member.section.d)} in`,
                 check.member.section.A !== null ? `A = ${fmt(check.member.section.A)} in²` : null,
                 check.member.section.S !== null ? `S = ${fmt(check.member.section.S)} in³` : null,
-                `I = ${fmt(check.member.section.I)} in⁴`,
+                check.member.section.EI !== undefined ? `EI = ${fmt(check.member.section.EI / 1e6)} × 10⁶ lbf-in²` : `I = ${fmt(check.member.section.I)} in⁴`,
                 `weight ${fmt(check.member.weightPlf)} plf`,
               ]
                 .filter(Boolean)
                 .join(" · ")}
             </p>
             {check.member.note ? <p className="mt-1 text-sm text-caution-ink">{check.member.note}</p> : null}
-            <p className="mt-1 text-sm text-graphite">{check.member.sources.join("; ")}</p>
+            <p className="mt-1 text-sm text-graphite">{[...new Set(check.member.sources.map(citationOf))].join("; ")}</p>
           </section>
           <section aria-labelledby="loads-title">
             <h3 id="loads-title" className="mb-2 font-bold">

@@ -4,6 +4,7 @@ import { SelectField } from "@/components/ui/field";
 import type { FlowState, MaterialFamily } from "@/lib/flow/state";
 import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
 import { ENGINEERED } from "@/lib/tables/engineered";
+import { I_JOISTS } from "@/lib/tables/i-joists";
 import { SAWN_GRADES as GRADES, SPECIES, type SawnGrade, type Species } from "@/lib/tables/types";
 import { ChoiceGroup } from "./choice-group";
 import { LengthField } from "./length-field";
@@ -17,6 +18,7 @@ const FAMILIES: { value: MaterialFamily; label: string; detail: string }[] = [
   { value: "sawn", label: "Sawn lumber", detail: "one piece: 2x8, 2x10, 4x12…" },
   { value: "built-up", label: "Built-up plies", detail: "2, 3 or 4 plies nailed together" },
   { value: "engineered", label: "Engineered wood", detail: "LVL, PSL or glulam" },
+  { value: "ijoist", label: "Wood I-joists", detail: "PRI-20 to PRI-90, 9-1/2 to 16 in deep; floors and flat roofs" },
   { value: "steel", label: "Steel", detail: "W-shapes, A992" },
 ];
 
@@ -42,7 +44,7 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
         legend="Material"
         name="family"
         value={m.family}
-        onChange={(family) => update((s) => ({ ...s, material: { ...s.material, family, plies: family === "sawn" ? 1 : 0 } }))}
+        onChange={(family) => update((s) => ({ ...s, material: { ...s.material, family, plies: family === "sawn" ? 1 : 0, product: family === s.material.family ? s.material.product : "" } }))}
         choices={FAMILIES.map((f) => ({ value: f.value, label: f.label, detail: f.detail }))}
       />
 
@@ -71,6 +73,16 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
           label="Product"
           hint="Typical values — confirm with the supplier's published values."
           options={[{ value: "", label: "Any engineered product" }, ...ENGINEERED.map((p) => ({ value: p.name, label: `${p.name} (${p.kind})` }))]}
+          value={m.product}
+          onChange={(e) => update((s) => ({ ...s, material: { ...s.material, product: e.target.value } }))}
+        />
+      ) : null}
+
+      {m.family === "ijoist" ? (
+        <SelectField
+          label="I-joist series"
+          hint="APA PRI-400 generic values. A maker's own joists carry their own values; use those where they differ."
+          options={[{ value: "", label: "Any series" }, ...[...new Set(I_JOISTS.map((j) => j.series))].map((series) => ({ value: series, label: series }))]}
           value={m.product}
           onChange={(e) => update((s) => ({ ...s, material: { ...s.material, product: e.target.value } }))}
         />

@@ -5,7 +5,8 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { byCaseWords, checkWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "@/lib/sheets/format";
-import type { SheetMember, SheetSnapshot } from "@/lib/sheets/snapshot";
+import { sheetSources, type SheetMember, type SheetSnapshot } from "@/lib/sheets/snapshot";
+import { FROM_MEMORY } from "@/lib/tables/citations";
 
 export type SheetDocumentProps = {
   snapshot: SheetSnapshot;
@@ -165,6 +166,34 @@ function MemberSection({ m, index }: { m: SheetMember; index: number }) {
   );
 }
 
+/** Appendix: where the design values on this sheet come from, values no readable copy confirmed flagged. */
+function SourcesAppendix({ snapshot }: { snapshot: SheetSnapshot }) {
+  const sources = sheetSources(snapshot);
+  if (sources.length === 0) return null;
+  const flagged = sources.filter((x) => x.fromMemory).length;
+  return (
+    <section aria-labelledby="sheet-sources" className="sheet-keep">
+      <h2 id="sheet-sources" className="mb-2 text-2xl font-bold">
+        Appendix: where the design values come from
+      </h2>
+      {flagged > 0 ? (
+        <p className="mb-2 text-sm">
+          Marked <span className="font-bold text-caution-ink">{FROM_MEMORY}</span>: no readable copy of that table confirmed these values. Check them
+          against the printed table.
+        </p>
+      ) : null}
+      <ul className="list-disc space-y-1 pl-6 text-sm">
+        {sources.map(({ source, fromMemory }) => (
+          <li key={source}>
+            {fromMemory ? <span className="font-bold text-caution-ink">{FROM_MEMORY}: </span> : null}
+            {source}
+          </li>
+        ))}
+      </ul>
+    </section>
+  );
+}
+
 /** The job sheet from its frozen snapshot: the same content as the PDF, for the screen and the printer. */
 export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
   const by = s.preparedBy.company ? `${s.preparedBy.name}, ${s.preparedBy.company}` : s.preparedBy.name;
@@ -258,6 +287,8 @@ export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
       {s.members.map((m, i) => (
         <MemberSection key={m.id} m={m} index={i} />
       ))}
+
+      <SourcesAppendix snapshot={s} />
 
       <footer className="border-t-2 border-rule pt-2 text-sm text-graphite">
         Spanlark job sheet · {s.job.name} · saved {formatSheetDate(s.savedAt)} · tables {s.tablesLabel}. The numbers on this sheet were

@@ -1,5 +1,6 @@
 import { revalidatePath } from "next/cache";
 import type { ZodType } from "zod";
+import { DATABASE_DOWN_MESSAGE, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { HttpError } from "@/lib/http";
 import { logger } from "@/lib/logger";
 import { zodIssues, type FieldIssue } from "@/lib/zod-issues";
@@ -10,7 +11,8 @@ import { getSessionUser } from "./session";
 export interface ActionDenied {
   ok: false;
   error: string;
-  status: 401 | 403 | 404;
+  /** 503: the database is down, so the account cannot be checked (nothing was changed) */
+  status: 401 | 403 | 404 | 503;
 }
 
 /** What a server action answers when it refuses the input or the work fails: the message, and the fields at fault. */
@@ -33,6 +35,7 @@ export async function authorizeAction(...roles: Role[]): Promise<{ ok: true; use
     if (err instanceof HttpError && (err.status === 401 || err.status === 403)) {
       return { ok: false, error: err.message, status: err.status };
     }
+    if (isDatabaseUnavailable(err)) return { ok: false, error: DATABASE_DOWN_MESSAGE, status: 503 };
     throw err;
   }
 }
@@ -76,6 +79,7 @@ export async function runAction<T, R extends object>(input: unknown, steps: Acti
       const details = (err.details ?? {}) as { issues?: FieldIssue[]; upgrade?: string };
       return { ok: false, error: err.message, status: err.status, ...(details.issues ? { issues: details.issues } : {}), ...(details.upgrade ? { upgrade: details.upgrade } : {}) };
     }
+    if (isDatabaseUnavailable(err)) return { ok: false, error: DATABASE_DOWN_MESSAGE, status: 503 };
     logger.error({ err }, steps.failed);
     return { ok: false, error: `${steps.failed} Try again in a minute.`, status: steps.failedStatus ?? 500 };
   }

@@ -25,6 +25,8 @@ export function sizeFamily(material: FlowMaterial): SizeFamilyRequest {
       return { material: "sawn", species: material.species, grade: material.grade, plies: material.plies > 0 ? [material.plies] : [2, 3, 4] };
     case "engineered":
       return material.product ? { material: "engineered", product: material.product } : { material: "engineered" };
+    case "ijoist":
+      return material.product ? { material: "ijoist", series: material.product, stiffeners: false } : { material: "ijoist", stiffeners: false };
     case "steel":
       return { material: "steel", grade: "A992" };
   }

@@ -39,7 +39,7 @@ export type FlowLineLoad = FlowState["lineLoads"][number];
 export type FlowMaterial = FlowState["material"];
 export type FlowLimits = FlowState["limits"];
 
-export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "steel"] as const;
+export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "ijoist", "steel"] as const;
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
 
 /** Where the flow is: the state plus the step on screen. */

@@ -3,7 +3,8 @@ import PDFDocument from "pdfkit";
 import { diagramChain, valueRange, type BezierChain } from "@/lib/diagrams/geometry";
 import { INK } from "@/lib/diagrams/palette";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import type { SheetDiagram, SheetMember, SheetSnapshot } from "./snapshot";
+import { FROM_MEMORY } from "@/lib/tables/citations";
+import { sheetSources, type SheetDiagram, type SheetMember, type SheetSnapshot } from "./snapshot";
 import { byCaseWords, checkWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "./format";
 
 /**
@@ -366,6 +367,17 @@ function drawMember(w: SheetWriter, m: SheetMember, index: number): void {
   }
 }
 
+/** Appendix: where the design values come from; values no readable copy confirmed are flagged. */
+function drawSources(w: SheetWriter, s: SheetSnapshot): void {
+  const sources = sheetSources(s);
+  if (sources.length === 0) return;
+  w.heading("Appendix: where the design values come from", 13);
+  if (sources.some((x) => x.fromMemory)) {
+    w.text(`Marked "${FROM_MEMORY}": no readable copy of that table confirmed these values. Check them against the printed table.`, { size: 9 });
+  }
+  for (const { source, fromMemory } of sources) w.text(`• ${fromMemory ? `${FROM_MEMORY.toUpperCase()}: ` : ""}${source}`, { size: 9 });
+}
+
 function drawFooters(w: SheetWriter, s: SheetSnapshot): void {
   const { doc } = w;
   const range = doc.bufferedPageRange();
@@ -406,6 +418,7 @@ export function renderSheetPdf(snapshot: SheetSnapshot, paper: Paper = "letter")
       w.caution(snapshot);
       drawSchedule(w, snapshot);
       snapshot.members.forEach((m, i) => drawMember(w, m, i));
+      drawSources(w, snapshot);
       drawFooters(w, snapshot);
       doc.end();
     } catch (err) {

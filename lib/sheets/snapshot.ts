@@ -15,6 +15,7 @@ import type { SupportType } from "@/lib/solver/types";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { DesignCheck, SupportReaction } from "@/lib/solver/design/types";
+import { distinctSources } from "@/lib/tables/citations";
 import type { MaterialTables } from "@/lib/tables/types";
 
 export const SNAPSHOT_FORMAT = 1;
@@ -66,6 +67,8 @@ export interface SheetMember {
   diagrams: SheetDiagram[];
   /** set when the member's saved answer came from other tables than this sheet's */
   note: string | null;
+  /** where the member's design values come from, each as its table row cites it (absent on sheets saved before) */
+  sources?: string[];
 }
 
 export interface SheetSkipped {
@@ -136,6 +139,8 @@ function materialWords(state: FlowState): string {
       return `Built-up plies, ${m.species} ${m.grade}${m.plies > 0 ? `, ${m.plies} plies` : ""}`;
     case "engineered":
       return m.product ? `Engineered, ${m.product}` : "Engineered lumber (any product)";
+    case "ijoist":
+      return m.product ? `Wood I-joists, ${m.product}` : "Wood I-joists (any series)";
     case "steel":
       return "Steel W-shape, A992";
   }
@@ -231,6 +236,14 @@ function diagramsFor(check: CheckOutput): SheetDiagram[] {
   ];
 }
 
+/**
+ * The sheet's appendix: every source behind its members' design values, each once, the ones no
+ * readable copy of the table confirmed ("from memory — verify") last and flagged.
+ */
+export function sheetSources(snapshot: Pick<SheetSnapshot, "members">): { source: string; fromMemory: boolean }[] {
+  return distinctSources(snapshot.members.flatMap((m) => m.sources ?? []));
+}
+
 /** Works one member out for the sheet; throws the design's input error when its inputs no longer check. */
 export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables: MaterialTables): SheetMember {
   const state = source.flowState;
@@ -266,6 +279,7 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
     assumptions: check.assumptions,
     diagrams: diagramsFor(check),
     note,
+    sources: check.member.sources,
   };
 }
 

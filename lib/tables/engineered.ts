@@ -4,9 +4,12 @@ import type { EngineeredProduct, EngineeredSizeRule } from "./types";
  * Generic engineered lumber rows: LVL, PSL and glulam. Units: psi, in, lb/ft³.
  *
  * These are not one maker's product. LVL and PSL values are typical of published literature for
- * the named E grade; every maker publishes its own, and the maker's values govern. Glulam values
- * are the NDS Supplement (2018 edition) Table 5A reference values for the named combination,
- * from memory — verify against the printed table.
+ * the named E grade; every maker publishes its own, and the maker's values govern. The 2.0E LVL and
+ * PSL rows agree with one maker's published 2.0E values as an open-source data file transcribes
+ * them (qsaad/stroogle data/wood/EngineeredSpecies.js); the 1.9E LVL row was not checked. Glulam
+ * values are the NDS Supplement (2018 edition) Table 5A reference values for the named combination;
+ * the open-source transcriptions found disagree on Fbx− (1,450 vs 1,850 psi for 24F-V4; balanced or
+ * not for 24F-1.8E), so the glulam rows stay from memory and flagged.
  */
 
 export const SUPPLIER_NOTE = "typical values — confirm with the supplier's published values";
@@ -44,17 +47,22 @@ export function glulamVolumeFactorCV(x: number, lengthFt: number, dIn: number, b
 const LVL_DEPTH_RULE: EngineeredSizeRule = { type: "depth", refDepthIn: 12, exponent: 0.136, maxFactor: 1.18 };
 const PSL_DEPTH_RULE: EngineeredSizeRule = { type: "depth", refDepthIn: 12, exponent: 0.111, maxFactor: 1.15 };
 const WESTERN_VOLUME_RULE: EngineeredSizeRule = { type: "volume", x: 10 };
+/** NDS 2018 §5.3.6: x = 20 for Southern Pine glulam */
+const SOUTHERN_VOLUME_RULE: EngineeredSizeRule = { type: "volume", x: 20 };
 
 const LVL_DEPTHS = [7.25, 9.25, 9.5, 11.25, 11.875, 14, 16, 18];
 const PSL_DEPTHS = [9.25, 9.5, 11.25, 11.875, 14, 16, 18];
 /** western-species glulam builds up in 1-1/2 in laminations */
 const GLULAM_WESTERN_DEPTHS = [9, 10.5, 12, 13.5, 15, 16.5, 18, 19.5, 21, 22.5, 24];
+/** Southern Pine glulam builds up in 1-3/8 in laminations: 7 to 17 laminations */
+const GLULAM_SOUTHERN_DEPTHS = [7, 8, 9, 10, 11, 12, 13, 14, 15, 16, 17].map((n) => n * 1.375);
 /** framing-width glulam matches lumber and I-joist depths */
 const GLULAM_FRAMING_DEPTHS = [9.25, 11.25, 11.875, 14, 16, 18];
 
 const SCL_SOURCE =
-  "typical of published literature for LVL/PSL of this E grade; size rule (12/d)^n typical of published literature";
-const T5A = "NDS Supplement 2018, Table 5A (from memory — verify against the printed table)";
+  "typical values for this E grade — confirm with the supplier; Fb, Fv, Fc⊥, E checked against one maker's published 2.0E values (qsaad/stroogle EngineeredSpecies.js)";
+const SCL_SOURCE_UNCHECKED = "typical values for this E grade — confirm with the supplier; from memory — verify against the supplier's published values";
+const T5A = "NDS Supplement 2018, Table 5A; from memory — verify against the printed table (open-source copies disagree on Fbx−)";
 
 export const ENGINEERED: EngineeredProduct[] = [
   {
@@ -70,7 +78,7 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: LVL_DEPTHS,
     density: 42,
     note: SUPPLIER_NOTE,
-    source: SCL_SOURCE,
+    source: SCL_SOURCE_UNCHECKED,
   },
   {
     name: "LVL 2.0E",
@@ -138,6 +146,25 @@ export const ENGINEERED: EngineeredProduct[] = [
     widths: [3.125, 5.125],
     depths: GLULAM_WESTERN_DEPTHS,
     density: 35,
+    note: SUPPLIER_NOTE,
+    source: T5A,
+  },
+  {
+    // Table 5B-type layup combination 24F-V3, Southern Pine, bending about x-x: Fbx+ 2400, Fbx− 1950,
+    // Fc⊥x 740, Fvx 300, Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory). Unbalanced. x = 20 in the
+    // volume factor (NDS 2018 §5.3.6), laminations 1-3/8 in.
+    name: "Glulam 24F-V3 SP",
+    kind: "glulam",
+    Fb: 2400,
+    FbNeg: 1950,
+    Fv: 300,
+    FcPerp: 740,
+    E: 1_800_000,
+    Emin: 950_000,
+    sizeRule: SOUTHERN_VOLUME_RULE,
+    widths: [3, 5],
+    depths: GLULAM_SOUTHERN_DEPTHS,
+    density: 36,
     note: SUPPLIER_NOTE,
     source: T5A,
   },

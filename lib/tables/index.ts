@@ -1,10 +1,12 @@
 import { ENGINEERED } from "./engineered";
+import { I_JOISTS } from "./i-joists";
 import { SAWN_SIZES } from "./sawn-sizes";
 import { beamsStringersCF, SAWN_VALUES, SIZE_FACTORS } from "./sawn-values";
 import { STEEL_GRADES, W_SHAPES } from "./steel";
 import type {
   CostTable,
   EngineeredProduct,
+  IJoist,
   MaterialTables,
   SawnDesignValues,
   SawnGrade,
@@ -21,6 +23,7 @@ export { rectangleSection, sawnSection, SAWN_SIZES } from "./sawn-sizes";
 export { beamsStringersCF, SAWN_VALUES, SIZE_FACTORS } from "./sawn-values";
 export { depthSizeFactor, eminFromE, ENGINEERED, glulamVolumeFactorCV, SUPPLIER_NOTE } from "./engineered";
 export { STEEL_GRADES, W_SHAPES } from "./steel";
+export { depthWords, I_JOISTS } from "./i-joists";
 
 export { SAWN_GRADES, SPECIES } from "./types";
 export const SAWN_SIZE_CLASSES: readonly SawnSizeClass[] = ["dimension", "beams-stringers"];
@@ -29,7 +32,8 @@ export const SAWN_SIZE_CLASSES: readonly SawnSizeClass[] = ["dimension", "beams-
 export type ItemRef =
   | { material: "sawn"; species: Species; grade: SawnGrade; size: string }
   | { material: "engineered"; product: string; width: number; depth: number }
-  | { material: "steel"; shape: string };
+  | { material: "steel"; shape: string }
+  | { material: "ijoist"; joist: string };
 
 /**
  * Key of one stock item in the cost table (cost per foot of one piece or ply).
@@ -43,6 +47,8 @@ export function itemKey(item: ItemRef): string {
       return `engineered|${item.product}|${item.width}x${item.depth}`;
     case "steel":
       return `steel|${normalizeShape(item.shape)}`;
+    case "ijoist":
+      return `ijoist|${item.joist}`;
   }
 }
 
@@ -200,6 +206,14 @@ export function findEngineered(tables: MaterialTables, name: string): Engineered
   return product;
 }
 
+/** "pri-40 11-7/8", "PRI-40 11-7/8 " → the I-joist row; an unknown name lists what the tables hold. */
+export function findIJoist(tables: MaterialTables, name: string): IJoist {
+  const norm = (v: string) => v.trim().toLowerCase().replace(/\s+/g, " ");
+  const joist = tables.iJoists.find((j) => norm(j.name) === norm(name));
+  if (!joist) throw new TableLookupError("member.joist", `unknown I-joist "${name}"`, tables.iJoists.map((j) => j.name));
+  return joist;
+}
+
 /** Throws unless the product is made in this width (one ply) and depth, in inches. */
 export function checkEngineeredSize(product: EngineeredProduct, widthIn: number, depthIn: number): void {
   const near = (a: number, b: number) => Math.abs(a - b) < 1e-6;
@@ -241,6 +255,8 @@ const DEMO_GRADE_MULTIPLIER: Record<SawnGrade, number> = { "Select Structural": 
 const DEMO_TIMBER_MULTIPLIER = 1.6;
 const DEMO_STEEL_PER_LB = 1.35;
 const DEMO_ENGINEERED_PER_SQ_IN: Record<EngineeredProduct["kind"], number> = { LVL: 0.3, PSL: 0.32, glulam: 0.28 };
+/** invented demo price of an I-joist per foot and inch of depth (stiffer series cost more) */
+const DEMO_IJOIST_PER_FT_PER_IN = 0.22;
 
 const cents = (x: number) => Math.round(x * 100) / 100;
 
@@ -264,6 +280,9 @@ function demoCosts(): CostTable {
   for (const s of W_SHAPES) {
     costs[itemKey({ material: "steel", shape: s.name })] = cents(s.W * DEMO_STEEL_PER_LB);
   }
+  for (const j of I_JOISTS) {
+    costs[itemKey({ material: "ijoist", joist: j.name })] = cents(DEMO_IJOIST_PER_FT_PER_IN * j.d * (1 + j.EI / 2e9));
+  }
   return costs;
 }
 
@@ -272,12 +291,13 @@ function demoCosts(): CostTable {
  * the seeders. Sources are named beside each block of data in the modules above.
  */
 export const STARTER_TABLES: MaterialTables = {
-  version: "starter-2026.1",
+  version: "starter-2026.2",
   sawnSizes: SAWN_SIZES,
   sawnValues: SAWN_VALUES,
   sizeFactors: SIZE_FACTORS,
   engineered: ENGINEERED,
   steel: W_SHAPES,
   steelGrades: STEEL_GRADES,
+  iJoists: I_JOISTS,
   costs: demoCosts(),
 };

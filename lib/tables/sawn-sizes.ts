@@ -9,7 +9,8 @@ import type { SawnSize, SawnSizeClass } from "./types";
  * Table 1B prints. Dressed dimensions are those of the American Softwood Lumber Standard
  * (PS 20): 2 in nominal dresses to 1-1/2 in, 4 in to 3-1/2 in, 5 in and thicker to 1/2 in less.
  */
-const NDS_2018_TABLE_1B = "NDS Supplement 2018, Table 1B";
+const NDS_2018_TABLE_1B =
+  "NDS Supplement 2018, Table 1B (A = bd, S = bd²/6, I = bd³/12 of the Table 1A dressed sizes); dressed sizes checked against the Table 1A rules in xcfem/xc (dimensional_lumber.py)";
 
 /** Strong-axis section of a b x d rectangle: A = b·d, Sx = b·d²/6, Ix = b·d³/12 (in, in², in³, in⁴). */
 export function rectangleSection(bIn: number, dIn: number): { A: number; Sx: number; Ix: number } {

@@ -3,6 +3,7 @@ import { SAWN_GRADES, SPECIES } from "./types";
 import type {
   EngineeredKind,
   EngineeredProduct,
+  IJoist,
   SawnDesignValues,
   SawnSize,
   SawnSizeClass,
@@ -10,6 +11,8 @@ import type {
   SteelGrade,
   WShape,
 } from "./types";
+import { SAWN_SIZES_SOURCE } from "./sawn-sizes";
+import { STEEL_GRADES_SOURCE } from "./steel";
 
 /**
  * The row schemas of the material tables, shared by the admin edit form (its yup schema is built from
@@ -19,7 +22,7 @@ import type {
  * refused). No server-only imports: the browser form reads these specs too.
  */
 
-export const TABLE_KEYS = ["sawn-sizes", "sawn-values", "size-factors", "engineered", "steel-shapes", "steel-grades", "costs"] as const;
+export const TABLE_KEYS = ["sawn-sizes", "sawn-values", "size-factors", "engineered", "i-joists", "steel-shapes", "steel-grades", "costs"] as const;
 export type TableKey = (typeof TABLE_KEYS)[number];
 
 export function isTableKey(value: string): value is TableKey {
@@ -39,6 +42,7 @@ export interface TableRowMap {
   "sawn-values": SawnDesignValues;
   "size-factors": SizeFactorRow;
   engineered: EngineeredProduct;
+  "i-joists": IJoist;
   "steel-shapes": WShape;
   "steel-grades": SteelGrade;
   costs: CostRow;
@@ -392,6 +396,52 @@ export const steelShapeSchema: z.ZodType<WShape> = z
   });
 
 // ---------------------------------------------------------------------------------------------------
+// Wood I-joists (APA PRI-400 shape of data: capacities, not stresses)
+
+const I_JOIST_FIELDS: FieldSpec[] = [
+  { name: "name", path: "name", label: "I-joist", kind: "text", maxLength: 60, hint: "designation and depth, e.g. PRI-40 11-7/8" },
+  { name: "series", path: "series", label: "Series", kind: "text", maxLength: 40, hint: "e.g. PRI-40, or the supplier's series" },
+  { name: "d_in", path: "d", label: "Depth d", unit: "in", kind: "number", min: 7, max: 30 },
+  { name: "flange_width_in", path: "flangeWidth", label: "Flange width", unit: "in", kind: "number", min: 1, max: 4 },
+  { name: "EI_lb_in2", path: "EI", label: "EI", unit: "lbf-in²", kind: "number", min: 50e6, max: 5e9, hint: "bending stiffness" },
+  { name: "M_lb_ft", path: "M", label: "Moment M", unit: "lbf-ft", kind: "number", min: 500, max: 40_000, hint: "allowable, normal load duration" },
+  { name: "V_lb", path: "V", label: "Shear V", unit: "lbf", kind: "number", min: 300, max: 6_000 },
+  { name: "IR_lb", path: "IR", label: "Intermediate reaction", unit: "lbf", kind: "number", min: 300, max: 10_000, hint: "3-1/2 in bearing, no web stiffeners" },
+  { name: "ER_175_lb", path: "ER175", label: "End reaction, 1-3/4 in", unit: "lbf", kind: "number", min: 200, max: 6_000, hint: "no web stiffeners" },
+  { name: "ER_175_stiff_lb", path: "ER175Stiffened", label: "End reaction, 1-3/4 in, stiffened", unit: "lbf", kind: "number", min: 200, max: 6_000 },
+  { name: "ER_4_lb", path: "ER4", label: "End reaction, 4 in", unit: "lbf", kind: "number", min: 200, max: 8_000, hint: "no web stiffeners" },
+  { name: "ER_4_stiff_lb", path: "ER4Stiffened", label: "End reaction, 4 in, stiffened", unit: "lbf", kind: "number", min: 200, max: 8_000 },
+  { name: "K_lb", path: "K", label: "Shear deflection coefficient K", unit: "lbf", kind: "number", min: 1e6, max: 5e7 },
+  { name: "weight_plf", path: "weightPlf", label: "Weight", unit: "lb/ft", kind: "number", min: 1, max: 15 },
+  { name: "source", path: "source", label: "Source", kind: "text", maxLength: 300, hint: "standard or supplier, edition and table" },
+];
+const IJ = spec(I_JOIST_FIELDS);
+
+export const iJoistSchema: z.ZodType<IJoist> = z
+  .object({
+    name: text(IJ.name),
+    series: text(IJ.series),
+    d: num(IJ.d),
+    flangeWidth: num(IJ.flangeWidth),
+    EI: num(IJ.EI),
+    M: num(IJ.M),
+    V: num(IJ.V),
+    IR: num(IJ.IR),
+    ER175: num(IJ.ER175),
+    ER175Stiffened: num(IJ.ER175Stiffened),
+    ER4: num(IJ.ER4),
+    ER4Stiffened: num(IJ.ER4Stiffened),
+    K: num(IJ.K),
+    weightPlf: num(IJ.weightPlf),
+    source: text(IJ.source),
+  })
+  .superRefine((r, ctx) => {
+    if (r.ER4 < r.ER175) ctx.addIssue({ code: "custom", path: ["ER4"], message: "End reaction at 4 in must not be less than at 1-3/4 in" });
+    if (r.ER175Stiffened < r.ER175) ctx.addIssue({ code: "custom", path: ["ER175Stiffened"], message: "A stiffened end reaction must not be less than the unstiffened one" });
+    if (r.ER4Stiffened < r.ER4) ctx.addIssue({ code: "custom", path: ["ER4Stiffened"], message: "A stiffened end reaction must not be less than the unstiffened one" });
+  });
+
+// ---------------------------------------------------------------------------------------------------
 // Steel grades
 
 const STEEL_GRADE_FIELDS: FieldSpec[] = [
@@ -417,14 +467,14 @@ const COST_FIELDS: FieldSpec[] = [
     label: "Item",
     kind: "text",
     maxLength: 200,
-    hint: "sawn|species|grade|size, engineered|product|widthxdepth or steel|shape",
+    hint: "sawn|species|grade|size, engineered|product|widthxdepth, ijoist|name or steel|shape",
   },
   { name: "cost_per_ft_usd", path: "costPerFt", label: "Cost per foot", unit: "$/ft", kind: "number", min: 0, max: 10_000 },
 ];
 const CO = spec(COST_FIELDS);
 
 export const costSchema: z.ZodType<CostRow> = z.object({
-  itemKey: text(CO.itemKey).regex(/^(sawn|engineered|steel)\|\S.*$/, "Item must start with sawn|, engineered| or steel|"),
+  itemKey: text(CO.itemKey).regex(/^(sawn|engineered|steel|ijoist)\|\S.*$/, "Item must start with sawn|, engineered|, ijoist| or steel|"),
   costPerFt: num(CO.costPerFt),
 });
 
@@ -441,6 +491,8 @@ export interface TableSpec<K extends TableKey = TableKey> {
   summary: string[];
   /** the natural key of a row within one version (what an import matches rows on) */
   keyOf(row: TableRowMap[K]): string;
+  /** where the starter rows come from, for a table whose rows carry no source column */
+  tableSource?: string;
 }
 
 export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
@@ -452,6 +504,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     schema: sawnSizeSchema,
     summary: ["b_in", "d_in", "Sx_in3", "Ix_in4"],
     keyOf: (r) => r.name,
+    tableSource: SAWN_SIZES_SOURCE,
   },
   "sawn-values": {
     key: "sawn-values",
@@ -480,6 +533,15 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     summary: ["Fb_psi", "Fv_psi", "E_psi", "depths_in"],
     keyOf: (r) => r.name,
   },
+  "i-joists": {
+    key: "i-joists",
+    title: "Wood I-joists",
+    description: "Prefabricated wood I-joists with their published capacities, EI and K",
+    fields: I_JOIST_FIELDS,
+    schema: iJoistSchema,
+    summary: ["d_in", "M_lb_ft", "V_lb", "EI_lb_in2"],
+    keyOf: (r) => r.name,
+  },
   "steel-shapes": {
     key: "steel-shapes",
     title: "Steel W-shapes",
@@ -497,6 +559,7 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     schema: steelGradeSchema,
     summary: ["Fy_ksi", "Fu_ksi"],
     keyOf: (r) => r.name,
+    tableSource: STEEL_GRADES_SOURCE,
   },
   costs: {
     key: "costs",
@@ -560,7 +623,7 @@ export function rowToFlat<K extends TableKey>(key: K, row: TableRowMap[K]): Flat
 }
 
 // Plain decimal or scientific notation; thousands separators are refused (a "1,5" could mean 1.5 or 15).
-const NUMBER_TEXT = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
+export const NUMBER_TEXT = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
 
 function parseNumberText(f: FieldSpec, raw: string): number | RowIssue {
   if (!NUMBER_TEXT.test(raw)) return { column: f.name, message: `${f.label} must be a plain number${f.unit ? ` in ${f.unit}` : ""} (got "${raw}")` };

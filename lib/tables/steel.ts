@@ -5,12 +5,14 @@ import type { SteelGrade, WShape } from "./types";
  * checks read. Units: lb/ft, in, in^2, in^3, in^4, in^6.
  *
  * Source: AISC Shapes Database v15.0 (the data behind the AISC Steel Construction Manual,
- * 15th ed., Table 1-1). These rows are not from memory: they were transcribed from a public CSV
- * extraction of the v15.0 database (columns W, A, d, bf, tw, tf, kdes, bf/2tf, h/tw, Ix, Zx, Sx,
- * rx, Iy, Zy, Sy, ry, J, Cw, rts, ho) and checked against physics in tests/tables/steel.test.ts.
- * Spot-check against the printed manual before relying on a single value.
+ * 15th ed., Table 1-1). Every row was checked field by field against the v15.0 extraction
+ * ronkok/Hurmet publishes (site/ce/AISC-v15-wideFlanges.csv: A, d, bf, tw, tf, kdes, Ix, Zx, Sx,
+ * rx, Iy, Zy, Sy, ry, J, Cw, rts); ho, bf/2tf and h/tw, which that file leaves out, agree with
+ * d − tf, bf/(2 tf) and (d − 2 kdes)/tw to the database's rounding. tests/tables/steel.test.ts
+ * holds those published values and the physics checks.
  */
-const AISC_V15 = "AISC Shapes Database v15.0 (Steel Construction Manual 15th ed., Table 1-1)";
+const AISC_V15 =
+  "AISC Shapes Database v15.0 (Steel Construction Manual 15th ed., Table 1-1); checked against the v15.0 extraction in ronkok/Hurmet (AISC-v15-wideFlanges.csv)";
 
 export const W_SHAPES: WShape[] = [
   { name: "W6x9", W: 9, A: 2.68, d: 5.9, bf: 3.94, tw: 0.17, tf: 0.215, kdes: 0.465, bf_2tf: 9.16, h_tw: 29.2, Ix: 16.4, Zx: 6.23, Sx: 5.56, rx: 2.47, Iy: 2.2, Zy: 1.72, Sy: 1.11, ry: 0.905, J: 0.0405, Cw: 17.7, rts: 1.06, ho: 5.69, source: AISC_V15 },
@@ -43,7 +45,15 @@ export const W_SHAPES: WShape[] = [
   { name: "W12x35", W: 35, A: 10.3, d: 12.5, bf: 6.56, tw: 0.3, tf: 0.52, kdes: 0.82, bf_2tf: 6.31, h_tw: 36.2, Ix: 285, Zx: 51.2, Sx: 45.6, rx: 5.25, Iy: 24.5, Zy: 11.5, Sy: 7.47, ry: 1.54, J: 0.741, Cw: 879, rts: 1.79, ho: 12, source: AISC_V15 },
 ];
 
-/** ASTM steel grades for W-shapes, ksi (AISC Steel Construction Manual 15th ed., Table 2-4). */
+/**
+ * ASTM steel grades for W-shapes, ksi: minimum Fy and Fu of ASTM A992 and A36 (AISC Steel
+ * Construction Manual 15th ed., Table 2-4). The steel grade table has no source column; this is its
+ * source, shown on the admin screen: checked against an open-source material library (a YAML list
+ * "ASTM A992, 50ksi … Fu 65.0E+3", "ASTM A36, 36ksi … Fu 58.0E+3").
+ */
+export const STEEL_GRADES_SOURCE =
+  "AISC Steel Construction Manual 15th ed., Table 2-4 (ASTM A992, A36 minimums); checked against an open-source material library's steel list";
+
 export const STEEL_GRADES: SteelGrade[] = [
   { name: "A992", Fy: 50, Fu: 65 },
   { name: "A36", Fy: 36, Fu: 58 },

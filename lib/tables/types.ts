@@ -103,6 +103,42 @@ export interface EngineeredProduct {
   source: string;
 }
 
+/**
+ * A prefabricated wood I-joist by the open performance standard's generic designation (APA PRI-400,
+ * e.g. "PRI-40" at 11-7/8 in), with the published ASD design properties for normal load duration and
+ * dry service. Capacities are the member's own (not stresses): it is checked against them, not the
+ * sawn-lumber formulas.
+ */
+export interface IJoist {
+  /** designation and depth, e.g. "PRI-40 11-7/8" */
+  name: string;
+  /** the performance designation, e.g. "PRI-40" */
+  series: string;
+  /** depth, in */
+  d: number;
+  /** flange width, in */
+  flangeWidth: number;
+  /** bending stiffness EI, lbf-in² */
+  EI: number;
+  /** allowable moment, lbf-ft */
+  M: number;
+  /** allowable shear, lbf */
+  V: number;
+  /** allowable intermediate reaction, 3-1/2 in bearing, no web stiffeners, lbf */
+  IR: number;
+  /** allowable end reaction at 1-3/4 in bearing, without / with web stiffeners, lbf */
+  ER175: number;
+  ER175Stiffened: number;
+  /** allowable end reaction at 4 in bearing, without / with web stiffeners, lbf (between 1-3/4 and 4 in: straight line) */
+  ER4: number;
+  ER4Stiffened: number;
+  /** shear deflection coefficient K, lbf: uniform load on a simple span deflects 5wL⁴/384EI + wL²/K */
+  K: number;
+  /** weight allowance, lb/ft */
+  weightPlf: number;
+  source: string;
+}
+
 /** A hot-rolled W-shape with the properties the AISC 360 checks need. */
 export interface WShape {
   name: string;
@@ -155,5 +191,6 @@ export interface MaterialTables {
   engineered: EngineeredProduct[];
   steel: WShape[];
   steelGrades: SteelGrade[];
+  iJoists: IJoist[];
   costs: CostTable;
 }

@@ -1,7 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { asdCombinations } from "@/lib/solver/asce7/combinations";
 import { renderSheetPdf } from "@/lib/sheets/pdf";
-import { buildSheetSnapshot, type SheetSnapshot } from "@/lib/sheets/snapshot";
+import { buildSheetSnapshot, sheetSources, type SheetSnapshot } from "@/lib/sheets/snapshot";
 import { valueIn } from "@/lib/diagrams/geometry";
 import { STARTER_TABLES } from "@/lib/tables";
 import { defaultFlowState } from "@/lib/flow/defaults";
@@ -202,5 +202,35 @@ describe("a roof member on the sheet", () => {
   test("the answer line is the sizing search's, word for word, with the bearing on the plate", () => {
     expect(m.headline).toBe(size.passing[0].answer);
     expect(m.headline).toMatch(/ at \d+ in o\.c\. — .* bearing each end on the plate, beam or hanger$/);
+  });
+});
+
+describe("the sheet's appendix of sources", () => {
+  test("lists each source behind its members once, with no from-memory flag when every value was checked", () => {
+    const snap = snapshotWith(STARTER_TABLES);
+    const sources = sheetSources(snap);
+    expect(sources.length).toBeGreaterThan(0);
+    expect(new Set(sources.map((s) => s.source)).size).toBe(sources.length);
+    for (const m of snap.members) for (const s of m.sources ?? []) expect(sources.map((x) => x.source)).toContain(s);
+    // the header and joists are Douglas Fir-Larch dimension lumber: Table 4A, checked
+    expect(sources.some((s) => s.source.startsWith("NDS Supplement 2018, Table 4A;"))).toBe(true);
+  });
+
+  test("flags a member whose values are from memory, on the page and in the PDF", async () => {
+    const tables = structuredClone(STARTER_TABLES) as MaterialTables;
+    for (const v of tables.sawnValues) v.source = `${v.source.split(";")[0]}; from memory — verify against the printed table`;
+    const snap = snapshotWith(tables);
+    const flagged = sheetSources(snap).filter((s) => s.fromMemory);
+    expect(flagged.length).toBeGreaterThan(0);
+    const text = pdfStreamText(await renderSheetPdf(snap));
+    expect(text).toContain("Appendix: where the design values come from");
+    expect(text).toContain("FROM MEMORY");
+  });
+
+  test("an older sheet without sources still prints", async () => {
+    const snap = snapshotWith(STARTER_TABLES);
+    const old = { ...snap, members: snap.members.map(({ sources: _s, ...m }) => m) };
+    expect(sheetSources(old)).toEqual([]);
+    expect(isPdf(await renderSheetPdf(old))).toBe(true);
   });
 });

@@ -85,3 +85,22 @@ describe("size and volume rules", () => {
     expect(glulamVolumeFactorCV(10, 21, 12, 5.125)).toBeCloseTo(1, 12);
   });
 });
+
+describe("glulam sizes: whole laminations (NDS Supplement 2018 Table 1C shape of data; common practice)", () => {
+  // Western species laminate in 1-1/2 in, Southern Pine in 1-3/8 in; volume factor exponent x = 10 and
+  // 20 (NDS 2018 §5.3.6).
+  test.each(STARTER_TABLES.engineered.filter((p) => p.kind === "glulam" && !p.name.includes("framing")).map((p) => [p.name, p] as const))("%s", (name, p) => {
+    const southern = name.includes("SP");
+    const lam = southern ? 1.375 : 1.5;
+    for (const d of p.depths) expect(Math.abs(d / lam - Math.round(d / lam))).toBeLessThan(1e-9);
+    expect(p.sizeRule).toEqual({ type: "volume", x: southern ? 20 : 10 });
+    expect(p.source).toMatch(/NDS Supplement 2018, Table 5A; from memory/);
+  });
+
+  test("a Southern Pine glulam beam takes the smaller reduction of x = 20", () => {
+    // 5 x 16-1/2 in, 24 ft between points of zero moment: CV = (21/24 · 12/16.5 · 5.125/5)^(1/20), computed here
+    const expected = Math.pow((21 / 24) * (12 / 16.5) * (5.125 / 5), 1 / 20);
+    expect(glulamVolumeFactorCV(20, 24, 16.5, 5)).toBeCloseTo(expected, 12);
+    expect(glulamVolumeFactorCV(20, 24, 16.5, 5)).toBeGreaterThan(glulamVolumeFactorCV(10, 24, 16.5, 5));
+  });
+});

@@ -112,7 +112,7 @@ describe("cost keys", () => {
   });
 
   test("the starter version has a demo cost for every item it holds", () => {
-    expect(T.version).toBe("starter-2026.1");
+    expect(T.version).toBe("starter-2026.2");
     for (const s of T.steel) expect(costPerFoot(T, { material: "steel", shape: s.name })).toBeGreaterThan(0);
     for (const p of T.engineered) {
       for (const width of p.widths) {

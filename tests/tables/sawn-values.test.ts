@@ -1,4 +1,5 @@
 import { describe, expect, test } from "vitest";
+import { isFromMemory } from "@/lib/tables/citations";
 import {
   beamsStringersCF,
   findSawnValues,
@@ -8,52 +9,143 @@ import {
   SPECIES,
   STARTER_TABLES,
   type SawnGrade,
-  type SawnSizeClass,
   type Species,
 } from "@/lib/tables";
 
 const T = STARTER_TABLES;
 
-// Reference design values as printed in the NDS Supplement, 2018 edition, typed here row by row
-// from memory of the printed tables (verify against them): Fb, Ft, Fv, Fc⊥, Fc, E, Emin in psi,
-// and the nominal depth where Table 4B prints values by width. Exact match expected.
-type PrintedRow = [
-  source: string,
-  species: Species,
-  grade: SawnGrade,
-  sizeClass: SawnSizeClass,
-  depth: number | undefined,
-  values: [number, number, number, number, number, number, number],
-];
-const PRINTED: PrintedRow[] = [
-  ["NDS Supplement 2018, Table 4A", "Douglas Fir-Larch", "Select Structural", "dimension", undefined, [1500, 1000, 180, 625, 1700, 1_900_000, 690_000]],
-  ["NDS Supplement 2018, Table 4A", "Douglas Fir-Larch", "No.1", "dimension", undefined, [1000, 675, 180, 625, 1500, 1_700_000, 620_000]],
-  ["NDS Supplement 2018, Table 4A", "Douglas Fir-Larch", "No.2", "dimension", undefined, [900, 575, 180, 625, 1350, 1_600_000, 580_000]],
-  ["NDS Supplement 2018, Table 4A", "Douglas Fir-Larch", "No.3", "dimension", undefined, [525, 325, 180, 625, 775, 1_400_000, 510_000]],
-  ["NDS Supplement 2018, Table 4A", "Hem-Fir", "Select Structural", "dimension", undefined, [1400, 925, 150, 405, 1500, 1_600_000, 580_000]],
-  ["NDS Supplement 2018, Table 4A", "Hem-Fir", "No.2", "dimension", undefined, [850, 525, 150, 405, 1300, 1_300_000, 470_000]],
-  ["NDS Supplement 2018, Table 4A", "Spruce-Pine-Fir", "No.1", "dimension", undefined, [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
-  ["NDS Supplement 2018, Table 4A", "Spruce-Pine-Fir", "No.2", "dimension", undefined, [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
-  ["NDS Supplement 2018, Table 4A", "Spruce-Pine-Fir", "No.3", "dimension", undefined, [500, 250, 135, 425, 650, 1_200_000, 440_000]],
-  ["NDS Supplement 2018, Table 4B", "Southern Pine", "No.2", "dimension", 4, [1100, 675, 175, 565, 1450, 1_400_000, 510_000]],
-  ["NDS Supplement 2018, Table 4B", "Southern Pine", "No.2", "dimension", 10, [800, 475, 175, 565, 1300, 1_400_000, 510_000]],
-  ["NDS Supplement 2018, Table 4B", "Southern Pine", "No.2", "dimension", 12, [750, 450, 175, 565, 1250, 1_400_000, 510_000]],
-  ["NDS Supplement 2018, Table 4B", "Southern Pine", "No.1", "dimension", 8, [1250, 800, 175, 565, 1500, 1_600_000, 580_000]],
-  ["NDS Supplement 2018, Table 4B", "Southern Pine", "Select Structural", "dimension", 6, [2100, 1450, 175, 565, 1800, 1_800_000, 660_000]],
-  ["NDS Supplement 2018, Table 4D", "Douglas Fir-Larch", "Select Structural", "beams-stringers", undefined, [1600, 950, 170, 625, 1100, 1_600_000, 580_000]],
-  ["NDS Supplement 2018, Table 4D", "Douglas Fir-Larch", "No.1", "beams-stringers", undefined, [1350, 675, 170, 625, 925, 1_600_000, 580_000]],
-  ["NDS Supplement 2018, Table 4D", "Douglas Fir-Larch", "No.2", "beams-stringers", undefined, [875, 425, 170, 625, 600, 1_300_000, 470_000]],
-  ["NDS Supplement 2018, Table 4D", "Hem-Fir", "No.2", "beams-stringers", undefined, [675, 350, 140, 405, 500, 1_100_000, 400_000]],
+type Values7 = [Fb: number, Ft: number, Fv: number, FcPerp: number, Fc: number, E: number, Emin: number];
+
+// NDS Supplement 2018, Table 4A, as transcribed in xcfem/xc, python_modules/materials/awc_nds/
+// dimensional_lumber.py (classes DouglasFirLarchWood, HemFirWood, SprucePineFirWood; psi, read with
+// the search tool). Fb, Ft, Fv, Fc⊥, Fc, E, Emin. Exact match expected, except the one slip below.
+const TABLE_4A_XCFEM: [Species, SawnGrade, Values7][] = [
+  ["Douglas Fir-Larch", "Select Structural", [1500, 1000, 180, 625, 1700, 1_900_000, 690_000]],
+  ["Douglas Fir-Larch", "No.1", [1000, 675, 180, 625, 1500, 1_700_000, 620_000]],
+  ["Douglas Fir-Larch", "No.2", [900, 575, 180, 625, 1350, 1_600_000, 580_000]],
+  ["Douglas Fir-Larch", "No.3", [525, 325, 180, 625, 775, 1_400_000, 510_000]],
+  ["Hem-Fir", "Select Structural", [1400, 925, 150, 405, 1500, 1_600_000, 580_000]],
+  ["Hem-Fir", "No.1", [975, 625, 150, 405, 1350, 1_500_000, 550_000]],
+  ["Hem-Fir", "No.2", [850, 525, 150, 405, 1300, 1_300_000, 470_000]],
+  ["Hem-Fir", "No.3", [500, 300, 150, 405, 725, 1_200_000, 440_000]],
+  // xcfem/xc prints Select Structural Fb 1,150; the transcription below and a trade table say 1,250
+  ["Spruce-Pine-Fir", "Select Structural", [1150, 700, 135, 425, 1400, 1_500_000, 550_000]],
+  ["Spruce-Pine-Fir", "No.1", [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
+  ["Spruce-Pine-Fir", "No.2", [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
+  ["Spruce-Pine-Fir", "No.3", [500, 250, 135, 425, 650, 1_200_000, 440_000]],
 ];
 
-describe("reference design values against the NDS Supplement 2018 tables", () => {
-  test.each(PRINTED)("%s: %s %s %s (depth %s)", (source, species, grade, sizeClass, depth, values) => {
-    const v = findSawnValues(T, species, grade, sizeClass, depth);
-    expect([v.Fb, v.Ft, v.Fv, v.FcPerp, v.Fc, v.E, v.Emin]).toEqual(values);
-    expect(v.source).toContain(source);
+// NDS Supplement 2018, Table 4A, as a Kotlin WoodPropertyService transcribes it ("NDS 2018 Supplement
+// Table 4A"; Hem-Fir No.3 not in it). Same columns, exact match expected.
+const TABLE_4A_KOTLIN: [Species, SawnGrade, Values7][] = [
+  ["Douglas Fir-Larch", "Select Structural", [1500, 1000, 180, 625, 1700, 1_900_000, 690_000]],
+  ["Douglas Fir-Larch", "No.1", [1000, 675, 180, 625, 1500, 1_700_000, 620_000]],
+  ["Douglas Fir-Larch", "No.2", [900, 575, 180, 625, 1350, 1_600_000, 580_000]],
+  ["Douglas Fir-Larch", "No.3", [525, 325, 180, 625, 775, 1_400_000, 510_000]],
+  ["Hem-Fir", "Select Structural", [1400, 925, 150, 405, 1500, 1_600_000, 580_000]],
+  ["Hem-Fir", "No.1", [975, 625, 150, 405, 1350, 1_500_000, 550_000]],
+  ["Hem-Fir", "No.2", [850, 525, 150, 405, 1300, 1_300_000, 470_000]],
+  ["Spruce-Pine-Fir", "Select Structural", [1250, 700, 135, 425, 1400, 1_500_000, 550_000]],
+  ["Spruce-Pine-Fir", "No.1", [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
+  ["Spruce-Pine-Fir", "No.2", [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
+  ["Spruce-Pine-Fir", "No.3", [500, 250, 135, 425, 650, 1_200_000, 440_000]],
+];
+
+// NDS Supplement 2018, Table 4B, Southern Pine, as the same Kotlin WoodPropertyService transcribes it:
+// per grade, by width band 2"–4", 5"–6", 8", 10", 12": [Fb, Ft, Fc]; Fv 175, Fc⊥ 565 throughout.
+const TABLE_4B_KOTLIN: Record<SawnGrade, { E: number; Emin: number; byWidth: [number, number, number][] }> = {
+  "Select Structural": { E: 1_800_000, Emin: 660_000, byWidth: [[2350, 1650, 1900], [2100, 1450, 1800], [1950, 1350, 1700], [1700, 1150, 1650], [1600, 1100, 1650]] },
+  "No.1": { E: 1_600_000, Emin: 580_000, byWidth: [[1500, 1000, 1650], [1350, 875, 1550], [1250, 800, 1500], [1050, 700, 1450], [1000, 650, 1400]] },
+  "No.2": { E: 1_400_000, Emin: 510_000, byWidth: [[1100, 675, 1450], [1000, 600, 1400], [925, 550, 1350], [800, 475, 1300], [750, 450, 1250]] },
+  "No.3": { E: 1_300_000, Emin: 470_000, byWidth: [[650, 400, 850], [575, 350, 800], [525, 325, 775], [475, 275, 750], [450, 250, 725]] },
+};
+const SP_WIDTHS = [4, 6, 8, 10, 12];
+
+// The Southern Pine Use Guide (metric edition) values xcfem/xc transcribes (dimensional_lumber.py,
+// southern_pine_data), MPa / GPa, by width 38–89, 140, 184, 235, 286 mm: [Fb], [Ft], [Fc], E, Emin.
+// Converted here with 1 psi = 0.006894757 MPa, each must round to the psi value (Southern Pine values
+// are multiples of 25 psi, E of 100,000 psi, Emin of 10,000 psi); the metric figures carry one decimal,
+// so the check is that the psi value lies within 0.05 MPa (0.05 GPa for E) of the metric one.
+const SP_METRIC: Record<SawnGrade, { Fb: number[]; Ft: number[]; Fc: number[]; E: number; Emin: number }> = {
+  "Select Structural": { Fb: [16.2, 14.5, 13.4, 11.7, 11.0], Ft: [11.4, 10.0, 9.3, 7.9, 7.6], Fc: [13.1, 12.4, 11.7, 11.4, 11.4], E: 12.4, Emin: 4.6 },
+  "No.1": { Fb: [10.3, 9.3, 8.6, 7.2, 6.9], Ft: [6.9, 6.0, 5.5, 4.8, 4.5], Fc: [11.4, 10.7, 10.3, 10.0, 9.7], E: 11, Emin: 4 },
+  "No.2": { Fb: [7.6, 6.9, 6.4, 5.5, 5.2], Ft: [4.7, 4.1, 3.8, 3.3, 3.1], Fc: [10.0, 9.7, 9.3, 9.0, 8.6], E: 9.7, Emin: 3.5 },
+  "No.3": { Fb: [4.5, 4.0, 3.6, 3.3, 3.1], Ft: [2.8, 2.4, 2.2, 1.9, 1.7], Fc: [5.9, 5.5, 5.3, 5.2, 5.0], E: 9.0, Emin: 3.2 },
+};
+const MPA_PER_PSI = 0.006894757;
+
+const valuesOf = (v: { Fb: number; Ft: number; Fv: number; FcPerp: number; Fc: number; E: number; Emin: number }): Values7 => [v.Fb, v.Ft, v.Fv, v.FcPerp, v.Fc, v.E, v.Emin];
+
+describe("NDS Supplement 2018 Table 4A against two transcriptions", () => {
+  test.each(TABLE_4A_KOTLIN)("Kotlin WoodPropertyService transcription: %s %s", (species, grade, values) => {
+    const v = findSawnValues(T, species, grade, "dimension");
+    expect(valuesOf(v)).toEqual(values);
+    expect(v.source).toContain("NDS Supplement 2018, Table 4A");
+    expect(v.source).not.toMatch(/from memory/);
   });
 
-  // Specific gravity G as Tables 4A/4B print it (and NDS 2018 Table 12.3.3A), from memory.
+  test.each(TABLE_4A_XCFEM)("xcfem/xc transcription: %s %s", (species, grade, values) => {
+    const v = findSawnValues(T, species, grade, "dimension");
+    if (species === "Spruce-Pine-Fir" && grade === "Select Structural") {
+      // the one disagreement: Spanlark follows 1,250 (the other transcription and 1,500 psi for a 2x8
+      // in the JLC field guide table = 1,250 × Table 4A CF 1.2); every other value matches
+      expect(v.Fb).toBe(1250);
+      expect(1250 * 1.2).toBe(1500);
+      expect(valuesOf(v).slice(1)).toEqual(values.slice(1));
+      expect(v.source).toMatch(/1,250/);
+      return;
+    }
+    expect(valuesOf(v)).toEqual(values);
+  });
+});
+
+describe("NDS Supplement 2018 Table 4B (Southern Pine) against two transcriptions", () => {
+  const rows = SAWN_GRADES.flatMap((grade) => SP_WIDTHS.map((depth, i) => [grade, depth, i] as const));
+
+  test.each(rows)("Kotlin WoodPropertyService transcription: %s, %i in wide", (grade, depth, i) => {
+    const { E, Emin, byWidth } = TABLE_4B_KOTLIN[grade];
+    const [Fb, Ft, Fc] = byWidth[i];
+    const v = findSawnValues(T, "Southern Pine", grade, "dimension", depth);
+    expect(valuesOf(v)).toEqual([Fb, Ft, 175, 565, Fc, E, Emin]);
+    expect(v.source).toContain("NDS Supplement 2018, Table 4B");
+    expect(v.source).not.toMatch(/from memory/);
+  });
+
+  test.each(rows)("Southern Pine Use Guide (metric) in xcfem/xc: %s, %i in wide, within the metric rounding", (grade, depth, i) => {
+    const m = SP_METRIC[grade];
+    const v = findSawnValues(T, "Southern Pine", grade, "dimension", depth);
+    for (const [psi, mpa] of [[v.Fb, m.Fb[i]], [v.Ft, m.Ft[i]], [v.Fc, m.Fc[i]]] as const) {
+      expect(Math.abs(psi * MPA_PER_PSI - mpa)).toBeLessThanOrEqual(0.05);
+    }
+    expect(Math.abs(v.Fv * MPA_PER_PSI - 1.2)).toBeLessThanOrEqual(0.05);
+    expect(Math.abs(v.FcPerp * MPA_PER_PSI - 3.9)).toBeLessThanOrEqual(0.05);
+    expect(Math.abs((v.E * MPA_PER_PSI) / 1000 - m.E)).toBeLessThanOrEqual(0.05);
+    expect(Math.abs((v.Emin * MPA_PER_PSI) / 1000 - m.Emin)).toBeLessThanOrEqual(0.05);
+  });
+});
+
+// NDS Supplement 2018, Table 4D, Beams and Stringers: no readable copy was found, so these rows are
+// from memory and must say so (flagged on the admin screens and the job sheet's appendix). The values
+// are the ones the rows were typed with; the test holds them still until a copy can be read.
+const TABLE_4D_FROM_MEMORY: [Species, SawnGrade, Values7][] = [
+  ["Douglas Fir-Larch", "Select Structural", [1600, 950, 170, 625, 1100, 1_600_000, 580_000]],
+  ["Douglas Fir-Larch", "No.1", [1350, 675, 170, 625, 925, 1_600_000, 580_000]],
+  ["Douglas Fir-Larch", "No.2", [875, 425, 170, 625, 600, 1_300_000, 470_000]],
+  ["Hem-Fir", "Select Structural", [1300, 750, 140, 405, 925, 1_300_000, 470_000]],
+  ["Hem-Fir", "No.1", [1050, 525, 140, 405, 750, 1_300_000, 470_000]],
+  ["Hem-Fir", "No.2", [675, 350, 140, 405, 500, 1_100_000, 400_000]],
+];
+
+describe("NDS Supplement 2018 Table 4D rows are flagged from memory", () => {
+  test.each(TABLE_4D_FROM_MEMORY)("%s %s beams and stringers", (species, grade, values) => {
+    const v = findSawnValues(T, species, grade, "beams-stringers");
+    expect(valuesOf(v)).toEqual(values);
+    expect(v.source).toContain("NDS Supplement 2018, Table 4D");
+    expect(isFromMemory(v.source)).toBe(true);
+  });
+
+  // Specific gravity G as Tables 4A/4B print it (and NDS 2018 Table 12.3.3A): Spruce-Pine-Fir 0.42 as
+  // the Kotlin transcription notes; the others from memory.
   test.each([
     ["Douglas Fir-Larch", 0.5],
     ["Hem-Fir", 0.43],
@@ -110,8 +202,9 @@ describe("design values against the NDS's own rules", () => {
   });
 });
 
-// NDS Supplement 2018, Table 4A "Size Factors, CF" (from memory — verify against the printed
-// table): [size, CF for Fb, Ft, Fc]. Fb splits 2"&3" thick vs 4" thick.
+// NDS Supplement 2018, Table 4A "Size Factors, CF" as xcfem/xc (dimensional_lumber.py:
+// fb_size_factor_y3/y4, fc_size_factor_y; Ft uses the 2"&3" Fb schedule) and a Kotlin
+// ndsTable4ASizeFactor transcribe it: [size, CF for Fb, Ft, Fc]. Fb splits 2"&3" thick vs 4" thick.
 const TABLE_4A_CF: [size: string, Fb: number, Ft: number, Fc: number][] = [
   ["2x4", 1.5, 1.5, 1.15],
   ["2x6", 1.3, 1.3, 1.1],
@@ -137,8 +230,8 @@ describe("size factors", () => {
     expect(cf.table).toBe("4A");
   });
 
-  // NDS Supplement 2018, Table 4B footnote (from memory): size already in the values, except
-  // Fb × 1.1 for 4" thick lumber 8" and wider.
+  // NDS Supplement 2018, Table 4B footnote, as a Kotlin resolveSawnCf transcribes its notes: size is
+  // already in the values, except Fb × 1.1 "permitted" for 4" thick lumber 8" and wider.
   test.each([
     ["2x4", 1.0],
     ["2x10", 1.0],
@@ -153,7 +246,8 @@ describe("size factors", () => {
     expect(cf.table).toBe("4B");
   });
 
-  // NDS Supplement 2018, Table 4D: CF = (12/d)^(1/9) for d > 12 in, computed here from the rule.
+  // NDS Supplement 2018, Table 4D: CF = (12/d)^(1/9) for d > 12 in (as several open-source NDS codes
+  // transcribe it), computed here from the rule.
   test.each([
     [7.5, 1.0],
     [11.5, 1.0],

@@ -1,3 +1,4 @@
+import { databaseUnavailableResponse, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { invalidInput, readJsonBody, route } from "@/lib/http";
 import { checkMember, DesignInputError } from "@/lib/solver/design";
 import { getCurrentTables } from "@/lib/tables/current";
@@ -12,6 +13,7 @@ export const POST = route(async (req) => {
     return Response.json(checkMember(read.body, await getCurrentTables()));
   } catch (err) {
     if (err instanceof DesignInputError) return invalidInput(err.issues);
+    if (isDatabaseUnavailable(err)) return databaseUnavailableResponse();
     throw err;
   }
 });

@@ -8,7 +8,7 @@ import type { FieldSpec, FlatRow, TableKey } from "@/lib/tables/schemas";
 export type { ChangeSummary, CsvRejectedLine, FieldSpec, FlatRow, TableChange, TableKey, TablesVersionDetail, TablesVersionInfo };
 
 export interface TableResponse {
-  table: { key: TableKey; title: string; description: string; fields: FieldSpec[]; summary: string[] };
+  table: { key: TableKey; title: string; description: string; fields: FieldSpec[]; summary: string[]; tableSource: string | null };
   version: TablesVersionInfo | null;
   rows: { key: string; values: FlatRow }[];
 }

@@ -9,6 +9,8 @@ import { EmptyState } from "@/components/ui/empty-state";
 import { SelectField, TextField } from "@/components/ui/field";
 import { PlusIcon } from "@/components/ui/icons";
 import { Skeleton } from "@/components/ui/spinner";
+import { StatusBadge } from "@/components/ui/status-badge";
+import { citationOf, FROM_MEMORY, isFromMemory } from "@/lib/tables/citations";
 import { useToast } from "@/components/ui/toast";
 import { fetchJson, type CommitResponse, type FieldSpec, type TableKey, type TableResponse } from "./api";
 import { CsvImport } from "./csv-import";
@@ -38,6 +40,43 @@ function cellText(value: string, field: FieldSpec): string {
   if (value === "") return "—";
   if (field.kind === "number" && Math.abs(Number(value)) >= 10_000) return Number(value).toLocaleString("en-US");
   return value;
+}
+
+/** How many rows cite a checked source and how many are flagged; or the table's own source. */
+function SourcesNote({ hasSource, flagged, total, tableSource }: { hasSource: boolean; flagged: number; total: number; tableSource: string | null }) {
+  if (!hasSource) {
+    return tableSource ? (
+      <p className="text-sm text-ink-soft" data-testid="table-source">
+        Source: {tableSource}
+      </p>
+    ) : null;
+  }
+  if (flagged === 0) {
+    return (
+      <p className="text-sm text-ink-soft" data-testid="table-source">
+        Every row names its table, edition and where its values were checked.
+      </p>
+    );
+  }
+  return (
+    <div className="rounded-card border-2 border-l-8 border-caution bg-caution-bg p-3 text-ink" data-testid="table-source" role="note">
+      <p className="font-bold text-caution-ink">
+        {flagged} of {total} rows are {FROM_MEMORY}
+      </p>
+      <p className="text-sm">No readable copy of their table confirmed them. Check them against the printed table before relying on them; the job sheet lists them too.</p>
+    </div>
+  );
+}
+
+/** A row's source: the citation, and a flag when its values are from memory. */
+function RowSource({ source, full = false }: { source: string; full?: boolean }) {
+  const flagged = isFromMemory(source);
+  return (
+    <span className="flex flex-col items-start gap-1 text-sm">
+      {flagged ? <StatusBadge status="caution" label={FROM_MEMORY} /> : null}
+      <span className={cx("text-graphite", !full && "line-clamp-2")}>{full ? source : citationOf(source)}</span>
+    </span>
+  );
 }
 
 /** Browse, sort, filter and edit one table of the current version; upload or download it as CSV. */
@@ -90,6 +129,8 @@ export function TableBrowser({ table }: TableBrowserProps) {
     { value: `${f.name}:desc`, label: `${f.label}${f.unit ? ` (${f.unit})` : ""}, high to low` },
   ]);
   const summary = summaryFields(fields, data.table.summary);
+  const hasSource = fields.some((f) => f.name === "source");
+  const flagged = hasSource ? data.rows.filter((r) => isFromMemory(r.values.source ?? "")).length : 0;
 
   return (
     <div className="flex flex-col gap-5">
@@ -102,6 +143,8 @@ export function TableBrowser({ table }: TableBrowserProps) {
           <>The database holds no version yet: showing the starter tables. Run the seeders to publish them.</>
         )}
       </p>
+
+      <SourcesNote hasSource={hasSource} flagged={flagged} total={data.rows.length} tableSource={data.table.tableSource} />
 
       <div className="flex flex-col gap-3 md:flex-row md:items-end">
         <TextField
@@ -150,6 +193,7 @@ export function TableBrowser({ table }: TableBrowserProps) {
                   className="flex w-full flex-col items-start gap-1 rounded-card border-2 border-rule bg-paper-raised p-3 text-left hover:border-spruce active:bg-spruce-light"
                 >
                   <span className="font-bold break-words">{r.key.replaceAll("|", " · ")}</span>
+                  {hasSource ? <RowSource source={r.values.source ?? ""} /> : null}
                   <span className="figures flex flex-wrap gap-x-4 gap-y-1 text-sm text-ink-soft">
                     {summary.map((f) => (
                       <span key={f.name}>
@@ -191,11 +235,17 @@ export function TableBrowser({ table }: TableBrowserProps) {
                         Edit
                       </Button>
                     </td>
-                    {fields.map((f) => (
-                      <td key={f.name} className={cx("px-2 py-1 whitespace-nowrap", f.kind === "number" && "text-right")}>
-                        {cellText(r.values[f.name] ?? "", f)}
-                      </td>
-                    ))}
+                    {fields.map((f) =>
+                      f.name === "source" ? (
+                        <td key={f.name} className="min-w-72 px-2 py-1 align-top">
+                          <RowSource source={r.values.source ?? ""} full />
+                        </td>
+                      ) : (
+                        <td key={f.name} className={cx("px-2 py-1 whitespace-nowrap", f.kind === "number" && "text-right")}>
+                          {cellText(r.values[f.name] ?? "", f)}
+                        </td>
+                      ),
+                    )}
                   </tr>
                 ))}
               </tbody>

@@ -43,10 +43,15 @@ export interface AnswerLineInput {
   supports: readonly SupportNeed[];
 }
 
-/** The member as a builder says it: "3-ply 2x12 No.2", "W8x18", "1-3/4 x 11-7/8 LVL 2.0E". */
+/** The member as a builder says it: "3-ply 2x12 No.2", "W8x18", "1-3/4 x 11-7/8 LVL 2.0E", "11-7/8 in PRI-40". */
 export function shortLabel(spec: MemberSpec, fullLabel: string): string {
   if (spec.material === "sawn") return `${spec.plies > 1 ? `${spec.plies}-ply ` : ""}${spec.size} ${spec.grade}`;
   if (spec.material === "steel") return spec.shape;
+  if (spec.material === "ijoist") {
+    // "PRI-40 11-7/8" → "11-7/8 in PRI-40", as a framer orders it
+    const [series, ...depth] = spec.joist.split(" ");
+    return `${depth.length > 0 ? `${depth.join(" ")} in ` : ""}${series}${spec.stiffeners ? " with web stiffeners" : ""}`;
+  }
   return fullLabel;
 }
 

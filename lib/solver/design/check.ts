@@ -11,6 +11,7 @@ import { buildContext, type DesignContext } from "./context";
 import { DesignInputError } from "./errors";
 import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
+import { evaluateIJoist, type IJoistFactors } from "./i-joist";
 import { evaluateSteel, type SteelFactors } from "./steel";
 import { E_STEEL_KSI } from "../aisc360/aisc360-16";
 import { answerLine, shortLabel } from "./answer-line";
@@ -26,7 +27,7 @@ export interface MemberSummary {
   /** lb/ft, counted as dead load when selfWeight is on */
   weightPlf: number;
   /** dressed or nominal section, in units of in */
-  section: { b: number | null; d: number; A: number | null; S: number | null; I: number };
+  section: { b: number | null; d: number; A: number | null; S: number | null; I: number; EI?: number };
   sources: string[];
   note: string | null;
 }
@@ -44,7 +45,7 @@ export interface CheckOutput {
   member: MemberSummary;
   checks: DesignCheck[];
   reactions: SupportReaction[];
-  factors: WoodFactors | SteelFactors;
+  factors: WoodFactors | SteelFactors | IJoistFactors;
   /** the line loads the member carries, by case, and how each was derived */
   loads: { case: string; type: string; w: number | null; note: string }[];
   limits: { live: number | null; total: number | null; source: string };
@@ -60,7 +61,7 @@ export interface CheckOutput {
 export interface Evaluation {
   checks: DesignCheck[];
   reactions: SupportReaction[];
-  factors: WoodFactors | SteelFactors;
+  factors: WoodFactors | SteelFactors | IJoistFactors;
   governing: CheckName | null;
   ratio: number;
   pass: boolean;
@@ -102,7 +103,7 @@ export function answerFor(input: Pick<CheckInput, "kind" | "spacingIn">, member:
 
 /** Runs every check of one resolved member in a shared context. */
 export function evaluateMember(member: DesignMember, ctx: DesignContext): Evaluation {
-  const r = member.kind === "steel" ? evaluateSteel(member, ctx) : evaluateWood(member, ctx);
+  const r = member.kind === "steel" ? evaluateSteel(member, ctx) : member.kind === "ijoist" ? evaluateIJoist(member, ctx) : evaluateWood(member, ctx);
   let governing: CheckName | null = null;
   let ratio = 0;
   for (const c of r.checks) {
@@ -150,6 +151,17 @@ export function summarizeMember(m: DesignMember): MemberSummary {
       note: null,
     };
   }
+  if (m.kind === "ijoist") {
+    // an I-joist is checked by its EI, not by a section: I = 0 here and EI given
+    return {
+      spec: m.spec,
+      label: m.label,
+      weightPlf: m.weightPlf,
+      section: { b: m.joist.flangeWidth, d: m.joist.d, A: null, S: null, I: 0, EI: m.joist.EI },
+      sources: m.sources,
+      note: "a generic APA PRI-400 joist: the maker's own joist series carries its own values, which govern",
+    };
+  }
   const r = (v: number) => Math.round(v * 1000) / 1000;
   return {
     spec: m.spec,
@@ -183,6 +195,10 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
   if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
+  if (member.kind === "ijoist") {
+    a.push("wood I-joist checked against its published capacities (moment, shear, end and intermediate reactions) and its EI and K; dry service, normal temperature; compression flange braced by the sheathing");
+    a.push("deflection includes shear deflection (K); no holes, notches or cut flanges in the joist; squash blocks, rim and blocking as the joist's installation guide shows");
+  }
   return a;
 }
 
@@ -207,8 +223,9 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     supports: ctx.model.supports,
     loads: ctx.loads.map((l) => l.load),
     selfWeightPlf: sw,
-    EPsi: member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : E_STEEL_KSI * 1000,
-    IIn4: summary.section.I,
+    // an I-joist gives its EI, not a section: its bending deflection drawn from EI (shear deflection is in the check)
+    EPsi: summary.section.EI !== undefined && summary.section.EI > 0 ? summary.section.EI : member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : E_STEEL_KSI * 1000,
+    IIn4: summary.section.EI !== undefined && summary.section.EI > 0 ? 1 : summary.section.I,
     checks: ev.checks,
     reactions: ev.reactions,
     combinations: ctx.combinations,

@@ -7,6 +7,7 @@ import {
   costPerFoot,
   depthSizeFactor,
   findEngineered,
+  findIJoist,
   findSawnSize,
   findSawnValues,
   findSteelGrade,
@@ -18,6 +19,7 @@ import {
 import type { MaterialTables, SawnGrade, Species, SteelGrade, WShape } from "@/lib/tables/types";
 import { woodDensity, type WetServiceTable } from "../nds/nds-2018";
 import { DesignInputError } from "./errors";
+import type { IJoistMember } from "./i-joist";
 import type { MemberSpec } from "./schema";
 
 /** Moisture content assumed for the weight of sawn lumber, percent (NDS: dry service is 19 % or less). */
@@ -71,7 +73,7 @@ export interface SteelMember {
   costPerFoot?: number;
 }
 
-export type DesignMember = WoodMember | SteelMember;
+export type DesignMember = WoodMember | SteelMember | IJoistMember;
 
 function lookup<T>(fn: () => T, pathPrefix = ""): T {
   try {
@@ -104,6 +106,20 @@ export function resolveMemberUnchecked(spec: MemberSpec, tables: MaterialTables)
       weightPlf: shape.W,
       sources: [shape.source],
       costPerFoot: costPerFoot(tables, { material: "steel", shape: shape.name }),
+    };
+  }
+  if (spec.material === "ijoist") {
+    const joist = findIJoist(tables, spec.joist);
+    return {
+      kind: "ijoist",
+      spec: { material: "ijoist", joist: joist.name, stiffeners: spec.stiffeners },
+      label: `${joist.name} I-joist${spec.stiffeners ? " with web stiffeners" : ""}`,
+      joist,
+      stiffeners: spec.stiffeners,
+      d: joist.d,
+      weightPlf: joist.weightPlf,
+      sources: [joist.source],
+      costPerFoot: costPerFoot(tables, { material: "ijoist", joist: joist.name }),
     };
   }
   if (spec.material === "sawn") {

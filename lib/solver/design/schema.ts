@@ -66,8 +66,11 @@ export const engineeredMemberSchema = z
   .object({ material: z.literal("engineered"), product: z.string().min(1), width: positive("in").optional(), depth: positive("in"), plies: plies.default(1) })
   .strict();
 
-export const memberSchema = z.discriminatedUnion("material", [sawnMemberSchema, steelMemberSchema, engineeredMemberSchema], {
-  error: 'must name a material: "sawn", "steel" or "engineered"',
+/** a wood I-joist by its table name, e.g. "PRI-40 11-7/8"; stiffeners = web stiffeners at the end bearings */
+export const iJoistMemberSchema = z.object({ material: z.literal("ijoist"), joist: z.string().min(1), stiffeners: z.boolean().default(false) }).strict();
+
+export const memberSchema = z.discriminatedUnion("material", [sawnMemberSchema, steelMemberSchema, engineeredMemberSchema, iJoistMemberSchema], {
+  error: 'must name a material: "sawn", "steel", "engineered" or "ijoist"',
 });
 
 export const DEFLECTION_PRESET_IDS = ["floor", "floor-tile", "roof-no-ceiling", "ceiling-flexible", "ceiling-brittle", "other"] as const;
@@ -106,12 +109,14 @@ const designFields = {
   lengthFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
   supports: z
     .array(z.object({ x: finite("ft"), type: z.enum(SUPPORT_TYPES, { error: eitherMessage(SUPPORT_TYPES) }) }).strict())
-    .min(1, "give at least one support"),
+    .min(1, "give at least one support")
+    // Capped here, before the cross-field check compares supports pair by pair.
+    .max(LIMITS.maxSupports, `at most ${LIMITS.maxSupports} supports`),
   /** joist spacing, in on centre */
   spacingIn: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
   /** tributary width, ft */
   tributaryFt: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
-  loads: z.array(designLoadSchema).max(LIMITS.maxLoads),
+  loads: z.array(designLoadSchema).max(LIMITS.maxLoads, `at most ${LIMITS.maxLoads} loads`),
   /** bearing length at each support, in; default 1-1/2 in (IRC R502.6 minimum on wood or metal) */
   bearingIn: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
   conditions: conditionsSchema.default(() => conditionsSchema.parse({})),
@@ -174,9 +179,11 @@ export const sizeFamilySchema = z.discriminatedUnion(
       .strict(),
     z.object({ material: z.literal("steel"), grade: z.string().min(1).default("A992") }).strict(),
     z.object({ material: z.literal("engineered"), product: z.string().min(1).optional(), plies: z.array(plies).min(1).optional() }).strict(),
+    /** wood I-joists, one series or every one */
+    z.object({ material: z.literal("ijoist"), series: z.string().min(1).optional(), stiffeners: z.boolean().default(false) }).strict(),
     z.object({ material: z.literal("any") }).strict(),
   ],
-  { error: 'must name a family: material "sawn", "engineered", "steel" or "any"' },
+  { error: 'must name a family: material "sawn", "engineered", "ijoist", "steel" or "any"' },
 );
 
 export const sizeInputSchema = z

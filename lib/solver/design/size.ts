@@ -99,6 +99,19 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
       for (const width of p.widths) for (const depth of p.depths) for (const n of plies) out.push({ material: "engineered", product: p.name, width, depth, plies: n });
     }
   }
+  if (mat === "ijoist" || (mat === "any" && joists)) {
+    const f = family.material === "ijoist" ? family : undefined;
+    let rows = tables.iJoists;
+    if (f?.series !== undefined) {
+      const wanted = f.series.trim().toLowerCase();
+      rows = rows.filter((j) => j.series.toLowerCase() === wanted);
+      if (rows.length === 0) {
+        const held = [...new Set(tables.iJoists.map((j) => j.series))];
+        throw new DesignInputError([{ path: "member.series", message: new TableLookupError("member.series", `unknown I-joist series "${f.series}"`, held).message }]);
+      }
+    }
+    for (const j of rows) out.push({ material: "ijoist", joist: j.name, stiffeners: f?.stiffeners ?? false });
+  }
   if (mat === "steel" || mat === "any") {
     const grade = family.material === "steel" ? family.grade : "A992";
     for (const s of tables.steel) out.push({ material: "steel", shape: s.name, grade });
@@ -146,12 +159,12 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   // one table lookup per size; other ply counts derive from it
   const onePly = new Map<string, DesignMember | null>();
   for (const spec of specs) {
-    const plies = spec.material === "steel" ? 1 : spec.plies;
+    const plies = spec.material === "steel" || spec.material === "ijoist" ? 1 : spec.plies;
     const key = spec.material === "sawn" ? `s|${spec.species}|${spec.grade}|${spec.size}` : spec.material === "engineered" ? `e|${spec.product}|${spec.width}|${spec.depth}` : "";
     let base = key ? onePly.get(key) : undefined;
     if (base === undefined) {
       try {
-        base = resolveMemberUnchecked(spec.material === "steel" ? spec : { ...spec, plies: 1 }, tables);
+        base = resolveMemberUnchecked(spec.material === "steel" || spec.material === "ijoist" ? spec : { ...spec, plies: 1 }, tables);
       } catch (err) {
         if (!(err instanceof TableLookupError || err instanceof DesignInputError)) throw err;
         base = null;
@@ -161,6 +174,8 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     if (base === null) continue;
     const member: DesignMember = base.kind === "wood" && plies !== 1 ? withPlies(base, plies) : base;
     if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) continue;
+    // I-joists: dry service, normal temperature, ASD only (their published values are allowable loads)
+    if (member.kind === "ijoist" && (input.conditions.wet || input.conditions.temperatureF > 100 || input.method !== "asd")) continue;
     checked++;
     lastMember = member;
     const ev = evaluateMember(member, ctx);
@@ -202,8 +217,10 @@ function describeFamily(input: SizeInput): string {
       return `${m.product ?? "every engineered product"}, every width and depth in the tables, LVL plies ${plies(m.plies)}`;
     case "steel":
       return `every W-shape in the tables, ${m.grade}`;
+    case "ijoist":
+      return `${m.series ?? "every"} wood I-joist${m.series ? "" : " series"} in the tables, every depth${m.stiffeners ? ", web stiffeners at the ends" : ""}`;
     case "any":
-      return `every sawn size, engineered product and W-shape in the tables, plies ${plies(undefined)} for dimension lumber and LVL`;
+      return `every sawn size, engineered product${joists ? ", wood I-joist" : ""} and W-shape in the tables, plies ${plies(undefined)} for dimension lumber and LVL`;
   }
 }
 

@@ -37,7 +37,10 @@ export interface WetServiceFactors {
 
 /**
  * Wet service factor CM, NDS Supplement 2018 Tables 4A/4B/4D adjustment notes and Table 5A for
- * glulam. For dimension lumber CM for Fb is 1.0 when Fb·CF ≤ 1150 psi.
+ * glulam. For dimension lumber CM for Fb is 1.0 when Fb·CF ≤ 1150 psi (Table 4A's wording). Table 4B's
+ * own footnote could not be read in any stored copy; its values are already size-specific, so it may
+ * test Fb alone, which would give 1.0 where Fb ≤ 1150 < Fb·CF (4" thick, 8" and wider). Until it is
+ * read, Southern Pine takes the Table 4A test, the reading that never gives the larger factor.
  * Example: Table 4A, Fb·CF = 990 psi, wet → { Fb: 1.0, Fv: 0.97, FcPerp: 0.67, E: 0.9 }.
  */
 export function wetServiceFactorCM(table: WetServiceTable, wet: boolean, FbTimesCF = Infinity): WetServiceFactors {

@@ -2,6 +2,7 @@ import type { ModelStatic, Transaction } from "sequelize";
 import {
   CostRowModel,
   EngineeredProductRow,
+  IJoistRow,
   SawnSizeRow,
   SawnValueRow,
   SizeFactorRow,
@@ -57,6 +58,11 @@ async function readEngineered(versionId: string, transaction?: Transaction) {
   return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, FbNeg, ...product }) => (FbNeg === null ? product : { ...product, FbNeg }));
 }
 
+async function readIJoists(versionId: string, transaction?: Transaction) {
+  const rows = await IJoistRow.findAll({ where: { versionId }, order: [["d", "ASC"], ["EI", "ASC"], ["name", "ASC"]], transaction });
+  return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, ...joist }) => joist);
+}
+
 async function readSteelShapes(versionId: string, transaction?: Transaction) {
   const rows = await SteelShapeRow.findAll({ where: { versionId }, order: [["d", "ASC"], ["W", "ASC"]], transaction });
   return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, ...shape }) => shape);
@@ -81,16 +87,18 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
     rows["sawn-values"] = await readSawnValues(versionId, transaction);
     rows["size-factors"] = await readSizeFactors(versionId, transaction);
     rows.engineered = await readEngineered(versionId, transaction);
+    rows["i-joists"] = await readIJoists(versionId, transaction);
     rows["steel-shapes"] = await readSteelShapes(versionId, transaction);
     rows["steel-grades"] = await readSteelGrades(versionId, transaction);
     rows.costs = await readCosts(versionId, transaction);
     return rows;
   }
-  [rows["sawn-sizes"], rows["sawn-values"], rows["size-factors"], rows.engineered, rows["steel-shapes"], rows["steel-grades"], rows.costs] = await Promise.all([
+  [rows["sawn-sizes"], rows["sawn-values"], rows["size-factors"], rows.engineered, rows["i-joists"], rows["steel-shapes"], rows["steel-grades"], rows.costs] = await Promise.all([
     readSawnSizes(versionId),
     readSawnValues(versionId),
     readSizeFactors(versionId),
     readEngineered(versionId),
+    readIJoists(versionId),
     readSteelShapes(versionId),
     readSteelGrades(versionId),
     readCosts(versionId),
@@ -98,13 +106,14 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
   return rows;
 }
 
-type RowModel = ModelStatic<SawnSizeRow | SawnValueRow | SizeFactorRow | EngineeredProductRow | SteelShapeRow | SteelGradeRow | CostRowModel>;
+type RowModel = ModelStatic<SawnSizeRow | SawnValueRow | SizeFactorRow | EngineeredProductRow | IJoistRow | SteelShapeRow | SteelGradeRow | CostRowModel>;
 
 export const ROW_MODELS: Record<TableKey, RowModel> = {
   "sawn-sizes": SawnSizeRow,
   "sawn-values": SawnValueRow,
   "size-factors": SizeFactorRow,
   engineered: EngineeredProductRow,
+  "i-joists": IJoistRow,
   "steel-shapes": SteelShapeRow,
   "steel-grades": SteelGradeRow,
   costs: CostRowModel,
@@ -134,6 +143,9 @@ export async function writeTableRows<K extends TableKey>(key: K, versionId: stri
         (rows as TableRowMap["engineered"][]).map((r) => ({ ...r, FbNeg: r.FbNeg ?? null, versionId })),
         { transaction },
       );
+      return;
+    case "i-joists":
+      await IJoistRow.bulkCreate((rows as TableRowMap["i-joists"][]).map((r) => ({ ...r, versionId })), { transaction });
       return;
     case "steel-shapes":
       await SteelShapeRow.bulkCreate((rows as TableRowMap["steel-shapes"][]).map((r) => ({ ...r, versionId })), { transaction });

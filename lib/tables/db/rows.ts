@@ -15,6 +15,7 @@ export function tablesToRows(tables: MaterialTables): TableRows {
     "sawn-values": tables.sawnValues,
     "size-factors": tables.sizeFactors,
     engineered: tables.engineered,
+    "i-joists": tables.iJoists,
     "steel-shapes": tables.steel,
     "steel-grades": tables.steelGrades,
     costs,
@@ -28,6 +29,7 @@ export function rowsToTables(version: string, rows: TableRows): MaterialTables {
     sawnValues: rows["sawn-values"],
     sizeFactors: rows["size-factors"],
     engineered: rows.engineered,
+    iJoists: rows["i-joists"],
     steel: rows["steel-shapes"],
     steelGrades: rows["steel-grades"],
     costs: Object.fromEntries(rows.costs.map((c) => [c.itemKey, c.costPerFt])),
@@ -35,5 +37,5 @@ export function rowsToTables(version: string, rows: TableRows): MaterialTables {
 }
 
 export function emptyRows(): TableRows {
-  return { "sawn-sizes": [], "sawn-values": [], "size-factors": [], engineered: [], "steel-shapes": [], "steel-grades": [], costs: [] };
+  return { "sawn-sizes": [], "sawn-values": [], "size-factors": [], engineered: [], "i-joists": [], "steel-shapes": [], "steel-grades": [], costs: [] };
 }

@@ -18,7 +18,7 @@ export const GET = route(async (req: Request, ctx: Ctx) => {
   const spec = TABLE_SPECS[table];
   const rows = rowsOf(tablesToRows(tables), table);
   return NextResponse.json({
-    table: { key: table, title: spec.title, description: spec.description, fields: spec.fields, summary: spec.summary },
+    table: { key: table, title: spec.title, description: spec.description, fields: spec.fields, summary: spec.summary, tableSource: spec.tableSource ?? null },
     version: isVersionId(tables.version) ? await getVersionInfo(tables.version) : null,
     rows: rows.map((row) => ({ key: rowKey(table, row), values: rowToFlat(table, row) })),
   });
