@@ -81,7 +81,7 @@ describe("PRI-40 9-1/2 at 16 in o.c. over 13.5 ft (worked example, formulas comp
   test("load duration: a snow load raises M' by CD = 1.15 (NDS 2018 Table 2.3.2)", () => {
     const snow = checkMember(floor("PRI-40 9-1/2", { loads: [{ type: "udl", case: "S", from: 0, to: SPAN, w: 100 }, { type: "udl", case: "D", from: 0, to: SPAN, w: 20 }], spacingIn: undefined }), T);
     const b = snow.checks.find((c) => c.name === "bending")!;
-    expect(b.combination).toMatch(/^D\+(\d*\.?\d*)S$/); // ASCE 7-22 §2.4.1 names it with its snow factor
+    expect(b.combination?.name).toMatch(/^D\+(\d*\.?\d*)S$/); // ASCE 7-22 §2.4.1 names it with its snow factor
     expect(b.capacity).toBe(Math.round(2735 * 1.15));
   });
 });
@@ -100,7 +100,7 @@ describe("reaction capacities from the table", () => {
   test("1-1/2 in bearing given: checked at 1-3/4 in and the answer asks for 1-3/4 in", () => {
     const r = checkMember(floor("PRI-40 9-1/2", { bearingIn: 1.5 }), T);
     expect(r.reactions.map((x) => x.requiredBearing)).toEqual([1.75, 1.75]);
-    expect(r.answer).toMatch(/bearing at least 1\.75 in/);
+    expect(r.answer).toMatch(/ — 1-3\/4" bearing each end/);
     expect(r.checks.find((c) => c.name === "bearing")!.note).toMatch(/less than the 1.75 in/);
   });
 
