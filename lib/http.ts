@@ -4,6 +4,7 @@ import { NextResponse } from "next/server";
 import { ZodError, type ZodType } from "zod";
 import { databaseUnavailableResponse, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { logger } from "@/lib/logger";
+import { zodIssues, type FieldIssue } from "@/lib/zod-issues";
 
 /** An error with an HTTP status and a message fit to show a user (never a raw internal error). */
 export class HttpError extends Error {
@@ -16,14 +17,7 @@ export class HttpError extends Error {
   }
 }
 
-export interface FieldIssue {
-  path: string;
-  message: string;
-}
-
-export function zodIssues(error: ZodError): FieldIssue[] {
-  return error.issues.map((i) => ({ path: i.path.map(String).join(".") || "(body)", message: i.message }));
-}
+export { zodIssues, type FieldIssue } from "@/lib/zod-issues";
 
 /**
  * The most a request body may hold, in bytes. A body over its cap is refused with 413 before the rest is read,
@@ -97,14 +91,14 @@ export async function parseJson<T>(req: Request, schema: ZodType<T>, { limitByte
   try {
     body = JSON.parse(text);
   } catch {
-    throw new HttpError(400, "the request body is not valid JSON", { issues: [{ path: "(body)", message: "not valid JSON" }] });
+    throw new HttpError(400, "the request body is not valid JSON", { issues: [{ path: "", message: "not valid JSON" }] });
   }
   const parsed = schema.safeParse(body);
   if (!parsed.success) throw new HttpError(400, "invalid input", { issues: zodIssues(parsed.error) });
   return parsed.data;
 }
 
-/** 400 { error: "invalid input", issues }: how the public solver routes (which answer without `route()`) refuse input. */
+/** 400 { error: "invalid input", issues }: how the public solver routes refuse input their own checks find. */
 export function invalidInput(issues: FieldIssue[]): Response {
   return Response.json({ error: "invalid input", issues }, { status: 400 });
 }

@@ -6,9 +6,9 @@ import {
   type InferCreationAttributes,
   type Sequelize,
 } from "sequelize";
+import { ROLES, type Role } from "../lib/auth/role-list";
 
-export type Role = "builder" | "subscriber" | "admin";
-export const ROLES: readonly Role[] = ["builder", "subscriber", "admin"];
+export { ROLES, type Role };
 
 export class User extends Model<InferAttributes<User>, InferCreationAttributes<User>> {
   declare id: CreationOptional<string>;

@@ -59,16 +59,16 @@ start_mail_sink() {
   wait_for_url "$MAILDEV_URL/api/healthz" "mail sink" && log "mail sink: SMTP 127.0.0.1:${SMTP_PORT:-1025}, inbox $MAILDEV_URL"
 }
 
-# The Stripe stand-in (scripts/stripe-standin.ts) unless a real Stripe key is configured.
+# The Stripe stand-in (scripts/stripe-standin/main.ts) unless a real Stripe key is configured.
 start_stripe_standin() {
   if [ -n "${STRIPE_SECRET_KEY:-}" ] && [ -z "${STRIPE_API_HOST:-}" ]; then
     log "using the real Stripe API (STRIPE_SECRET_KEY set, no STRIPE_API_HOST)"; return 0
   fi
   export STRIPE_SECRET_KEY="${STRIPE_SECRET_KEY:-sk_test_local}" STRIPE_WEBHOOK_SECRET="${STRIPE_WEBHOOK_SECRET:-whsec_local}"
   export STRIPE_API_HOST=127.0.0.1 STRIPE_API_PORT="${STRIPE_STANDIN_PORT:-12111}" STRIPE_API_PROTOCOL=http
-  [ -f scripts/stripe-standin.ts ] || return 0
+  [ -f scripts/stripe-standin/main.ts ] || return 0
   if port_busy "$STRIPE_API_PORT"; then log "Stripe stand-in already listening on $STRIPE_API_PORT"; return 0; fi
-  STRIPE_STANDIN_PORT="$STRIPE_API_PORT" node_modules/.bin/tsx scripts/stripe-standin.ts > .data/logs/stripe-standin.log 2>&1 &
+  STRIPE_STANDIN_PORT="$STRIPE_API_PORT" node_modules/.bin/tsx scripts/stripe-standin/main.ts > .data/logs/stripe-standin.log 2>&1 &
   SERVICE_PIDS+=($!)
   local i
   for i in $(seq 1 60); do port_busy "$STRIPE_API_PORT" && break; sleep 0.5; done

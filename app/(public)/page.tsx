@@ -1,7 +1,7 @@
 import type { Metadata } from "next";
 import { ButtonLink } from "@/components/ui/button";
 import { CardLink } from "@/components/ui/card";
-import { NOT_CHECKED } from "@/components/ui/caution-text";
+import { NOT_CHECKED } from "@/lib/caution";
 import { TapeIcon, WarningIcon } from "@/components/ui/icons";
 import { MemberKindSketch } from "@/components/shell/member-kind-sketch";
 import { KIND_LABELS, MEMBER_KINDS, type MemberKind } from "@/lib/flow/state";

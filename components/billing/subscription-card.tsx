@@ -1,6 +1,6 @@
 import { Card } from "@/components/ui/card";
 import { StatusBadge } from "@/components/ui/status-badge";
-import type { Role } from "@/models/user";
+import type { Role } from "@/lib/auth/role-list";
 import { formatMoney, PLANS } from "@/lib/payments/plans";
 import type { SubscriptionSummary } from "@/lib/payments/subscriptions";
 

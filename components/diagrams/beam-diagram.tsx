@@ -1,8 +1,8 @@
 import { scaleLinear } from "d3-scale";
 import { line, type CurveFactory } from "d3-shape";
 import { formatFeetInches } from "@/lib/flow/length";
-import { INK } from "./palette";
-import { diagramChain, valueRange, type BezierChain, type DiagramQuantity, type DiagramSegment, type Point } from "./geometry";
+import { INK } from "@/lib/diagrams/palette";
+import { diagramChain, valueRange, type BezierChain, type DiagramQuantity, type DiagramSegment, type Point } from "@/lib/diagrams/geometry";
 
 export type DiagramExtreme = { x: number; value: number; label: string };
 

@@ -2,7 +2,7 @@ import { scaleLinear } from "d3-scale";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { Load, Support } from "@/lib/solver/types";
 import { DIAGRAM_WIDTH } from "./beam-diagram";
-import { INK } from "./palette";
+import { INK } from "@/lib/diagrams/palette";
 
 export type LoadDiagramProps = {
   title: string;

@@ -1,6 +1,6 @@
 "use client";
 
-import { useEffect, useMemo, useState, type ReactNode } from "react";
+import { useEffect, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
 import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
 import { Skeleton, Spinner } from "@/components/ui/spinner";
@@ -9,13 +9,14 @@ import { WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { answerFacts, headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
+import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
 import { AnswerDiagrams } from "./answer-diagrams";
 import { MemberDetail } from "./member-detail";
-import { useChecks, useSize } from "./use-design";
+import { useSize } from "./use-design";
 import { checkDetail, checkTitle } from "./words";
 
 export type AnswerProps = {
@@ -37,24 +38,24 @@ const sameSpec = (a: MemberSpec, b: MemberSpec) => JSON.stringify(a) === JSON.st
 
 /** Which step holds the field an issue names. */
 function stepOfPath(path: string): FlowStepId {
-  if (/^(length|supports|bearing)/.test(path)) return "span";
-  if (/^(loads|spacing|tributary)/.test(path)) return "loads";
+  if (/^(lengthFt|supports|bearingIn)/.test(path)) return "span";
+  if (/^(loads|spacingIn|tributaryFt)/.test(path)) return "loads";
   return "material";
 }
 
 const FIELD_WORDS: Record<string, string> = {
-  length: "Span",
+  lengthFt: "Span",
   supports: "Supports",
   loads: "Loads",
-  spacing: "Joist spacing",
-  tributary: "Tributary width",
-  bearing: "Bearing length",
+  spacingIn: "Joist spacing",
+  tributaryFt: "Tributary width",
+  bearingIn: "Bearing length",
   member: "Material",
   limits: "Deflection limits",
   conditions: "Conditions",
 };
 
-/** "supports.1.x" → "Support 2"; "spacing" → "Joist spacing". */
+/** "supports.1.x" → "Support 2"; "spacingIn" → "Joist spacing". */
 function fieldWords(path: string): string {
   const [head, index] = path.split(".");
   const word = FIELD_WORDS[head] ?? head;
@@ -123,16 +124,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
   const passing = size.data?.passing ?? [];
   const shown = passing.slice(0, variant === "full" ? SHOWN : 1);
   const chosenSpec = chosen && passing.some((p) => sameSpec(p.member, chosen)) ? chosen : (passing[0]?.member ?? null);
-  const specs = useMemo(() => {
-    const list = shown.map((c) => c.member);
-    if (chosenSpec && !list.some((s) => sameSpec(s, chosenSpec))) list.push(chosenSpec);
-    return list;
-  }, [shown, chosenSpec]);
-  const checks = useChecks(state, specs);
-  const checkOf = (spec: MemberSpec) => {
-    const i = specs.findIndex((s) => sameSpec(s, spec));
-    return i >= 0 ? checks.data?.[i] : undefined;
-  };
+  const checkOf = (spec: MemberSpec) => passing.find((p) => sameSpec(p.member, spec))?.check;
   const chosenCheck = chosenSpec ? checkOf(chosenSpec) : undefined;
   const chosenCandidate = chosenSpec ? passing.find((p) => sameSpec(p.member, chosenSpec)) : undefined;
   const [detail, setDetail] = useState<MemberSpec | null>(null);
@@ -143,7 +135,8 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
   }, [chosenCheck, onChosenCheck]);
 
   const busy = size.isLoading || size.isValidating;
-  const headline = chosenCandidate ? headlineFor(chosenCandidate.member, chosenCandidate.label, chosenCandidate.supports, state.kind, spacingOf(state)) : null;
+  const headline = chosenCandidate?.answer ?? null;
+  const studs = jackStudsApply(state.kind, spacingOf(state));
 
   return (
     <div className="flex flex-col gap-6" aria-busy={busy}>
@@ -225,7 +218,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                         </p>
                       ) : null}
                       <p>
-                        {state.kind === "header" && r.jackStuds !== null
+                        {studs && r.jackStuds !== null
                           ? `${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"} (needs ${formatInches(r.requiredBearing)} of bearing)`
                           : `Bearing: needs ${formatInches(r.requiredBearing)}, you have ${formatInches(r.bearing)}`}
                       </p>
@@ -268,7 +261,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
             <h2 id="diagrams-title" className="text-2xl font-bold">
               Diagrams{chosenCandidate ? ` for ${shortLabel(chosenCandidate.member, chosenCandidate.label)}` : ""}
             </h2>
-            <div className="min-h-[40rem]">{chosenCheck ? <AnswerDiagrams state={state} check={chosenCheck} /> : <Skeleton width="100%" height="40rem" />}</div>
+            <div className="min-h-[40rem]">{chosenCheck ? <AnswerDiagrams check={chosenCheck} /> : <Skeleton width="100%" height="40rem" />}</div>
           </section>
         </>
       ) : null}

@@ -1,7 +1,7 @@
 "use client";
 
 import { useRef, type KeyboardEvent, type PointerEvent } from "react";
-import { INK } from "@/components/diagrams/palette";
+import { INK } from "@/lib/diagrams/palette";
 import { formatFeetInches } from "@/lib/flow/length";
 import { clamp, overhangs, snapFt, sortedSupports, type FlowState, type FlowSupport } from "@/lib/flow/state";
 import { spanWords } from "@/lib/flow/summary";

@@ -7,7 +7,7 @@ import { LOAD_CASE_LABELS } from "@/lib/flow/forms";
 import { formatFeetInches } from "@/lib/flow/length";
 import { newLoadId, type FlowAreaLoad, type FlowLineLoad, type FlowPointLoad, type FlowState } from "@/lib/flow/state";
 import { OCCUPANCY_PRESETS, findOccupancyPreset } from "@/lib/solver/asce7/loads";
-import { designFlatRoofSnow, EXPOSURE_CE, THERMAL_CT, type RoofExposure, type RoofThermal } from "@/lib/solver/asce7/snow";
+import { designFlatRoofSnow, EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS, type RoofExposure, type RoofThermal } from "@/lib/solver/asce7/snow";
 import { asdSnowFactor } from "@/lib/solver/asce7/combinations";
 import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import { LOAD_CASES, type LoadCase } from "@/lib/solver/types";
@@ -25,16 +25,8 @@ const presetOptions = [
   ...OCCUPANCY_PRESETS.map((p) => ({ value: p.id, label: `${p.label} — ${p.psf} psf ${p.case}` })),
   { value: "custom", label: "Other (type the psf)" },
 ];
-const EXPOSURES: { value: RoofExposure; label: string }[] = [
-  { value: "fully-exposed", label: `Fully exposed (Ce ${EXPOSURE_CE["fully-exposed"]})` },
-  { value: "partially-exposed", label: `Partially exposed (Ce ${EXPOSURE_CE["partially-exposed"]})` },
-  { value: "sheltered", label: `Sheltered by trees or buildings (Ce ${EXPOSURE_CE.sheltered})` },
-];
-const THERMALS: { value: RoofThermal; label: string }[] = [
-  { value: "heated", label: `Heated, unventilated (Ct ${THERMAL_CT.heated})` },
-  { value: "cold-ventilated", label: `Cold, ventilated (Ct ${THERMAL_CT["cold-ventilated"]})` },
-  { value: "unheated", label: `Unheated (Ct ${THERMAL_CT.unheated})` },
-];
+const EXPOSURES = (Object.keys(EXPOSURE_CE) as RoofExposure[]).map((value) => ({ value, label: `${EXPOSURE_WORDS[value]} (Ce ${EXPOSURE_CE[value]})` }));
+const THERMALS = (Object.keys(THERMAL_CT) as RoofThermal[]).map((value) => ({ value, label: `${THERMAL_WORDS[value]} (Ct ${THERMAL_CT[value]})` }));
 
 function AreaLoadRow({ load, index, onChange, onRemove }: { load: FlowAreaLoad; index: number; onChange: (l: FlowAreaLoad) => void; onRemove: () => void }) {
   const preset = findOccupancyPreset(load.preset);

@@ -6,15 +6,13 @@ import { INCISED_SPECIES } from "@/lib/solver/design/wood";
 import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
 import { ENGINEERED } from "@/lib/tables/engineered";
 import { I_JOISTS } from "@/lib/tables/i-joists";
-import type { SawnGrade, Species } from "@/lib/tables/types";
+import { SAWN_GRADES as GRADES, SPECIES, type SawnGrade, type Species } from "@/lib/tables/types";
 import { ChoiceGroup } from "./choice-group";
 import { LengthField } from "./length-field";
 import { FlowNumberField } from "./number-field";
 
 export type StepMaterialProps = { state: FlowState; update: (fn: (s: FlowState) => FlowState) => void };
 
-const SPECIES: Species[] = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"];
-const GRADES: SawnGrade[] = ["Select Structural", "No.1", "No.2", "No.3"];
 
 const FAMILIES: { value: MaterialFamily; label: string; detail: string }[] = [
   { value: "any", label: "Any", detail: "the lightest member that works, from every table" },

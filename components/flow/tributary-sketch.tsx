@@ -1,4 +1,4 @@
-import { INK } from "@/components/diagrams/palette";
+import { INK } from "@/lib/diagrams/palette";
 
 export type TributarySketchProps = { mode: "spacing" | "tributary" };
 

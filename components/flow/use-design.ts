@@ -2,10 +2,8 @@
 
 import { useEffect, useState } from "react";
 import useSWR from "swr";
-import type { CheckOutput } from "@/lib/solver/design/check";
-import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeOutput } from "@/lib/solver/design/size";
-import { checkRequest, sizeRequest } from "@/lib/flow/request";
+import { sizeRequest } from "@/lib/flow/request";
 import type { FlowState } from "@/lib/flow/state";
 
 /** A refusal from the design routes: the field-level issues of a 400, or why the request failed. */
@@ -48,18 +46,11 @@ export function useDebounced<T>(value: T, ms: number): T {
 
 const SWR_OPTIONS = { keepPreviousData: true, revalidateOnFocus: false, revalidateOnReconnect: true, shouldRetryOnError: false, dedupingInterval: 10_000 } as const;
 
-/** The sizing search for the flow's state (POST /api/size), 250 ms after the last change. */
+/**
+ * The sizing search for the flow's state (POST /api/size), 250 ms after the last change: one request
+ * per edit, answering with the members that pass and the whole check (diagrams, answer line) of each.
+ */
 export function useSize(state: FlowState) {
   const body = useDebounced(JSON.stringify(sizeRequest(state)), 250);
   return useSWR<SizeOutput, DesignRequestError>(["/api/size", body], ([url, b]: [string, string]) => postJson<SizeOutput>(url, b), SWR_OPTIONS);
-}
-
-/** The full check of each member (POST /api/check), in the order given. */
-export function useChecks(state: FlowState, specs: readonly MemberSpec[]) {
-  const body = useDebounced(JSON.stringify(specs.map((spec) => checkRequest(state, spec))), 250);
-  return useSWR<CheckOutput[], DesignRequestError>(
-    specs.length > 0 ? ["/api/check", body] : null,
-    ([url, b]: [string, string]) => Promise.all((JSON.parse(b) as unknown[]).map((one) => postJson<CheckOutput>(url, JSON.stringify(one)))),
-    SWR_OPTIONS,
-  );
 }

@@ -26,7 +26,7 @@ function fig(v: number): string {
 /** "1,210 of 1,476 psi, D+L, at 6' 0"" */
 export function checkDetail(c: Pick<DesignCheck, "demand" | "capacity" | "unit" | "combination" | "x">): string {
   const parts = [`${fig(c.demand)} of ${fig(c.capacity)} ${c.unit}`];
-  if (c.combination) parts.push(c.combination);
+  if (c.combination) parts.push(c.combination.name);
   if (c.x !== null) parts.push(`at ${formatFeetInches(c.x)}`);
   return parts.join(", ");
 }

@@ -1,58 +1,13 @@
 "use server";
 
-import { revalidatePath } from "next/cache";
-import type { ZodType } from "zod";
-import { authorizeAction, type ActionDenied } from "@/lib/auth/action";
-import type { SessionUser } from "@/lib/auth/roles";
-import { HttpError, zodIssues, type FieldIssue } from "@/lib/http";
+import { runAction, type ActionDenied, type ActionFailure, type ActionResult } from "@/lib/auth/action";
 import { jobIdSchema, jobInputSchema, memberIdSchema, saveMemberSchema, updateJobSchema, updateMemberSchema } from "@/lib/jobs/schemas";
 import * as jobs from "@/lib/jobs/service";
-import { logger } from "@/lib/logger";
 import { getPlanLimits } from "@/lib/payments/subscriptions";
 
-export type JobActionFailure = { ok: false; error: string; status: number; issues?: FieldIssue[]; upgrade?: string } | ActionDenied;
-export type JobResult = { ok: true; jobId: string } | JobActionFailure;
-export type MemberResult = { ok: true; jobId: string; memberId: string } | JobActionFailure;
-
-function failure(err: unknown, fallback: string): JobActionFailure {
-  if (err instanceof HttpError && err.status < 500) {
-    const details = (err.details ?? {}) as { issues?: FieldIssue[]; upgrade?: string };
-    return { ok: false, error: err.message, status: err.status, issues: details.issues, upgrade: details.upgrade };
-  }
-  logger.error({ err }, fallback);
-  return { ok: false, error: `${fallback} Try again in a minute.`, status: 500 };
-}
-
-function parse<T>(schema: ZodType<T>, input: unknown): { ok: true; data: T } | { ok: false; error: string; status: 400; issues: FieldIssue[] } {
-  const parsed = schema.safeParse(input);
-  if (parsed.success) return { ok: true, data: parsed.data };
-  const issues = zodIssues(parsed.error);
-  return { ok: false, error: issues.map((i) => i.message).join("; "), status: 400, issues };
-}
-
-interface JobActionSteps<T, R extends { jobId: string }> {
-  schema: ZodType<T>;
-  /** What the caller reads when something unexpected fails (the 500 case). */
-  failed: string;
-  /** The pages that show what the action changed, refreshed once it succeeds. */
-  refresh: (done: R) => string[];
-  run: (user: SessionUser, data: T) => Promise<R>;
-}
-
-/** The steps every action here shares: signed-in caller, parsed input, the work, refreshed pages, the answer's shape. */
-async function jobAction<T, R extends { jobId: string }>(input: unknown, steps: JobActionSteps<T, R>): Promise<({ ok: true } & R) | JobActionFailure> {
-  const auth = await authorizeAction();
-  if (!auth.ok) return auth;
-  const parsed = parse(steps.schema, input);
-  if (!parsed.ok) return parsed;
-  try {
-    const done = await steps.run(auth.user, parsed.data);
-    for (const page of steps.refresh(done)) revalidatePath(page);
-    return { ok: true, ...done };
-  } catch (err) {
-    return failure(err, steps.failed);
-  }
-}
+export type JobActionFailure = ActionFailure | ActionDenied;
+export type JobResult = ActionResult<{ jobId: string }>;
+export type MemberResult = ActionResult<{ jobId: string; memberId: string }>;
 
 const jobList = (): string[] => ["/jobs"];
 const jobListAndPage = (done: { jobId: string }): string[] => ["/jobs", `/jobs/${done.jobId}`];
@@ -60,7 +15,7 @@ const jobPage = (done: { jobId: string }): string[] => [`/jobs/${done.jobId}`];
 
 // createJob — a new job for the caller, signed-in account (free plan: up to its saved-jobs limit)
 export async function createJob(input: unknown): Promise<JobResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: jobInputSchema,
     failed: "The job could not be made.",
     refresh: jobList,
@@ -74,7 +29,7 @@ export async function createJob(input: unknown): Promise<JobResult> {
 
 // updateJob — rename a job, change its address or notes, owner of the job
 export async function updateJob(input: unknown): Promise<JobResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: updateJobSchema,
     failed: "The job could not be saved.",
     refresh: jobListAndPage,
@@ -87,7 +42,7 @@ export async function updateJob(input: unknown): Promise<JobResult> {
 
 // deleteJob — delete a job (Undo with restoreJob), owner of the job
 export async function deleteJob(input: unknown): Promise<JobResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: jobIdSchema,
     failed: "The job could not be deleted.",
     refresh: jobList,
@@ -100,7 +55,7 @@ export async function deleteJob(input: unknown): Promise<JobResult> {
 
 // restoreJob — undo a job's deletion, owner of the job
 export async function restoreJob(input: unknown): Promise<JobResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: jobIdSchema,
     failed: "The job could not be brought back.",
     refresh: jobList,
@@ -114,7 +69,7 @@ export async function restoreJob(input: unknown): Promise<JobResult> {
 
 // duplicateJob — copy a job with its members, owner of the job (free plan: counts as a new job)
 export async function duplicateJob(input: unknown): Promise<JobResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: jobIdSchema,
     failed: "The job could not be copied.",
     refresh: jobList,
@@ -128,7 +83,7 @@ export async function duplicateJob(input: unknown): Promise<JobResult> {
 
 // saveMember — save the sizing flow's answer to one of the caller's jobs (or a new one), signed-in account
 export async function saveMember(input: unknown): Promise<MemberResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: saveMemberSchema,
     failed: "The member could not be saved.",
     refresh: jobListAndPage,
@@ -142,7 +97,7 @@ export async function saveMember(input: unknown): Promise<MemberResult> {
 
 // updateMember — change a saved member (name, inputs, chosen member, what carries it), owner of its job
 export async function updateMember(input: unknown): Promise<MemberResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: updateMemberSchema,
     failed: "The member could not be saved.",
     refresh: jobPage,
@@ -155,7 +110,7 @@ export async function updateMember(input: unknown): Promise<MemberResult> {
 
 // deleteMember — delete a member (Undo with restoreMember), owner of its job
 export async function deleteMember(input: unknown): Promise<MemberResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: memberIdSchema,
     failed: "The member could not be deleted.",
     refresh: jobPage,
@@ -168,7 +123,7 @@ export async function deleteMember(input: unknown): Promise<MemberResult> {
 
 // restoreMember — undo a member's deletion, owner of its job
 export async function restoreMember(input: unknown): Promise<MemberResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: memberIdSchema,
     failed: "The member could not be brought back.",
     refresh: jobPage,
@@ -181,7 +136,7 @@ export async function restoreMember(input: unknown): Promise<MemberResult> {
 
 // duplicateMember — copy a member within its job, owner of its job
 export async function duplicateMember(input: unknown): Promise<MemberResult> {
-  return jobAction(input, {
+  return runAction(input, {
     schema: memberIdSchema,
     failed: "The member could not be copied.",
     refresh: jobPage,

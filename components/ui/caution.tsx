@@ -1,4 +1,4 @@
-import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "./caution-text";
+import { CAUTION, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
 import { WarningIcon } from "./icons";
 import { cx } from "./cx";
 
@@ -19,7 +19,7 @@ export function Caution({ variant = "short", className }: CautionProps) {
         <WarningIcon className="h-6 w-6 shrink-0" />
         <span>{CAUTION_TITLE}</span>
       </p>
-      <p className="mt-2">{CAUTION_TEXT}</p>
+      <p className="mt-2">{CAUTION}</p>
       {variant === "full" ? (
         <>
           <p className="mt-3 font-bold">Spanlark does not check:</p>

@@ -2,7 +2,6 @@ export { BottomActionBar, type BottomActionBarProps } from "./bottom-action-bar"
 export { Button, ButtonLink, buttonClasses, type ButtonLinkProps, type ButtonProps, type ButtonSize, type ButtonVariant } from "./button";
 export { Card, CardLink, type CardLinkProps, type CardProps } from "./card";
 export { Caution, type CautionProps } from "./caution";
-export { CAUTION_FULL_TEXT, CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "./caution-text";
 export { cx } from "./cx";
 export { Dialog, type DialogProps } from "./dialog";
 export { EmptyState, type EmptyStateProps } from "./empty-state";

@@ -1,7 +1,7 @@
 import { HttpError } from "@/lib/http";
-import type { Role } from "@/models/user";
+import { ROLES, type Role } from "./role-list";
 
-export type { Role };
+export { ROLES, type Role };
 
 /** The signed-in account as every route and action sees it; the role is read fresh per request. */
 export interface SessionUser {
@@ -13,7 +13,7 @@ export interface SessionUser {
 }
 
 /** Every role an account can hold: "any signed-in account" in requireRole(...SIGNED_IN). */
-export const SIGNED_IN: readonly Role[] = ["builder", "subscriber", "admin"];
+export const SIGNED_IN: readonly Role[] = ROLES;
 
 /** 401 without a session, 403 when the account's role is not among `roles` (no roles: any account). */
 export function assertRole(user: SessionUser | null, roles: readonly Role[]): SessionUser {

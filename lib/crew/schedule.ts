@@ -5,7 +5,7 @@
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
 import { basisWords, type MemberResultSummary } from "@/lib/flow/summary";
-import { formatLb, supportName } from "@/lib/sheets/format";
+import { checkWords, formatLb, supportName } from "@/lib/sheets/format";
 
 export interface ScheduleSupport {
   name: string;
@@ -62,7 +62,7 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
     memberLabel: s.memberLabel,
     span,
     supports,
-    verdict: { pass: s.pass, words: s.pass ? `OK ${pct}${s.governing ? `, ${s.governing.replace(/-/g, " ")} governs` : ""}` : `Over ${pct}: do not build this` },
+    verdict: { pass: s.pass, words: s.pass ? `OK ${pct}${s.governing ? `, ${checkWords(s.governing)} governs` : ""}` : `Over ${pct}: do not build this` },
     // answers saved before the basis was recorded were worked on ASCE 7-22
     facts: s.facts ?? [basisWords(s.loadStandard ?? "ASCE 7-22", true)],
   };

@@ -2,18 +2,21 @@
  * zod schemas of the flow's state, for the server (saving a member) and for reading a state back
  * from the URL or local storage. Limits follow the solver's (200 ft, 20 supports, 200 loads).
  */
+import { zodIssues, type FieldIssue } from "@/lib/zod-issues";
 import { z } from "zod";
-import { LOAD_CASES } from "@/lib/solver/types";
+import { EXPOSURE_CE, THERMAL_CT, type RoofExposure, type RoofThermal } from "@/lib/solver/asce7/snow";
 import { LOAD_STANDARDS } from "@/lib/solver/asce7/standard";
-import { WALL_FRAMINGS } from "@/lib/solver/design/kinds";
-import { MATERIAL_FAMILIES, MAX_LENGTH_FT, MEMBER_KINDS, type FlowState } from "./state";
+import { MEMBER_KINDS, WALL_FRAMINGS } from "@/lib/solver/design/kinds";
+import { LOAD_CASES, SUPPORT_TYPES } from "@/lib/solver/types";
+import { SAWN_GRADES, SPECIES } from "@/lib/tables/types";
+import { MATERIAL_FAMILIES, MAX_LENGTH_FT } from "./state";
 
-const SPECIES = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"] as const;
-const GRADES = ["Select Structural", "No.1", "No.2", "No.3"] as const;
+const EXPOSURES = Object.keys(EXPOSURE_CE) as [RoofExposure, ...RoofExposure[]];
+const THERMALS = Object.keys(THERMAL_CT) as [RoofThermal, ...RoofThermal[]];
 
 export { MAX_LENGTH_FT };
 const position = z.number().min(0, "must be 0 or more").max(MAX_LENGTH_FT, `must be ${MAX_LENGTH_FT} ft or less`);
-const loadCase = z.enum(LOAD_CASES as unknown as ["D", "L", "Lr", "S", "W"]);
+const loadCase = z.enum(LOAD_CASES);
 const label = z.string().trim().max(80, "must be 80 characters or fewer");
 const id = z.string().min(1).max(40);
 
@@ -23,7 +26,7 @@ export const flowStateSchema = z
     kind: z.enum(MEMBER_KINDS),
     lengthFt: z.number().gt(0, "must be more than 0").max(MAX_LENGTH_FT, `must be ${MAX_LENGTH_FT} ft or less`),
     supports: z
-      .array(z.object({ x: position, type: z.enum(["pin", "roller", "fixed"]) }))
+      .array(z.object({ x: position, type: z.enum(SUPPORT_TYPES) }))
       .min(1, "needs at least one support")
       .max(20, "can have at most 20 supports"),
     width: z.discriminatedUnion("mode", [
@@ -36,8 +39,8 @@ export const flowStateSchema = z
     snow: z.object({
       on: z.boolean(),
       groundPsf: z.number().min(0, "cannot be negative").max(500, "must be 500 psf or less"),
-      exposure: z.enum(["fully-exposed", "partially-exposed", "sheltered"]),
-      thermal: z.enum(["heated", "cold-ventilated", "unheated"]),
+      exposure: z.enum(EXPOSURES),
+      thermal: z.enum(THERMALS),
     }),
     pointLoads: z
       .array(z.object({ id, label, x: position, P: z.number().gt(0, "must be more than 0").max(1_000_000, "must be 1,000,000 lb or less"), case: loadCase }))
@@ -52,7 +55,7 @@ export const flowStateSchema = z
     material: z.object({
       family: z.enum(MATERIAL_FAMILIES),
       species: z.enum(SPECIES),
-      grade: z.enum(GRADES),
+      grade: z.enum(SAWN_GRADES),
       plies: z.number().int().min(0).max(4),
       product: z.string().max(80),
     }),
@@ -82,15 +85,17 @@ export const flowStateSchema = z
     });
   });
 
+/** Everything the user has told the flow: the whole input of a member (URL, local storage, a saved member's flowState). */
+export type FlowState = z.infer<typeof flowStateSchema>;
+
 /** Reads a state that came from outside (URL, storage, a saved member); null when it does not fit. */
 export function parseFlowState(value: unknown): FlowState | null {
   const parsed = flowStateSchema.safeParse(value);
-  return parsed.success ? (parsed.data as FlowState) : null;
+  return parsed.success ? parsed.data : null;
 }
 
 /** Field-by-field problems of a state, as "field: reason" lines (for the flow's warning and the server's 400). */
-export function flowStateIssues(value: unknown): { path: string; message: string }[] {
+export function flowStateIssues(value: unknown): FieldIssue[] {
   const parsed = flowStateSchema.safeParse(value);
-  if (parsed.success) return [];
-  return parsed.error.issues.map((i) => ({ path: i.path.join("."), message: i.message }));
+  return parsed.success ? [] : zodIssues(parsed.error);
 }

@@ -4,25 +4,13 @@
  * whole input of a member: it lives in the URL and local storage while the flow is open and is
  * saved as a member's `flowState` in a job. Pure: no React, no I/O.
  */
-import type { LoadCase, SupportType } from "@/lib/solver/types";
-import type { SawnGrade, Species } from "@/lib/tables/types";
-import type { RoofExposure, RoofThermal } from "@/lib/solver/asce7/snow";
-import type { LoadStandard } from "@/lib/solver/asce7/standard";
-import { MEMBER_KINDS, type MemberKind, type WallFraming } from "@/lib/solver/design/kinds";
+import type { FlowState } from "./schema";
+import type { WallFraming } from "@/lib/solver/design/kinds";
 
 /** The longest member the flow takes, ft (the solver's limit). */
 export const MAX_LENGTH_FT = 200;
 
-export { MEMBER_KINDS, type MemberKind };
-
-export const KIND_LABELS: Readonly<Record<MemberKind, string>> = {
-  "floor-joist": "Floor joist",
-  header: "Header",
-  beam: "Beam or girder",
-  "deck-joist": "Deck joist",
-  "deck-beam": "Deck beam",
-  rafter: "Rafter or ceiling joist",
-};
+export { KIND_LABELS, MEMBER_KINDS, type MemberKind } from "@/lib/solver/design/kinds";
 
 export const FLOW_STEPS = ["kind", "span", "loads", "material", "answer"] as const;
 export type FlowStepId = (typeof FLOW_STEPS)[number];
@@ -34,106 +22,26 @@ export const STEP_TITLES: Readonly<Record<FlowStepId, string>> = {
   answer: "Answer",
 };
 
-export interface FlowSupport {
-  /** ft from the member's left end */
-  x: number;
-  type: SupportType;
-}
-
+/**
+ * The state's parts, inferred from the schema (lib/flow/schema.ts) so the type and the check of what
+ * comes from outside cannot drift apart. Units: lengths and positions in ft, spacing and bearing in in,
+ * area loads in psf, line loads in plf, point loads in lb (downward), deflection limits as n of L/n.
+ */
+export type { FlowState } from "./schema";
+export type FlowSupport = FlowState["supports"][number];
 /** Joists share a floor by their spacing (in); beams and headers carry a tributary width (ft). */
-export type FlowWidth = { mode: "spacing"; spacingIn: number } | { mode: "tributary"; tributaryFt: number };
-
-export interface FlowAreaLoad {
-  id: string;
-  /** an occupancy preset id (lib/solver/asce7/loads OCCUPANCY_PRESETS) or "custom" */
-  preset: string;
-  label: string;
-  case: LoadCase;
-  psf: number;
-}
-
-/** Roof snow from ground snow by ASCE 7 Chapter 7's flat-roof path (the edition is FlowState.loadStandard), carried over the width. */
-export interface FlowSnow {
-  on: boolean;
-  /** ground snow load pg, psf */
-  groundPsf: number;
-  exposure: RoofExposure;
-  thermal: RoofThermal;
-}
-
-export interface FlowPointLoad {
-  id: string;
-  label: string;
-  /** ft from the left end */
-  x: number;
-  /** lb, downward */
-  P: number;
-  case: LoadCase;
-}
-
+export type FlowWidth = FlowState["width"];
+export type FlowAreaLoad = FlowState["areaLoads"][number];
+/** Roof snow from ground snow by ASCE 7 Chapter 7's flat-roof path, carried over the width. */
+export type FlowSnow = FlowState["snow"];
+export type FlowPointLoad = FlowState["pointLoads"][number];
 /** A uniform line load over all or part of the member (a wall on it, a partial load). */
-export interface FlowLineLoad {
-  id: string;
-  label: string;
-  from: number;
-  to: number;
-  /** plf, downward */
-  w: number;
-  case: LoadCase;
-}
+export type FlowLineLoad = FlowState["lineLoads"][number];
+export type FlowMaterial = FlowState["material"];
+export type FlowLimits = FlowState["limits"];
 
 export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "ijoist", "steel"] as const;
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
-
-export interface FlowMaterial {
-  family: MaterialFamily;
-  /** sawn and built-up */
-  species: Species;
-  grade: SawnGrade;
-  /** built-up: 2 to 4 plies, 0 = let the search pick */
-  plies: number;
-  /** engineered: a product name from the table, "" = any product; ijoist: a series such as "PRI-40", "" = any series */
-  product: string;
-}
-
-export interface FlowLimits {
-  /** live (or snow / roof live) deflection limit as the denominator n of L/n */
-  live: number;
-  /** total-load deflection limit, L/n */
-  total: number;
-}
-
-export interface FlowState {
-  version: 1;
-  kind: MemberKind;
-  /** the member's whole length, ft (span plus any overhangs) */
-  lengthFt: number;
-  supports: FlowSupport[];
-  width: FlowWidth;
-  areaLoads: FlowAreaLoad[];
-  snow: FlowSnow;
-  pointLoads: FlowPointLoad[];
-  lineLoads: FlowLineLoad[];
-  material: FlowMaterial;
-  /** bearing length at each support, in */
-  bearingIn: number;
-  limits: FlowLimits;
-  /** wet service (decks, exposed framing) */
-  wet: boolean;
-  /** joists at 24 in or less sharing the load (NDS repetitive member) */
-  repetitive: boolean;
-  /** unbraced length of the compression edge, ft; 0 = braced along its length by the floor or roof */
-  unbracedFt: number;
-  selfWeight: boolean;
-  /** which map the ground snow number comes from: ASCE 7-16 (2021 code or older, the default) or ASCE 7-22 */
-  loadStandard?: LoadStandard;
-  /** treated lumber incised; null or absent = Spanlark's default by species (fir and spruce yes, Southern Pine no) */
-  incised?: boolean | null;
-  /** the stud wall a header or beam sits in; "none" = not in a wall (absent: 2x4 for a header, none otherwise) */
-  wallFraming?: WallFraming | "none";
-  /** a header's rough opening, ft, when the builder gives it instead of the span (span = opening + half the bearing each end) */
-  roughOpeningFt?: number | null;
-}
 
 /** The wall a member of this state must fit, or null. */
 export function wallOf(state: Pick<FlowState, "kind" | "wallFraming">): WallFraming | null {

@@ -6,13 +6,15 @@
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import type { MemberSpec } from "@/lib/solver/design/schema";
-import { formatFeetInches, formatInches } from "./length";
+import type { SupportType } from "@/lib/solver/types";
+import { jackStudsApply } from "@/lib/solver/design/answer-line";
+import { formatFeetInches } from "./length";
 import { mainSpanFt, overhangs, spansFt, type FlowState } from "./state";
 
 export interface SummaryReaction {
   /** ft from the left end */
   x: number;
-  type: "pin" | "roller" | "fixed";
+  type: SupportType;
   /** largest downward reaction over the service combinations, lb */
   maxDown: number;
   maxDownCombination: string;
@@ -21,7 +23,7 @@ export interface SummaryReaction {
   /** bearing length given and needed, in */
   bearing: number;
   requiredBearing: number;
-  /** 1-1/2 in jack studs under this end (wood headers), null where it does not apply */
+  /** 1-1/2 in jack studs under this end (headers, beams in a stud wall), null where they do not apply */
   jackStuds: number | null;
 }
 
@@ -74,51 +76,7 @@ export function answerFacts(check: CheckOutput): string[] {
   return facts;
 }
 
-/**
- * "2 jack studs each end", "2 jack studs at support 1, 3 jack studs at support 2", or the bearing needed when no
- * studs apply; "each end" only for a member on two supports, "at each support" on three or more.
- */
-export function supportWords(reactions: readonly Pick<SummaryReaction, "jackStuds" | "requiredBearing">[]): string {
-  if (reactions.length === 0) return "";
-  const where = reactions.length === 2 ? "each end" : reactions.length === 1 ? "at the support" : "at each support";
-  const studs = reactions.map((r) => r.jackStuds);
-  if (studs.every((s) => s !== null)) {
-    const counts = studs as number[];
-    if (counts.every((c) => c === counts[0])) return `${counts[0]} jack stud${counts[0] === 1 ? "" : "s"} ${where}`;
-    return counts.map((c, i) => `${c} jack stud${c === 1 ? "" : "s"} at support ${i + 1}`).join(", ");
-  }
-  // never less than 1-1/2 in: the least bearing IRC 2021 R502.6 allows for joists and beams on wood or metal
-  const need = Math.max(1.5, ...reactions.map((r) => r.requiredBearing));
-  return `${formatInches(need)} bearing ${where}`;
-}
-
-/** The member as a builder says it: "3-ply 2x12 No.2", "W8x18", "1-3/4 x 11-7/8 LVL 2.0E". */
-export function shortLabel(spec: MemberSpec, fullLabel: string): string {
-  if (spec.material === "sawn") return `${spec.plies > 1 ? `${spec.plies}-ply ` : ""}${spec.size} ${spec.grade}`;
-  if (spec.material === "steel") return spec.shape;
-  if (spec.material === "ijoist") {
-    // "PRI-40 11-7/8" → "11-7/8 in PRI-40", as a framer orders it
-    const [series, ...depth] = spec.joist.split(" ");
-    return `${depth.length > 0 ? `${depth.join(" ")} in ` : ""}${series}${spec.stiffeners ? " with web stiffeners" : ""}`;
-  }
-  return fullLabel;
-}
-
-/**
- * The answer line from a member and what its supports need; joists and rafters carry their spacing
- * ("2x10 No.2 at 16 in o.c. — 1-1/2" bearing each end").
- */
-export function headlineFor(
-  spec: MemberSpec,
-  fullLabel: string,
-  reactions: readonly Pick<SummaryReaction, "jackStuds" | "requiredBearing">[],
-  kind: FlowState["kind"],
-  spacingIn?: number,
-): string {
-  const words = supportWords(reactions.map((r) => ({ ...r, jackStuds: kind === "header" ? r.jackStuds : null })));
-  const name = `${shortLabel(spec, fullLabel)}${spacingIn !== undefined ? ` at ${Math.round(spacingIn * 100) / 100} in o.c.` : ""}`;
-  return words ? `${name} — ${words}` : name;
-}
+export { shortLabel } from "@/lib/solver/design/answer-line";
 
 /** The spacing to name in the answer line, when the member is one of many at a spacing. */
 export function spacingOf(state: Pick<FlowState, "width">): number | undefined {
@@ -134,16 +92,16 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     uplift: r.uplift,
     bearing: r.bearing,
     requiredBearing: r.requiredBearing,
-    jackStuds: state.kind === "header" ? r.jackStuds : null,
+    jackStuds: jackStudsApply(state.kind, spacingOf(state)) ? r.jackStuds : null,
   }));
   return {
     memberLabel: check.member.label,
-    headline: headlineFor(check.member.spec, check.member.label, reactions, state.kind, spacingOf(state)),
+    headline: check.answer,
     spec: check.member.spec,
     pass: check.pass,
     governing: check.governing,
     ratio: check.ratio,
-    checks: check.checks.map((c) => ({ name: c.name, ratio: c.ratio, demand: c.demand, capacity: c.capacity, unit: c.unit, combination: c.combination })),
+    checks: check.checks.map((c) => ({ name: c.name, ratio: c.ratio, demand: c.demand, capacity: c.capacity, unit: c.unit, combination: c.combination?.name ?? null })),
     reactions,
     spanFt: mainSpanFt(state),
     lengthFt: state.lengthFt,

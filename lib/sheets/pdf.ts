@@ -1,7 +1,7 @@
 import "server-only";
 import PDFDocument from "pdfkit";
-import { diagramChain, valueRange, type BezierChain } from "@/components/diagrams/geometry";
-import { INK } from "@/components/diagrams/palette";
+import { diagramChain, valueRange, type BezierChain } from "@/lib/diagrams/geometry";
+import { INK } from "@/lib/diagrams/palette";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { FROM_MEMORY } from "@/lib/tables/citations";
 import { sheetSources, type SheetDiagram, type SheetMember, type SheetSnapshot } from "./snapshot";

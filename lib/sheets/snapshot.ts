@@ -3,14 +3,16 @@
  * Reprinting (the page, the PDF) reads only this: no solver, no tables, no member rows. So a sheet prints
  * the same numbers after the tables are edited or the member is changed. Pure: no database, no React.
  */
-import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/caution-text";
+import { CAUTION, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { checkRequest, combinationFactors, diagramBeam } from "@/lib/flow/request";
+import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
 import { answerFacts, headlineFor, spacingOf } from "@/lib/flow/summary";
-import { EXPOSURE_WORDS, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
+import { jackStudsApply } from "@/lib/solver/design/answer-line";
+import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
 import { LOAD_STANDARD_WORDS } from "@/lib/solver/asce7/standard";
-import { analyzeBeam, type Segment } from "@/lib/solver/beam";
+import type { Segment } from "@/lib/solver/beam";
+import type { SupportType } from "@/lib/solver/types";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { DesignCheck, SupportReaction } from "@/lib/solver/design/types";
@@ -35,6 +37,8 @@ export interface SheetDiagram {
   extremes: SheetExtreme[];
 }
 
+export type SheetCheck = Omit<DesignCheck, "combination"> & { combination: string | null };
+
 export interface SheetMember {
   id: string;
   label: string;
@@ -48,13 +52,14 @@ export interface SheetMember {
   ratio: number;
   spanFt: number;
   lengthFt: number;
-  supports: { x: number; type: "pin" | "roller" | "fixed" }[];
+  supports: { x: number; type: SupportType }[];
   /** the inputs in words, in order: [what, value] */
   inputs: [string, string][];
   /** the inputs as the flow holds them (for reference; never recomputed) */
   flowState: FlowState;
   loads: CheckOutput["loads"];
-  checks: DesignCheck[];
+  /** the checks, each combination by its name */
+  checks: SheetCheck[];
   reactions: SupportReaction[];
   /** adjustment factors and design values, [symbol, value] */
   factors: [string, string][];
@@ -114,10 +119,6 @@ export interface SheetSource {
   now: Date;
 }
 
-const round = (v: number, digits = 4) => {
-  const f = 10 ** digits;
-  return Math.round(v * f) / f;
-};
 
 function fmtNumber(v: number): string {
   if (!Number.isFinite(v)) return "—";
@@ -160,7 +161,9 @@ function inputRows(state: FlowState): [string, string][] {
   ];
   for (const a of state.areaLoads) if (a.psf > 0) rows.push([`Area load (${a.case})`, `${a.label || a.preset}: ${fmtNumber(a.psf)} psf`]);
   if (state.snow.on && state.snow.groundPsf > 0) {
-    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf, ${EXPOSURE_WORDS[state.snow.exposure]}, ${THERMAL_WORDS[state.snow.thermal]}`]);
+    const exposure = EXPOSURE_WORDS[state.snow.exposure].toLowerCase();
+    const heat = THERMAL_WORDS[state.snow.thermal].toLowerCase();
+    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf; roof ${exposure} (Ce ${EXPOSURE_CE[state.snow.exposure]}); building ${heat} (Ct ${THERMAL_CT[state.snow.thermal]})`]);
   }
   if (state.snow.on || [...state.pointLoads, ...state.lineLoads, ...state.areaLoads].some((l) => l.case === "S")) {
     rows.push(["Ground snow map", LOAD_STANDARD_WORDS[state.loadStandard ?? "ASCE 7-16"]]);
@@ -234,55 +237,16 @@ export function factorRows(factors: object): [string, string][] {
   return rows;
 }
 
-function strengthCombination(check: CheckOutput): string | null {
-  const order = ["bending", "shear", "stability"];
-  for (const name of order) {
-    const c = check.checks.find((k) => k.name === name && k.combination);
-    if (c?.combination) return c.combination;
-  }
-  return check.checks.find((k) => k.combination && !k.name.startsWith("deflection"))?.combination ?? null;
-}
-
-function diagramsFor(state: FlowState, check: CheckOutput): SheetDiagram[] {
-  const beam = diagramBeam(state, check);
-  const diagrams: SheetDiagram[] = [];
-  const strength = strengthCombination(check);
-  const strengthFactors = strength ? combinationFactors(strength) : null;
-  if (strength && strengthFactors) {
-    const a = analyzeBeam(beam, strengthFactors);
-    const e = a.extremes;
-    diagrams.push({
-      quantity: "V",
-      title: "Shear",
-      unit: "lb",
-      combination: strength,
-      segments: a.segments,
-      extremes: [{ x: e.Vabs.x, value: e.Vabs.value, label: "largest" }],
-    });
-    const m: SheetExtreme[] = [{ x: e.Mpos.x, value: e.Mpos.value, label: "largest" }];
-    if (e.Mneg.value < -1e-6) m.push({ x: e.Mneg.x, value: e.Mneg.value, label: "hogging" });
-    diagrams.push({ quantity: "M", title: "Moment", unit: "lb-ft", combination: strength, segments: a.segments, extremes: m });
-  }
-  const total = check.checks.find((c) => c.name === "deflection-total" && c.combination)?.combination ?? null;
-  const totalFactors = total ? combinationFactors(total) : null;
-  if (total && totalFactors) {
-    const a = analyzeBeam(beam, totalFactors);
-    const e = a.extremes;
-    const d: SheetExtreme[] = [{ x: e.deflDown.x, value: e.deflDown.value, label: "down" }];
-    if (e.deflUp.value < -1e-6) d.push({ x: e.deflUp.x, value: e.deflUp.value, label: "up" });
-    diagrams.push({ quantity: "deflection", title: "Deflection", unit: "in", combination: total, segments: a.segments, extremes: d });
-  }
-  return diagrams;
-}
-
-function roundSegments(diagrams: SheetDiagram[]): SheetDiagram[] {
-  // Coefficients keep 12 significant figures: far below what a drawing or a label can show, and the JSON stays small.
-  const sig = (v: number) => (v === 0 ? 0 : Number(v.toPrecision(12)));
-  return diagrams.map((d) => ({
-    ...d,
-    segments: d.segments.map((s) => ({ x0: s.x0, x1: s.x1, V: s.V.map(sig), M: s.M.map(sig), slope: s.slope.map(sig), deflection: s.deflection.map(sig) })),
-    extremes: d.extremes.map((x) => ({ ...x, x: round(x.x, 6), value: round(x.value, 6) })),
-  }));
+/** The diagrams the check carries, as the sheet keeps them: shear and moment under the strength combination, deflection under the service one. */
+function diagramsFor(check: CheckOutput): SheetDiagram[] {
+  const d = check.diagrams;
+  if (!d) return [];
+  const strength = d.strength.combination.name;
+  return [
+    { quantity: "V", title: "Shear", unit: "lb", combination: strength, segments: d.strength.segments, extremes: d.strength.shear },
+    { quantity: "M", title: "Moment", unit: "lb-ft", combination: strength, segments: d.strength.segments, extremes: d.strength.moment },
+    { quantity: "deflection", title: "Deflection", unit: "in", combination: d.service.combination.name, segments: d.service.segments, extremes: d.service.deflection },
+  ];
 }
 
 /**
@@ -297,8 +261,9 @@ export function sheetSources(snapshot: Pick<SheetSnapshot, "members">): { source
 export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables: MaterialTables): SheetMember {
   const state = source.flowState;
   const check = checkMember(checkRequest(state, spec), tables);
-  const reactions = check.reactions.map((r) => ({ ...r, jackStuds: state.kind === "header" ? r.jackStuds : null }));
-  const headline = headlineFor(check.member.spec, check.member.label, reactions, state.kind, spacingOf(state));
+  const studs = jackStudsApply(state.kind, spacingOf(state));
+  const reactions = check.reactions.map((r) => ({ ...r, jackStuds: studs ? r.jackStuds : null }));
+  const headline = check.answer;
   const saved = source.savedAnswer;
   const changed = saved && (saved.headline !== headline || Math.abs(saved.ratio - check.ratio) > 0.005);
   const note = changed
@@ -320,13 +285,13 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
     inputs: inputRows(state),
     flowState: state,
     loads: check.loads,
-    checks: check.checks,
+    checks: check.checks.map((c) => ({ ...c, combination: c.combination?.name ?? null })),
     reactions,
     factors: factorRows(check.factors),
     limits: check.limits,
     assumptions: check.assumptions,
     facts: answerFacts(check),
-    diagrams: roundSegments(diagramsFor(state, check)),
+    diagrams: diagramsFor(check),
     note,
     sources: check.member.sources,
   };
@@ -357,6 +322,6 @@ export function buildSheetSnapshot(source: SheetSource): SheetSnapshot {
     method: "asd",
     members,
     skipped,
-    caution: { title: CAUTION_TITLE, text: CAUTION_TEXT, notChecked: [...NOT_CHECKED] },
+    caution: { title: CAUTION_TITLE, text: CAUTION, notChecked: [...NOT_CHECKED] },
   };
 }

@@ -6,4 +6,4 @@ export * from "./types";
 export * from "./beam";
 export { asdCombinations, lrfdCombinations } from "./asce7/combinations";
 export { envelope, type Envelope, type EnvelopeRun, type EnvelopeReaction, type EnvelopeOptions, type RunExtreme } from "./envelope";
-export { beamInputSchema, issuesOf, type BeamInputParsed } from "./schema";
+export { beamInputSchema, type BeamInputParsed } from "./schema";

@@ -4,8 +4,7 @@
  */
 import { z } from "zod";
 import { geometryIssues, LIMITS } from "./beam/checks";
-import type { BeamInput, LoadCase } from "./types";
-import { LOAD_CASES } from "./types";
+import { eitherMessage, LOAD_CASES, oneOfMessage, SUPPORT_TYPES, type BeamInput } from "./types";
 
 function num(unit: string) {
   return z.number({
@@ -13,13 +12,11 @@ function num(unit: string) {
   });
 }
 
-const loadCase = z.enum(["D", "L", "Lr", "S", "W"] satisfies LoadCase[], {
-  error: `must be one of ${LOAD_CASES.map((c) => `"${c}"`).join(", ")}`,
-});
+const loadCase = z.enum(LOAD_CASES, { error: oneOfMessage(LOAD_CASES) });
 
 const supportSchema = z.object({
   x: num("ft"),
-  type: z.enum(["pin", "roller", "fixed"], { error: 'must be "pin", "roller" or "fixed"' }),
+  type: z.enum(SUPPORT_TYPES, { error: eitherMessage(SUPPORT_TYPES) }),
 });
 
 const pointLoad = z.object({ type: z.literal("point"), x: num("ft"), P: num("lb"), case: loadCase.optional() });
@@ -70,7 +67,3 @@ export const beamInputSchema = z
 
 export type BeamInputParsed = z.infer<typeof beamInputSchema>;
 
-/** Field-level issues as `{ path: "supports.1.x", message }`. */
-export function issuesOf(error: z.ZodError): { path: string; message: string }[] {
-  return error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }));
-}

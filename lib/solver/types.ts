@@ -6,11 +6,24 @@
  * slope in radians. Sign convention: see lib/solver/beam/index.ts (stated once there).
  */
 
-export type SupportType = "pin" | "roller" | "fixed";
+/** Support types and load cases: one list each, every schema and type built from them. */
+export const SUPPORT_TYPES = ["pin", "roller", "fixed"] as const;
+export type SupportType = (typeof SUPPORT_TYPES)[number];
 
 /** Load cases as ASCE 7 names them. */
-export type LoadCase = "D" | "L" | "Lr" | "S" | "W";
-export const LOAD_CASES: readonly LoadCase[] = ["D", "L", "Lr", "S", "W"] as const;
+export const LOAD_CASES = ["D", "L", "Lr", "S", "W"] as const;
+export type LoadCase = (typeof LOAD_CASES)[number];
+
+/** "must be one of "D", "L", "Lr", "S", "W"": the message every schema gives for a word not on its list. */
+export function oneOfMessage(list: readonly string[]): string {
+  return `must be one of ${list.map((w) => `"${w}"`).join(", ")}`;
+}
+
+/** "must be "pin", "roller" or "fixed"". */
+export function eitherMessage(list: readonly string[]): string {
+  const q = list.map((w) => `"${w}"`);
+  return `must be ${q.slice(0, -1).join(", ")} or ${q[q.length - 1]}`;
+}
 
 export interface Support {
   /** position along the member, ft from the left end */

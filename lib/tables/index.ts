@@ -26,8 +26,7 @@ export { depthSizeFactor, eminFromE, ENGINEERED, glulamVolumeFactorCV, SUPPLIER_
 export { STEEL_GRADES, W_SHAPES } from "./steel";
 export { depthWords, I_JOISTS } from "./i-joists";
 
-export const SPECIES: readonly Species[] = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"];
-export const SAWN_GRADES: readonly SawnGrade[] = ["Select Structural", "No.1", "No.2", "No.3"];
+export { SAWN_GRADES, SPECIES } from "./types";
 export const SAWN_SIZE_CLASSES: readonly SawnSizeClass[] = ["dimension", "beams-stringers"];
 
 /** A member as the design input names it; extra fields (plies, grade of steel) are ignored. */

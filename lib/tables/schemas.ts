@@ -1,14 +1,13 @@
 import { z } from "zod";
+import { SAWN_GRADES, SPECIES } from "./types";
 import type {
   EngineeredKind,
   EngineeredProduct,
   IJoist,
   SawnDesignValues,
-  SawnGrade,
   SawnSize,
   SawnSizeClass,
   SizeFactorRow,
-  Species,
   SteelGrade,
   StockLengthRow,
   WShape,
@@ -75,8 +74,8 @@ export interface FieldSpec {
 /** A row as text, one string per column (a CSV record or the edit form's values). */
 export type FlatRow = Record<string, string>;
 
-export const SPECIES_CHOICES = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"] as const satisfies readonly Species[];
-export const GRADE_CHOICES = ["Select Structural", "No.1", "No.2", "No.3"] as const satisfies readonly SawnGrade[];
+export const SPECIES_CHOICES = SPECIES;
+export const GRADE_CHOICES = SAWN_GRADES;
 export const SIZE_CLASS_CHOICES = ["dimension", "beams-stringers"] as const satisfies readonly SawnSizeClass[];
 export const ENGINEERED_KIND_CHOICES = ["LVL", "PSL", "glulam"] as const satisfies readonly EngineeredKind[];
 export const SIZE_FACTOR_TABLE_CHOICES = ["4A", "4B", "4D"] as const satisfies readonly SizeFactorRow["table"][];

@@ -6,8 +6,11 @@
  * in^2, in^3, in^4, in^6, psi, ksi for steel strengths, lb/ft for weights, lb/ft^3 for densities.
  */
 
-export type Species = "Douglas Fir-Larch" | "Hem-Fir" | "Spruce-Pine-Fir" | "Southern Pine";
-export type SawnGrade = "Select Structural" | "No.1" | "No.2" | "No.3";
+/** Species and grades of sawn lumber: one list each, every schema, choice and type built from them. */
+export const SPECIES = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"] as const;
+export type Species = (typeof SPECIES)[number];
+export const SAWN_GRADES = ["Select Structural", "No.1", "No.2", "No.3"] as const;
+export type SawnGrade = (typeof SAWN_GRADES)[number];
 export type SawnSizeClass = "dimension" | "beams-stringers";
 
 /** A dressed (surfaced dry) sawn size, e.g. 2x10 = 1.5 x 9.25 in. */

@@ -9,32 +9,32 @@ import { asdCombinations } from "../../lib/solver/asce7/combinations";
 // An invented header: 10 ft opening under a roof with snow and a floor above.
 const headerCheck = {
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x12", plies: 3 },
-  length: 10,
+  lengthFt: 10,
   supports: [
     { x: 0, type: "pin" },
     { x: 10, type: "roller" },
   ],
   loads: [
-    { type: "area", case: "D", psf: 15, tributary: 12 },
-    { type: "snow", pg: 30, tributary: 12 },
-    { type: "area", case: "D", psf: 10, tributary: 6 },
-    { type: "area", case: "L", psf: 40, tributary: 6 },
+    { type: "area", case: "D", psf: 15, tributaryFt: 12 },
+    { type: "snow", pg: 30, tributaryFt: 12 },
+    { type: "area", case: "D", psf: 10, tributaryFt: 6 },
+    { type: "area", case: "L", psf: 40, tributaryFt: 6 },
     { type: "point", case: "D", x: 4, P: 400 },
   ],
-  bearing: 3,
+  bearingIn: 3,
 };
 
 // Joists continuous over three 12 ft spans (an invented floor), live load patterned span by span.
 const threeSpanSize = {
   member: { material: "any" },
-  length: 36,
+  lengthFt: 36,
   supports: [
     { x: 0, type: "pin" },
     { x: 12, type: "roller" },
     { x: 24, type: "roller" },
     { x: 36, type: "roller" },
   ],
-  tributary: 1.33,
+  tributaryFt: 1.33,
   loads: [
     { type: "area", case: "L", psf: 40 },
     { type: "area", case: "D", psf: 10 },
@@ -44,18 +44,18 @@ const threeSpanSize = {
 
 const spanSearch = {
   member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10" },
-  length: 14,
+  lengthFt: 14,
   supports: [
     { x: 0, type: "pin" },
     { x: 14, type: "roller" },
   ],
-  spacing: 16,
+  spacingIn: 16,
   loads: [
     { type: "area", case: "L", psf: 40 },
     { type: "area", case: "D", psf: 10 },
   ],
   conditions: { repetitive: true, selfWeight: false },
-  maxLength: 30,
+  maxLengthFt: 30,
 };
 
 function median(v: number[]): number {

@@ -2,22 +2,22 @@ import { describe, expect, test } from "vitest";
 import { POST } from "@/app/api/check/route";
 
 const post = (body: unknown) =>
-  POST(new Request("http://localhost/api/check", { method: "POST", headers: { "content-type": "application/json" }, body: typeof body === "string" ? body : JSON.stringify(body) }));
+  POST(new Request("http://localhost/api/check", { method: "POST", headers: { "content-type": "application/json" }, body: typeof body === "string" ? body : JSON.stringify(body) }), { params: Promise.resolve({}) });
 
 const joist = {
   member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10", plies: 1 },
-  length: 13,
+  lengthFt: 13,
   supports: [
     { x: 0, type: "pin" },
     { x: 13, type: "roller" },
   ],
-  spacing: 16,
+  spacingIn: 16,
   loads: [
     { type: "area", case: "L", psf: 40 },
     { type: "area", case: "D", psf: 10 },
   ],
-  bearing: 1.5,
-  conditions: { wet: false, incised: false, repetitive: true, unbracedLength: 0, selfWeight: true },
+  bearingIn: 1.5,
+  conditions: { wet: false, incised: false, repetitive: true, unbracedLengthFt: 0, selfWeight: true },
   limits: { live: 360, total: 240 },
   method: "asd",
 };
@@ -40,10 +40,10 @@ describe("POST /api/check", () => {
   });
 
   test.each([
-    ["engineered", { ...joist, member: { material: "engineered", product: "LVL 1.9E", width: 1.75, depth: 11.875, plies: 2 }, spacing: undefined, tributary: 6 }],
-    ["steel", { ...joist, member: { material: "steel", shape: "W8x18", grade: "A992" }, spacing: undefined, tributary: 6, length: 16, supports: [{ x: 0, type: "pin" }, { x: 16, type: "roller" }] }],
-    ["built-up", { ...joist, member: { ...joist.member, plies: 3 }, spacing: undefined, tributary: 6 }],
-    ["steel LRFD", { ...joist, member: { material: "steel", shape: "W10x22" }, spacing: undefined, tributary: 6, method: "lrfd" }],
+    ["engineered", { ...joist, member: { material: "engineered", product: "LVL 1.9E", width: 1.75, depth: 11.875, plies: 2 }, spacingIn: undefined, tributaryFt: 6 }],
+    ["steel", { ...joist, member: { material: "steel", shape: "W8x18", grade: "A992" }, spacingIn: undefined, tributaryFt: 6, lengthFt: 16, supports: [{ x: 0, type: "pin" }, { x: 16, type: "roller" }] }],
+    ["built-up", { ...joist, member: { ...joist.member, plies: 3 }, spacingIn: undefined, tributaryFt: 6 }],
+    ["steel LRFD", { ...joist, member: { material: "steel", shape: "W10x22" }, spacingIn: undefined, tributaryFt: 6, method: "lrfd" }],
   ])("answers for a %s member", async (_label, input) => {
     const res = await post(input);
     expect(res.status).toBe(200);
@@ -82,8 +82,8 @@ describe("POST /api/check", () => {
 
   test("400 for a body that is not JSON, and for a bearing of 0", async () => {
     expect((await post("{nope")).status).toBe(400);
-    const res = await post({ ...joist, bearing: 0 });
+    const res = await post({ ...joist, bearingIn: 0 });
     expect(res.status).toBe(400);
-    expect((await res.json()).issues[0].path).toBe("bearing");
+    expect((await res.json()).issues[0].path).toBe("bearingIn");
   });
 });

@@ -2,21 +2,21 @@ import { describe, expect, test } from "vitest";
 import { POST } from "@/app/api/size/route";
 
 const post = (body: unknown, query = "") =>
-  POST(new Request(`http://localhost/api/size${query}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }));
+  POST(new Request(`http://localhost/api/size${query}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }), { params: Promise.resolve({}) });
 
 const header = {
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" },
-  length: 8,
+  lengthFt: 8,
   supports: [
     { x: 0, type: "pin" },
     { x: 8, type: "roller" },
   ],
-  tributary: 6,
+  tributaryFt: 6,
   loads: [
     { type: "area", case: "D", psf: 15 },
     { type: "area", case: "L", psf: 40 },
   ],
-  bearing: 3,
+  bearingIn: 3,
 };
 
 describe("POST /api/size", () => {
@@ -51,10 +51,10 @@ describe("POST /api/size", () => {
   });
 
   test("400 for bad input, naming the field", async () => {
-    const res = await post({ ...header, spacing: 16 });
+    const res = await post({ ...header, spacingIn: 16 });
     expect(res.status).toBe(400);
     const body = await res.json();
-    expect(body.issues.map((i: { path: string }) => i.path)).toContain("tributary");
+    expect(body.issues.map((i: { path: string }) => i.path)).toContain("tributaryFt");
     expect((await post(header, "?find=everything")).status).toBe(400);
   });
 });

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { SMTPServer } from "smtp-server";
 import type { AddressInfo } from "node:net";
-import { CAUTION_TEXT } from "@/components/ui/caution-text";
+import { CAUTION as CAUTION_TEXT } from "@/lib/caution";
 import { accountExistsMail } from "@/lib/mail/templates/account-exists";
 import { jobSharedMail } from "@/lib/mail/templates/job-shared";
 import { paymentReceiptMail } from "@/lib/mail/templates/payment-receipt";

@@ -5,7 +5,7 @@ import { readdirSync, statSync } from "node:fs";
 import path from "node:path";
 import { renderToStaticMarkup } from "react-dom/server";
 import { beforeEach, describe, expect, test, vi } from "vitest";
-import { CAUTION_TEXT } from "@/components/ui/caution-text";
+import { CAUTION as CAUTION_TEXT } from "@/lib/caution";
 import { ACCESS_TABLE } from "../api/access-table";
 import { TEST_DB, makeAccount, makeJob } from "./fixtures";
 import { who } from "../support/session-mock";

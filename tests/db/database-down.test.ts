@@ -37,12 +37,12 @@ const holder = globalThis as unknown as { spanlarkSequelize?: ReturnType<typeof 
 
 const joist = {
   member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10", plies: 1 },
-  length: 13,
+  lengthFt: 13,
   supports: [
     { x: 0, type: "pin" },
     { x: 13, type: "roller" },
   ],
-  spacing: 16,
+  spacingIn: 16,
   loads: [
     { type: "area", case: "L", psf: 40 },
     { type: "area", case: "D", psf: 10 },
@@ -116,10 +116,10 @@ describe.skipIf(!TEST_DB)("database down under a running app, then back", () => 
   test("sizing and checking answer from the cached tables; what needs the database answers 503 with words; then it recovers", async () => {
     goDown();
     try {
-      const check = await checkRoute.POST(post("http://localhost/api/check", joist));
+      const check = await checkRoute.POST(post("http://localhost/api/check", joist), { params: Promise.resolve({}) });
       expect(check.status).toBe(200);
       expect((await check.json()).tables).toBe(version); // the version cached before the database went
-      const size = await sizeRoute.POST(post("http://localhost/api/size", { ...joist, member: { material: "sawn" } }));
+      const size = await sizeRoute.POST(post("http://localhost/api/size", { ...joist, member: { material: "sawn" } }), { params: Promise.resolve({}) });
       expect(size.status).toBe(200);
 
       const admin = await tablesRoute.GET(new Request("http://localhost/api/admin/tables"), { params: Promise.resolve({}) } as never);
@@ -173,7 +173,7 @@ describe.skipIf(!TEST_DB)("database down under a running app, then back", () => 
     resetTablesCache();
     goDown();
     try {
-      const res = await checkRoute.POST(post("http://localhost/api/check", joist));
+      const res = await checkRoute.POST(post("http://localhost/api/check", joist), { params: Promise.resolve({}) });
       expect(res.status).toBe(503);
       expect((await res.json()).error).toBe(DATABASE_DOWN_MESSAGE);
     } finally {

@@ -20,18 +20,18 @@ async function checkSpfNo3(page: Page): Promise<{ tables: string; bending: numbe
   const res = await page.request.post("/api/check", {
     data: {
       member: { material: "sawn", species: "Spruce-Pine-Fir", grade: "No.3", size: "2x10", plies: 1 },
-      length: 12,
+      lengthFt: 12,
       supports: [
         { x: 0, type: "pin" },
         { x: 12, type: "roller" },
       ],
-      spacing: 16,
+      spacingIn: 16,
       loads: [
         { type: "area", case: "L", psf: 40 },
         { type: "area", case: "D", psf: 10 },
       ],
-      bearing: 1.5,
-      conditions: { wet: false, incised: false, repetitive: true, unbracedLength: 0, selfWeight: true },
+      bearingIn: 1.5,
+      conditions: { wet: false, incised: false, repetitive: true, unbracedLengthFt: 0, selfWeight: true },
       limits: { live: 360, total: 240 },
       method: "asd",
     },

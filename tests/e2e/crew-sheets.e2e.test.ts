@@ -8,7 +8,7 @@ import { readFile, writeFile } from "node:fs/promises";
 import path from "node:path";
 import { randomUUID } from "node:crypto";
 import { describe, expect, test } from "vitest";
-import { CAUTION_TEXT } from "@/components/ui/caution-text";
+import { CAUTION as CAUTION_TEXT } from "@/lib/caution";
 import { ARTIFACTS_DIR, baseUrl, setupBrowser } from "./support/browser";
 import { signIn, waitForMail } from "./support/payments";
 import { hasPdftotext, isPdf, pdfStreamText } from "../sheets/pdf-text";

@@ -1,7 +1,7 @@
 // Smoke test (issue 2): the home page renders on a phone and a desktop with no console errors and shows the
 // safety caution; the health route reports the database up.
 import { describe, expect, test } from "vitest";
-import { CAUTION_TEXT } from "@/components/ui/caution-text";
+import { CAUTION as CAUTION_TEXT } from "@/lib/caution";
 import { baseUrl, setupBrowser } from "./support/browser";
 
 const session = setupBrowser();

@@ -83,7 +83,7 @@ describe("routes refuse a body over their cap with a JSON 413", () => {
     ["size", sizePost, "http://localhost/api/size"],
   ])("/api/%s, 100 MB chunked", async (_name, post, url) => {
     const { stream, pulled } = meteredBody(HUNDRED_MB);
-    const res = await post(streamingRequest(url, stream));
+    const res = await post(streamingRequest(url, stream), { params: Promise.resolve({}) });
     expect(res.status).toBe(413);
     expect(res.headers.get("content-type")).toMatch(/application\/json/);
     const body = await res.json();
@@ -115,7 +115,7 @@ describe("routes refuse a body over their cap with a JSON 413", () => {
     };
     const text = JSON.stringify(body);
     expect(new TextEncoder().encode(text).byteLength).toBeLessThan(BODY_LIMITS.engine);
-    const res = await solvePost(new Request("http://localhost/api/solve", { method: "POST", headers: { "content-type": "application/json" }, body: text }));
+    const res = await solvePost(new Request("http://localhost/api/solve", { method: "POST", headers: { "content-type": "application/json" }, body: text }), { params: Promise.resolve({}) });
     expect(res.status).toBe(200);
   });
 });

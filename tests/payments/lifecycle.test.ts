@@ -1,6 +1,6 @@
 import type Stripe from "stripe";
 import { afterAll, beforeAll, beforeEach, describe, expect, test, vi } from "vitest";
-import type { StandinServer } from "@/lib/payments/standin/server";
+import type { StandinServer } from "@/scripts/stripe-standin/server";
 import { TEST_DB, outbox, pay, sendMailMock, startReceiver, startTestStandin, stripeFor, uniqueEmail, type Receiver } from "./support";
 
 vi.mock("@/lib/mail", () => ({ sendMail: sendMailMock }));

@@ -5,8 +5,8 @@ import Stripe from "stripe";
 import { vi } from "vitest";
 import type { MailMessage } from "@/lib/mail";
 import { createStripeClient } from "@/lib/payments/client";
-import { startStandinServer, type StandinServer } from "@/lib/payments/standin/server";
-import { signatureHeader } from "@/lib/payments/standin/webhooks";
+import { startStandinServer, type StandinServer } from "@/scripts/stripe-standin/server";
+import { signatureHeader } from "@/scripts/stripe-standin/webhooks";
 
 /**
  * Payments tests: integration ones run against TEST_DATABASE_URL (scripts/test.sh makes a fresh, migrated

@@ -59,7 +59,7 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
     const event = eventObject("customer.subscription.created", sub, now());
     let opts = options;
     if (options.signature === "stale") {
-      const { signatureHeader } = await import("@/lib/payments/standin/webhooks");
+      const { signatureHeader } = await import("@/scripts/stripe-standin/webhooks");
       opts = { signature: signatureHeader(JSON.stringify(event), process.env.STRIPE_WEBHOOK_SECRET ?? "", now() - 301) };
     }
     const res = await deliver(event, opts);

@@ -45,7 +45,8 @@ describe.skipIf(!TEST_DB)("job sheets: gating", () => {
     const { job } = await makeJob(dee.id);
     who.current = asSessionUser(dee);
     const result = await actions.saveJobSheet({ jobId: job.id });
-    expect(result).toEqual({ ok: false, status: 403, error: SHEET_CREATE_DENIED });
+    // the one action helper carries the way to the plans, as the job actions always did
+    expect(result).toEqual({ ok: false, status: 403, error: SHEET_CREATE_DENIED, upgrade: "/pricing" });
     expect(SHEET_CREATE_DENIED).toMatch(/needs a subscription/);
     expect(await JobSheet.count({ where: { ownerId: dee.id } })).toBe(0);
   });

@@ -1,9 +1,12 @@
 import { describe, expect, test } from "vitest";
-import { combinationFactors } from "@/lib/flow/request";
+import { asdCombinations } from "@/lib/solver/asce7/combinations";
 import { renderSheetPdf } from "@/lib/sheets/pdf";
 import { buildSheetSnapshot, sheetSources, type SheetSnapshot } from "@/lib/sheets/snapshot";
-import { valueIn } from "@/components/diagrams/geometry";
+import { valueIn } from "@/lib/diagrams/geometry";
 import { STARTER_TABLES } from "@/lib/tables";
+import { defaultFlowState } from "@/lib/flow/defaults";
+import { sizeRequest } from "@/lib/flow/request";
+import { sizeMember } from "@/lib/solver/design";
 import type { MaterialTables } from "@/lib/tables/types";
 import { HEADER_SPEC, JOIST_SPEC, headerState, joistState } from "../crew/fixtures";
 import { hasPdftotext, isPdf, pdfStreamText, pdftotext } from "./pdf-text";
@@ -37,6 +40,9 @@ function editedTables(): MaterialTables {
   return copy;
 }
 
+// ASCE 7-22 §2.4.1 combinations by the name the sheet prints
+const factorsOf = (name: string) => asdCombinations().find((c) => c.name === name)!.factors;
+
 describe("a sheet's snapshot", () => {
   const snap = snapshotWith(STARTER_TABLES);
   const header = snap.members[0];
@@ -65,7 +71,7 @@ describe("a sheet's snapshot", () => {
   test("the frozen diagrams agree with the textbook simple-span formulas", () => {
     const L = header.lengthFt;
     const moment = header.diagrams.find((d) => d.quantity === "M")!;
-    const factors = combinationFactors(moment.combination)!;
+    const factors = factorsOf(moment.combination);
     // every load on this header is a full-length line load (area loads × tributary width, own weight)
     const w = header.loads.reduce((sum, l) => sum + (l.w ?? 0) * (factors[l.case as keyof typeof factors] ?? 0), 0);
     const Mmax = (w * L * L) / 8;
@@ -86,7 +92,7 @@ describe("a sheet's snapshot", () => {
 
     // deflection with E = 1,600,000 psi (Douglas Fir-Larch No.2, NDS Supplement 2018 Table 4A) and I = n·b·d³/12
     const deflection = header.diagrams.find((d) => d.quantity === "deflection")!;
-    const df = combinationFactors(deflection.combination)!;
+    const df = factorsOf(deflection.combination);
     const wd = header.loads.reduce((sum, l) => sum + (l.w ?? 0) * (df[l.case as keyof typeof df] ?? 0), 0);
     const I = (3 * 1.5 * 11.25 ** 3) / 12;
     const delta = (5 * (wd / 12) * (L * 12) ** 4) / (384 * 1_600_000 * I);
@@ -166,6 +172,36 @@ describe("the sheet's PDF", () => {
       curves += (content.match(/ c\n/g) ?? []).length;
     }
     expect(curves).toBeGreaterThan(20);
+  });
+});
+
+describe("a roof member on the sheet", () => {
+  const rafter = defaultFlowState("rafter");
+  const snow = { ...rafter, snow: { ...rafter.snow, on: true, groundPsf: 30, exposure: "partially-exposed" as const, thermal: "cold-ventilated" as const } };
+  const size = sizeMember(sizeRequest(snow), STARTER_TABLES);
+  const snap = buildSheetSnapshot({
+    job: { id: "job-2", name: "Fern Row porch", siteAddress: "", notes: "" },
+    preparedBy: { name: "Sam Hollis", company: null },
+    members: [{ id: "r1", label: "R1 porch rafters", kind: "rafter", flowState: snow, chosenMember: size.passing[0].member, savedTables: null }],
+    tables: STARTER_TABLES,
+    now: NOW,
+  });
+  const m = snap.members[0];
+
+  test("its deflection note names the roof row of IRC 2021 Table R301.7, not floors", () => {
+    expect(m.limits.source).toMatch(/^Roofs and ceilings/);
+    expect(m.limits.source).not.toMatch(/floor/i);
+  });
+
+  test("the snow inputs are in words, with no internal codes", () => {
+    const snowRow = m.inputs.find(([k]) => k === "Snow (S)")![1];
+    expect(snowRow).toBe("ground snow 30 psf; roof partially exposed (Ce 1); building cold, ventilated (Ct 1.1)");
+    expect(m.inputs.map(([, v]) => v).join(" ")).not.toMatch(/[a-z]+-[a-z]+ed\b/);
+  });
+
+  test("the answer line is the sizing search's, word for word, with the bearing on the plate", () => {
+    expect(m.headline).toBe(size.passing[0].answer);
+    expect(m.headline).toMatch(/ at \d+ in o\.c\. — .* bearing each end on the plate, beam or hanger$/);
   });
 });
 

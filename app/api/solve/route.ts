@@ -1,20 +1,18 @@
-// POST /api/solve — analyse one beam, no sign-in
-import { invalidInput, readJsonBody } from "@/lib/http";
+import { invalidInput, readJsonBody, route } from "@/lib/http";
 import { BeamInputError, BeamInstabilityError, solve } from "@/lib/solver/beam";
-import { beamInputSchema, issuesOf } from "@/lib/solver/schema";
+import { beamInputSchema } from "@/lib/solver/schema";
+import { zodIssues } from "@/lib/zod-issues";
 
 export const runtime = "nodejs";
 
+// POST /api/solve — analyse one beam, no sign-in
 // Bad input: 400 { error: "invalid input", issues: [{ path, message }] }.
 // A layout that cannot carry load: 422 { error: "unstable", message } (the input is well formed).
-export async function POST(req: Request): Promise<Response> {
+export const POST = route(async (req) => {
   const read = await readJsonBody(req);
   if (!read.ok) return read.response;
-  const { body } = read;
-  const parsed = beamInputSchema.safeParse(body);
-  if (!parsed.success) {
-    return invalidInput(issuesOf(parsed.error));
-  }
+  const parsed = beamInputSchema.safeParse(read.body);
+  if (!parsed.success) return invalidInput(zodIssues(parsed.error));
   try {
     return Response.json(solve(parsed.data));
   } catch (err) {
@@ -22,4 +20,4 @@ export async function POST(req: Request): Promise<Response> {
     if (err instanceof BeamInputError) return invalidInput(err.issues);
     throw err;
   }
-}
+});

@@ -5,7 +5,7 @@ import { useState, useTransition } from "react";
 import { FormAlert } from "@/components/auth/form-alert";
 import { Button } from "@/components/ui/button";
 import { Dialog } from "@/components/ui/dialog";
-import type { Role } from "@/models/user";
+import type { Role } from "@/lib/auth/role-list";
 import { changeUserRole } from "./actions";
 
 export type UserRow = {

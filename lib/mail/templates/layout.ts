@@ -1,4 +1,4 @@
-import { CAUTION_TEXT } from "@/components/ui/caution-text";
+import { CAUTION } from "@/lib/caution";
 
 /** What every template returns: a subject and the same words as plain text and as simple HTML. */
 export interface RenderedMail {
@@ -21,7 +21,7 @@ export type MailBlock =
   | { kind: "caution" }
   | { kind: "rows"; rows: ReadonlyArray<readonly [string, string]> };
 
-export const MAIL_CAUTION = CAUTION_TEXT;
+export const MAIL_CAUTION = CAUTION;
 
 const FOOTER = "Spanlark — sizing joists, headers and beams for house framing.";
 

@@ -17,16 +17,16 @@ export type RoofExposure = keyof typeof EXPOSURE_CE;
 export const THERMAL_CT = { heated: 1.0, "cold-ventilated": 1.1, unheated: 1.2 } as const;
 export type RoofThermal = keyof typeof THERMAL_CT;
 
-/** Plain words for the exposure and thermal choices (never the internal code on a sheet). */
+/** The exposure and the building's heat in a builder's words (the flow's choices, the sheet's inputs). */
 export const EXPOSURE_WORDS: Readonly<Record<RoofExposure, string>> = {
-  "fully-exposed": "fully exposed to wind",
-  "partially-exposed": "partly sheltered by trees or buildings",
-  sheltered: "sheltered",
+  "fully-exposed": "Fully exposed",
+  "partially-exposed": "Partially exposed",
+  sheltered: "Sheltered by trees or buildings",
 };
 export const THERMAL_WORDS: Readonly<Record<RoofThermal, string>> = {
-  heated: "heated building",
-  "cold-ventilated": "cold ventilated roof",
-  unheated: "unheated building",
+  heated: "Heated, unventilated",
+  "cold-ventilated": "Cold, ventilated",
+  unheated: "Unheated",
 };
 
 export interface FlatRoofSnowInput {

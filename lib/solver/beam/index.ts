@@ -26,14 +26,13 @@
  */
 import type { BeamInput, Combination, LoadCase, Reaction, Station } from "../types";
 import { makeAnalysis, type BeamAnalysis, type BeamExtremes, type Segment, type SpanResult } from "./analysis";
-import { CAUTION, NOT_CHECKED } from "./caution";
+import { ANALYSIS_NOT_CHECKED as NOT_CHECKED, CAUTION } from "@/lib/caution";
 import { BeamInputError } from "./errors";
 import { prepareBeam, respond, type PreparedBeam } from "./prepare";
 
 export type { BeamAnalysis, BeamExtremes, Segment, SpanResult, StationArrays } from "./analysis";
 export { BeamInputError, BeamInstabilityError, type InputIssue } from "./errors";
 export { LIMITS, geometryIssues } from "./checks";
-export { CAUTION, NOT_CHECKED } from "./caution";
 export { prepareBeam, respond, combineResponses, type PreparedBeam, type Response, type Piece, type Region } from "./prepare";
 export { makeAnalysis } from "./analysis";
 

@@ -3,9 +3,11 @@
  * Pure: the caller passes the material tables (starter data in the CLI, the published version in the app).
  */
 import type { MaterialTables } from "@/lib/tables/types";
-import { BeamInputError, BeamInstabilityError, CAUTION } from "../beam";
+import { CAUTION, NOT_CHECKED } from "@/lib/caution";
+import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
 import type { LoadStandard } from "../asce7/standard";
+import { zodIssues } from "@/lib/zod-issues";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
 import { buildContext, type DesignContext } from "./context";
 import type { MemberKind } from "./kinds";
@@ -14,21 +16,13 @@ import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
 import { evaluateIJoist, type IJoistFactors } from "./i-joist";
 import { evaluateSteel, type SteelFactors } from "./steel";
-import type { CheckName, DesignCheck, SupportReaction } from "./types";
+import { E_STEEL_KSI } from "../aisc360/aisc360-16";
+import { answerLine, shortLabel } from "./answer-line";
+import { memberDiagrams, type MemberDiagrams } from "./diagrams";
+import type { CheckName, CombinationRef, DesignCheck, SupportReaction } from "./types";
 import { evaluateWood, resolveCr, resolveIncised, type WoodFactors } from "./wood";
 
-export { CAUTION };
-
-/** What the member checks leave to others; carried by every result. */
-export const NOT_CHECKED: readonly string[] = [
-  "connections, fasteners and hangers",
-  "posts, studs, columns and the plates, walls or footings under the bearing (bearing is checked on this member only)",
-  "lateral loads (wind and seismic on the building), and wind on this member beyond the load cases given",
-  "point loads on joists without blocking or a beam under them",
-  "notches, holes and cuts in the member",
-  "floor vibration, ponding on flat roofs, drift, sliding and unbalanced snow",
-  "fire resistance and decay or insect protection",
-];
+export { CAUTION, NOT_CHECKED };
 
 export interface MemberSummary {
   spec: MemberSpec;
@@ -42,8 +36,10 @@ export interface MemberSummary {
 }
 
 export interface CheckOutput {
-  /** the answer for the crew in one line, e.g. "3-ply 2x12 Douglas Fir-Larch No.2 — OK 99% (bending); 1 jack stud each end" */
+  /** what to build, for the crew, in one line, e.g. "3-ply 2x12 No.2 — 2 jack studs each end" (a member that does not work says so) */
   answer: string;
+  /** e.g. "OK 99% (bending)" */
+  verdict: string;
   pass: boolean;
   /** the check with the largest ratio */
   governing: CheckName | null;
@@ -61,6 +57,8 @@ export interface CheckOutput {
   caution: string;
   /** version of the material tables used */
   tables: string;
+  /** loads, shear, moment, deflection and reactions as drawn, with their combinations; null when nothing names a combination */
+  diagrams: MemberDiagrams | null;
   /** the ASCE 7 edition the loads were combined in (and the snow map it reads) */
   loadStandard: LoadStandard;
   /** what the member is in the building, when given */
@@ -119,17 +117,31 @@ export function percent(ratio: number, pass: boolean): string {
   return String(whole);
 }
 
-/** One line for the crew: the member, OK or Over with the largest ratio, and what to build under it. */
-export function answerLine(label: string, ev: { pass: boolean; ratio: number; governing: CheckName | null; reactions: SupportReaction[] }): string {
-  const head = `${label} — ${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${CHECK_WORDS[ev.governing]})` : ""}`;
-  const studs = ev.reactions.map((r) => r.jackStuds).filter((n): n is number => n !== null);
-  if (studs.length > 0) {
-    const most = Math.max(...studs);
-    const each = studs.length === 2 && studs[0] === studs[1] ? " each end" : " at the end that needs most";
-    return `${head}; ${most} jack stud${most === 1 ? "" : "s"}${studs.length === 2 ? each : ""}`;
-  }
-  const need = Math.max(0, ...ev.reactions.map((r) => r.requiredBearing));
-  return need > 0 ? `${head}; bearing at least ${Math.ceil(need * 4) / 4} in at the supports` : head;
+/** "OK 77% (bending)" or "Over 113% (shear)": the verdict with the largest ratio and the check it is in. */
+export function verdictWords(ev: { pass: boolean; ratio: number; governing: CheckName | null }): string {
+  return `${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${CHECK_WORDS[ev.governing]})` : ""}`;
+}
+
+/**
+ * The answer for the crew in one line (lib/solver/design/answer-line.ts); a member that does not
+ * work says so instead: "Over 130% (live load deflection): do not build 2x8 No.2".
+ */
+export function answerFor(
+  input: Pick<CheckInput, "kind" | "spacingIn" | "wallFraming">,
+  member: Pick<DesignMember, "spec" | "label">,
+  ev: Pick<Evaluation, "pass" | "ratio" | "governing" | "reactions">,
+  assembly?: Pick<Assembly, "plies" | "spacers" | "spacerIn">,
+): string {
+  if (!ev.pass) return `${verdictWords(ev)}: do not build ${shortLabel(member.spec, member.label)}`;
+  return answerLine({
+    spec: member.spec,
+    label: member.label,
+    kind: input.kind,
+    spacingIn: input.spacingIn,
+    inStudWall: input.wallFraming !== undefined,
+    assembly: assembly && assembly.spacers > 0 ? { plies: assembly.plies, spacerIn: assembly.spacerIn, spacers: assembly.spacers } : null,
+    supports: ev.reactions,
+  });
 }
 
 /** Runs every check of one resolved member in a shared context. */
@@ -143,25 +155,23 @@ export function evaluateMember(member: DesignMember, ctx: DesignContext): Evalua
       governing = c.name;
     }
   }
-  for (const c of r.checks) c.ratio = Math.round(c.ratio * 1e4) / 1e4;
-  return { ...r, governing, ratio: Math.round(ratio * 1e4) / 1e4, pass: ratio <= 1 };
-}
-
-function issuesFromZod(error: ZodError): DesignIssue[] {
-  return error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }));
+  const named = (name: string | null): CombinationRef | null => (name === null ? null : { name, factors: ctx.combinations.get(name) ?? {} });
+  const checks: DesignCheck[] = r.checks.map((c) => ({ ...c, ratio: Math.round(c.ratio * 1e4) / 1e4, combination: named(c.combination) }));
+  return { ...r, checks, governing, ratio: Math.round(ratio * 1e4) / 1e4, pass: ratio <= 1 };
 }
 
 /** Parses with a schema; a failure becomes a DesignInputError naming every field. */
 export function parseWith<T>(schema: { safeParse(v: unknown): { success: true; data: T } | { success: false; error: ZodError } }, json: unknown): T {
   const r = schema.safeParse(json);
-  if (!r.success) throw new DesignInputError(issuesFromZod(r.error));
+  if (!r.success) throw new DesignInputError(zodIssues(r.error));
   return r.data;
 }
 
 /** Turns the solver's own input errors (instability, geometry) into design input errors. */
 export function asDesignError(err: unknown): unknown {
   if (err instanceof BeamInstabilityError) return new DesignInputError([{ path: "supports", message: err.message }]);
-  if (err instanceof BeamInputError) return new DesignInputError(err.issues);
+  // the beam names the member's length "length"; the design input, "lengthFt"
+  if (err instanceof BeamInputError) return new DesignInputError(err.issues.map((i) => (i.path === "length" ? { ...i, path: "lengthFt" } : i)));
   return err;
 }
 
@@ -220,12 +230,12 @@ export function feetInches(ft: number): string {
 
 export function roughOpeningOf(input: Omit<CheckInput, "member">): RoughOpening | null {
   if (input.roughOpeningFt === undefined) return null;
-  const spanFt = input.roughOpeningFt + input.bearing / 12;
+  const spanFt = input.roughOpeningFt + input.bearingIn / 12;
   return {
     openingFt: input.roughOpeningFt,
-    bearingIn: input.bearing,
+    bearingIn: input.bearingIn,
     spanFt,
-    note: `span ${feetInches(spanFt)} = rough opening ${feetInches(input.roughOpeningFt)} + half of the ${input.bearing} in bearing at each end`,
+    note: `span ${feetInches(spanFt)} = rough opening ${feetInches(input.roughOpeningFt)} + half of the ${input.bearingIn} in bearing at each end`,
   };
 }
 
@@ -240,15 +250,15 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   if (ro) a.push(ro.note);
   a.push(c.selfWeight ? `member's own weight counted as dead load: ${Math.round(member.weightPlf * 10) / 10} plf` : "member's own weight not counted");
   a.push(
-    c.unbracedLength > 0
-      ? `compression edge braced at the supports and every ${c.unbracedLength} ft between; that spacing is checked wherever along the span it is worst`
+    c.unbracedLengthFt > 0
+      ? `compression edge braced at the supports and every ${c.unbracedLengthFt} ft between; that spacing is checked wherever along the span it is worst`
       : "compression edge braced continuously (sheathing or decking fastened along it)",
   );
   if (ctx.model.regions.length > 1) {
     a.push("where the member hogs (over an interior support or at an overhang) the bottom edge is in compression: the same bracing is assumed there (blocking or bracing at the supports)");
   }
   if (ctx.model.patterned) a.push(`live load placed span by span for the worst effect (pattern loading, ${std} §4.3.3)`);
-  a.push(`bearing length ${input.bearing} in at every support`);
+  a.push(`bearing length ${input.bearingIn} in at every support`);
   if (member.kind === "wood") {
     a.push(c.wet ? "wet service" : "dry service (moisture content 19 % or less for sawn lumber, 16 % for glulam)");
     a.push(`temperature up to ${c.temperatureF} °F`);
@@ -260,7 +270,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     if (member.dimensionLumber) {
       const inc = resolveIncised(member, c.incised, c.wet, input.kind);
       a.push(inc.basis);
-      a.push(resolveCr(member, c.repetitive, input.kind, input.spacing).basis);
+      a.push(resolveCr(member, c.repetitive, input.kind, input.spacingIn).basis);
     }
     a.push("span taken centre to centre of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
   }
@@ -283,19 +293,38 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
   if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) {
     throw new DesignInputError([{ path: "conditions.wet", message: "LVL and PSL are for dry service only here; use sawn lumber or glulam in wet service, or the maker's published wet-use values" }]);
   }
-  const ctx = contextFor(input);
+  return fullCheck(input, member, contextFor(input), tables);
+}
+
+/** The whole check of one resolved member in a built context (notes on): what /api/check answers and /api/size gives its top members. */
+export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMember, ctx: DesignContext, tables: MaterialTables): CheckOutput {
   const ev = evaluateMember(member, ctx);
   const sw = input.conditions.selfWeight ? member.weightPlf : 0;
   const assembly = assemblyFor(member, wallFor(input.kind, input.wallFraming));
   const assumptions = assumptionsFor(input, member, ctx);
   if (assembly.fits === false) assumptions.push(`${assembly.words} is ${assembly.widthIn} in wide and does not fill a ${assembly.wallFraming} wall (${assembly.wallFraming === "2x6" ? "5-1/2" : "3-1/2"} in)`);
+  const summary = summarizeMember(member);
+  const factors = ev.factors as { EPrime?: number };
+  const diagrams = memberDiagrams({
+    lengthFt: ctx.model.length,
+    supports: ctx.model.supports,
+    loads: ctx.loads.map((l) => l.load),
+    selfWeightPlf: sw,
+    // an I-joist gives its EI, not a section: its bending deflection drawn from EI (shear deflection is in the check)
+    EPsi: summary.section.EI !== undefined && summary.section.EI > 0 ? summary.section.EI : member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : E_STEEL_KSI * 1000,
+    IIn4: summary.section.EI !== undefined && summary.section.EI > 0 ? 1 : summary.section.I,
+    checks: ev.checks,
+    reactions: ev.reactions,
+    combinations: ctx.combinations,
+  });
   return {
-    answer: answerLine(member.label, ev),
+    answer: answerFor(input, member, ev, assembly),
+    verdict: verdictWords(ev),
     pass: ev.pass,
     governing: ev.governing,
     ratio: ev.ratio,
     method: input.method,
-    member: summarizeMember(member),
+    member: summary,
     checks: ev.checks,
     reactions: ev.reactions,
     factors: ev.factors,
@@ -313,6 +342,7 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
     assembly,
     bracing: bracingFor(input, member, ev),
     roughOpening: roughOpeningOf(input),
+    diagrams,
   };
 }
 
@@ -322,10 +352,10 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
  * instruction for the crew; nothing is assumed.
  */
 function bracingFor(input: CheckInput, member: DesignMember, ev: Evaluation): Bracing {
-  const givenFt = input.conditions.unbracedLength;
+  const givenFt = input.conditions.unbracedLengthFt;
   const none: Bracing = { givenFt, neededFt: null, instruction: null };
   if (givenFt <= 0 || ev.pass) return none;
-  const passesAt = (lbFt: number) => evaluateMember(member, contextFor({ ...input, conditions: { ...input.conditions, unbracedLength: lbFt } })).pass;
+  const passesAt = (lbFt: number) => evaluateMember(member, contextFor({ ...input, conditions: { ...input.conditions, unbracedLengthFt: lbFt } })).pass;
   const minFt = 1 / 12;
   if (!passesAt(minFt)) return none;
   let lo = minFt;

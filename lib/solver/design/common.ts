@@ -1,12 +1,12 @@
 /** Checks and reports shared by every material: deflection against the limits, reactions for the crew. */
 import type { DesignContext } from "./context";
 import { peakAbs, E_REF, I_REF, type ComboEnvelope } from "./load-model";
-import type { DesignCheck, SupportReaction } from "./types";
+import type { NamedCheck, SupportReaction } from "./types";
 
 const round = (v: number, n = 3) => Math.round(v * 10 ** n) / 10 ** n;
 
 export interface DeflectionResult {
-  check: DesignCheck | null;
+  check: NamedCheck | null;
   /** for total: dead-load part at the governing station (in) */
   deadPartIn: number;
 }
@@ -41,7 +41,7 @@ export function deflectionCheck(
   }
   const r = model.regions[best.region];
   const where = !ctx.notes ? "" : r.kind === "span" ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft` : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
-  const check: DesignCheck = {
+  const check: NamedCheck = {
     name,
     demand: round(best.demand, 4),
     capacity: round(best.allowed, 4),

@@ -5,7 +5,7 @@
 import { asdCombinations, lrfdCombinations } from "../asce7/combinations";
 import type { LoadStandard } from "../asce7/standard";
 import { loadDurationFactorCD, timeEffectFactorLambda } from "../nds/nds-2018";
-import type { Combination, Load, LoadCase, NamedCombination } from "../types";
+import { LOAD_CASES, type Combination, type Load, type LoadCase, type NamedCombination } from "../types";
 import type { MemberKind } from "./kinds";
 import { buildLoadModel, type ComboEnvelope, type LoadModel } from "./load-model";
 import { resolveLimits } from "./presets";
@@ -41,12 +41,13 @@ export interface DesignContext {
    * member of depth d (in): built once per depth and kept.
    */
   shearModel(dIn: number): { model: LoadModel; strength: ComboEnvelope[] };
+  /** every combination the checks may name (strength, service, live-only), by name */
+  combinations: ReadonlyMap<string, Combination>;
 }
 
-const CASE_ORDER: LoadCase[] = ["D", "L", "Lr", "S", "W"];
 
 function comboName(f: Combination): string {
-  return CASE_ORDER.filter((c) => (f[c] ?? 0) !== 0)
+  return LOAD_CASES.filter((c) => (f[c] ?? 0) !== 0)
     .map((c) => `${f[c] === 1 ? "" : String(Math.round((f[c] as number) * 1e4) / 1e4)}${c}`)
     .join("+");
 }
@@ -69,27 +70,38 @@ export function liveCombinations(service: NamedCombination[]): NamedCombination[
 export type DesignProblem = Omit<CheckInput, "member">;
 
 // The combinations depend only on the edition and the cases present: built once per set.
-const comboCache = new Map<string, { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] }>();
+interface CombinationSet {
+  asd: NamedCombination[];
+  lrfd: NamedCombination[];
+  live: NamedCombination[];
+  byName: Map<string, Combination>;
+}
 
-function combinationsFor(cases: LoadCase[], standard: LoadStandard): { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] } {
+const comboCache = new Map<string, CombinationSet>();
+
+function combinationsFor(cases: LoadCase[], standard: LoadStandard): CombinationSet {
   const key = `${standard}|${cases.join(",")}`;
   let hit = comboCache.get(key);
   if (!hit) {
     const asd = asdCombinations(cases, standard);
-    hit = { asd, lrfd: lrfdCombinations(cases, standard), live: liveCombinations(asd) };
+    const lrfd = lrfdCombinations(cases, standard);
+    const live = liveCombinations(asd);
+    const byName = new Map<string, Combination>();
+    for (const c of [...asd, ...lrfd, ...live]) if (!byName.has(c.name)) byName.set(c.name, c.factors);
+    hit = { asd, lrfd, live, byName };
     comboCache.set(key, hit);
   }
   return hit;
 }
 
 export function buildContext(input: DesignProblem): DesignContext {
-  const loads = takeDown(input.loads, input.length, { spacingIn: input.spacing, tributaryFt: input.tributary }, input.loadStandard);
+  const loads = takeDown(input.loads, input.lengthFt, { spacingIn: input.spacingIn, tributaryFt: input.tributaryFt }, input.loadStandard);
   const lineLoads = loads.map((l) => l.load);
   const model = buildLoadModel({
-    length: input.length,
+    length: input.lengthFt,
     supports: input.supports,
     loads: lineLoads,
-    unbracedFt: input.conditions.unbracedLength,
+    unbracedFt: input.conditions.unbracedLengthFt,
     pattern: input.conditions.patternLiveLoad,
   });
   const combos = combinationsFor(model.cases, input.loadStandard);
@@ -100,10 +112,10 @@ export function buildContext(input: DesignProblem): DesignContext {
   const shearModel = (dIn: number) => {
     let hit = shearCache.get(dIn);
     if (!hit) {
-      const zones = shearZones(input.supports, input.length, input.bearing, dIn);
-      const cut = loadsForShear(lineLoads as (Load & { case: LoadCase })[], zones, input.length, dIn);
+      const zones = shearZones(input.supports, input.lengthFt, input.bearingIn, dIn);
+      const cut = loadsForShear(lineLoads as (Load & { case: LoadCase })[], zones, input.lengthFt, dIn);
       const m = buildLoadModel({
-        length: input.length,
+        length: input.lengthFt,
         supports: input.supports,
         loads: cut.loads,
         unbracedFt: 0,
@@ -132,9 +144,10 @@ export function buildContext(input: DesignProblem): DesignContext {
     live: model.envelopes(combos.live),
     conditions: input.conditions,
     limits: resolveLimits(input.limits),
-    bearingIn: input.bearing,
-    spacingIn: input.spacing,
-    tributaryFt: input.tributary,
+    bearingIn: input.bearingIn,
+    spacingIn: input.spacingIn,
+    tributaryFt: input.tributaryFt,
     loads,
+    combinations: combos.byName,
   };
 }

@@ -17,7 +17,7 @@ import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
 import { E_REF, I_REF, peakAbs } from "./load-model";
 import type { MemberSpec } from "./schema";
-import type { DesignCheck, SupportReaction } from "./types";
+import type { NamedCheck, SupportReaction } from "./types";
 
 export interface IJoistMember {
   kind: "ijoist";
@@ -89,7 +89,7 @@ function shearDeflection(ctx: DesignContext, M: (i: number) => number, K: number
 }
 
 /** Bending plus shear deflection against the limit, each region, each combination. */
-function deflectionWithShear(ctx: DesignContext, name: "deflection-live" | "deflection-total", limit: number | null, sw: number, j: IJoist): DesignCheck | null {
+function deflectionWithShear(ctx: DesignContext, name: "deflection-live" | "deflection-total", limit: number | null, sw: number, j: IJoist): NamedCheck | null {
   const envs = name === "deflection-live" ? ctx.live : ctx.service;
   const bending = deflectionCheck(ctx, envs, name, limit, sw, j.EI / I_REF, I_REF);
   if (!bending.check || limit === null) return null;
@@ -127,14 +127,14 @@ function deflectionWithShear(ctx: DesignContext, name: "deflection-live" | "defl
   };
 }
 
-export function evaluateIJoist(m: IJoistMember, ctx: DesignContext): { checks: DesignCheck[]; reactions: SupportReaction[]; factors: IJoistFactors } {
+export function evaluateIJoist(m: IJoistMember, ctx: DesignContext): { checks: NamedCheck[]; reactions: SupportReaction[]; factors: IJoistFactors } {
   if (ctx.method !== "asd") throw new DesignInputError([{ path: "method", message: "I-joists are checked in ASD here (their published values are allowable loads)" }]);
   if (ctx.conditions.wet) throw new DesignInputError([{ path: "conditions.wet", message: "I-joists are for dry service only (APA PRI-400); use sawn lumber or glulam where it stays wet" }]);
   if (ctx.conditions.temperatureF > 100) throw new DesignInputError([{ path: "conditions.temperatureF", message: "I-joists are checked at normal temperatures only here (up to 100 °F)" }]);
   const { model } = ctx;
   const j = m.joist;
   const sw = ctx.conditions.selfWeight ? m.weightPlf : 0;
-  const checks: DesignCheck[] = [];
+  const checks: NamedCheck[] = [];
 
   // Moment and shear against the published capacities × CD.
   let bend = { ratio: -1, M: 0, cap: 0, x: 0, CD: 1, combination: "" };

@@ -18,3 +18,15 @@ export const WALL_FRAMINGS = ["2x4", "2x6"] as const;
 export type WallFraming = (typeof WALL_FRAMINGS)[number];
 export const WALL_DEPTH_IN: Readonly<Record<WallFraming, number>> = { "2x4": 3.5, "2x6": 5.5 };
 export const DEFAULT_WALL_FRAMING: WallFraming = "2x4";
+
+export const KIND_LABELS: Readonly<Record<MemberKind, string>> = {
+  "floor-joist": "Floor joist",
+  header: "Header",
+  beam: "Beam or girder",
+  "deck-joist": "Deck joist",
+  "deck-beam": "Deck beam",
+  rafter: "Rafter or ceiling joist",
+};
+
+/** Members that carry a roof: their deflection limits are the roof and ceiling rows. */
+export const ROOF_KINDS: readonly MemberKind[] = ["rafter"];

@@ -10,7 +10,7 @@
  * Units: x in ft, V and reactions in lb, M in lb-ft, deflection in in (positive down), as in the solver.
  */
 import { makeAnalysis, prepareBeam, respond, type PreparedBeam } from "../beam";
-import type { Combination, Load, LoadCase, NamedCombination, Support } from "../types";
+import { LOAD_CASES, type Combination, type Load, type LoadCase, type NamedCombination, type Support } from "../types";
 
 /** reference stiffness of the shared analyses: E psi and I in^4 */
 export const E_REF = 1_000_000;
@@ -198,7 +198,7 @@ export function buildLoadModel(input: LoadModelInput): LoadModel {
   const ns = supports.length;
   const present = new Set<LoadCase>(["D"]);
   for (const l of input.loads) present.add(l.case);
-  const cases = (["D", "L", "Lr", "S", "W"] as LoadCase[]).filter((c) => present.has(c));
+  const cases = LOAD_CASES.filter((c) => present.has(c));
 
   const pieceWeights = (pick: (i: number) => boolean) => {
     const w = new Float64Array(np);

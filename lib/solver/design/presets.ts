@@ -50,6 +50,7 @@ export function resolveLimits(limits: { preset?: DeflectionPresetId; live?: numb
   return {
     live: limits.live !== undefined ? limits.live : preset.live,
     total: limits.total !== undefined ? limits.total : preset.total,
-    source: custom ? `set by the user over ${preset.label.toLowerCase()} (${preset.source})` : preset.source,
+    // the row's words come first, so a roof member's note speaks of roofs and a floor's of floors
+    source: custom ? `set by the user over ${preset.label.toLowerCase()} (${preset.source})` : `${preset.label}: ${preset.source}`,
   };
 }

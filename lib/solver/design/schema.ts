@@ -1,16 +1,17 @@
 /**
  * Input of the member design checks and of the sizing search, parsed at every boundary (CLI,
- * route handlers) by these zod schemas. Units: ft for positions and lengths, in for spacing,
- * bearing and member dimensions, psf for area loads, plf for line loads, lb for point loads,
- * lb-ft for couples. Loads keep the solver contract's signs (positive downward).
+ * route handlers) by these zod schemas. The member's own fields carry their unit in their name
+ * (lengthFt, spacingIn, tributaryFt, bearingIn, unbracedLengthFt), as the flow's state does, so an
+ * error's path names the flow's field. Within a load the solver contract's units hold: ft for
+ * positions (x, from, to), psf, plf (w), lb (P), lb-ft (M), positive downward.
  */
 import { z } from "zod";
 import { geometryIssues, LIMITS } from "../beam/checks";
-import type { BeamInput, Load } from "../types";
+import { eitherMessage, LOAD_CASES, oneOfMessage, SUPPORT_TYPES, type BeamInput, type Load, type SupportType } from "../types";
 import { DEFAULT_LOAD_STANDARD, LOAD_STANDARDS } from "../asce7/standard";
 import { MEMBER_KINDS, WALL_FRAMINGS } from "./kinds";
 
-const loadCase = z.enum(["D", "L", "Lr", "S", "W"], { error: 'must be one of "D", "L", "Lr", "S", "W"' });
+const loadCase = z.enum(LOAD_CASES, { error: oneOfMessage(LOAD_CASES) });
 const finite = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine(Number.isFinite, `must be a finite number (${unit})`);
 const positive = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine((v) => Number.isFinite(v) && v > 0, `must be a number greater than 0 (${unit})`);
 
@@ -25,7 +26,7 @@ export const areaLoadSchema = z
     from: finite("ft").optional(),
     to: finite("ft").optional(),
     /** this load's own tributary width, ft (e.g. roof and floor above a header); default the member's spacing or tributary */
-    tributary: positive("ft").optional(),
+    tributaryFt: positive("ft").optional(),
   })
   .strict();
 
@@ -39,7 +40,7 @@ export const snowLoadSchema = z
     Is: positive("importance factor").optional(),
     from: finite("ft").optional(),
     to: finite("ft").optional(),
-    tributary: positive("ft").optional(),
+    tributaryFt: positive("ft").optional(),
   })
   .strict();
 
@@ -92,7 +93,7 @@ export const conditionsSchema = z
      */
     repetitive: z.boolean().optional(),
     /** unbraced length of the compression edge, ft; 0 = continuously braced */
-    unbracedLength: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)").default(0),
+    unbracedLengthFt: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)").default(0),
     selfWeight: z.boolean().default(true),
     /** sustained temperature, °F (NDS Table 2.3.3) */
     temperatureF: z.number().refine((v) => Number.isFinite(v) && v <= 150, "must be at most 150 °F").default(70),
@@ -113,26 +114,26 @@ export const limitsSchema = z
   .strict();
 
 const designFields = {
-  length: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
+  /** what the member is in the house: sets the repetitive, incised and wall-fit defaults and what the answer line tells the crew to build */
+  kind: z.enum(MEMBER_KINDS, { error: oneOfMessage(MEMBER_KINDS) }).optional(),
+  lengthFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
   supports: z
-    .array(z.object({ x: finite("ft"), type: z.enum(["pin", "roller", "fixed"], { error: 'must be "pin", "roller" or "fixed"' }) }).strict())
+    .array(z.object({ x: finite("ft"), type: z.enum(SUPPORT_TYPES, { error: eitherMessage(SUPPORT_TYPES) }) }).strict())
     .min(1, "give at least one support")
     // Capped here, before the cross-field check compares supports pair by pair.
     .max(LIMITS.maxSupports, `at most ${LIMITS.maxSupports} supports`),
   /** joist spacing, in on centre */
-  spacing: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
+  spacingIn: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
   /** tributary width, ft */
-  tributary: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
+  tributaryFt: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
   loads: z.array(designLoadSchema).max(LIMITS.maxLoads, `at most ${LIMITS.maxLoads} loads`),
   /** bearing length at each support, in; default 1-1/2 in (IRC R502.6 minimum on wood or metal) */
-  bearing: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
+  bearingIn: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
   conditions: conditionsSchema.default(() => conditionsSchema.parse({})),
   limits: limitsSchema.default({}),
   method: z.enum(["asd", "lrfd"], { error: 'must be "asd" or "lrfd"' }).default("asd"),
   /** the edition of ASCE 7 for the combinations and snow (the map the ground snow number comes from) */
   loadStandard: z.enum(LOAD_STANDARDS, { error: `must be one of ${LOAD_STANDARDS.map((s) => `"${s}"`).join(", ")}` }).default(DEFAULT_LOAD_STANDARD),
-  /** what the member is in the building: sets the repetitive, incised and wall-fit defaults */
-  kind: z.enum(MEMBER_KINDS, { error: `must be one of ${MEMBER_KINDS.map((s) => `"${s}"`).join(", ")}` }).optional(),
   /** the stud wall a header (or beam in a wall) sits in; only members that fill it are offered; default 2x4 for a header */
   wallFraming: z.enum(WALL_FRAMINGS, { error: `must be one of ${WALL_FRAMINGS.map((s) => `"${s}"`).join(", ")}` }).optional(),
   /** rough opening of a header, ft: the span is then the opening plus half the bearing at each end */
@@ -141,18 +142,18 @@ const designFields = {
 
 /**
  * A header given by its rough opening: the span is the opening plus half the bearing at each end
- * (length = roughOpeningFt + bearing / 12 ft), on two supports at its ends.
+ * (lengthFt = roughOpeningFt + bearingIn / 12), on two supports at its ends.
  */
 function withRoughOpening(raw: unknown): unknown {
   if (raw === null || typeof raw !== "object" || Array.isArray(raw)) return raw;
   const o = raw as Record<string, unknown>;
   const ro = o.roughOpeningFt;
-  if (typeof ro !== "number" || !Number.isFinite(ro) || ro <= 0 || o.length !== undefined) return raw;
-  const bearing = typeof o.bearing === "number" && Number.isFinite(o.bearing) && o.bearing > 0 ? o.bearing : 1.5;
+  if (typeof ro !== "number" || !Number.isFinite(ro) || ro <= 0 || o.lengthFt !== undefined) return raw;
+  const bearing = typeof o.bearingIn === "number" && Number.isFinite(o.bearingIn) && o.bearingIn > 0 ? o.bearingIn : 1.5;
   const length = ro + bearing / 12;
   return {
     ...o,
-    length,
+    lengthFt: length,
     supports: o.supports ?? [
       { x: 0, type: "pin" },
       { x: length, type: "roller" },
@@ -164,17 +165,17 @@ type RefineCtx = z.RefinementCtx;
 
 /** Checks that need more than one field: spacing vs tributary, positions on the member, area load fields. */
 function crossFieldIssues(
-  v: { length: number; supports: { x: number; type: "pin" | "roller" | "fixed" }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[]; roughOpeningFt?: number; bearing: number },
+  v: { lengthFt: number; supports: { x: number; type: SupportType }[]; spacingIn?: number; tributaryFt?: number; loads: z.infer<typeof designLoadSchema>[]; roughOpeningFt?: number; bearingIn: number },
   ctx: RefineCtx,
 ): void {
-  if (v.roughOpeningFt !== undefined && Math.abs(v.length - (v.roughOpeningFt + v.bearing / 12)) > 1e-9) {
-    ctx.addIssue({ code: "custom", path: ["roughOpeningFt"], message: "give the span (length) or the rough opening (roughOpeningFt), not both" });
+  if (v.roughOpeningFt !== undefined && Math.abs(v.lengthFt - (v.roughOpeningFt + v.bearingIn / 12)) > 1e-9) {
+    ctx.addIssue({ code: "custom", path: ["roughOpeningFt"], message: "give the span (lengthFt) or the rough opening (roughOpeningFt), not both" });
   }
-  const hasArea = v.loads.some((l) => (l.type === "area" || l.type === "snow") && l.tributary === undefined);
-  if (v.spacing !== undefined && v.tributary !== undefined) {
-    ctx.addIssue({ code: "custom", path: ["tributary"], message: "give either spacing (in, for joists) or tributary (ft, for beams and headers), not both" });
-  } else if (hasArea && v.spacing === undefined && v.tributary === undefined) {
-    ctx.addIssue({ code: "custom", path: ["spacing"], message: "area loads (psf) need spacing (in, for joists) or tributary (ft, for beams and headers), here or on each area load" });
+  const hasArea = v.loads.some((l) => (l.type === "area" || l.type === "snow") && l.tributaryFt === undefined);
+  if (v.spacingIn !== undefined && v.tributaryFt !== undefined) {
+    ctx.addIssue({ code: "custom", path: ["tributaryFt"], message: "give either spacingIn (joists) or tributaryFt (beams and headers), not both" });
+  } else if (hasArea && v.spacingIn === undefined && v.tributaryFt === undefined) {
+    ctx.addIssue({ code: "custom", path: ["spacingIn"], message: "area loads (psf) need spacingIn (joists) or tributaryFt (beams and headers), here or on each area load" });
   }
   v.loads.forEach((l, i) => {
     if (l.type === "area") {
@@ -187,16 +188,16 @@ function crossFieldIssues(
     }
     if ((l.type === "area" || l.type === "snow") && (l.from !== undefined || l.to !== undefined)) {
       const from = l.from ?? 0;
-      const to = l.to ?? v.length;
-      if (!(from >= 0 && to <= v.length && to > from)) {
-        ctx.addIssue({ code: "custom", path: ["loads", i, l.to !== undefined ? "to" : "from"], message: `must lie on the member, 0 to ${v.length} ft, with to > from` });
+      const to = l.to ?? v.lengthFt;
+      if (!(from >= 0 && to <= v.lengthFt && to > from)) {
+        ctx.addIssue({ code: "custom", path: ["loads", i, l.to !== undefined ? "to" : "from"], message: `must lie on the member, 0 to ${v.lengthFt} ft, with to > from` });
       }
     }
   });
   const lineLoads: Load[] = v.loads.filter((l): l is Exclude<typeof l, { type: "area" } | { type: "snow" }> => l.type !== "area" && l.type !== "snow");
   const lineIndex = v.loads.map((l, i) => (l.type !== "area" && l.type !== "snow" ? i : -1)).filter((i) => i >= 0);
-  const beam: BeamInput = { length: v.length, E: 1, I: 1, supports: v.supports, loads: lineLoads };
-  if (!(Number.isFinite(v.length) && v.length > 0)) return;
+  const beam: BeamInput = { length: v.lengthFt, E: 1, I: 1, supports: v.supports, loads: lineLoads };
+  if (!(Number.isFinite(v.lengthFt) && v.lengthFt > 0)) return;
   for (const issue of geometryIssues(beam)) {
     if (issue.path === "length") continue;
     const parts = issue.path.split(".");
@@ -205,7 +206,9 @@ function crossFieldIssues(
   }
 }
 
-export const checkInputSchema = z.preprocess(withRoughOpening, z.object({ member: memberSchema, ...designFields }).strict().superRefine(crossFieldIssues));
+/** The check input's fields as sent (the request type the flow builds); checkInputSchema adds the rough opening and cross-field rules. */
+export const checkFieldsSchema = z.object({ member: memberSchema, ...designFields }).strict();
+export const checkInputSchema = z.preprocess(withRoughOpening, checkFieldsSchema.superRefine(crossFieldIssues));
 
 export const sizeFamilySchema = z.discriminatedUnion(
   "material",
@@ -228,9 +231,8 @@ export const sizeFamilySchema = z.discriminatedUnion(
   { error: 'must name a family: material "sawn", "engineered", "ijoist", "steel" or "any"' },
 );
 
-export const sizeInputSchema = z.preprocess(
-  withRoughOpening,
-  z
+/** The size input's fields as sent (the request type the flow builds); sizeInputSchema adds the rough opening and cross-field rules. */
+export const sizeFieldsSchema = z
   .object({
     member: sizeFamilySchema.default({ material: "any" }),
     ...designFields,
@@ -239,18 +241,19 @@ export const sizeInputSchema = z.preprocess(
     /** how many passing members and how many nearest failures to return */
     limit: z.number().int().min(1).max(500).default(20),
     failures: z.number().int().min(0).max(100).default(5),
+    /** how many of the best passing members carry their whole check (checks, diagrams, answer), as /api/check gives it */
+    fullChecks: z.number().int("must be a whole number").min(0, "must be 0 to 20").max(20, "must be 0 to 20").default(0),
   })
-  .strict()
-  .superRefine(crossFieldIssues),
-);
+  .strict();
+export const sizeInputSchema = z.preprocess(withRoughOpening, sizeFieldsSchema.superRefine(crossFieldIssues));
 
 export const spanInputSchema = z
   .object({
     member: memberSchema,
     ...designFields,
     /** search range for the largest span, ft */
-    minLength: positive("ft").default(1),
-    maxLength: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).default(40),
+    minLengthFt: positive("ft").default(1),
+    maxLengthFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).default(40),
     /** bisection stops when the bracket is narrower than this, in */
     toleranceIn: positive("in").default(0.05),
   })

@@ -5,10 +5,10 @@
  */
 import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
-import { CAUTION } from "../beam";
+import { CAUTION } from "@/lib/caution";
 import type { LoadStandard } from "../asce7/standard";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
-import { answerLine, percent, assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, roughOpeningOf, summarizeMember, type CheckOutput, type RoughOpening } from "./check";
+import { answerFor, percent, verdictWords, assumptionsFor, checkMember, contextFor, evaluateMember, fullCheck, NOT_CHECKED, parseWith, roughOpeningOf, summarizeMember, type CheckOutput, type RoughOpening } from "./check";
 import type { MemberKind, WallFraming } from "./kinds";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
@@ -20,6 +20,8 @@ import type { CheckName, DesignCheck } from "./types";
 export interface SizeCandidateResult {
   /** one line for the crew, as in the check output */
   answer: string;
+  /** e.g. "OK 77% (bending)" */
+  verdict: string;
   member: MemberSpec;
   label: string;
   governing: CheckName | null;
@@ -33,6 +35,8 @@ export interface SizeCandidateResult {
   supports: { x: number; maxDown: number; uplift: number; requiredBearing: number; jackStuds: number | null }[];
   /** plies, spacers and the wall it fills */
   assembly: Assembly;
+  /** the whole check, for the first `fullChecks` passing members */
+  check?: CheckOutput;
 }
 
 export interface SizeFailure extends SizeCandidateResult {
@@ -128,9 +132,10 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
   return out;
 }
 
-function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>, assembly: Assembly): SizeCandidateResult {
+function describe(input: SizeInput, member: DesignMember, ev: ReturnType<typeof evaluateMember>, assembly: Assembly): SizeCandidateResult {
   return {
-    answer: answerLine(member.label, ev),
+    answer: answerFor(input, member, ev, assembly),
+    verdict: verdictWords(ev),
     member: member.spec,
     label: member.label,
     governing: ev.governing,
@@ -146,7 +151,7 @@ function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>, a
 function reasonOf(c: DesignCheck | undefined): string {
   if (!c) return "no check ran";
   const where = c.x === null ? "" : ` at ${Math.round(c.x * 100) / 100} ft`;
-  const combo = c.combination ? ` in ${c.combination}` : "";
+  const combo = c.combination ? ` in ${c.combination.name}` : "";
   return `${c.name} ${percent(c.ratio, c.ratio <= 1)}%${combo}${where}: ${c.demand} ${c.unit} against ${c.capacity} ${c.unit}`;
 }
 
@@ -159,7 +164,7 @@ const RANKERS: Record<SizeOutput["rank"], (a: SizeCandidateResult, b: SizeCandid
 /** Sizes a member: `npm run size` and POST /api/size. Throws DesignInputError on bad input. */
 export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   const input = parseWith<SizeInput>(sizeInputSchema, json);
-  const specs = candidateSpecs(input.member, tables, input.spacing !== undefined);
+  const specs = candidateSpecs(input.member, tables, input.spacingIn !== undefined);
   const ctx: DesignContext = { ...contextFor(input), notes: false };
   const passing: SizeCandidateResult[] = [];
   const failing: SizeFailure[] = [];
@@ -195,14 +200,17 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     checked++;
     lastMember = member;
     const ev = evaluateMember(member, ctx);
-    const row = describe(member, ev, assembly);
+    const row = describe(input, member, ev, assembly);
     if (ev.pass) passing.push(row);
     else failing.push({ ...row, reason: reasonOf(ev.checks.find((c) => c.name === ev.governing)) });
   }
   passing.sort(RANKERS[input.rank]);
   failing.sort((a, b) => a.ratio - b.ratio);
+  const top = passing.slice(0, input.limit);
+  const full: DesignContext = { ...ctx, notes: true };
+  for (const row of top.slice(0, input.fullChecks)) row.check = fullCheck(input, resolveMember(row.member, tables), full, tables);
   return {
-    passing: passing.slice(0, input.limit),
+    passing: top,
     failing: failing.slice(0, input.failures),
     rank: input.rank,
     method: input.method,
@@ -229,7 +237,7 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
 /** The incised and Cr lines of one member (left out of a search's assumptions, which speak of the family). */
 function perMemberWords(input: SizeInput, m: DesignMember): string[] {
   if (m.kind !== "wood" || !m.dimensionLumber) return [];
-  return [resolveIncised(m, input.conditions.incised, input.conditions.wet, input.kind).basis, resolveCr(m, input.conditions.repetitive, input.kind, input.spacing).basis];
+  return [resolveIncised(m, input.conditions.incised, input.conditions.wet, input.kind).basis, resolveCr(m, input.conditions.repetitive, input.kind, input.spacingIn).basis];
 }
 
 /** Incised and Cr as the search applied them to sawn lumber. */
@@ -254,7 +262,7 @@ function familyWoodWords(input: SizeInput): string[] {
 
 function describeFamily(input: SizeInput): string {
   const m = input.member;
-  const joists = input.spacing !== undefined;
+  const joists = input.spacingIn !== undefined;
   const plies = (given: number[] | undefined) => (given ?? (joists ? [1] : ALL_PLIES)).join(", ");
   switch (m.material) {
     case "sawn":
@@ -290,7 +298,7 @@ export interface SpanOutput {
 
 /** Positions scaled with the length: supports and loads keep their place as a fraction of the member. */
 function scaled(input: SpanInput, length: number): Record<string, unknown> {
-  const k = length / input.length;
+  const k = length / input.lengthFt;
   const at = (x: number) => Math.min(length, Math.max(0, x * k));
   const loads = input.loads.map((l) => {
     switch (l.type) {
@@ -304,11 +312,11 @@ function scaled(input: SpanInput, length: number): Record<string, unknown> {
         return { ...l, from: at(l.from), to: at(l.to) };
     }
   });
-  const { minLength: _min, maxLength: _max, toleranceIn: _tol, ...rest } = input;
+  const { minLengthFt: _min, maxLengthFt: _max, toleranceIn: _tol, ...rest } = input;
   void _min;
   void _max;
   void _tol;
-  return { ...rest, length, supports: input.supports.map((s) => ({ ...s, x: at(s.x) })), loads };
+  return { ...rest, lengthFt: length, supports: input.supports.map((s) => ({ ...s, x: at(s.x) })), loads };
 }
 
 /**
@@ -320,7 +328,7 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
   const member = resolveMember(input.member, tables);
   const run = (L: number) => checkMember(scaled(input, L), tables);
   const spansAt = (L: number) => {
-    const xs = [0, ...input.supports.map((sp) => (sp.x * L) / input.length), L].sort((a, b) => a - b);
+    const xs = [0, ...input.supports.map((sp) => (sp.x * L) / input.lengthFt), L].sort((a, b) => a - b);
     const out: { from: number; to: number; length: number }[] = [];
     for (let i = 1; i < xs.length; i++) {
       if (xs[i] - xs[i - 1] > 1e-9) out.push({ from: Math.floor(xs[i - 1] * 100) / 100, to: Math.floor(xs[i] * 100) / 100, length: Math.floor((xs[i] - xs[i - 1]) * 100) / 100 });
@@ -328,8 +336,8 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
     return out;
   };
   const base = { member: member.spec, label: member.label };
-  let lo = input.minLength;
-  let hi = input.maxLength;
+  let lo = input.minLengthFt;
+  let hi = input.maxLengthFt;
   const atLo = run(lo);
   if (!atLo.pass) {
     return { ...base, largestSpan: null, spans: [], largestSpanIn: null, governing: atLo.governing, atMaxLength: false, check: atLo, note: `fails even at ${lo} ft` };
@@ -360,7 +368,7 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
     governing: failGov,
     atMaxLength: false,
     check: best,
-    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.length) ? "centre to centre of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
+    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.lengthFt) ? "centre to centre of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
   };
 }
 

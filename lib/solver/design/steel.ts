@@ -27,7 +27,7 @@ import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common
 import type { DesignContext } from "./context";
 import { peakAbs } from "./load-model";
 import type { SteelMember } from "./member";
-import type { DesignCheck, SupportReaction } from "./types";
+import type { NamedCheck, SupportReaction } from "./types";
 
 export interface SteelFactors {
   method: "asd" | "lrfd";
@@ -79,14 +79,14 @@ export function requiredSteelBearing(s: { d: number; tw: number; tf: number; kde
   return hi;
 }
 
-export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: DesignCheck[]; reactions: SupportReaction[]; factors: SteelFactors } {
+export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: NamedCheck[]; reactions: SupportReaction[]; factors: SteelFactors } {
   const { model, conditions: cond } = ctx;
   const lrfd = ctx.method === "lrfd";
   const s = m.shape;
   const Fy = m.grade.Fy;
   const sw = cond.selfWeight ? m.weightPlf : 0;
   const xs = model.xs;
-  const checks: DesignCheck[] = [];
+  const checks: NamedCheck[] = [];
   const avail = (Rn: number, omega: number, phi: number) => (lrfd ? phi * Rn : Rn / omega);
 
   const webLimit = webCompactLimit(Fy);
@@ -105,7 +105,7 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Des
 
   const Mp = plasticMomentMp(Fy, s.Zx);
   const MnFLB = nominalFlexureFLB(s, Fy);
-  let bend: DesignCheck | null = null;
+  let bend: NamedCheck | null = null;
   let gov = { Lb: 0, Cb: 1, Mn: Mp, state: "yielding" as SteelFactors["flexureLimitState"] };
   for (const seg of model.segments) {
     const LbIn = seg.luFt * 12;
@@ -138,7 +138,7 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Des
   if (bend) checks.push(bend);
 
   const shearStrength = nominalShearVn(s, Fy);
-  let shear: DesignCheck | null = null;
+  let shear: NamedCheck | null = null;
   const Va = avail(shearStrength.Vn, shearStrength.omega, shearStrength.phi);
   for (const env of ctx.strength) {
     const k = env.fD * sw;
@@ -168,8 +168,8 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Des
 
   const service = reactionsFor(ctx, sw);
   const reactions: SupportReaction[] = [];
-  let wly: DesignCheck | null = null;
-  let wcr: DesignCheck | null = null;
+  let wly: NamedCheck | null = null;
+  let wcr: NamedCheck | null = null;
   model.supports.forEach((sup, j) => {
     const { R, combination } = lrfd ? factoredReaction(ctx, ctx.strength, j, sw) : { R: service[j].maxDown, combination: service[j].maxDownCombination };
     const Rk = R / 1000;

@@ -1,4 +1,11 @@
 /** Output shapes of the design checks (`npm run check`, POST /api/check) and the sizing search. */
+import type { Combination, SupportType } from "../types";
+
+/** A load combination as the checks used it: its name ("D+0.75L+0.75S") and its factors by case. */
+export interface CombinationRef {
+  name: string;
+  factors: Combination;
+}
 
 export type CheckName =
   | "bending"
@@ -21,8 +28,8 @@ export interface DesignCheck {
   unit: string;
   /** demand / capacity; the check passes at 1.0 or less */
   ratio: number;
-  /** the load combination that governs, e.g. "D+L"; deflection-live names only the live part */
-  combination: string | null;
+  /** the load combination that governs, e.g. { name: "D+L", factors: { D: 1, L: 1 } }; deflection-live names only the live part */
+  combination: CombinationRef | null;
   /** where along the member, ft; null where the check is not at one place */
   x: number | null;
   /** plain words on what was checked, e.g. "span 1, L/360 = 0.47 in" */
@@ -32,7 +39,7 @@ export interface DesignCheck {
 export interface SupportReaction {
   /** ft */
   x: number;
-  type: "pin" | "roller" | "fixed";
+  type: SupportType;
   /** largest downward reaction over the service (ASD) combinations, lb (the support pushes up) */
   maxDown: number;
   maxDownCombination: string;
@@ -48,3 +55,6 @@ export interface SupportReaction {
   /** wood members, supports at the member's ends: 1-1/2 in jack studs needed under this end of a header (bearing on the member only); null otherwise */
   jackStuds: number | null;
 }
+
+/** A check as the material modules write it: the combination by name, resolved to its factors once per member. */
+export type NamedCheck = Omit<DesignCheck, "combination"> & { combination: string | null };

@@ -29,7 +29,7 @@ import type { DesignContext } from "./context";
 import { peakAbs } from "./load-model";
 import { DECK_KINDS, REPETITIVE_KINDS, type MemberKind } from "./kinds";
 import type { WoodMember } from "./member";
-import type { DesignCheck, SupportReaction } from "./types";
+import type { NamedCheck, SupportReaction } from "./types";
 
 /** Width of one jack stud, in (a 2x stud's dressed thickness). */
 export const JACK_STUD_IN = 1.5;
@@ -116,7 +116,7 @@ export function resolveCr(m: WoodMember, given: boolean | undefined, kind: Membe
 }
 
 export interface MemberEvaluation {
-  checks: DesignCheck[];
+  checks: NamedCheck[];
   reactions: SupportReaction[];
   factors: WoodFactors;
 }
@@ -140,7 +140,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const EminPrime = adjustedEmin(m.Emin, { CM: CM.E, Ct: Ct.E, Ci: Ci.E }) * (lrfd ? FORMAT_CONVERSION_KF.Emin * RESISTANCE_PHI.Emin : 1);
   const longest = Math.max(...model.regions.map((r) => r.length));
   const CV = m.volumeX !== undefined ? volumeFactorCV(longest, m.d, m.plyWidth, m.volumeX) : null;
-  const checks: DesignCheck[] = [];
+  const checks: NamedCheck[] = [];
 
   // Bending, per unbraced segment and combination (NDS 2018 §3.3).
   // Fb* without CD (applied per combination), NDS 2018 §3.3.3.8
@@ -256,8 +256,9 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ...service[j],
       bearing: ctx.bearingIn,
       requiredBearing: round(required, 2),
-      // jack studs hold a header's ends; an interior support is a post or wall, not counted in studs here
-      jackStuds: fromEndIn <= 1e-6 ? Math.max(1, Math.ceil(required / JACK_STUD_IN - 1e-9)) : null,
+      // jack studs hold a header's ends; an interior support is a post or wall, not counted in studs here.
+      // Enough studs for the bearing the check assumed and for the bearing needed: the count and the check read the same numbers.
+      jackStuds: fromEndIn <= 1e-6 ? Math.max(1, Math.ceil(Math.max(required, ctx.bearingIn) / JACK_STUD_IN - 1e-9)) : null,
     });
   }
   const bearingCb = bestBearing.Cb;

@@ -2,7 +2,7 @@
 import { cleanup, render, screen } from "@testing-library/react";
 import { afterEach, describe, expect, test } from "vitest";
 import { Caution } from "@/components/ui/caution";
-import { CAUTION_TEXT } from "@/components/ui/caution-text";
+import { CAUTION as CAUTION_TEXT } from "@/lib/caution";
 
 afterEach(cleanup);
 

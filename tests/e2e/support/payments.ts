@@ -10,7 +10,7 @@ export function mailApiUrl(): string {
   return (process.env.MAILDEV_URL ?? "http://127.0.0.1:1080").replace(/\/$/, "");
 }
 
-/** The Stripe stand-in (scripts/stripe-standin.ts), for its test controls. */
+/** The Stripe stand-in (scripts/stripe-standin/), for its test controls. */
 export function standinUrl(): string {
   return (process.env.STRIPE_STANDIN_URL ?? `http://127.0.0.1:${process.env.STRIPE_STANDIN_PORT ?? "12111"}`).replace(/\/$/, "");
 }

@@ -3,7 +3,8 @@
 // the route's boundary) and through analyzeBeam itself (for callers inside lib/).
 import { describe, expect, test } from "vitest";
 import { analyzeBeam, BeamInputError, BeamInstabilityError } from "@/lib/solver/beam";
-import { beamInputSchema, issuesOf } from "@/lib/solver/schema";
+import { beamInputSchema } from "@/lib/solver/schema";
+import { zodIssues as issuesOf } from "@/lib/zod-issues";
 import type { BeamInput } from "@/lib/solver/types";
 
 const ok = {

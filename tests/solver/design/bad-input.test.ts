@@ -4,12 +4,12 @@ import { STARTER_TABLES } from "@/lib/tables";
 
 const base = {
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10" },
-  length: 12,
+  lengthFt: 12,
   supports: [
     { x: 0, type: "pin" },
     { x: 12, type: "roller" },
   ],
-  spacing: 16,
+  spacingIn: 16,
   loads: [{ type: "area", case: "L", psf: 40 }],
 };
 
@@ -31,10 +31,10 @@ describe("bad input names the field and the reason", () => {
     ["unknown W-shape lists the shapes", { ...base, member: { material: "steel", shape: "W8x99" } }, "member.shape", /W8x18/],
     ["unknown engineered product lists the products", { ...base, member: { material: "engineered", product: "LVL 9E", depth: 11.875 } }, "member.product", /LVL 1\.9E/],
     ["engineered depth not made", { ...base, member: { material: "engineered", product: "LVL 1.9E", depth: 10 } }, "member.depth", /11\.875 in/],
-    ["spacing and tributary both", { ...base, tributary: 4 }, "tributary", /not both/],
-    ["neither spacing nor tributary with area loads", { ...base, spacing: undefined }, "spacing", /area loads \(psf\) need spacing/],
-    ["bearing 0", { ...base, bearing: 0 }, "bearing", /greater than 0/],
-    ["member shorter than its supports", { ...base, length: 10 }, "supports.1.x", /must be on the member, between 0 and 10 ft \(got 12\)/],
+    ["spacing and tributary both", { ...base, tributaryFt: 4 }, "tributaryFt", /not both/],
+    ["neither spacing nor tributary with area loads", { ...base, spacingIn: undefined }, "spacingIn", /area loads \(psf\) need spacingIn/],
+    ["bearing 0", { ...base, bearingIn: 0 }, "bearingIn", /greater than 0/],
+    ["member shorter than its supports", { ...base, lengthFt: 10 }, "supports.1.x", /must be on the member, between 0 and 10 ft \(got 12\)/],
     ["a load off the member", { ...base, loads: [{ type: "point", case: "L", x: 14, P: 100 }] }, "loads.0.x", /must be on the member/],
     ["an area load without a case", { ...base, loads: [{ type: "area", psf: 40 }] }, "loads.0.case", /case and psf, or a preset/],
     ["an unknown load case", { ...base, loads: [{ type: "area", case: "X", psf: 40 }] }, "loads.0", /./],
@@ -58,8 +58,8 @@ describe("bad input names the field and the reason", () => {
   });
 
   test("size: spacing and tributary both", () => {
-    const issues = issuesOf(() => sizeMember({ ...base, member: { material: "steel" }, tributary: 3 }, STARTER_TABLES));
-    expect(issues.map((i) => i.path)).toContain("tributary");
+    const issues = issuesOf(() => sizeMember({ ...base, member: { material: "steel" }, tributaryFt: 3 }, STARTER_TABLES));
+    expect(issues.map((i) => i.path)).toContain("tributaryFt");
   });
 
   test("span: the member must be named in full", () => {

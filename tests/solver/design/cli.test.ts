@@ -12,12 +12,12 @@ function cli(command: string, input: unknown, ...flags: string[]) {
 
 const joist = {
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10" },
-  length: 14,
+  lengthFt: 14,
   supports: [
     { x: 0, type: "pin" },
     { x: 14, type: "roller" },
   ],
-  spacing: 16,
+  spacingIn: 16,
   loads: [
     { type: "area", case: "L", psf: 40 },
     { type: "area", case: "D", psf: 10 },
@@ -30,9 +30,9 @@ describe("npm run check / size (JSON in, JSON out)", () => {
     const ok = cli("check", joist);
     expect(ok.status).toBe(0);
     expect(JSON.parse(ok.stdout).checks[0].name).toBe("bending");
-    const bad = cli("check", { ...joist, bearing: 0 });
+    const bad = cli("check", { ...joist, bearingIn: 0 });
     expect(bad.status).toBe(2);
-    expect(bad.stderr).toMatch(/bearing: must be a number greater than 0/);
+    expect(bad.stderr).toMatch(/bearingIn: must be a number greater than 0/);
     expect(bad.stdout).toBe("");
   });
 

@@ -9,12 +9,12 @@ import { STARTER_TABLES } from "@/lib/tables";
 describe("14 ft floor joist at 16 in, 40 psf live + 10 psf dead, L/360 and L/240", () => {
   const input = {
     member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" },
-    length: 14,
+    lengthFt: 14,
     supports: [
       { x: 0, type: "pin" },
       { x: 14, type: "roller" },
     ],
-    spacing: 16,
+    spacingIn: 16,
     loads: [
       { type: "area", preset: "living" },
       { type: "area", preset: "floor-dead" },
@@ -57,33 +57,33 @@ describe("14 ft floor joist at 16 in, 40 psf live + 10 psf dead, L/360 and L/240
 describe("12 ft header under a bearing wall: 8 ft of floor at 15 psf dead + 40 psf live", () => {
   const input = {
     member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" },
-    length: 12,
+    lengthFt: 12,
     supports: [
       { x: 0, type: "pin" },
       { x: 12, type: "roller" },
     ],
-    tributary: 8,
+    tributaryFt: 8,
     loads: [
       { type: "area", case: "D", psf: 15 },
       { type: "area", case: "L", psf: 40 },
     ],
-    bearing: 3,
+    bearingIn: 3,
   };
   const r = sizeMember({ ...input, rank: "weight", failures: 100 }, STARTER_TABLES);
   const rho = 62.4 * (0.5 / (1 + 0.5 * 0.009 * 19)) * 1.19; // lb/ft³ at 19 % (NDS Supplement 2018 §3.1.3)
 
-  test("answer: 3-ply 2x12 No.2, bending 99 %, one jack stud each end", () => {
+  test("answer: 3-ply 2x12 No.2, bending 99 %, two jack studs each end (the 3 in of bearing the check used)", () => {
     // 3-ply 2x12: own weight 34.21 × 3 × 16.875 / 144 = 12.03 plf; w = 440 + 12.03 = 452.0 plf
     // M = 452.0 × 12² / 8 = 8136 lb-ft; fb = 8136 × 12 / 94.92 = 1028.6 psi;
     // Fb' = 900 × CD 1.0 × CF 1.0 × Cr 1.15 (three plies in contact, NDS 2018 §4.3.9) = 1035 psi → 0.994
-    // R = 452.0 × 6 = 2712 lb; required bearing 2712 / (4.5 × 625) = 0.96 in → one jack stud
+    // R = 452.0 × 6 = 2712 lb; required bearing 2712 / (4.5 × 625) = 0.96 in, checked at the 3 in given → two 1-1/2 in jack studs
     const best = r.passing[0];
     expect(best.label).toBe("3-ply 2x12 Douglas Fir-Larch No.2");
     const w = 440 + (rho * 3 * 1.5 * 11.25) / 144;
     const S = (4.5 * 11.25 ** 2) / 6;
     expect(best.ratio).toBeCloseTo(((w * 144) / 8) * 12 / S / (900 * 1.15), 3);
     expect(best.governing).toBe("bending");
-    expect(best.supports.map((s) => s.jackStuds)).toEqual([1, 1]);
+    expect(best.supports.map((s) => s.jackStuds)).toEqual([3 / 1.5, 3 / 1.5]);
     expect(best.supports[0].maxDown).toBe(Math.round(w * 6));
   });
 
@@ -107,12 +107,12 @@ describe("overhang, uplift and pattern live load", () => {
   // 8 ft back span with a 4 ft overhang (deck joist on a beam); live load on the overhang alone lifts the far end.
   const deck = {
     member: { material: "sawn", species: "Southern Pine", grade: "No.2", size: "2x10" },
-    length: 12,
+    lengthFt: 12,
     supports: [
       { x: 0, type: "pin" },
       { x: 8, type: "roller" },
     ],
-    spacing: 16,
+    spacingIn: 16,
     loads: [
       { type: "area", case: "L", psf: 40 },
       { type: "area", case: "D", psf: 10 },
@@ -144,7 +144,7 @@ describe("overhang, uplift and pattern live load", () => {
   test("the overhang tip is checked against twice its length", () => {
     const notes = r.checks.filter((c) => c.name.startsWith("deflection")).map((c) => c.note);
     expect(notes.length).toBe(2);
-    const tip = checkMember({ ...deck, length: 18, supports: [{ x: 0, type: "pin" }, { x: 10, type: "roller" }] }, STARTER_TABLES);
+    const tip = checkMember({ ...deck, lengthFt: 18, supports: [{ x: 0, type: "pin" }, { x: 10, type: "roller" }] }, STARTER_TABLES);
     expect(tip.checks.find((c) => c.name === "deflection-live")?.note).toMatch(/overhang .* 2 × its length/);
   });
 

@@ -50,7 +50,7 @@ describe("take-down of area loads", () => {
     const t = takeDown(
       [
         { type: "area", case: "D", psf: 10 },
-        { type: "area", case: "S", psf: 25, tributary: 12 },
+        { type: "area", case: "S", psf: 25, tributaryFt: 12 },
       ],
       10,
       { tributaryFt: 4 },

@@ -32,15 +32,15 @@ const ftIn = (s: string) => {
   return ft * 12 + inch;
 };
 
-function joist(species: Species, grade: SawnGrade, size: string, spacing: number, live: number) {
+function joist(species: Species, grade: SawnGrade, size: string, spacingIn: number, live: number) {
   return {
     member: { material: "sawn", species, grade, size },
-    length: 16,
+    lengthFt: 16,
     supports: [
       { x: 0, type: "pin" },
       { x: 16, type: "roller" },
     ],
-    spacing,
+    spacingIn,
     loads: [
       { type: "area", case: "L", psf: live },
       { type: "area", case: "D", psf: 10 },
@@ -48,8 +48,8 @@ function joist(species: Species, grade: SawnGrade, size: string, spacing: number
     // the tables' 10 psf dead load includes the joists themselves
     conditions: { repetitive: true, selfWeight: false },
     limits: { preset: "floor" },
-    minLength: 4,
-    maxLength: 30,
+    minLengthFt: 4,
+    maxLengthFt: 30,
     toleranceIn: 0.02,
   };
 }

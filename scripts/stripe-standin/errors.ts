@@ -3,7 +3,7 @@
  * 402 (card declined), 404 (no such object). The SDK maps these to StripeInvalidRequestError,
  * StripeAuthenticationError and StripeCardError.
  */
-export type StripeErrorType = "invalid_request_error" | "card_error" | "api_error" | "idempotency_error";
+type StripeErrorType = "invalid_request_error" | "card_error" | "api_error" | "idempotency_error";
 
 export class StandinApiError extends Error {
   constructor(

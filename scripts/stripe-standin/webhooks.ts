@@ -10,7 +10,7 @@ export function signatureHeader(payload: string, secret: string, timestampSec: n
   return `t=${timestampSec},v1=${v1}`;
 }
 
-export interface DeliveryRecord {
+interface DeliveryRecord {
   eventId: string;
   type: string;
   status: number | null;
@@ -18,7 +18,7 @@ export interface DeliveryRecord {
   error?: string;
 }
 
-export interface WebhookSenderOptions {
+interface WebhookSenderOptions {
   url: string;
   secret: string;
   /** Attempts per event before giving up (Stripe retries for days; the stand-in keeps it short). */

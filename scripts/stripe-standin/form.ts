@@ -16,7 +16,7 @@ export class FormParseError extends Error {
 }
 
 /** Splits `items[0][price]` into ["items", "0", "price"]; `expand[]` into ["expand", ""]. */
-export function splitKey(key: string): string[] {
+function splitKey(key: string): string[] {
   const first = key.indexOf("[");
   if (first === -1) return [key];
   const parts = [key.slice(0, first)];

@@ -2,11 +2,11 @@ import Stripe from "stripe";
 import { afterAll, beforeAll, beforeEach, describe, expect, test } from "vitest";
 import { ensureCatalog } from "@/lib/payments/catalog";
 import { PLANS } from "@/lib/payments/plans";
-import { parseStripeForm } from "@/lib/payments/standin/form";
-import { addInterval } from "@/lib/payments/standin/objects";
-import type { StandinServer } from "@/lib/payments/standin/server";
-import { signatureHeader } from "@/lib/payments/standin/webhooks";
-import { pay, startReceiver, startTestStandin, stripeFor, WEBHOOK_SECRET, type Receiver } from "./support";
+import { parseStripeForm } from "@/scripts/stripe-standin/form";
+import { addInterval } from "@/scripts/stripe-standin/objects";
+import type { StandinServer } from "@/scripts/stripe-standin/server";
+import { signatureHeader } from "@/scripts/stripe-standin/webhooks";
+import { pay, startReceiver, startTestStandin, stripeFor, WEBHOOK_SECRET, type Receiver } from "../../payments/support";
 
 // The stand-in is checked against the official SDK (stripe 23.1.0): its request encoding, its error
 // classes, its webhook signature check. Where these tests pass, the SDK accepts the stand-in as Stripe.

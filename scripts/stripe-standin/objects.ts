@@ -108,7 +108,7 @@ export interface CheckoutSessionPrivate {
   declines: number;
 }
 
-export interface SubscriptionItemObject {
+interface SubscriptionItemObject {
   id: string;
   object: "subscription_item";
   created: number;

@@ -1,6 +1,6 @@
 import { describe, expect, test } from "vitest";
 import { analyzeBeam } from "@/lib/solver/beam";
-import { chainVertices, diagramChain, jumpsOf, polyValue, type BezierChain, type DiagramSegment } from "@/components/diagrams/geometry";
+import { chainVertices, diagramChain, jumpsOf, polyValue, type BezierChain, type DiagramSegment } from "@/lib/diagrams/geometry";
 import { diagramPath, diagramScales } from "@/components/diagrams/beam-diagram";
 
 const E = 1_600_000; // psi

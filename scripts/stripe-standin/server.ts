@@ -6,10 +6,17 @@ import { StandinApiError, unknownRoute } from "./errors";
 import { FormParseError, parseStripeForm, str, stringList, type FormObject } from "./form";
 import type { StandinObject } from "./objects";
 import { checkoutPage, messagePage, portalPage } from "./pages";
-import { Standin, type StandinSnapshot } from "./standin";
+import { createPrice, createProduct, listPrices, listProducts, retrievePrice, retrieveProduct } from "./catalog";
+import { checkoutView, createCheckoutSession, payCheckoutSession, retrieveCheckoutSession } from "./checkout";
+import { advance } from "./clock";
+import { createCustomer, retrieveCustomer, updateCustomer } from "./customers";
+import { listEvents, retrieveEvent } from "./events";
+import { createPortalSession, portalAction, portalView } from "./portal";
+import { cancelSubscription, listSubscriptions, retrieveInvoice, retrieveSubscription, updateSubscription } from "./subscriptions";
+import { StandinStore, type StandinSnapshot } from "./store";
 import { WebhookSender } from "./webhooks";
 
-export interface StandinServerOptions {
+interface StandinServerOptions {
   port: number;
   host?: string;
   /** Where events are POSTed; an empty string sends none. */
@@ -24,7 +31,7 @@ export interface StandinServerOptions {
 
 export interface StandinServer {
   url: string;
-  standin: Standin;
+  standin: StandinStore;
   sender: WebhookSender | null;
   server: Server;
   /** Resolves once every event so far has been delivered (or given up on). */
@@ -48,7 +55,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
   const sender = options.webhookUrl
     ? new WebhookSender({ url: options.webhookUrl, secret: options.webhookSecret, log })
     : null;
-  const standin = new Standin({
+  const standin = new StandinStore({
     get publicUrl() {
       return publicUrl;
     },
@@ -74,25 +81,25 @@ export async function startStandinServer(options: StandinServerOptions): Promise
   };
 
   const api: Array<[string, RegExp, ApiHandler]> = [
-    ["POST", /^\/v1\/products$/, (_m, p) => standin.createProduct(p)],
-    ["GET", /^\/v1\/products$/, (_m, p) => standin.listProducts(p)],
-    ["GET", /^\/v1\/products\/([^/]+)$/, (m) => standin.retrieveProduct(m[1])],
-    ["POST", /^\/v1\/prices$/, (_m, p) => standin.createPrice(p)],
-    ["GET", /^\/v1\/prices$/, (_m, p) => standin.listPrices(p)],
-    ["GET", /^\/v1\/prices\/([^/]+)$/, (m) => standin.retrievePrice(m[1])],
-    ["POST", /^\/v1\/customers$/, (_m, p) => standin.createCustomer(p)],
-    ["GET", /^\/v1\/customers\/([^/]+)$/, (m) => standin.retrieveCustomer(m[1])],
-    ["POST", /^\/v1\/customers\/([^/]+)$/, (m, p) => standin.updateCustomer(m[1], p)],
-    ["POST", /^\/v1\/checkout\/sessions$/, (_m, p) => standin.createCheckoutSession(p)],
-    ["GET", /^\/v1\/checkout\/sessions\/([^/]+)$/, (m) => standin.retrieveCheckoutSession(m[1])],
-    ["GET", /^\/v1\/subscriptions$/, (_m, p) => standin.listSubscriptions(p)],
-    ["GET", /^\/v1\/subscriptions\/([^/]+)$/, (m) => standin.retrieveSubscription(m[1])],
-    ["POST", /^\/v1\/subscriptions\/([^/]+)$/, (m, p) => standin.updateSubscription(m[1], p)],
-    ["DELETE", /^\/v1\/subscriptions\/([^/]+)$/, (m) => standin.cancelSubscription(m[1])],
-    ["GET", /^\/v1\/invoices\/([^/]+)$/, (m) => standin.retrieveInvoice(m[1])],
-    ["POST", /^\/v1\/billing_portal\/sessions$/, (_m, p) => standin.createPortalSession(p)],
-    ["GET", /^\/v1\/events$/, (_m, p) => standin.listEvents(p)],
-    ["GET", /^\/v1\/events\/([^/]+)$/, (m) => standin.retrieveEvent(m[1])],
+    ["POST", /^\/v1\/products$/, (_m, p) => createProduct(standin, p)],
+    ["GET", /^\/v1\/products$/, (_m, p) => listProducts(standin, p)],
+    ["GET", /^\/v1\/products\/([^/]+)$/, (m) => retrieveProduct(standin, m[1])],
+    ["POST", /^\/v1\/prices$/, (_m, p) => createPrice(standin, p)],
+    ["GET", /^\/v1\/prices$/, (_m, p) => listPrices(standin, p)],
+    ["GET", /^\/v1\/prices\/([^/]+)$/, (m) => retrievePrice(standin, m[1])],
+    ["POST", /^\/v1\/customers$/, (_m, p) => createCustomer(standin, p)],
+    ["GET", /^\/v1\/customers\/([^/]+)$/, (m) => retrieveCustomer(standin, m[1])],
+    ["POST", /^\/v1\/customers\/([^/]+)$/, (m, p) => updateCustomer(standin, m[1], p)],
+    ["POST", /^\/v1\/checkout\/sessions$/, (_m, p) => createCheckoutSession(standin, p)],
+    ["GET", /^\/v1\/checkout\/sessions\/([^/]+)$/, (m) => retrieveCheckoutSession(standin, m[1])],
+    ["GET", /^\/v1\/subscriptions$/, (_m, p) => listSubscriptions(standin, p)],
+    ["GET", /^\/v1\/subscriptions\/([^/]+)$/, (m) => retrieveSubscription(standin, m[1])],
+    ["POST", /^\/v1\/subscriptions\/([^/]+)$/, (m, p) => updateSubscription(standin, m[1], p)],
+    ["DELETE", /^\/v1\/subscriptions\/([^/]+)$/, (m) => cancelSubscription(standin, m[1])],
+    ["GET", /^\/v1\/invoices\/([^/]+)$/, (m) => retrieveInvoice(standin, m[1])],
+    ["POST", /^\/v1\/billing_portal\/sessions$/, (_m, p) => createPortalSession(standin, p)],
+    ["GET", /^\/v1\/events$/, (_m, p) => listEvents(standin, p)],
+    ["GET", /^\/v1\/events\/([^/]+)$/, (m) => retrieveEvent(standin, m[1])],
   ];
 
   async function handleApi(req: IncomingMessage, res: ServerResponse, url: URL): Promise<void> {
@@ -154,7 +161,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
     let m = /^\/checkout\/([^/]+)$/.exec(url.pathname);
     if (m && method === "GET") {
       try {
-        send(res, 200, "text/html; charset=utf-8", checkoutPage(standin.checkoutView(m[1])));
+        send(res, 200, "text/html; charset=utf-8", checkoutPage(checkoutView(standin, m[1])));
       } catch (err) {
         send(res, toApiError(err).status, "text/html; charset=utf-8", messagePage("Checkout not found", "This checkout link is not valid."));
       }
@@ -165,7 +172,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
       const form = parseStripeForm(await readBody(req));
       const card = { number: str(form, "number") ?? "", expiry: str(form, "expiry") ?? "", cvc: str(form, "cvc") ?? "" };
       try {
-        const session = standin.payCheckoutSession(m[1], card);
+        const session = payCheckoutSession(standin, m[1], card);
         persist();
         await settled();
         const redirect = session.success_url.replace("{CHECKOUT_SESSION_ID}", session.id);
@@ -183,7 +190,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
           return true;
         }
         try {
-          const view = standin.checkoutView(m[1]);
+          const view = checkoutView(standin, m[1]);
           // The page itself loads fine: the decline is said on it (a 4xx would read as a broken page).
           send(res, 200, "text/html; charset=utf-8", checkoutPage({ ...view, error: e.message, values: { ...card, name: str(form, "name") } }));
         } catch {
@@ -195,7 +202,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
     m = /^\/portal\/([^/]+)$/.exec(url.pathname);
     if (m && method === "GET") {
       try {
-        const view = standin.portalView(m[1]);
+        const view = portalView(standin, m[1]);
         const done = url.searchParams.get("done");
         const notice =
           done === "cancel"
@@ -216,7 +223,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
       const form = parseStripeForm(await readBody(req));
       const action = m[2] === "cancel-now" ? "cancel_now" : (m[2] as "cancel" | "resume");
       try {
-        const subscription = standin.portalAction(m[1], str(form, "subscription") ?? "", action);
+        const subscription = portalAction(standin, m[1], str(form, "subscription") ?? "", action);
         persist();
         await settled();
         if (wantsJson) {
@@ -247,7 +254,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
       const raw = method === "POST" ? await readBody(req) : "";
       const params: Params = raw.trim().startsWith("{") ? jsonParams(raw) : parseStripeForm(raw);
       if (method === "POST" && url.pathname === "/_control/advance") {
-        const result = standin.advance(params);
+        const result = advance(standin, params);
         persist();
         await settled();
         return json(res, 200, result);
@@ -335,12 +342,12 @@ function jsonParams(raw: string): Params {
 }
 
 /** Replaces ids with objects at each `expand[]` path (`subscription`, `data.product`, `items.data.price`). */
-function expandPaths(value: unknown, paths: string[], standin: Standin): unknown {
+function expandPaths(value: unknown, paths: string[], standin: StandinStore): unknown {
   for (const p of paths) expandOne(value, p.split("."), standin);
   return value;
 }
 
-function expandOne(node: unknown, parts: string[], standin: Standin): void {
+function expandOne(node: unknown, parts: string[], standin: StandinStore): void {
   if (!node || typeof node !== "object" || parts.length === 0) return;
   if (Array.isArray(node)) {
     for (const item of node) expandOne(item, parts, standin);

@@ -3,7 +3,7 @@
 // Env: STRIPE_STANDIN_PORT (12111), STRIPE_WEBHOOK_URL (http://127.0.0.1:3000/api/stripe/webhook; empty sends
 // none), STRIPE_WEBHOOK_SECRET (whsec_local), STRIPE_STANDIN_STATE (a JSON file keeping state across restarts).
 import { z } from "zod";
-import { startStandinServer } from "@/lib/payments/standin/server";
+import { startStandinServer } from "./server";
 
 const Config = z.object({
   STRIPE_STANDIN_PORT: z.coerce.number().int().min(1).max(65535).default(12111),

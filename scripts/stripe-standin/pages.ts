@@ -12,7 +12,7 @@ export function money(amountMinor: number, currency: string): string {
   return new Intl.NumberFormat("en-US", { style: "currency", currency: currency.toUpperCase() }).format(amountMinor / 100);
 }
 
-export function dateText(epochSec: number): string {
+function dateText(epochSec: number): string {
   return new Intl.DateTimeFormat("en-US", { dateStyle: "long", timeZone: "UTC" }).format(new Date(epochSec * 1000));
 }
 
@@ -53,7 +53,7 @@ ${body}
 </main></body></html>`;
 }
 
-export interface CheckoutPageInput {
+interface CheckoutPageInput {
   session: CheckoutSessionObject;
   lines: Array<{ price: PriceObject; product: ProductObject; quantity: number }>;
   email: string | null;
@@ -101,7 +101,7 @@ ${session.cancel_url ? `<p><a href="${escapeHtml(session.cancel_url)}">Cancel an
   );
 }
 
-export interface PortalPageInput {
+interface PortalPageInput {
   session: PortalSessionObject;
   email: string | null;
   subscriptions: SubscriptionObject[];

@@ -2,8 +2,8 @@ import { mkdtemp, rm } from "node:fs/promises";
 import { networkInterfaces, tmpdir } from "node:os";
 import path from "node:path";
 import { afterAll, describe, expect, test } from "vitest";
-import { startStandinServer } from "@/lib/payments/standin/server";
-import { stripeFor } from "./support";
+import { startStandinServer } from "@/scripts/stripe-standin/server";
+import { stripeFor } from "../../payments/support";
 
 // The stand-in as a process: state kept in a file across restarts, and test controls for loopback only.
 describe("stand-in server", () => {

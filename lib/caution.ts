@@ -1,0 +1,30 @@
+/**
+ * The safety caution and what Spanlark does not check: one place, so the answer screen, the routes
+ * and the CLI, the crew link, the job sheet (page and PDF), the home page and the e-mails say the same.
+ * Wording from DESIGN.md. Plain text: no React, no server code, so every layer can import it.
+ */
+
+export const CAUTION_TITLE = "Check before you build";
+
+/** DESIGN.md's caution: on every answer, crew link, job sheet and result. */
+export const CAUTION =
+  "Preliminary sizing for typical house framing. Check loads, spans and supports on site. " +
+  "Your local building code and building official govern; have a licensed engineer review anything unusual — " +
+  "long spans, heavy point loads, steel, or anything this tool does not check (connections, fasteners, posts, footings, lateral loads).";
+
+/** What the member checks leave to others: carried by every design result, listed in full on sheets and the crew link. */
+export const NOT_CHECKED: readonly string[] = [
+  "Connections and hangers",
+  "Fasteners: nails, screws, bolts and their spacing",
+  "Posts, studs, columns and footings, and the plates or walls under the bearing (bearing is checked on this member only)",
+  "Lateral loads: wind and earthquake on the building, bracing and shear walls; wind on this member beyond the loads given",
+  "Point loads on joists without blocking or a beam under them",
+  "Notches, holes and cuts in the member",
+  "Floor vibration and bounce beyond the deflection limits",
+  "Ponding on low-slope roofs, snow drifts, sliding and unbalanced snow",
+  "Fire resistance, decay and insect protection",
+];
+
+/** What a beam analysis on its own (POST /api/solve, `npm run solve`) does not check. */
+export const ANALYSIS_NOT_CHECKED =
+  "This is the analysis of a straight beam with constant EI (shear deformation, axial load and the member's strength are not included); it does not check the member, bearing, connections, fasteners, posts, footings or lateral loads.";

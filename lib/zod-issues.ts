@@ -1,0 +1,15 @@
+/**
+ * A zod error as the field-level issues every boundary answers with (routes, server actions, the CLI):
+ * `{ path, message }`, the path's parts joined with dots, "" for the whole body. Pure.
+ */
+import type { ZodError } from "zod";
+
+export interface FieldIssue {
+  /** "loads.2.psf"; "" names the whole body */
+  path: string;
+  message: string;
+}
+
+export function zodIssues(error: ZodError): FieldIssue[] {
+  return error.issues.map((i) => ({ path: i.path.map(String).join("."), message: i.message }));
+}
