@@ -8,7 +8,7 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { answerFacts, headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
+import { answerFacts, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";

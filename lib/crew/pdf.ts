@@ -1,5 +1,5 @@
 import "server-only";
-import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/caution-text";
+import { CAUTION as CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
 import { renderPdf } from "@/lib/orders/pdf";
 import { formatSheetDate } from "@/lib/sheets/format";
 import { PDF_COLORS, type Paper } from "@/lib/sheets/pdf";

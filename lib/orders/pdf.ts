@@ -1,6 +1,6 @@
 import "server-only";
 import PDFDocument from "pdfkit";
-import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/caution-text";
+import { CAUTION as CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
 import { FONTS, MARGIN, PAPER_SIZE, PDF_COLORS, pdfText, SheetWriter, type Paper } from "@/lib/sheets/pdf";
 import { formatSheetDateTime } from "@/lib/sheets/format";
 import { formatDollars, formatStockLength } from "./order-list";

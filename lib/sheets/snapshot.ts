@@ -7,7 +7,7 @@ import { CAUTION, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
-import { answerFacts, headlineFor, spacingOf } from "@/lib/flow/summary";
+import { answerFacts, spacingOf } from "@/lib/flow/summary";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
 import { LOAD_STANDARD_WORDS } from "@/lib/solver/asce7/standard";

@@ -49,10 +49,11 @@ export function pieceWeights(prep: PreparedBeam, factors?: Combination): Float64
 /**
  * Analyses one beam. `factors` scales each load by its case's factor (a case left out counts 0);
  * without it every load counts once. Throws BeamInputError (a field and its reason) or
- * BeamInstabilityError (why the supports cannot hold the beam, and what to add).
+ * BeamInstabilityError (why the supports cannot hold the beam, and what to add). `internalLoads`
+ * counts loads the caller added itself (a member's own weight), which the load limit does not count.
  */
-export function analyzeBeam(input: BeamInput, factors?: Combination): BeamAnalysis {
-  const prep = prepareBeam(input);
+export function analyzeBeam(input: BeamInput, factors?: Combination, internalLoads = 0): BeamAnalysis {
+  const prep = prepareBeam(input, internalLoads);
   return makeAnalysis(prep, respond(prep, pieceWeights(prep, factors)));
 }
 

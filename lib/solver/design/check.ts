@@ -351,7 +351,7 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
  * length and passes with braces closer, the answer says how close (to the inch, rounded down), as an
  * instruction for the crew; nothing is assumed.
  */
-function bracingFor(input: CheckInput, member: DesignMember, ev: Evaluation): Bracing {
+function bracingFor(input: Omit<CheckInput, "member">, member: DesignMember, ev: Evaluation): Bracing {
   const givenFt = input.conditions.unbracedLengthFt;
   const none: Bracing = { givenFt, neededFt: null, instruction: null };
   if (givenFt <= 0 || ev.pass) return none;

@@ -98,8 +98,9 @@ export function memberDiagrams(src: DiagramSource): MemberDiagrams | null {
   const loads: (Load & { case: LoadCase })[] = src.loads.map((l) => ({ ...l }));
   if (src.selfWeightPlf > 0) loads.push({ type: "udl", case: "D", from: 0, to: src.lengthFt, w: src.selfWeightPlf });
   const beam = { length: src.lengthFt, E: src.EPsi, I: src.IIn4, supports: src.supports, loads };
-  const a = analyzeBeam(beam, strength.factors);
-  const d = service.name === strength.name ? a : analyzeBeam(beam, service.factors);
+  const own = src.selfWeightPlf > 0 ? 1 : 0;
+  const a = analyzeBeam(beam, strength.factors, own);
+  const d = service.name === strength.name ? a : analyzeBeam(beam, service.factors, own);
   const e = a.extremes;
   const moment: DiagramExtreme[] = [];
   if (e.Mpos.value > 1e-6) moment.push(extreme(e.Mpos.x, e.Mpos.value, "Largest moment"));

@@ -76,7 +76,8 @@ describe("the routes' answer is the same line", () => {
     const bearing = r.checks.find((c) => c.name === "bearing")!;
     expect(bearing.ratio).toBeLessThan(1);
     for (const x of r.reactions) expect(x.jackStuds! * 1.5).toBeGreaterThanOrEqual(header.bearingIn);
-    expect(r.answer).toBe(`2-ply 2x10 No.2 — ${r.reactions[0].jackStuds} jack studs each end`);
+    // a header sits in a 2x4 wall unless told: two 1-1/2 in plies and a 1/2 in spacer fill its 3-1/2 in
+    expect(r.answer).toBe(`2-ply 2x10 No.2 with 1/2" spacer — ${r.reactions[0].jackStuds} jack studs each end`);
   });
 
   test("an unknown kind is refused naming the field and the allowed values", () => {

@@ -114,7 +114,8 @@ describe("header under a bearing wall with roof snow and a floor above (hand che
   });
 
   test("the answer line for the crew", () => {
-    expect(r.answer).toBe("2-ply 2x10 No.2 — 2 jack studs each end");
+    // in the default 2x4 wall: two 1-1/2 in plies and a 1/2 in spacer fill 3-1/2 in
+    expect(r.answer).toBe('2-ply 2x10 No.2 with 1/2" spacer — 2 jack studs each end');
     expect(r.verdict).toBe("OK 77% (bending)");
   });
 

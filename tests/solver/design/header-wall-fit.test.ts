@@ -11,8 +11,8 @@ import { STARTER_TABLES } from "@/lib/tables";
 const header = (extra: Record<string, unknown> = {}) => ({
   kind: "header",
   roughOpeningFt: 5,
-  tributary: 13,
-  bearing: 3,
+  tributaryFt: 13,
+  bearingIn: 3,
   loads: [
     { type: "area", preset: "roof-dead" },
     { type: "area", preset: "roof-live" },
@@ -61,7 +61,7 @@ describe("a 5 ft 0 in rough opening with the flow's default header loads", () =>
 
   test("span and rough opening together are refused, naming roughOpeningFt", () => {
     try {
-      checkMember({ ...header(), length: 6, supports: [{ x: 0, type: "pin" }, { x: 6, type: "roller" }], member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 2 } }, STARTER_TABLES);
+      checkMember({ ...header(), lengthFt: 6, supports: [{ x: 0, type: "pin" }, { x: 6, type: "roller" }], member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 2 } }, STARTER_TABLES);
       expect.unreachable();
     } catch (err) {
       expect(err).toBeInstanceOf(DesignInputError);

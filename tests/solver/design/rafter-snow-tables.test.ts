@@ -55,12 +55,12 @@ function rafter(species: Species, size: string, spacing: number) {
   return {
     member: { material: "sawn", species, grade: "No.2", size },
     kind: "rafter",
-    length: 16,
+    lengthFt: 16,
     supports: [
       { x: 0, type: "pin" },
       { x: 16, type: "roller" },
     ],
-    spacing,
+    spacingIn: spacing,
     loads: [
       { type: "area", case: "S", psf: 30 },
       { type: "area", case: "D", psf: 10 },
@@ -68,8 +68,8 @@ function rafter(species: Species, size: string, spacing: number) {
     // the tables' 10 psf dead load includes the rafters themselves
     conditions: { selfWeight: false },
     limits: { live: 180, total: null },
-    minLength: 4,
-    maxLength: 30,
+    minLengthFt: 4,
+    maxLengthFt: 30,
     toleranceIn: 0.02,
   };
 }

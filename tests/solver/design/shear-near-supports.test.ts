@@ -18,13 +18,13 @@ const bearing = 3; // in → face 1.5 in from the centre line
 function joist(length: number, loads: Record<string, unknown>[], supports?: { x: number; type: string }[], ignore = true) {
   return {
     member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10" },
-    length,
+    lengthFt: length,
     supports: supports ?? [
       { x: 0, type: "pin" },
       { x: length, type: "roller" },
     ],
     loads,
-    bearing,
+    bearingIn: bearing,
     conditions: { selfWeight: false, shearIgnoreLoadsNearSupports: ignore, repetitive: false },
     limits: { live: null, total: null },
   };

@@ -16,19 +16,19 @@ import { findSawnSize, sawnValuesForSize, sizeFactorFor, STARTER_TABLES } from "
 // A 6 ft header under a roof (14 ft tributary) and a floor (6 ft): the same member as header-chain.test.ts.
 const header = (loadStandard?: string) => ({
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 2 },
-  length: 6,
+  lengthFt: 6,
   supports: [
     { x: 0, type: "pin" },
     { x: 6, type: "roller" },
   ],
   loads: [
-    { type: "area", case: "D", psf: 15, tributary: 14 },
-    { type: "snow", pg: 30, tributary: 14 },
-    { type: "area", case: "D", psf: 10, tributary: 6 },
-    { type: "area", preset: "living", tributary: 6 },
+    { type: "area", case: "D", psf: 15, tributaryFt: 14 },
+    { type: "snow", pg: 30, tributaryFt: 14 },
+    { type: "area", case: "D", psf: 10, tributaryFt: 6 },
+    { type: "area", preset: "living", tributaryFt: 6 },
     { type: "udl", case: "D", from: 0, to: 6, w: 80 },
   ],
-  bearing: 3,
+  bearingIn: 3,
   conditions: { repetitive: false, selfWeight: true },
   limits: { live: 360, total: 240 },
   ...(loadStandard ? { loadStandard } : {}),
@@ -72,7 +72,7 @@ describe("the same header on the default basis (ASCE 7-16): D + 0.75L + 0.75S go
 
   test("bending: fb = M/S with w = D + 0.75L + 0.75S (tolerance 0.1 psi)", () => {
     const bending = r.checks.find((c) => c.name === "bending");
-    expect(bending?.combination).toBe("D+0.75L+0.75S");
+    expect(bending?.combination.name).toBe("D+0.75L+0.75S");
     expect(bending?.demand).toBeCloseTo((((w * 36) / 8) * 12) / (2 * s.Sx), 1);
     expect(bending?.capacity).toBeCloseTo(900 * 1.15 * 1.1, 1);
   });
@@ -86,7 +86,7 @@ describe("the same header on the default basis (ASCE 7-16): D + 0.75L + 0.75S go
 
   test("live deflection uses the same basis's service loads: 0.75L + 0.75S = 400.5 plf (Δ = 5wL⁴/384EI, 1e-4 in)", () => {
     const live = r.checks.find((c) => c.name === "deflection-live");
-    expect(live?.combination).toBe("0.75L+0.75S");
+    expect(live?.combination.name).toBe("0.75L+0.75S");
     const wIn = (0.75 * 240 + 0.75 * 294) / 12;
     const I = 2 * s.Ix;
     expect(live?.demand).toBeCloseTo((5 * wIn * 72 ** 4) / (384 * 1_600_000 * I), 4);
@@ -105,7 +105,7 @@ describe("every S load follows the basis, not only snow from ground snow", () =>
   // A 2x8 DF-L No.2 rafter-like member, 10 ft, with S given directly as a line load of 200 plf and D 100 plf.
   const base = (loadStandard: string, load: Record<string, unknown>) => ({
     member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x8" },
-    length: 10,
+    lengthFt: 10,
     supports: [
       { x: 0, type: "pin" },
       { x: 10, type: "roller" },
@@ -118,20 +118,20 @@ describe("every S load follows the basis, not only snow from ground snow", () =>
   test.each([
     ["udl", { type: "udl", case: "S", from: 0, to: 10, w: 200 }, (f: number) => (((100 + f * 200) * 100) / 8) * 12],
     ["point", { type: "point", case: "S", x: 5, P: 2000 }, (f: number) => ((100 * 100) / 8 + (f * 2000 * 10) / 4) * 12],
-    ["area", { type: "area", case: "S", psf: 100, tributary: 2 }, (f: number) => (((100 + f * 200) * 100) / 8) * 12],
+    ["area", { type: "area", case: "S", psf: 100, tributaryFt: 2 }, (f: number) => (((100 + f * 200) * 100) / 8) * 12],
   ])("%s snow: M in D + S (7-16) and D + 0.7S (7-22), M in lb-in (tolerance 1 lb-in)", (_n, load, M) => {
     const S = findSawnSize(STARTER_TABLES, "2x8").Sx;
     const a = checkMember(base("ASCE 7-16", load), STARTER_TABLES).checks.find((c) => c.name === "bending");
     const b = checkMember(base("ASCE 7-22", load), STARTER_TABLES).checks.find((c) => c.name === "bending");
     expect((a?.demand ?? 0) * S).toBeCloseTo(M(1), -1);
     expect((b?.demand ?? 0) * S).toBeCloseTo(M(0.7), -1);
-    expect(a?.combination).toBe("D+S");
-    expect(b?.combination).toBe("D+0.7S");
+    expect(a?.combination.name).toBe("D+S");
+    expect(b?.combination.name).toBe("D+0.7S");
   });
 
   test("LRFD on ASCE 7-16: 1.2D + 1.6S (§2.3.1)", () => {
     const r = checkMember({ ...base("ASCE 7-16", { type: "udl", case: "S", from: 0, to: 10, w: 200 }), method: "lrfd" }, STARTER_TABLES);
-    expect(r.checks.find((c) => c.name === "bending")?.combination).toBe("1.2D+1.6S");
+    expect(r.checks.find((c) => c.name === "bending")?.combination.name).toBe("1.2D+1.6S");
   });
 });
 
