@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { parseTrustedProxies } from "@/lib/auth/client-ip";
 
 /**
  * Configuration, read once from the environment and validated. A missing or malformed variable stops
@@ -22,6 +23,18 @@ const EnvSchema = z.object({
   STRIPE_API_PORT: z.coerce.number().int().positive().optional(),
   STRIPE_API_PROTOCOL: z.enum(["http", "https"]).optional(),
   STRIPE_STANDIN_PORT: z.coerce.number().int().min(1).max(65535).default(12111),
+  /** proxies whose X-Forwarded-For is believed (lib/auth/client-ip.ts); unset: none, the socket's address is used */
+  TRUSTED_PROXIES: z
+    .string()
+    .default("")
+    .refine((v) => {
+      try {
+        parseTrustedProxies(v);
+        return true;
+      } catch {
+        return false;
+      }
+    }, "must be IP addresses or CIDR ranges separated by commas, e.g. 10.0.0.0/8,127.0.0.1"),
   STRIPE_WEBHOOK_URL: z.union([z.literal(""), z.string().url("must be the app's webhook URL")]).default("http://127.0.0.1:3000/api/stripe/webhook"),
 });
 

@@ -41,5 +41,6 @@ else
   log "building…"
   node_modules/.bin/next build
   log "serving on http://127.0.0.1:$PORT"
-  NODE_ENV=production node_modules/.bin/next start -H 127.0.0.1 -p "$PORT"
+  # scripts/serve.mjs: Next.js behind a server that tells the app each request's socket address (rate limits).
+  NODE_ENV=production node scripts/serve.mjs -H 127.0.0.1 -p "$PORT"
 fi

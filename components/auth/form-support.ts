@@ -54,9 +54,3 @@ export function issuesToErrors(issues: FieldIssue[]): Record<string, string> {
 export function capitalise(message: string): string {
   return message ? message[0].toUpperCase() + message.slice(1) : message;
 }
-
-/** A same-site path to return to after signing in; anything else (another host, //evil) becomes /account. */
-export function safeReturnPath(value: string | null | undefined): string {
-  if (!value || !value.startsWith("/") || value.startsWith("//") || value.startsWith("/\\")) return "/account";
-  return value;
-}

@@ -9,7 +9,8 @@ import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { EmailField } from "./email-field";
 import { FormAlert } from "./form-alert";
-import { emailRule, postJson, safeReturnPath } from "./form-support";
+import { safeReturnPath } from "@/lib/auth/return-path";
+import { emailRule, postJson } from "./form-support";
 
 const schema = yup.object({
   email: emailRule,
@@ -22,12 +23,11 @@ export type SignInFormProps = {
   notice?: string;
 };
 
-type Problem = { kind: "invalid" } | { kind: "unverified"; email: string } | { kind: "limited" } | { kind: "offline" };
+type Problem = { kind: "invalid" } | { kind: "unverified"; email: string } | { kind: "limited" } | { kind: "offline" } | { kind: "unavailable" };
 
 export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
   const [problem, setProblem] = useState<Problem | null>(null);
   const [resent, setResent] = useState<"idle" | "sending" | "sent" | "failed">("idle");
-  const target = safeReturnPath(callbackUrl);
 
   const form = useFormik({
     initialValues: { email: "", password: "" },
@@ -36,6 +36,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
       setProblem(null);
       setResent("idle");
       const email = values.email.trim();
+      const target = safeReturnPath(callbackUrl, window.location.origin);
       const result = await signIn("credentials", { email, password: values.password, redirect: false, callbackUrl: target }).catch(
         () => undefined,
       );
@@ -46,6 +47,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
       }
       if (result.error === "EmailNotVerified") return setProblem({ kind: "unverified", email });
       if (result.error === "TooManyTries") return setProblem({ kind: "limited" });
+      if (result.error === "DatabaseUnavailable") return setProblem({ kind: "unavailable" });
       setProblem({ kind: "invalid" });
     },
   });
@@ -66,6 +68,9 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
         <FormAlert tone="error">Too many tries. Wait 15 minutes and try again, or choose a new password below.</FormAlert>
       ) : null}
       {problem?.kind === "offline" ? <FormAlert tone="error">No connection. Check your signal and try again.</FormAlert> : null}
+      {problem?.kind === "unavailable" ? (
+        <FormAlert tone="error">Spanlark cannot reach its saved records right now. Try again in a minute; sizing still works without signing in.</FormAlert>
+      ) : null}
       {problem?.kind === "unverified" ? (
         <FormAlert tone="error">
           <p>Confirm your e-mail first: open the link we sent to {problem.email}.</p>

@@ -1,3 +1,4 @@
+import { DATABASE_DOWN_MESSAGE, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { HttpError } from "@/lib/http";
 import { assertRole, type Role, type SessionUser } from "./roles";
 import { getSessionUser } from "./session";
@@ -6,7 +7,8 @@ import { getSessionUser } from "./session";
 export interface ActionDenied {
   ok: false;
   error: string;
-  status: 401 | 403 | 404;
+  /** 503: the database is down, so the account cannot be checked (nothing was changed) */
+  status: 401 | 403 | 404 | 503;
 }
 
 /**
@@ -23,6 +25,7 @@ export async function authorizeAction(...roles: Role[]): Promise<{ ok: true; use
     if (err instanceof HttpError && (err.status === 401 || err.status === 403)) {
       return { ok: false, error: err.message, status: err.status };
     }
+    if (isDatabaseUnavailable(err)) return { ok: false, error: DATABASE_DOWN_MESSAGE, status: 503 };
     throw err;
   }
 }

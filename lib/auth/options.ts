@@ -1,9 +1,11 @@
 import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
+import { isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { env } from "@/lib/env";
 import { authenticate } from "./accounts";
 import { clientIp } from "./client-ip";
+import { sameOriginRedirect } from "./return-path";
 import { SignInSchema } from "./schemas";
 
 /** A session lasts 14 days from sign-in; it is not extended by use. */
@@ -14,6 +16,7 @@ export const SIGN_IN_ERRORS = {
   invalid: "CredentialsSignin",
   unverified: "EmailNotVerified",
   rateLimited: "TooManyTries",
+  unavailable: "DatabaseUnavailable",
 } as const;
 
 let cached: NextAuthOptions | undefined;
@@ -36,7 +39,10 @@ export function authOptions(): NextAuthOptions {
         async authorize(credentials, req) {
           const parsed = SignInSchema.safeParse(credentials ?? {});
           if (!parsed.success) return null;
-          const result = await authenticate(parsed.data.email, parsed.data.password, clientIp(req.headers ?? {}));
+          const result = await authenticate(parsed.data.email, parsed.data.password, clientIp(req.headers ?? {})).catch((err: unknown) => {
+            if (isDatabaseUnavailable(err)) throw new Error(SIGN_IN_ERRORS.unavailable);
+            throw err;
+          });
           if (result.ok) return { id: result.user.id, email: result.user.email, name: result.user.name };
           if (result.reason === "unverified") throw new Error(SIGN_IN_ERRORS.unverified);
           if (result.reason === "rate-limited") throw new Error(SIGN_IN_ERRORS.rateLimited);
@@ -45,6 +51,10 @@ export function authOptions(): NextAuthOptions {
       }),
     ],
     callbacks: {
+      // next-auth's own check passes any value starting with "/"; ours reads it as a browser would.
+      redirect({ url, baseUrl }) {
+        return sameOriginRedirect(url, baseUrl);
+      },
       async jwt({ token, user }) {
         if (user) {
           token.sub = user.id;

@@ -1,5 +1,6 @@
 import type { Sequelize } from "sequelize";
 import { getSequelize } from "@/lib/db";
+import { isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { logger } from "@/lib/logger";
 import { clearTablesCache, invalidateCurrent, rememberVersion, tablesCache } from "./db/cache";
 import { currentVersionId, isVersionId, loadVersion } from "./db/queries";
@@ -52,6 +53,8 @@ interface ListenerState {
   sequelize: Sequelize | null;
   connection: object | null;
   retry: ReturnType<typeof setTimeout> | null;
+  /** the last start failed (so the next failure is not logged again) */
+  failing?: boolean;
 }
 
 const holder = globalThis as unknown as { spanlarkTablesListener?: ListenerState };
@@ -62,6 +65,8 @@ function listener(): ListenerState {
 }
 
 const RETRY_MS = 5_000;
+/** After the database fails to answer, how long the last known version is served before asking it again. */
+const UNREACHABLE_HOLD_MS = 5_000;
 
 /**
  * Starts listening for new versions on one connection from the pool (idempotent). Called by the app
@@ -95,12 +100,24 @@ export async function startTablesListener(sequelize: Sequelize = getSequelize())
     await client.query(`LISTEN ${TABLE_VERSIONS_CHANNEL}`);
     state.connection = client;
     state.status = "listening";
+    if (state.failing) logger.info("material tables listener is back");
+    state.failing = false;
     // A version published before LISTEN took effect would otherwise go unnoticed.
     invalidateCurrent();
   } catch (err) {
-    logger.warn({ err }, "material tables listener could not start; reading the current version from the database on each request");
+    // Said once per outage, not at every retry.
+    if (!state.failing) logger.warn({ err }, "material tables listener could not start; reading the current version from the database on each request");
+    state.failing = true;
     if (connection) await sequelize.connectionManager.destroyConnection(connection).catch(() => undefined);
     state.status = "off";
+    // Try again later rather than on every request while the database is down.
+    if (!state.retry && state.sequelize === sequelize) {
+      state.retry = setTimeout(() => {
+        state.retry = null;
+        if (state.sequelize) void startTablesListener(state.sequelize);
+      }, RETRY_MS);
+      state.retry.unref?.();
+    }
   }
 }
 
@@ -157,7 +174,20 @@ export async function getCurrentTables(): Promise<MaterialTables> {
     if (held) return held;
   }
   const generation = cache.generation;
-  const id = known ?? (await currentVersionId());
+  const lastKnown = cache.lastCurrentId ? cache.byId.get(cache.lastCurrentId) : undefined;
+  if (!known && lastKnown && Date.now() < cache.unreachableUntil) return lastKnown;
+  let id: string | null;
+  try {
+    id = known ?? (await currentVersionId());
+  } catch (err) {
+    // The database is down: keep sizing with the version that was current when it was last reached.
+    if (!isDatabaseUnavailable(err) || !lastKnown) throw err;
+    if (cache.unreachableUntil === 0) logger.warn({ version: lastKnown.version }, "database unreachable; serving the material tables last known to be current");
+    cache.unreachableUntil = Date.now() + UNREACHABLE_HOLD_MS;
+    return lastKnown;
+  }
+  if (cache.unreachableUntil !== 0) logger.info("database reachable again; reading the current material tables from it");
+  cache.unreachableUntil = 0;
   if (!id) {
     if (!warnedEmpty) logger.warn("the database holds no version of the material tables (run the seeders); using the starter tables");
     warnedEmpty = true;
@@ -165,7 +195,9 @@ export async function getCurrentTables(): Promise<MaterialTables> {
   }
   // Keep the answer only if no change was announced while the query ran.
   if (cache.generation === generation) cache.currentId = id;
-  return getTablesVersion(id);
+  const tables = await getTablesVersion(id);
+  cache.lastCurrentId = id;
+  return tables;
 }
 
 /**

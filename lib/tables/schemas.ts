@@ -624,7 +624,7 @@ export function rowToFlat<K extends TableKey>(key: K, row: TableRowMap[K]): Flat
 }
 
 // Plain decimal or scientific notation; thousands separators are refused (a "1,5" could mean 1.5 or 15).
-const NUMBER_TEXT = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
+export const NUMBER_TEXT = /^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/;
 
 function parseNumberText(f: FieldSpec, raw: string): number | RowIssue {
   if (!NUMBER_TEXT.test(raw)) return { column: f.name, message: `${f.label} must be a plain number${f.unit ? ` in ${f.unit}` : ""} (got "${raw}")` };

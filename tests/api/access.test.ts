@@ -4,6 +4,7 @@ import path from "node:path";
 import { beforeAll, describe, expect, test, vi } from "vitest";
 import type { SessionUser } from "@/lib/auth/roles";
 import { ACCESS_TABLE, type AccessFixture, type AccessRow, type Allowed } from "./access-table";
+import { fromClient } from "../support/client-ip";
 
 // Route modules read their configuration lazily; give them one that parses.
 if (process.env.TEST_DATABASE_URL) process.env.DATABASE_URL = process.env.TEST_DATABASE_URL;
@@ -130,7 +131,7 @@ async function statusOf(target: Discovered, row: AccessRow, fixture: AccessFixtu
       const params = defaultParams(row.path, fixture.params ?? row.params);
       const url = `http://127.0.0.1:3100${fillPath(row.path, params)}`;
       const body = fixture.body ?? row.body ?? {};
-      const init: RequestInit = { method: row.method, headers: { "content-type": "application/json", "x-forwarded-for": "198.51.100.7" } };
+      const init: RequestInit = { method: row.method, headers: { "content-type": "application/json", ...fromClient("198.51.100.7") } };
       if (row.method !== "GET") init.body = JSON.stringify(body);
       const res = await (target.call as Handler)(new Request(url, init), { params: Promise.resolve(params) });
       return res.status;

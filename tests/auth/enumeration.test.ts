@@ -1,4 +1,5 @@
 import { beforeEach, describe, expect, test, vi } from "vitest";
+import { fromClient } from "../support/client-ip";
 import { TEST_DB, lastMailTo, makeUser, outbox, sendMailMock, uniqueEmail, uniqueIp } from "./support";
 
 vi.mock("@/lib/mail", () => ({ sendMail: sendMailMock }));
@@ -14,7 +15,7 @@ const ctx = { params: Promise.resolve({}) };
 function post(path: string, body: unknown, ip = uniqueIp()): Request {
   return new Request(`http://127.0.0.1:3100${path}`, {
     method: "POST",
-    headers: { "content-type": "application/json", "x-forwarded-for": ip },
+    headers: { "content-type": "application/json", ...fromClient(ip) },
     body: JSON.stringify(body),
   });
 }

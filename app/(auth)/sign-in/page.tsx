@@ -1,9 +1,10 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
 import { SignInForm } from "@/components/auth/sign-in-form";
-import { safeReturnPath } from "@/components/auth/form-support";
 import { PageHeader } from "@/components/ui/page-header";
+import { safeReturnPath } from "@/lib/auth/return-path";
 import { getSessionUser } from "@/lib/auth/session";
+import { env } from "@/lib/env";
 
 export const metadata: Metadata = { title: "Sign in" };
 export const dynamic = "force-dynamic";
@@ -18,7 +19,7 @@ const NOTICES: Record<string, string> = {
 export default async function SignInPage({ searchParams }: SignInPageProps) {
   const params = await searchParams;
   const callbackUrl = typeof params.callbackUrl === "string" ? params.callbackUrl : undefined;
-  if (await getSessionUser()) redirect(safeReturnPath(callbackUrl));
+  if (await getSessionUser()) redirect(safeReturnPath(callbackUrl, env().APP_URL));
   const from = typeof params.from === "string" ? params.from : "";
   return (
     <>

@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound, redirect } from "next/navigation";
 import { SizingFlow } from "@/components/flow/sizing-flow";
 import { getSessionUser } from "@/lib/auth/session";
+import { nullWhenDatabaseDown } from "@/lib/db/unavailable";
 import { getMember, jobChoices } from "@/lib/jobs/queries";
 import { resolveFlowStart } from "@/lib/flow/url";
 
@@ -17,7 +18,9 @@ export default async function SizePage({ searchParams }: SizePageProps) {
   const params = { s: one(query.s), step: one(query.step), kind: one(query.kind) };
   const jobId = one(query.job);
   const memberId = one(query.member);
-  const user = await getSessionUser();
+  // Sizing works while the database is down (the tables are cached): the page then shows the flow as to
+  // someone signed out. Reopening a saved member needs the database, so that still fails to the error page.
+  const user = jobId && memberId ? await getSessionUser() : await getSessionUser().catch(nullWhenDatabaseDown);
   const jobs = user ? await jobChoices(user.id) : [];
 
   if (jobId && memberId) {

@@ -1,3 +1,4 @@
+import { databaseUnavailableResponse, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { invalidInput, readJsonBody } from "@/lib/http";
 import { checkMember, DesignInputError } from "@/lib/solver/design";
 import { getCurrentTables } from "@/lib/tables/current";
@@ -13,6 +14,7 @@ export async function POST(req: Request): Promise<Response> {
     return Response.json(checkMember(body, await getCurrentTables()));
   } catch (err) {
     if (err instanceof DesignInputError) return invalidInput(err.issues);
+    if (isDatabaseUnavailable(err)) return databaseUnavailableResponse();
     throw err;
   }
 }

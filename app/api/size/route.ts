@@ -1,3 +1,4 @@
+import { databaseUnavailableResponse, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { invalidInput, readJsonBody } from "@/lib/http";
 import { DesignInputError, largestSpan, sizeMember } from "@/lib/solver/design";
 import { getCurrentTables } from "@/lib/tables/current";
@@ -18,6 +19,7 @@ export async function POST(req: Request): Promise<Response> {
     return Response.json(find === "span" ? largestSpan(body, tables) : sizeMember(body, tables));
   } catch (err) {
     if (err instanceof DesignInputError) return invalidInput(err.issues);
+    if (isDatabaseUnavailable(err)) return databaseUnavailableResponse();
     throw err;
   }
 }

@@ -105,12 +105,14 @@ const designFields = {
   length: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
   supports: z
     .array(z.object({ x: finite("ft"), type: z.enum(["pin", "roller", "fixed"], { error: 'must be "pin", "roller" or "fixed"' }) }).strict())
-    .min(1, "give at least one support"),
+    .min(1, "give at least one support")
+    // Capped here, before the cross-field check compares supports pair by pair.
+    .max(LIMITS.maxSupports, `at most ${LIMITS.maxSupports} supports`),
   /** joist spacing, in on centre */
   spacing: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
   /** tributary width, ft */
   tributary: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
-  loads: z.array(designLoadSchema).max(LIMITS.maxLoads),
+  loads: z.array(designLoadSchema).max(LIMITS.maxLoads, `at most ${LIMITS.maxLoads} loads`),
   /** bearing length at each support, in; default 1-1/2 in (IRC R502.6 minimum on wood or metal) */
   bearing: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
   conditions: conditionsSchema.default(() => conditionsSchema.parse({})),

@@ -1,5 +1,5 @@
 import Papa from "papaparse";
-import { parseFlatRow, rowToFlat, TABLE_SPECS, type FlatRow, type RowIssue, type TableKey, type TableRowMap } from "../schemas";
+import { NUMBER_TEXT, parseFlatRow, rowToFlat, TABLE_SPECS, type FlatRow, type RowIssue, type TableKey, type TableRowMap } from "../schemas";
 
 /**
  * CSV files of the material tables. One file holds one table: a header line naming every column of that
@@ -7,6 +7,8 @@ import { parseFlatRow, rowToFlat, TABLE_SPECS, type FlatRow, type RowIssue, type
  * then one row per line. Numbers are plain decimals (no thousands separators); lists (engineered widths
  * and depths, size factor grades) are separated by ";"; an optional value is left blank. UTF-8, comma
  * separated, quoted with " where a value holds a comma. Download a table to get a file in this shape.
+ * A downloaded cell that a spreadsheet would run as a formula (it begins with = + - @, a tab or a carriage
+ * return, and is not a plain number) carries a leading single quote; reading a file drops that quote again.
  */
 
 export const MAX_CSV_BYTES = 1024 * 1024;
@@ -96,7 +98,7 @@ export function parseTableCsv<K extends TableKey>(table: K, input: string): CsvP
       rejected.push({ line: record.line, issues: [{ column: "(row)", message: `has ${record.cells.length} values; the header has ${header.length} columns` }] });
       continue;
     }
-    const flat: FlatRow = Object.fromEntries(header.map((name, i) => [name, record.cells[i]]));
+    const flat: FlatRow = Object.fromEntries(header.map((name, i) => [name, restoreCell(record.cells[i])]));
     const parsed = parseFlatRow(table, flat);
     if (!parsed.ok) {
       rejected.push({
@@ -117,10 +119,35 @@ export function parseTableCsv<K extends TableKey>(table: K, input: string): CsvP
   return { table, rows, rejected, fileError: null, lineCount: data.length };
 }
 
-/** One table as a CSV file, in the format parseTableCsv reads back unchanged. */
+// Spreadsheet programs run a cell that begins with = + - @ (or a tab or carriage return) as a formula.
+const FORMULA_START = /^[=+\-@\t\r]/;
+// A cell already written with our quote (one or more) before such a character.
+const QUOTED_FORMULA_START = /^'+[=+\-@\t\r]/;
+
+/**
+ * A cell as written to a CSV file: one that a spreadsheet would run as a formula gets a leading single quote,
+ * the usual way to make it text ("=HYPERLINK(…)" → "'=HYPERLINK(…)"). A plain number is left alone, so a
+ * negative value stays a number in the spreadsheet ("-12.5" is not a formula). A cell that already begins
+ * with quotes before such a character gets one more, so restoreCell gives back exactly what was exported.
+ */
+export function neutraliseCell(cell: string): string {
+  if (NUMBER_TEXT.test(cell)) return cell;
+  return FORMULA_START.test(cell) || QUOTED_FORMULA_START.test(cell) ? `'${cell}` : cell;
+}
+
+/** Undoes neutraliseCell on a cell read from a CSV file: one leading quote before a formula character goes. */
+export function restoreCell(cell: string): string {
+  return QUOTED_FORMULA_START.test(cell) ? cell.slice(1) : cell;
+}
+
+/** One table as a CSV file, in the format parseTableCsv reads back unchanged; formula-like cells neutralised. */
 export function tableToCsv<K extends TableKey>(table: K, rows: TableRowMap[K][]): string {
   const fields = expectedHeader(table);
-  return `${Papa.unparse({ fields, data: rows.map((row) => fields.map((name) => rowToFlat(table, row)[name])) }, { newline: "\n" })}\n`;
+  const data = rows.map((row) => {
+    const flat = rowToFlat(table, row);
+    return fields.map((name) => neutraliseCell(flat[name]));
+  });
+  return `${Papa.unparse({ fields, data }, { newline: "\n" })}\n`;
 }
 
 /** "line 3, Fb_psi: Fb must be at most 10,000 psi (got 90000)" */

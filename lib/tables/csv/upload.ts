@@ -13,7 +13,7 @@ export class CsvUploadError extends Error {
 
 const CSV_TYPES = ["text/csv", "application/csv", "text/comma-separated-values", "application/vnd.ms-excel"];
 /** Room for the multipart framing and the small text fields beside the file. */
-const FORM_OVERHEAD_BYTES = 16 * 1024;
+export const FORM_OVERHEAD_BYTES = 16 * 1024;
 
 function kb(bytes: number): string {
   return `${Math.ceil(bytes / 1024).toLocaleString("en-US")} KB`;

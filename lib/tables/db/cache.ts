@@ -12,6 +12,10 @@ export interface TablesCache {
   loading: Map<string, Promise<MaterialTables | null>>;
   /** the current version id as last learnt; null = unknown, ask the database */
   currentId: string | null;
+  /** the current version id as last confirmed, kept through invalidations: what is served while the database is down */
+  lastCurrentId: string | null;
+  /** until this time (ms since epoch) the database is taken as down and lastCurrentId is served without asking */
+  unreachableUntil: number;
   /** bumped on every invalidation, so an answer that raced with a change is not kept */
   generation: number;
 }
@@ -22,7 +26,7 @@ export const MAX_CACHED_VERSIONS = 12;
 const holder = globalThis as unknown as { spanlarkTablesCache?: TablesCache };
 
 export function tablesCache(): TablesCache {
-  holder.spanlarkTablesCache ??= { byId: new Map(), loading: new Map(), currentId: null, generation: 0 };
+  holder.spanlarkTablesCache ??= { byId: new Map(), loading: new Map(), currentId: null, lastCurrentId: null, unreachableUntil: 0, generation: 0 };
   return holder.spanlarkTablesCache;
 }
 
@@ -32,7 +36,7 @@ export function rememberVersion(tables: MaterialTables): void {
   cache.byId.set(tables.version, tables);
   for (const id of cache.byId.keys()) {
     if (cache.byId.size <= MAX_CACHED_VERSIONS) break;
-    if (id !== cache.currentId) cache.byId.delete(id);
+    if (id !== cache.currentId && id !== cache.lastCurrentId) cache.byId.delete(id);
   }
 }
 
@@ -41,6 +45,7 @@ export function noteNewVersion(tables: MaterialTables): void {
   const cache = tablesCache();
   cache.generation += 1;
   cache.currentId = tables.version;
+  cache.lastCurrentId = tables.version;
   rememberVersion(tables);
 }
 
@@ -56,5 +61,7 @@ export function clearTablesCache(): void {
   const cache = tablesCache();
   cache.byId.clear();
   cache.loading.clear();
+  cache.lastCurrentId = null;
+  cache.unreachableUntil = 0;
   invalidateCurrent();
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { HttpError } from "@/lib/http";
+import { BODY_LIMITS, HttpError, readBodyBytes } from "@/lib/http";
 import { getCurrentTables } from "../current";
 import { csvIsClean, parseTableCsv, type CsvParseResult } from "../csv/format";
 import { checkUploadLength, CsvUploadError, readCsvUpload } from "../csv/upload";
@@ -32,9 +32,11 @@ export async function readUpload<K extends TableKey>(req: Request, table: K): Pr
 
 async function readCheckedUpload<K extends TableKey>(req: Request, table: K): Promise<ReadUpload<K>> {
   checkUploadLength(req);
+  // Read with a running count (BODY_LIMITS.csvImport), then parse the form from what was read.
+  const body = await readBodyBytes(req, BODY_LIMITS.csvImport);
   let form: FormData;
   try {
-    form = await req.formData();
+    form = await new Request(req.url, { method: "POST", headers: req.headers, body }).formData();
   } catch {
     throw new HttpError(400, "send the file as multipart/form-data with a field named file");
   }

@@ -44,22 +44,12 @@ export async function waitForMail(to: string, subject: RegExp, timeoutMs = 15_00
   }
 }
 
-/**
- * A client address of its own for each account, sent as X-Forwarded-For: the app's per-client limits on
- * sign-up and sign-in would otherwise count every browser test in the run as one client.
- */
-function testClientIp(): string {
-  const b = () => Math.floor(Math.random() * 254) + 1;
-  return `10.${b()}.${b()}.${b()}`;
-}
-
 /** Signs the context in through next-auth's credentials endpoint (its cookies then go with every page). */
 export async function signIn(context: BrowserContext, account: Pick<TestAccount, "email" | "password">): Promise<void> {
   const csrf = await context.request.get(`${baseUrl()}/api/auth/csrf`);
   const { csrfToken } = (await csrf.json()) as { csrfToken: string };
   await context.request.post(`${baseUrl()}/api/auth/callback/credentials`, {
     form: { csrfToken, email: account.email, password: account.password, callbackUrl: `${baseUrl()}/`, json: "true" },
-    headers: { "x-forwarded-for": testClientIp() },
   });
   const session = (await (await context.request.get(`${baseUrl()}/api/auth/session`)).json()) as { user?: { email?: string } };
   if (session.user?.email?.toLowerCase() !== account.email.toLowerCase()) throw new Error(`sign-in as ${account.email} did not take`);
@@ -74,7 +64,6 @@ export async function signUpBuilder(context: BrowserContext, tag = "builder"): P
   };
   const signUp = await context.request.post(`${baseUrl()}/api/auth/sign-up`, {
     data: { email: account.email, password: account.password, name: account.name, company: "Ashdown Decks" },
-    headers: { "x-forwarded-for": testClientIp() },
   });
   if (signUp.status() !== 202) throw new Error(`sign-up answered ${signUp.status()}: ${await signUp.text()}`);
   const mail = await waitForMail(account.email, /confirm/i);

@@ -67,3 +67,24 @@ describe("bad input names the field and the reason", () => {
     expect(issues[0].path).toBe("member.size");
   });
 });
+
+describe("supports are capped at the schema, before the pairwise checks", () => {
+  // 16,000 supports at distinct and at repeated positions: the cap must speak alone. Had the cross-field
+  // check run, repeated positions would add "another support … is already at" issues (it compares every pair).
+  test.each([
+    ["distinct positions", (i: number) => (12 * i) / 16_000],
+    ["all at one position", () => 6],
+  ])("16,000 supports, %s: one issue on supports naming the cap, for check, size and span", (_label, xOf) => {
+    const supports = Array.from({ length: 16_000 }, (_, i) => ({ x: xOf(i), type: "pin" }));
+    const input = { ...base, supports };
+    for (const run of [() => checkMember(input, STARTER_TABLES), () => sizeMember({ ...input, member: { material: "sawn" } }, STARTER_TABLES), () => largestSpan(input, STARTER_TABLES)]) {
+      const issues = issuesOf(run);
+      expect(issues).toEqual([{ path: "supports", message: "at most 20 supports" }]);
+    }
+  });
+
+  test("20 supports are still accepted", () => {
+    const supports = Array.from({ length: 20 }, (_, i) => ({ x: (12 * i) / 19, type: i === 0 ? "pin" : "roller" }));
+    expect(() => checkMember({ ...base, supports }, STARTER_TABLES)).not.toThrow();
+  });
+});

@@ -1,6 +1,7 @@
 import { describe, expect, test } from "vitest";
 import { STARTER_TABLES } from "@/lib/tables";
-import { csvIsClean, describeRejectedLine, expectedHeader, MAX_CSV_BYTES, parseTableCsv, tableToCsv } from "@/lib/tables/csv/format";
+import fc from "fast-check";
+import { csvIsClean, describeRejectedLine, expectedHeader, MAX_CSV_BYTES, neutraliseCell, parseTableCsv, restoreCell, tableToCsv } from "@/lib/tables/csv/format";
 import { CsvUploadError, readCsvUpload } from "@/lib/tables/csv/upload";
 import { tablesToRows } from "@/lib/tables/db/rows";
 import { rowsOf, tablesProblems } from "@/lib/tables/db/validate";
@@ -141,5 +142,85 @@ describe("readCsvUpload", () => {
     const error = await readCsvUpload(make()).catch((e: unknown) => e);
     expect(error).toBeInstanceOf(CsvUploadError);
     expect((error as CsvUploadError).status).toBe(status);
+  });
+});
+
+describe("formula-like cells in downloaded CSV", () => {
+  // OWASP "CSV Injection" (owasp.org/www-community/attacks/CSV_Injection): cells beginning with = + - @, tab or
+  // carriage return are run as formulas by spreadsheet programs; prefixing a single quote makes them text.
+  test.each([
+    ["=HYPERLINK(\"http://evil.example\",\"table\")", "'=HYPERLINK(\"http://evil.example\",\"table\")"],
+    ["+SUM(1,2)", "'+SUM(1,2)"],
+    ["-2+3+cmd|' /C calc'!A0", "'-2+3+cmd|' /C calc'!A0"],
+    ["@SUM(1,2)", "'@SUM(1,2)"],
+    ["\t=1+1", "'\t=1+1"],
+    ["\r=1+1", "'\r=1+1"],
+    ["-", "'-"],
+    ["'=1+1 (already quoted once)", "''=1+1 (already quoted once)"],
+  ])("%j is written as %j", (cell, written) => {
+    expect(neutraliseCell(cell)).toBe(written);
+    expect(restoreCell(written)).toBe(cell);
+  });
+
+  test.each([
+    ["a negative number stays a number", "-12.5"],
+    ["a negative number in scientific notation", "-1.5e-3"],
+    ["a signed positive number", "+4"],
+    ["a species name with a hyphen inside", "Douglas Fir-Larch"],
+    ["a quote not before a formula character", "'No.2"],
+    ["blank", ""],
+  ])("%s is written as it is", (_label, cell) => {
+    expect(neutraliseCell(cell)).toBe(cell);
+    expect(restoreCell(cell)).toBe(cell);
+  });
+
+  test("restoreCell(neutraliseCell(x)) is x for any text (property, fast-check)", () => {
+    const risky = fc.tuple(fc.constantFrom("", "'", "''"), fc.constantFrom("", "=", "+", "-", "@", "\t", "\r"), fc.string());
+    fc.assert(
+      fc.property(risky, ([quotes, lead, rest]) => {
+        const cell = `${quotes}${lead}${rest}`;
+        const written = neutraliseCell(cell);
+        expect(restoreCell(written)).toBe(cell);
+        // what a spreadsheet sees never starts a formula
+        expect(/^[=+\-@\t\r]/.test(written) && !/^[-+]?(\d+\.?\d*|\.\d+)([eE][-+]?\d+)?$/.test(written)).toBe(false);
+      }),
+      { numRuns: 500 },
+    );
+  });
+
+  test("a downloaded table with formula-like text reads back to the same rows", () => {
+    const rows = rowsOf(tablesToRows(STARTER_TABLES), "sawn-values").slice(0, 3);
+    const tricky = [
+      { ...rows[0], source: "=HYPERLINK(\"http://evil.example\",\"NDS\")" },
+      { ...rows[1], source: "-see NDS Supplement 2018 Table 4A" },
+      { ...rows[2], source: "@NDS 2018" },
+    ];
+    const csv = tableToCsv("sawn-values", tricky);
+    const lines = csv.trim().split("\n").slice(1);
+    expect(lines[0]).toContain(`"'=HYPERLINK(""http://evil.example"",""NDS"")"`);
+    expect(lines[1]).toContain(",'-see NDS");
+    expect(lines[2]).toContain(",'@NDS 2018");
+    for (const line of lines) expect(line.split(",").some((cell) => /^[=+@]/.test(cell))).toBe(false);
+    const back = parseTableCsv("sawn-values", csv);
+    expect(back.rejected).toEqual([]);
+    expect(back.rows).toEqual(tricky);
+  });
+
+  test("a number quoted by another program's escaping is read as the number, and checked as one", () => {
+    // A spreadsheet or tool that quotes every leading "-" turns -5 into '-5: the import undoes it, so the bound
+    // check (not the "plain number" check) answers, and names the value it read.
+    const result = parseTableCsv("sawn-values", `${VALUES_HEADER}\n${HF_NO2.replace(",850,", ",'-5,")}\n`);
+    expect(result.rejected).toHaveLength(1);
+    expect(result.rejected[0].issues[0]).toMatchObject({ column: "Fb_psi", value: "-5" });
+    expect(result.rejected[0].issues[0].message).not.toMatch(/plain number/);
+  });
+
+  test("every starter table still downloads and reads back unchanged", () => {
+    const rows = tablesToRows(STARTER_TABLES);
+    for (const table of TABLE_KEYS) {
+      const back = parseTableCsv(table, tableToCsv(table, rowsOf(rows, table)));
+      expect(back.rejected).toEqual([]);
+      expect(back.rows).toEqual(rowsOf(rows, table));
+    }
   });
 });
