@@ -1,6 +1,7 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
-import type { ReactNode } from "react";
+import { Suspense, type ReactNode } from "react";
+import { AdminNavLink } from "@/components/shell/admin-nav-link";
 import { BottomNav } from "@/components/shell/bottom-nav";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { SiteHeader } from "@/components/shell/site-header";
@@ -54,7 +55,13 @@ export default function RootLayout({ children }: { children: ReactNode }) {
           Skip to content
         </a>
         <ToastProvider>
-          <SiteHeader />
+          <SiteHeader
+            adminLink={
+              <Suspense fallback={null}>
+                <AdminNavLink />
+              </Suspense>
+            }
+          />
           <main id="main" tabIndex={-1} className="mx-auto w-full max-w-5xl flex-1 px-4 pt-6 focus:outline-none">
             {children}
           </main>

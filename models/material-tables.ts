@@ -7,9 +7,10 @@ import { initSawnValue, SawnValueRow } from "./sawn-value";
 import { initSizeFactor, SizeFactorRow } from "./size-factor";
 import { initSteelGrade, SteelGradeRow } from "./steel-grade";
 import { initSteelShape, SteelShapeRow } from "./steel-shape";
+import { initStockLength, StockLengthModel } from "./stock-length";
 import { initTableVersion, TableVersion, TABLE_VERSION_SOURCES, type TableVersionSource } from "./table-version";
 
-export { CostRowModel, EngineeredProductRow, IJoistRow, SawnSizeRow, SawnValueRow, SizeFactorRow, SteelGradeRow, SteelShapeRow, TableVersion };
+export { CostRowModel, EngineeredProductRow, IJoistRow, SawnSizeRow, SawnValueRow, SizeFactorRow, SteelGradeRow, SteelShapeRow, StockLengthModel, TableVersion };
 export { TABLE_VERSION_SOURCES, type TableVersionSource };
 
 /** The material table models: one version table and one row table per material table. */
@@ -23,4 +24,5 @@ export function initMaterialTableModels(sequelize: Sequelize): void {
   initSteelShape(sequelize);
   initSteelGrade(sequelize);
   initCost(sequelize);
+  initStockLength(sequelize);
 }

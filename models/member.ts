@@ -30,6 +30,13 @@ export class Member extends Model<InferAttributes<Member>, InferCreationAttribut
   declare chosenMember: MemberSpec | null;
   declare carriedByMemberId: CreationOptional<string | null>;
   declare sortOrder: CreationOptional<number>;
+  /** width of floor or deck the joists repeat across, ft (to count them on the order list) */
+  declare runWidthFt: CreationOptional<number | null>;
+  /** posts under this member: height (ft) and nominal size ("6x6"); footings under them: diameter and depth (in) */
+  declare postHeightFt: CreationOptional<number | null>;
+  declare postSize: CreationOptional<string | null>;
+  declare footingDiameterIn: CreationOptional<number | null>;
+  declare footingDepthIn: CreationOptional<number | null>;
   declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -48,6 +55,11 @@ export function initMember(sequelize: Sequelize): void {
       chosenMember: { type: DataTypes.JSONB, allowNull: true },
       carriedByMemberId: { type: DataTypes.UUID, allowNull: true },
       sortOrder: { type: DataTypes.INTEGER, allowNull: false, defaultValue: 0 },
+      runWidthFt: { type: DataTypes.DOUBLE, allowNull: true },
+      postHeightFt: { type: DataTypes.DOUBLE, allowNull: true },
+      postSize: { type: DataTypes.STRING(20), allowNull: true },
+      footingDiameterIn: { type: DataTypes.DOUBLE, allowNull: true },
+      footingDepthIn: { type: DataTypes.DOUBLE, allowNull: true },
       deletedAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

@@ -12,19 +12,26 @@ import { STARTER_TABLES } from "@/lib/tables";
 // (Sam) and the demo builder (Dee) as their own copies, with a few members sized now from the starter tables.
 const OWNERS = ["sam@hollisrowe.test", "dee@hollisrowe.test"];
 
-type DemoMember = { key: string; label: string; state: FlowState; carriedBy?: string };
+/** What the order list needs: the floor or deck width the joists repeat across; posts and footings under a deck beam. */
+type DemoDetails = { runWidthFt?: number; postHeightFt?: number; postSize?: string; footingDiameterIn?: number; footingDepthIn?: number };
+type DemoMember = { key: string; label: string; state: FlowState; carriedBy?: string; details?: DemoDetails };
 
 function demoMembers(job: "marsh" | "orchard"): DemoMember[] {
   if (job === "marsh") {
     return [
       { key: "h1", label: "H1 kitchen header", state: withMainSpan(defaultFlowState("header"), 8) },
       { key: "b1", label: "B1 family room beam", state: withMainSpan(defaultFlowState("beam"), 14) },
-      { key: "j1", label: "J1 addition floor joists", state: withMainSpan(defaultFlowState("floor-joist"), 13.5) },
+      { key: "j1", label: "J1 addition floor joists", state: withMainSpan(defaultFlowState("floor-joist"), 13.5), details: { runWidthFt: 16 } },
     ];
   }
   return [
-    { key: "db1", label: "DB1 deck beam", state: defaultFlowState("deck-beam") },
-    { key: "dj1", label: "DJ1 deck joists", state: withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5), carriedBy: "db1" },
+    {
+      key: "db1",
+      label: "DB1 deck beam",
+      state: defaultFlowState("deck-beam"),
+      details: { postHeightFt: 4, postSize: "6x6", footingDiameterIn: 12, footingDepthIn: 36 },
+    },
+    { key: "dj1", label: "DJ1 deck joists", state: withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5), carriedBy: "db1", details: { runWidthFt: 12 } },
   ];
 }
 
@@ -57,8 +64,10 @@ export async function up({ context: { sequelize } }: { context: MigrationContext
         const id = randomUUID();
         ids.set(m.key, id);
         await sequelize.query(
-          `INSERT INTO members (id, job_id, label, kind, flow_state, result_summary, chosen_member, carried_by_member_id, sort_order, created_at, updated_at)
-           VALUES (:id, :jobId, :label, :kind, :flowState, :summary, :chosen, :carriedBy, :order, :now, :now)`,
+          `INSERT INTO members (id, job_id, label, kind, flow_state, result_summary, chosen_member, carried_by_member_id, sort_order, created_at, updated_at,
+             run_width_ft, post_height_ft, post_size, footing_diameter_in, footing_depth_in)
+           VALUES (:id, :jobId, :label, :kind, :flowState, :summary, :chosen, :carriedBy, :order, :now, :now,
+             :runWidthFt, :postHeightFt, :postSize, :footingDiameterIn, :footingDepthIn)`,
           {
             replacements: {
               id,
@@ -71,6 +80,11 @@ export async function up({ context: { sequelize } }: { context: MigrationContext
               carriedBy: m.carriedBy ? (ids.get(m.carriedBy) ?? null) : null,
               order,
               now,
+              runWidthFt: m.details?.runWidthFt ?? null,
+              postHeightFt: m.details?.postHeightFt ?? null,
+              postSize: m.details?.postSize ?? null,
+              footingDiameterIn: m.details?.footingDiameterIn ?? null,
+              footingDepthIn: m.details?.footingDepthIn ?? null,
             },
             type: QueryTypes.INSERT,
           },

@@ -54,3 +54,11 @@ export function issuesToErrors(issues: FieldIssue[]): Record<string, string> {
 export function capitalise(message: string): string {
   return message ? message[0].toUpperCase() + message.slice(1) : message;
 }
+
+/** Signs this browser in with the ticket a spent mailed link answered with; false when it did not take (then sign in as usual). */
+export async function signInWithTicket(ticket: unknown): Promise<boolean> {
+  if (typeof ticket !== "string" || !ticket) return false;
+  const { signIn } = await import("next-auth/react");
+  const result = await signIn("ticket", { ticket, redirect: false }).catch(() => undefined);
+  return Boolean(result?.ok && !result.error);
+}

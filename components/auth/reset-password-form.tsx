@@ -7,7 +7,7 @@ import * as yup from "yup";
 import { ButtonLink, Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { FormAlert } from "./form-alert";
-import { issuesToErrors, newPasswordRule, PASSWORD_MIN, postJson } from "./form-support";
+import { issuesToErrors, newPasswordRule, PASSWORD_MIN, postJson, signInWithTicket } from "./form-support";
 
 const schema = yup.object({
   password: newPasswordRule,
@@ -21,6 +21,7 @@ export type ResetPasswordFormProps = { token: string };
 
 export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
   const [done, setDone] = useState(false);
+  const [signedIn, setSignedIn] = useState(false);
   const [linkProblem, setLinkProblem] = useState<string | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
 
@@ -29,14 +30,29 @@ export function ResetPasswordForm({ token }: ResetPasswordFormProps) {
     validationSchema: schema,
     onSubmit: async (values, helpers) => {
       setFormError(null);
-      const result = await postJson("/api/auth/password/reset", { token, password: values.password });
-      if (result.ok) return setDone(true);
+      const result = await postJson<{ ticket?: string }>("/api/auth/password/reset", { token, password: values.password });
+      if (result.ok) {
+        setSignedIn(await signInWithTicket(result.data.ticket));
+        return setDone(true);
+      }
       const tokenIssue = result.issues.find((i) => i.path === "token");
       if (tokenIssue) return setLinkProblem(result.error);
       if (result.issues.length > 0) helpers.setErrors(issuesToErrors(result.issues));
       setFormError(result.error);
     },
   });
+
+  if (done && signedIn) {
+    return (
+      <div className="flex flex-col gap-4" data-testid="reset-done">
+        <FormAlert tone="done">Password changed. You are signed in.</FormAlert>
+        <p className="text-ink-soft">Anywhere else still signed in to this account has been signed out.</p>
+        <ButtonLink href="/jobs" size="lg" fullWidth data-testid="reset-carry-on">
+          Go to your jobs
+        </ButtonLink>
+      </div>
+    );
+  }
 
   if (done) {
     return (

@@ -99,7 +99,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
         <Link href="/forgot-password" className="inline-flex min-h-touch items-center justify-center font-bold">
           Forgot your password?
         </Link>
-        <Link href="/sign-up" className="inline-flex min-h-touch items-center justify-center font-bold">
+        <Link href={callbackUrl ? `/sign-up?callbackUrl=${encodeURIComponent(callbackUrl)}` : "/sign-up"} className="inline-flex min-h-touch items-center justify-center font-bold">
           No account yet? Open one
         </Link>
       </p>

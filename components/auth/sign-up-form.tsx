@@ -12,7 +12,13 @@ import { companyRule, emailRule, issuesToErrors, nameRule, newPasswordRule, PASS
 
 const schema = yup.object({ name: nameRule, company: companyRule, email: emailRule, password: newPasswordRule });
 
-export function SignUpForm() {
+export type SignUpFormProps = {
+  /** the page that asked for an account, carried to sign-in so it returns there */
+  callbackUrl?: string;
+};
+
+export function SignUpForm({ callbackUrl }: SignUpFormProps = {}) {
+  const signInHref = callbackUrl ? `/sign-in?callbackUrl=${encodeURIComponent(callbackUrl)}` : "/sign-in";
   const [sentTo, setSentTo] = useState<string | null>(null);
   const [formError, setFormError] = useState<string | null>(null);
   const [resent, setResent] = useState<"idle" | "sending" | "sent">("idle");
@@ -54,7 +60,7 @@ export function SignUpForm() {
         >
           {resent === "sent" ? "Sent again" : "Send it again"}
         </Button>
-        <Link href="/sign-in" className="inline-flex min-h-touch items-center font-bold">
+        <Link href={signInHref} className="inline-flex min-h-touch items-center font-bold">
           Go to sign in
         </Link>
       </div>
@@ -88,7 +94,7 @@ export function SignUpForm() {
         Open my account
       </Button>
       <p className="text-center">
-        <Link href="/sign-in" className="inline-flex min-h-touch items-center font-bold">
+        <Link href={signInHref} className="inline-flex min-h-touch items-center font-bold">
           Already have an account? Sign in
         </Link>
       </p>

@@ -3,7 +3,7 @@
 import { useState } from "react";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { FormAlert } from "./form-alert";
-import { postJson } from "./form-support";
+import { postJson, signInWithTicket } from "./form-support";
 
 export type VerifyEmailProps = { token: string };
 
@@ -12,8 +12,22 @@ export type VerifyEmailProps = { token: string };
  * single-use link spent by a scanner would leave the person with a dead one.
  */
 export function VerifyEmail({ token }: VerifyEmailProps) {
-  const [state, setState] = useState<"idle" | "working" | "done" | "failed">("idle");
+  const [state, setState] = useState<"idle" | "working" | "done" | "signed-in" | "failed">("idle");
   const [message, setMessage] = useState("");
+
+  if (state === "signed-in") {
+    return (
+      <div className="flex flex-col gap-4" data-testid="verify-done">
+        <FormAlert tone="done">Your e-mail is confirmed and you are signed in.</FormAlert>
+        <ButtonLink href="/size" size="lg" fullWidth data-testid="verify-carry-on">
+          Size a member
+        </ButtonLink>
+        <ButtonLink href="/jobs" variant="secondary" fullWidth>
+          Your jobs
+        </ButtonLink>
+      </div>
+    );
+  }
 
   if (state === "done") {
     return (
@@ -35,8 +49,8 @@ export function VerifyEmail({ token }: VerifyEmailProps) {
         loading={state === "working"}
         onClick={async () => {
           setState("working");
-          const result = await postJson("/api/auth/verify", { token });
-          if (result.ok) return setState("done");
+          const result = await postJson<{ ticket?: string }>("/api/auth/verify", { token });
+          if (result.ok) return setState((await signInWithTicket(result.data.ticket)) ? "signed-in" : "done");
           setMessage(result.error);
           setState("failed");
         }}

@@ -13,6 +13,8 @@ export type BillingActionResult = { ok: false; error: string; status?: number; i
 
 const CheckoutInput = z.object({
   plan: z.enum(["monthly", "yearly"] satisfies typeof PLAN_IDS, { message: "choose the monthly or the yearly plan" }),
+  /** the job whose sheet the builder was saving when they chose to subscribe (they come back to it) */
+  job: z.string().uuid("job must be a job id").optional(),
 });
 
 function failure(err: unknown, fallback: string): BillingActionResult {
@@ -25,11 +27,11 @@ function failure(err: unknown, fallback: string): BillingActionResult {
 export async function startCheckoutAction(_previous: BillingActionResult, form: FormData): Promise<BillingActionResult> {
   const auth = await authorizeAction("builder", "subscriber");
   if (!auth.ok) return auth;
-  const parsed = CheckoutInput.safeParse({ plan: form.get("plan") });
+  const parsed = CheckoutInput.safeParse({ plan: form.get("plan"), job: form.get("job") || undefined });
   if (!parsed.success) return { ok: false, error: "Choose a plan.", status: 400, issues: zodIssues(parsed.error) };
   let url: string;
   try {
-    ({ url } = await startCheckout(auth.user, parsed.data.plan));
+    ({ url } = await startCheckout(auth.user, parsed.data.plan, undefined, { saveSheetForJobId: parsed.data.job }));
   } catch (err) {
     return failure(err, "The payment page could not be opened.");
   }

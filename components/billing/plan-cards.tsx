@@ -14,9 +14,11 @@ export type PlanCardsProps = {
   /** "subscribe": buttons start checkout; "sign-in": they lead to sign-in; "none": the user already subscribes. */
   mode: "subscribe" | "sign-in" | "none";
   signInHref?: string;
+  /** the job whose sheet the builder was saving: checkout brings them back to it with the sheet saved */
+  returnJobId?: string;
 };
 
-function PlanCard({ plan, mode, signInHref, highlight }: { plan: PlanId; highlight?: string } & PlanCardsProps) {
+function PlanCard({ plan, mode, signInHref, highlight, returnJobId }: { plan: PlanId; highlight?: string } & PlanCardsProps) {
   const p = PLANS[plan];
   const per = p.interval === "month" ? "month" : "year";
   return (
@@ -39,7 +41,7 @@ function PlanCard({ plan, mode, signInHref, highlight }: { plan: PlanId; highlig
       </ul>
       <div className="mt-auto pt-2">
         {mode === "subscribe" ? (
-          <BillingActionForm action={startCheckoutAction} fields={{ plan }} label={`Subscribe ${p.name.toLowerCase()}`} testId={`subscribe-${plan}`} />
+          <BillingActionForm action={startCheckoutAction} fields={returnJobId ? { plan, job: returnJobId } : { plan }} label={`Subscribe ${p.name.toLowerCase()}`} testId={`subscribe-${plan}`} />
         ) : mode === "sign-in" ? (
           <ButtonLink href={signInHref ?? "/sign-in"} size="lg" fullWidth>
             Sign in to subscribe

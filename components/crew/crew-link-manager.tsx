@@ -1,8 +1,8 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState, useTransition, type FormEvent } from "react";
-import { Button } from "@/components/ui/button";
+import { useState, useSyncExternalStore, useTransition, type FormEvent } from "react";
+import { Button, buttonClasses } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
 import type { CrewLinkView } from "@/lib/crew/links";
@@ -15,7 +15,21 @@ export type CrewLinkManagerProps = {
   activeLimit: number | null;
   /** live links across all the owner's jobs */
   activeCount: number;
+  /** the job's name, for the text message and the share sheet */
+  jobName: string;
+  /** QR code (SVG) of each live link by link id */
+  qrSvgs?: Record<string, string>;
 };
+
+/** The words sent with a crew link by text message or the share sheet. */
+export function crewMessage(jobName: string, url: string): string {
+  return `${jobName}: the member schedule to build from (read only) ${url}`;
+}
+
+/** An sms: link that opens the phone's messages with the text filled in and no recipient chosen yet. */
+export function smsHref(body: string): string {
+  return `sms:?&body=${encodeURIComponent(body)}`;
+}
 
 const EXPIRY_OPTIONS = [
   { value: "0", label: "Until I revoke it" },
@@ -25,14 +39,32 @@ const EXPIRY_OPTIONS = [
   { value: "90", label: "90 days" },
 ];
 
+const noChange = () => () => undefined;
+
 const STATUS_WORDS: Record<CrewLinkView["status"], string> = { active: "Live", revoked: "Revoked", expired: "Expired" };
 
 function dateWords(iso: string): string {
   return new Date(iso).toLocaleDateString("en-GB", { day: "numeric", month: "short", year: "numeric" });
 }
 
-function LinkRow({ link, onChanged }: { link: CrewLinkView; onChanged: () => void }) {
+function LinkRow({ link, onChanged, jobName, qrSvg }: { link: CrewLinkView; onChanged: () => void; jobName: string; qrSvg?: string }) {
   const toast = useToast();
+  // the share sheet exists only in some browsers, and only in the browser: false on the server
+  const canShare = useSyncExternalStore(
+    noChange,
+    () => typeof navigator.share === "function",
+    () => false,
+  );
+  const [qrOpen, setQrOpen] = useState(true);
+
+  const share = async () => {
+    if (!link.url) return;
+    try {
+      await navigator.share({ title: `${jobName} — crew link`, text: `${jobName}: the member schedule to build from (read only)`, url: link.url });
+    } catch (err) {
+      if ((err as Error).name !== "AbortError") toast.show({ message: "Could not open the share sheet: copy the link instead." });
+    }
+  };
   const [pending, startTransition] = useTransition();
   const [mailOpen, setMailOpen] = useState(false);
   const [to, setTo] = useState("");
@@ -107,14 +139,41 @@ function LinkRow({ link, onChanged }: { link: CrewLinkView; onChanged: () => voi
             </Button>
           ) : null}
           {link.url ? (
+            <a href={smsHref(crewMessage(jobName, link.url))} className={buttonClasses({ variant: "secondary" })} data-testid="crew-link-sms">
+              Text it
+            </a>
+          ) : null}
+          {link.url && canShare ? (
+            <Button variant="secondary" onClick={share} data-testid="crew-link-share">
+              Share…
+            </Button>
+          ) : null}
+          {link.url ? (
             <Button variant="secondary" onClick={() => setMailOpen((o) => !o)} aria-expanded={mailOpen}>
               E-mail it
             </Button>
+          ) : null}
+          {qrSvg ? (
+            <Button variant="secondary" onClick={() => setQrOpen((o) => !o)} aria-expanded={qrOpen} data-testid="crew-link-qr-toggle">
+              {qrOpen ? "Hide QR code" : "QR code"}
+            </Button>
+          ) : null}
+          {link.url ? (
+            <a href={`/api/crew/${link.url.split("/crew/")[1]}/pdf`} download className={buttonClasses({ variant: "secondary" })} data-testid="crew-link-board-pdf">
+              Site board PDF
+            </a>
           ) : null}
           <Button variant="danger" onClick={revoke} loading={pending}>
             Revoke
           </Button>
         </div>
+      ) : null}
+      {live && qrSvg && qrOpen ? (
+        <figure className="flex flex-col items-center gap-2 rounded-card border-2 border-rule bg-white p-3" data-testid="crew-link-qr">
+          {/* the SVG is drawn by the qrcode package from our own link: no outside markup */}
+          <div className="h-56 w-56 [&>svg]:h-full [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: qrSvg }} role="img" aria-label={`QR code of the crew link for ${jobName}`} />
+          <figcaption className="text-center text-sm text-ink-soft">Point a phone&apos;s camera at it to open the schedule.</figcaption>
+        </figure>
       ) : null}
       {live && mailOpen ? (
         <form onSubmit={send} className="flex flex-col gap-2" noValidate>
@@ -130,7 +189,7 @@ function LinkRow({ link, onChanged }: { link: CrewLinkView; onChanged: () => voi
 }
 
 /** The owner's crew links for one job: make one, copy it, e-mail it, revoke it. */
-export function CrewLinkManager({ jobId, links, activeLimit, activeCount }: CrewLinkManagerProps) {
+export function CrewLinkManager({ jobId, links, activeLimit, activeCount, jobName, qrSvgs = {} }: CrewLinkManagerProps) {
   const router = useRouter();
   const toast = useToast();
   const [pending, startTransition] = useTransition();
@@ -189,7 +248,7 @@ export function CrewLinkManager({ jobId, links, activeLimit, activeCount }: Crew
       {live.length > 0 ? (
         <ul className="flex flex-col gap-2" aria-label="Live crew links">
           {live.map((l) => (
-            <LinkRow key={l.id} link={l} onChanged={() => router.refresh()} />
+            <LinkRow key={l.id} link={l} onChanged={() => router.refresh()} jobName={jobName} qrSvg={qrSvgs[l.id]} />
           ))}
         </ul>
       ) : null}
@@ -198,7 +257,7 @@ export function CrewLinkManager({ jobId, links, activeLimit, activeCount }: Crew
           <summary className="min-h-touch cursor-pointer content-center font-bold">Revoked and expired links ({ended.length})</summary>
           <ul className="mt-2 flex flex-col gap-2" aria-label="Revoked and expired crew links">
             {ended.map((l) => (
-              <LinkRow key={l.id} link={l} onChanged={() => router.refresh()} />
+              <LinkRow key={l.id} link={l} onChanged={() => router.refresh()} jobName={jobName} />
             ))}
           </ul>
         </details>

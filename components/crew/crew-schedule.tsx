@@ -32,6 +32,13 @@ export function CrewSchedule({ rows }: CrewScheduleProps) {
               <StatusBadge status={row.verdict.pass ? "pass" : "fail"} label={row.verdict.words} />
             </p>
           ) : null}
+          {row.facts.length > 0 ? (
+            <ul className="mt-2 flex flex-col gap-1 text-ink" data-testid="crew-facts">
+              {row.facts.map((f) => (
+                <li key={f}>{f}</li>
+              ))}
+            </ul>
+          ) : null}
           {row.headline ? (
             <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-lg">
               <dt className="font-bold">Span</dt>

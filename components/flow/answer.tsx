@@ -8,7 +8,7 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
+import { answerFacts, headlineFor, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
 import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -170,6 +170,13 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                   {checkTitle(chosenCandidate.governing)} governs · {chosenCandidate.label}
                 </span>
               </p>
+              {chosenCheck ? (
+                <ul className="mt-3 flex flex-col gap-1 border-t-2 border-rule pt-2 text-ink" data-testid="answer-facts">
+                  {answerFacts(chosenCheck).map((f) => (
+                    <li key={f}>{f}</li>
+                  ))}
+                </ul>
+              ) : null}
               {action ? <div className="mt-3 hidden md:block">{action}</div> : null}
             </>
           ) : size.data ? (
@@ -178,7 +185,10 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                 <WarningIcon className="h-7 w-7" /> Nothing in the tables works
               </p>
               <p className="mt-1 text-ink">
-                None of the {size.data.candidates} members checked carries this load over this span. Try another material, more plies, a shorter span or another support.
+                {size.data.candidates === 0 && size.data.notFittingWall > 0
+                  ? `None of these members fills a ${size.data.wallFraming} wall. Try other plies, another material or the other wall framing.`
+                  : `None of the ${size.data.candidates} members checked carries this load over this span. Try another material, more plies, a shorter span or another support.`}
+                {size.data.candidates > 0 && size.data.notFittingWall > 0 ? ` Members that do not fill a ${size.data.wallFraming} wall were left out.` : ""}
               </p>
             </>
           ) : (

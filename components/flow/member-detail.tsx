@@ -18,6 +18,9 @@ export type MemberDetailProps = {
 };
 
 const FACTOR_WORDS: Record<string, string> = {
+  CrBasis: "Cr, why",
+  incised: "Incised (Ci)",
+  incisedBasis: "Incised, why",
   CD: "CD, load duration",
   lambda: "λ, time effect",
   CM: "CM, wet service",

@@ -8,6 +8,8 @@ import { formatFeetInches } from "@/lib/flow/length";
 import { newLoadId, type FlowAreaLoad, type FlowLineLoad, type FlowPointLoad, type FlowState } from "@/lib/flow/state";
 import { OCCUPANCY_PRESETS, findOccupancyPreset } from "@/lib/solver/asce7/loads";
 import { designFlatRoofSnow, EXPOSURE_CE, THERMAL_CT, type RoofExposure, type RoofThermal } from "@/lib/solver/asce7/snow";
+import { asdSnowFactor } from "@/lib/solver/asce7/combinations";
+import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import { LOAD_CASES, type LoadCase } from "@/lib/solver/types";
 import { ChoiceGroup } from "./choice-group";
 import { LengthField } from "./length-field";
@@ -65,9 +67,12 @@ function AreaLoadRow({ load, index, onChange, onRemove }: { load: FlowAreaLoad; 
 export function StepLoads({ state, update }: StepLoadsProps) {
   const [pointDialog, setPointDialog] = useState<{ open: boolean; load: FlowPointLoad | null }>({ open: false, load: null });
   const [lineDialog, setLineDialog] = useState<{ open: boolean; load: FlowLineLoad | null }>({ open: false, load: null });
-  const snow = designFlatRoofSnow({ pg: state.snow.groundPsf, Ce: EXPOSURE_CE[state.snow.exposure], Ct: THERMAL_CT[state.snow.thermal] });
+  const standard: LoadStandard = state.loadStandard ?? "ASCE 7-16";
+  const snow = designFlatRoofSnow({ pg: state.snow.groundPsf, Ce: EXPOSURE_CE[state.snow.exposure], Ct: THERMAL_CT[state.snow.thermal] }, standard);
   const widthFt = state.width.mode === "spacing" ? state.width.spacingIn / 12 : state.width.tributaryFt;
   const r1 = (v: number) => (Math.round(v * 10) / 10).toLocaleString("en-US");
+  const roofLivePsf = state.areaLoads.filter((a) => a.case === "Lr").reduce((sum, a) => sum + a.psf, 0);
+  const hasOtherSnow = state.pointLoads.some((p) => p.case === "S") || state.lineLoads.some((l) => l.case === "S") || state.areaLoads.some((a) => a.case === "S");
 
   return (
     <div className="flex flex-col gap-6">
@@ -143,15 +148,43 @@ export function StepLoads({ state, update }: StepLoadsProps) {
           />
           <span className="font-bold">Roof snow on this member</span>
         </label>
+        {state.snow.on || hasOtherSnow ? (
+          <ChoiceGroup
+            legend="Which map is your ground snow number from?"
+            name="snow-map"
+            value={standard}
+            hint="Ask the building department if unsure. The older map is the safe reading of a number."
+            onChange={(loadStandard) => update((s) => ({ ...s, loadStandard }))}
+            choices={[
+              { value: "ASCE 7-16", label: "The map in the 2021 code or older", detail: "ASCE 7-16: snow counted in full (D + S). Most areas still use this." },
+              { value: "ASCE 7-22", label: "The newer risk-based map", detail: "2024 code, ASCE 7-22: its numbers are larger, counted at 0.7 (D + 0.7S)." },
+            ]}
+          />
+        ) : null}
         {state.snow.on ? (
           <div className="flex flex-col gap-3">
-            <FlowNumberField label="Ground snow load, pg" unit="psf" unitSpoken="pounds per square foot" hint="From your building department's ground snow map" value={state.snow.groundPsf} min={0} max={500} onCommit={(groundPsf) => update((s) => ({ ...s, snow: { ...s.snow, groundPsf } }))} />
+            <FlowNumberField label="Ground snow load, pg" unit="psf" unitSpoken="pounds per square foot" hint="The number on that map for your site" value={state.snow.groundPsf} min={0} max={500} onCommit={(groundPsf) => update((s) => ({ ...s, snow: { ...s.snow, groundPsf } }))} />
             <div className="grid gap-3 sm:grid-cols-2">
               <SelectField label="Roof exposure" options={EXPOSURES} value={state.snow.exposure} onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, exposure: e.target.value as RoofExposure } }))} />
               <SelectField label="Building heat" options={THERMALS} value={state.snow.thermal} onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, thermal: e.target.value as RoofThermal } }))} />
             </div>
-            <p className="rounded-lg bg-paper-sunk p-3 text-ink tabular-nums">
-              Roof snow {r1(snow.ps)} psf: pf = 0.7 × Ce × Ct × pg = {r1(snow.pf)} psf, at least {r1(snow.pm)} psf (ASCE 7-22 Eq. 7.3-1, §7.3.4) → {r1(snow.ps * widthFt)} plf on this member
+            <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-lg bg-paper-sunk p-3 text-ink tabular-nums" aria-label="Roof loads on this member">
+              <dt className="font-bold">Roof snow</dt>
+              <dd>
+                {r1(snow.ps)} psf → {r1(snow.ps * widthFt)} plf
+                {asdSnowFactor(standard) !== 1 ? `, counted as ${r1(0.7 * snow.ps * widthFt)} plf (0.7S)` : ""}
+              </dd>
+              {roofLivePsf > 0 ? (
+                <>
+                  <dt className="font-bold">Roof live load</dt>
+                  <dd>
+                    {r1(roofLivePsf)} psf → {r1(roofLivePsf * widthFt)} plf
+                  </dd>
+                </>
+              ) : null}
+            </dl>
+            <p className="text-sm text-graphite">
+              pf = 0.7 × Ce × Ct × pg = {r1(snow.pf)} psf, at least {r1(snow.pm)} psf ({snow.clause}); the larger of roof snow and roof live load governs.
             </p>
           </div>
         ) : null}

@@ -1,7 +1,8 @@
 "use client";
 
 import { SelectField } from "@/components/ui/field";
-import type { FlowState, MaterialFamily } from "@/lib/flow/state";
+import { wallOf, type FlowState, type MaterialFamily } from "@/lib/flow/state";
+import { INCISED_SPECIES } from "@/lib/solver/design/wood";
 import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
 import { ENGINEERED } from "@/lib/tables/engineered";
 import { I_JOISTS } from "@/lib/tables/i-joists";
@@ -39,6 +40,12 @@ function Checkbox({ label, hint, checked, onChange }: { label: string; hint?: st
 /** Step 4: what it is made of, and the conditions the checks need. */
 export function StepMaterial({ state, update }: StepMaterialProps) {
   const m = state.material;
+  const sawnFamily = m.family === "sawn" || m.family === "built-up" || m.family === "any";
+  const treated = state.wet || state.kind === "deck-joist" || state.kind === "deck-beam";
+  // Spanlark's default when the builder has not said: fir and spruce incised, Southern Pine not (NDS 2018 §4.3.8)
+  const incisedDefault = m.family === "any" ? true : INCISED_SPECIES.includes(m.species);
+  const incised = state.incised ?? incisedDefault;
+  const inWall = state.kind === "header" || state.kind === "beam";
   const preset = DEFLECTION_PRESETS.find((p) => p.live === state.limits.live && p.total === state.limits.total);
   return (
     <div className="flex flex-col gap-6">
@@ -68,6 +75,37 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
             />
           ) : null}
         </div>
+      ) : null}
+
+      {inWall ? (
+        <ChoiceGroup
+          legend={state.kind === "header" ? "Wall framing" : "Is the beam in a stud wall?"}
+          name="wall-framing"
+          look="segments"
+          hint="Only members that fill the wall are offered: 2 plies with a 1/2 in spacer fill a 2x4 wall, 3 plies with two spacers a 2x6 wall."
+          value={state.kind === "header" ? (wallOf(state) ?? "2x4") : (state.wallFraming ?? "none")}
+          onChange={(wallFraming) => update((s) => ({ ...s, wallFraming }))}
+          choices={[
+            { value: "2x4", label: "2x4 wall" },
+            { value: "2x6", label: "2x6 wall" },
+            ...(state.kind === "beam" ? [{ value: "none" as const, label: "Not in a wall" }] : []),
+          ]}
+        />
+      ) : null}
+
+      {sawnFamily && treated ? (
+        <ChoiceGroup
+          legend="Treated lumber with small slits in its faces?"
+          name="incised"
+          look="segments"
+          hint={`Most treated fir and spruce is; Southern Pine usually is not. Slits (incising) lower the strength: ×0.80 on bending and shear, ×0.95 on stiffness (NDS 2018 §4.3.8).${state.incised === null || state.incised === undefined ? ` Assumed ${incisedDefault ? "yes" : "no"} for ${m.family === "any" ? "fir and spruce (no for Southern Pine)" : m.species}.` : ""}`}
+          value={incised ? "yes" : "no"}
+          onChange={(v) => update((s) => ({ ...s, incised: v === "yes" }))}
+          choices={[
+            { value: "yes", label: "Yes, slits" },
+            { value: "no", label: "No slits" },
+          ]}
+        />
       ) : null}
 
       {m.family === "engineered" ? (

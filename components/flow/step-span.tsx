@@ -14,6 +14,7 @@ import {
   removeOverhang,
   snapFt,
   sortedSupports,
+  spanFromRoughOpeningFt,
   supportRange,
   withMainSpan,
   withOverhang,
@@ -80,17 +81,56 @@ export function StepSpan({ state, update }: StepSpanProps) {
     requestAnimationFrame(() => document.getElementById(addId(end))?.focus());
   };
 
+  const roughOpening = state.kind === "header" && state.roughOpeningFt !== null && state.roughOpeningFt !== undefined ? state.roughOpeningFt : null;
+  const byOpening = state.kind === "header" && sorted.length === 2 && roughOpening !== null;
+
   return (
     <div className="flex flex-col gap-5">
-      <LengthField
-        label={sorted.length > 2 ? "First span (between the first two supports)" : "Span (between supports)"}
-        valueFt={mainSpanFt(state)}
-        hint={LENGTH_HINT}
-        minFt={0}
-        exclusiveMin
-        maxFt={MAX_LENGTH_FT}
-        onCommit={(ft) => update((s) => withMainSpan(s, ft))}
-      />
+      {state.kind === "header" && sorted.length === 2 ? (
+        <ChoiceGroup
+          legend="You know the"
+          name="span-or-opening"
+          look="segments"
+          value={byOpening ? "opening" : "span"}
+          onChange={(v) =>
+            update((s) => {
+              if (v === "span") return { ...s, roughOpeningFt: null };
+              const opening = Math.max(1 / 12, mainSpanFt(s) - s.bearingIn / 12);
+              return { ...withMainSpan(s, spanFromRoughOpeningFt(opening, s.bearingIn)), roughOpeningFt: opening };
+            })
+          }
+          choices={[
+            { value: "span", label: "Span" },
+            { value: "opening", label: "Rough opening" },
+          ]}
+        />
+      ) : null}
+      {byOpening && roughOpening !== null ? (
+        <div className="flex flex-col gap-2">
+          <LengthField
+            label="Rough opening (between the jack studs)"
+            valueFt={roughOpening}
+            hint={LENGTH_HINT}
+            minFt={0}
+            exclusiveMin
+            maxFt={MAX_LENGTH_FT - 4}
+            onCommit={(ft) => update((s) => ({ ...withMainSpan(s, spanFromRoughOpeningFt(ft, s.bearingIn)), roughOpeningFt: ft }))}
+          />
+          <p className="rounded-lg bg-paper-sunk p-3 text-ink tabular-nums" aria-live="polite">
+            Span {formatFeetInches(spanFromRoughOpeningFt(roughOpening, state.bearingIn))} = rough opening {formatFeetInches(roughOpening)} + half of the {state.bearingIn} in bearing at each end.
+          </p>
+        </div>
+      ) : (
+        <LengthField
+          label={sorted.length > 2 ? "First span (between the first two supports)" : "Span (between supports)"}
+          valueFt={mainSpanFt(state)}
+          hint={LENGTH_HINT}
+          minFt={0}
+          exclusiveMin
+          maxFt={MAX_LENGTH_FT}
+          onCommit={(ft) => update((s) => withMainSpan(s, ft))}
+        />
+      )}
 
       <section aria-labelledby="beam-drawing-title" className="flex flex-col gap-2">
         <h3 id="beam-drawing-title" className="font-bold">
@@ -243,7 +283,13 @@ export function StepSpan({ state, update }: StepSpanProps) {
         exclusiveMin
         max={48}
         hint={state.kind === "header" ? "How much of the header sits on the jack studs: 1-1/2 in per stud." : "How much of the member sits on the wall, beam or post."}
-        onCommit={(bearingIn) => update((s) => ({ ...s, bearingIn }))}
+        onCommit={(bearingIn) =>
+          update((s) =>
+            s.kind === "header" && s.roughOpeningFt !== null && s.roughOpeningFt !== undefined && s.supports.length === 2
+              ? { ...withMainSpan(s, spanFromRoughOpeningFt(s.roughOpeningFt, bearingIn)), bearingIn }
+              : { ...s, bearingIn },
+          )
+        }
       />
       <p className="figures text-ink-soft">
         Whole member: {formatFeetInches(state.lengthFt)} · {sorted.length} support{sorted.length === 1 ? "" : "s"}

@@ -16,6 +16,8 @@ import { formatFeetInches } from "@/lib/flow/length";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
 import { deleteJob, deleteMember, duplicateJob, duplicateMember, restoreJob, restoreMember, updateMember } from "./actions";
 import { JobForm } from "./job-form";
+import { OrderDetailsForm } from "./order-details-form";
+import type { OrderDetails } from "@/lib/orders/order-list";
 
 export type JobPageMember = {
   id: string;
@@ -29,6 +31,10 @@ export type JobPageMember = {
   /** the label of the member that carries this one */
   carriedBy: string | null;
   carriedById?: string | null;
+  /** the load basis the saved answer was worked on, and whether the member carries snow */
+  loadStandard?: "ASCE 7-16" | "ASCE 7-22";
+  carriesSnow?: boolean;
+  orderDetails?: OrderDetails;
 };
 
 export type JobPageProps = {
@@ -117,6 +123,33 @@ export function JobPage({ job, children }: JobPageProps) {
                     {verdict ? <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} /> : <StatusBadge status="caution" label="Not sized" />}
                   </div>
                   <p className="text-xl font-bold text-ink">{m.headline ?? "Nothing in the tables worked for these inputs."}</p>
+                  {m.loadStandard === "ASCE 7-22" && m.carriesSnow ? (
+                    <div className="flex flex-col gap-2 rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-3 text-ink" data-testid="recheck-basis">
+                      <p>
+                        Worked out with ground snow from the newer risk-based map (ASCE 7-22, counted at 0.7). Most building departments still give the number from the
+                        map in the 2021 code or older, counted in full.
+                      </p>
+                      <div>
+                        <Button
+                          variant="secondary"
+                          disabled={pending}
+                          onClick={() =>
+                            run(async () => {
+                              const result = await updateMember({ memberId: m.id, loadStandard: "ASCE 7-16" });
+                              if (!result.ok) {
+                                setProblem(result.error);
+                                return;
+                              }
+                              router.refresh();
+                              toast.show({ message: `${m.label} re-checked on the older map (ASCE 7-16)` });
+                            })
+                          }
+                        >
+                          Re-check on the older map
+                        </Button>
+                      </div>
+                    </div>
+                  ) : null}
                   {job.members.length > 1 ? (
                     <SelectField
                       label="Bears on"
@@ -133,6 +166,7 @@ export function JobPage({ job, children }: JobPageProps) {
                       }}
                     />
                   ) : null}
+                  {m.orderDetails ? <OrderDetailsForm memberId={m.id} label={m.label} kind={m.kind} details={m.orderDetails} /> : null}
                   <div className="flex flex-wrap gap-2">
                     <ButtonLink href={`/size?job=${job.id}&member=${m.id}`} variant="secondary">
                       Edit
@@ -150,6 +184,18 @@ export function JobPage({ job, children }: JobPageProps) {
           </ul>
         )}
       </section>
+
+      {job.members.length > 0 ? (
+        <section aria-labelledby="order-title" className="flex flex-col gap-2 rounded-card border-2 border-rule bg-paper-raised p-4">
+          <h2 id="order-title" className="text-2xl font-bold">
+            Order list
+          </h2>
+          <p className="text-ink-soft">The lumber, studs, posts and concrete these members take, by size and stock length, priced where the yard&apos;s prices are on file.</p>
+          <ButtonLink href={`/jobs/${job.id}/order`} className="w-full sm:w-fit" data-testid="open-order">
+            Open the order list
+          </ButtonLink>
+        </section>
+      ) : null}
 
       {children}
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { useRouter } from "next/navigation";
-import { useState, useTransition } from "react";
+import { useEffect, useRef, useState, useTransition } from "react";
 import { Button } from "@/components/ui/button";
 import { saveJobSheet } from "./actions";
 
@@ -33,5 +33,32 @@ export function SaveSheetButton({ jobId }: SaveSheetButtonProps) {
         </p>
       ) : null}
     </div>
+  );
+}
+
+/**
+ * Saves the job's sheet once, on arriving back from checkout (the builder pressed "Save job sheet" before
+ * subscribing), then stays on the job with the new sheet announced. The address loses ?saveSheet so a reload
+ * does not save a second one.
+ */
+export function SaveSheetOnArrival({ jobId }: SaveSheetButtonProps) {
+  const router = useRouter();
+  const started = useRef(false);
+  const [error, setError] = useState<string | null>(null);
+  useEffect(() => {
+    if (started.current) return;
+    started.current = true;
+    void saveJobSheet({ jobId }).then((result) => {
+      if (result.ok) router.replace(`/jobs/${jobId}?sheet=${result.sheet.id}`);
+      else {
+        setError(result.error);
+        router.replace(`/jobs/${jobId}`);
+      }
+    });
+  }, [jobId, router]);
+  return (
+    <p role="status" className="font-bold" data-testid="sheet-saving-after-checkout">
+      {error ?? "Saving your job sheet…"}
+    </p>
   );
 }

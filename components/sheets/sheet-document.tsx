@@ -10,6 +10,8 @@ import { FROM_MEMORY } from "@/lib/tables/citations";
 
 export type SheetDocumentProps = {
   snapshot: SheetSnapshot;
+  /** the QR code of the job's live crew link, printed under the heading; none when the job has no live link */
+  crewQr?: { svg: string; url: string } | null;
 };
 
 function fmtDiagram(unit: string) {
@@ -51,6 +53,13 @@ function MemberSection({ m, index }: { m: SheetMember; index: number }) {
         <p className="mt-2">
           <StatusBadge status={m.pass ? "pass" : "fail"} label={`${m.pass ? "OK" : "Over"} ${ratioPercent(m.ratio)}, ${checkWords(m.governing)} governs`} />
         </p>
+        {m.facts && m.facts.length > 0 ? (
+          <ul className="mt-2 flex flex-col gap-0.5" data-testid="sheet-facts">
+            {m.facts.map((f) => (
+              <li key={f}>{f}</li>
+            ))}
+          </ul>
+        ) : null}
         {m.note ? <p className="mt-2 text-sm text-ink-soft">{m.note}</p> : null}
       </header>
 
@@ -195,7 +204,7 @@ function SourcesAppendix({ snapshot }: { snapshot: SheetSnapshot }) {
 }
 
 /** The job sheet from its frozen snapshot: the same content as the PDF, for the screen and the printer. */
-export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
+export function SheetDocument({ snapshot: s, crewQr }: SheetDocumentProps) {
   const by = s.preparedBy.company ? `${s.preparedBy.name}, ${s.preparedBy.company}` : s.preparedBy.name;
   return (
     <article className="sheet-document flex flex-col gap-6" aria-labelledby="sheet-title">
@@ -219,6 +228,17 @@ export function SheetDocument({ snapshot: s }: SheetDocumentProps) {
           <dd>ASD (service loads)</dd>
         </dl>
         {s.job.notes.trim() ? <p className="mt-1 whitespace-pre-line">Job notes: {s.job.notes}</p> : null}
+        {crewQr ? (
+          <figure className="sheet-keep mt-2 flex items-center gap-3" data-testid="sheet-crew-qr">
+            {/* the SVG is drawn by the qrcode package from our own crew link */}
+            <div className="h-28 w-28 shrink-0 [&>svg]:h-full [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: crewQr.svg }} role="img" aria-label="QR code of the crew link" />
+            <figcaption className="min-w-0 text-sm">
+              <strong className="block text-base">Crew link</strong>
+              Scan for the live member schedule, read only.
+              <span className="block font-mono text-xs break-all text-graphite">{crewQr.url}</span>
+            </figcaption>
+          </figure>
+        ) : null}
       </header>
 
       <aside aria-label="Safety caution" className="rounded-card border-2 border-l-8 border-caution bg-caution-bg p-4 text-ink">

@@ -4,11 +4,12 @@ import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { cx } from "@/components/ui/cx";
 import { NavIcon } from "./nav-icon";
-import { NAV_ITEMS, isActive } from "./nav-items";
+import { NAV_ITEMS, isActive, isCrewPage } from "./nav-items";
 
 /** The phone's navigation, at the bottom where the thumb reaches; hidden on wide screens (the header has it). */
 export function BottomNav() {
   const pathname = usePathname() ?? "/";
+  if (isCrewPage(pathname)) return null;
   return (
     <nav
       aria-label="Main"

@@ -11,3 +11,8 @@ export const NAV_ITEMS: readonly NavItem[] = [
 export function isActive(pathname: string, href: string): boolean {
   return pathname === href || pathname.startsWith(`${href}/`);
 }
+
+/** The crew's read-only page: no tabs meant for signed-in builders (the crew has no account). */
+export function isCrewPage(pathname: string): boolean {
+  return pathname.startsWith("/crew/");
+}

@@ -1,5 +1,6 @@
 import Link from "next/link";
 import { Caution } from "@/components/ui/caution";
+import { AccountFooterLinks } from "./account-footer-links";
 
 /** The foot of every page: the safety caution, then a few plain links. */
 export function SiteFooter() {
@@ -19,16 +20,7 @@ export function SiteFooter() {
                 Size a member
               </Link>
             </li>
-            <li>
-              <Link href="/jobs" className="inline-flex min-h-touch items-center px-2">
-                Jobs
-              </Link>
-            </li>
-            <li>
-              <Link href="/account" className="inline-flex min-h-touch items-center px-2">
-                Account
-              </Link>
-            </li>
+            <AccountFooterLinks />
           </ul>
         </nav>
         <p className="text-ink-soft">Spanlark sizes framing members for houses and decks. Built for the job site.</p>

@@ -4,18 +4,30 @@ import Link from "next/link";
 import { usePathname } from "next/navigation";
 import { cx } from "@/components/ui/cx";
 import { NavIcon } from "./nav-icon";
-import { NAV_ITEMS, isActive } from "./nav-items";
+import type { ReactNode } from "react";
+import { NAV_ITEMS, isActive, isCrewPage } from "./nav-items";
 import { Wordmark } from "./wordmark";
 
-/** The top bar: the name (home) on every screen, and the three places as a top nav on wide screens. */
-export function SiteHeader() {
+export type SiteHeaderProps = {
+  /** the Admin link, rendered on the server for admins only */
+  adminLink?: ReactNode;
+};
+
+/**
+ * The top bar: the name (home) on every screen, the three places as a top nav on wide screens, and Admin for
+ * admins on every screen size. The crew's page shows only the name: the crew has no account.
+ */
+export function SiteHeader({ adminLink }: SiteHeaderProps) {
   const pathname = usePathname() ?? "/";
+  const crew = isCrewPage(pathname);
   return (
     <header className="no-print sticky top-0 z-40 border-b-2 border-rule bg-paper/95 backdrop-blur supports-[backdrop-filter]:bg-paper/85">
       <div className="mx-auto flex h-14 max-w-5xl items-center justify-between gap-4 px-4">
         <Link href="/" className="-ml-1 inline-flex min-h-touch items-center rounded-lg px-1 no-underline" aria-label="Spanlark home">
           <Wordmark />
         </Link>
+        {crew ? null : (
+        <div className="flex items-center gap-1">
         <nav aria-label="Main" className="hidden md:block">
           <ul className="flex items-center gap-1">
             {NAV_ITEMS.map((item) => {
@@ -38,6 +50,9 @@ export function SiteHeader() {
             })}
           </ul>
         </nav>
+        {adminLink}
+        </div>
+        )}
       </div>
     </header>
   );

@@ -128,11 +128,16 @@ export async function resendVerification(email: string, ip: string): Promise<voi
 
 /** Confirms an address with a mailed token; false when the link is unknown, used or expired. */
 export async function verifyEmail(token: string): Promise<boolean> {
+  return (await verifyEmailOf(token)) !== null;
+}
+
+/** verifyEmail, answering with the account's id (to sign that browser in), or null. */
+export async function verifyEmailOf(token: string): Promise<string | null> {
   getSequelize();
   const userId = await consumeToken(token, "verify-email");
-  if (!userId) return false;
+  if (!userId) return null;
   await User.update({ emailVerifiedAt: new Date() }, { where: { id: userId, emailVerifiedAt: { [Op.is]: null } } });
-  return true;
+  return userId;
 }
 
 /** Mails a new-password link (or, for an address with no account, a note saying so); same answer either way. */
@@ -162,15 +167,28 @@ export async function requestPasswordReset(email: string, ip: string): Promise<v
  * counts as confirmed too. False when the link is unknown, used or expired.
  */
 export async function resetPassword(token: string, password: string): Promise<boolean> {
+  return (await resetPasswordOf(token, password)) !== null;
+}
+
+/** resetPassword, answering with the account's id (to sign that browser in), or null. */
+export async function resetPasswordOf(token: string, password: string): Promise<string | null> {
   getSequelize();
   const passwordHash = await hashPassword(password);
   const userId = await consumeToken(token, "reset-password");
-  if (!userId) return false;
+  if (!userId) return null;
   const user = await User.findByPk(userId);
-  if (!user) return false;
+  if (!user) return null;
   const now = new Date();
   await user.update({ passwordHash, passwordChangedAt: now, emailVerifiedAt: user.emailVerifiedAt ?? now });
-  return true;
+  return user.id;
+}
+
+/** The account a sign-in ticket names, when it exists and is confirmed; null otherwise. */
+export async function accountForTicket(userId: string): Promise<SessionUser | null> {
+  getSequelize();
+  const user = await User.findByPk(userId);
+  if (!user || !user.emailVerifiedAt) return null;
+  return toSessionUser(user);
 }
 
 export type SignInResult =

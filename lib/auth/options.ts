@@ -3,7 +3,8 @@ import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
 import { isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { env } from "@/lib/env";
-import { authenticate } from "./accounts";
+import { accountForTicket, authenticate } from "./accounts";
+import { readSignInTicket } from "./ticket";
 import { clientIp } from "./client-ip";
 import { sameOriginRedirect } from "./return-path";
 import { SignInSchema } from "./schemas";
@@ -47,6 +48,18 @@ export function authOptions(): NextAuthOptions {
           if (result.reason === "unverified") throw new Error(SIGN_IN_ERRORS.unverified);
           if (result.reason === "rate-limited") throw new Error(SIGN_IN_ERRORS.rateLimited);
           return null;
+        },
+      }),
+      // Right after a mailed link was spent in this browser (e-mail confirmed, password reset): see lib/auth/ticket.ts.
+      CredentialsProvider({
+        id: "ticket",
+        name: "Mailed link",
+        credentials: { ticket: { label: "Ticket", type: "text" } },
+        async authorize(credentials) {
+          const read = readSignInTicket(String(credentials?.ticket ?? ""), config.NEXTAUTH_SECRET);
+          if (!read) return null;
+          const user = await accountForTicket(read.userId);
+          return user ? { id: user.id, email: user.email, name: user.name } : null;
         },
       }),
     ],

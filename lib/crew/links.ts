@@ -138,6 +138,17 @@ export async function listCrewLinks(ownerId: string, jobId: string, now: Date = 
   return links.map((l) => view(l, now));
 }
 
+/** The newest live crew link of an owner's job that can be shown (for the QR code on a job sheet); null when there is none or the job is gone. */
+export async function liveCrewLinkUrl(ownerId: string, jobId: string | null, now: Date = new Date()): Promise<string | null> {
+  if (!jobId) return null;
+  try {
+    return (await listCrewLinks(ownerId, jobId, now)).find((l) => l.status === "active" && l.url)?.url ?? null;
+  } catch (err) {
+    if (err instanceof HttpError && err.status === 404) return null;
+    throw err;
+  }
+}
+
 async function ownedLink(ownerId: string, linkId: string): Promise<CrewLink> {
   getSequelize();
   const link = await CrewLink.findOne({ where: { id: linkId, ownerId } });

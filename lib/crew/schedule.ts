@@ -4,7 +4,7 @@
  */
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
-import type { MemberResultSummary } from "@/lib/flow/summary";
+import { basisWords, type MemberResultSummary } from "@/lib/flow/summary";
 import { formatLb, supportName } from "@/lib/sheets/format";
 
 export interface ScheduleSupport {
@@ -27,6 +27,8 @@ export interface ScheduleRow {
   supports: ScheduleSupport[];
   /** "OK 64% (bending)" or a warning */
   verdict: { pass: boolean; words: string } | null;
+  /** the load basis and assumptions the crew must know, as the answer screen said them */
+  facts: string[];
 }
 
 export interface ScheduleMemberSource {
@@ -39,7 +41,7 @@ export interface ScheduleMemberSource {
 export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
   const s = m.resultSummary;
   if (!s) {
-    return { id: m.id, label: m.label, kindLabel: KIND_LABELS[m.kind], headline: null, memberLabel: null, span: "—", supports: [], verdict: null };
+    return { id: m.id, label: m.label, kindLabel: KIND_LABELS[m.kind], headline: null, memberLabel: null, span: "—", supports: [], verdict: null, facts: [] };
   }
   const overhang = Math.abs(s.lengthFt - s.spanFt) > 1 / 192;
   const span = overhang ? `${formatFeetInches(s.spanFt)} (member ${formatFeetInches(s.lengthFt)} long)` : formatFeetInches(s.spanFt);
@@ -61,5 +63,7 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
     span,
     supports,
     verdict: { pass: s.pass, words: s.pass ? `OK ${pct}${s.governing ? `, ${s.governing.replace(/-/g, " ")} governs` : ""}` : `Over ${pct}: do not build this` },
+    // answers saved before the basis was recorded were worked on ASCE 7-22
+    facts: s.facts ?? [basisWords(s.loadStandard ?? "ASCE 7-22", true)],
   };
 }

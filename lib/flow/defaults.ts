@@ -34,6 +34,8 @@ const BASE: Omit<FlowState, "kind" | "lengthFt" | "supports" | "width" | "areaLo
   repetitive: false,
   unbracedFt: 0,
   selfWeight: true,
+  loadStandard: "ASCE 7-16",
+  incised: null,
 };
 
 /** The starting state for a kind of member. */
@@ -61,6 +63,8 @@ export function defaultFlowState(kind: MemberKind): FlowState {
         material: { family: "built-up", species: "Douglas Fir-Larch", grade: "No.2", plies: 0, product: "" },
         limits: { live: 240, total: 180 },
         bearingIn: 3,
+        wallFraming: "2x4",
+        roughOpeningFt: null,
       };
     case "beam":
       return {
@@ -107,7 +111,7 @@ export function defaultFlowState(kind: MemberKind): FlowState {
         areaLoads: [presetLoad("roof-dead"), presetLoad("roof-live")],
         snow: { ...BASE.snow, on: true },
         material: { family: "sawn", species: "Douglas Fir-Larch", grade: "No.2", plies: 1, product: "" },
-        // IRC 2021 Table R301.7: L/240 for members with a flexible ceiling finish; total load L/180 (common practice)
+        // IRC 2021 Table R301.7: L/240 with a flexible ceiling finish; total L/180, IBC 2021 Table 1604.3 (roof members, nonplaster ceiling)
         limits: { live: 240, total: 180 },
         repetitive: true,
       };

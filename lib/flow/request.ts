@@ -8,7 +8,11 @@ import { takeDown } from "@/lib/solver/design/take-down";
 import type { DesignLoad, MemberSpec } from "@/lib/solver/design/schema";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import { LOAD_CASES, type BeamInput, type Combination, type Load, type LoadCase } from "@/lib/solver/types";
-import { sortedSupports, type FlowMaterial, type FlowState } from "./state";
+import type { LoadStandard } from "@/lib/solver/asce7/standard";
+import type { MemberKind, WallFraming } from "@/lib/solver/design/kinds";
+import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
+import type { DeflectionPresetId } from "@/lib/solver/design/schema";
+import { mainSpanFt, overhangs, sortedSupports, wallOf, type FlowMaterial, type FlowState } from "./state";
 
 /** The size family the search is limited to. */
 export type SizeFamilyRequest =
@@ -19,15 +23,21 @@ export type SizeFamilyRequest =
   | { material: "steel"; grade: string };
 
 export interface DesignRequestBase {
-  length: number;
-  supports: { x: number; type: "pin" | "roller" | "fixed" }[];
+  /** absent when the span comes from roughOpeningFt */
+  length?: number;
+  supports?: { x: number; type: "pin" | "roller" | "fixed" }[];
+  roughOpeningFt?: number;
   spacing?: number;
   tributary?: number;
   loads: DesignLoad[];
   bearing: number;
-  conditions: { wet: boolean; incised: boolean; repetitive: boolean; unbracedLength: number; selfWeight: boolean };
-  limits: { live: number; total: number };
+  conditions: { wet: boolean; incised?: boolean; repetitive?: boolean; unbracedLength: number; selfWeight: boolean };
+  /** a preset (so the answer cites its source) when the flow's numbers are one, else the numbers */
+  limits: { preset: DeflectionPresetId } | { live: number; total: number };
   method: "asd";
+  loadStandard: LoadStandard;
+  kind: MemberKind;
+  wallFraming?: WallFraming;
 }
 
 export type SizeRequest = DesignRequestBase & { member: SizeFamilyRequest; limit: number; failures: number };
@@ -62,17 +72,49 @@ export function designLoads(state: FlowState): DesignLoad[] {
   return loads;
 }
 
+/**
+ * The deflection limits as a preset when the flow's numbers are one (floors for floor and deck members,
+ * the roof presets for headers and rafters), so the answer and sheet cite IRC R301.7 / IBC 1604.3.
+ */
+export function limitsFor(state: FlowState): DesignRequestBase["limits"] {
+  const matches = DEFLECTION_PRESETS.filter((p) => p.live === state.limits.live && p.total === state.limits.total);
+  const roof = state.kind === "rafter" || state.kind === "header";
+  const pick = matches.find((p) => (roof ? p.id.startsWith("ceiling") || p.id.startsWith("roof") : p.id.startsWith("floor"))) ?? matches[0];
+  return pick ? { preset: pick.id } : { live: state.limits.live, total: state.limits.total };
+}
+
+/** The rough opening to send, when the builder gave one and the member is still a simple span of that size. */
+export function roughOpeningToSend(state: FlowState): number | undefined {
+  const ro = state.roughOpeningFt;
+  if (ro === null || ro === undefined || state.kind !== "header" || state.supports.length !== 2) return undefined;
+  const { left, right } = overhangs(state);
+  if (left > 1e-9 || right > 1e-9 || Math.abs(mainSpanFt(state) - (ro + state.bearingIn / 12)) > 1 / 192) return undefined;
+  return ro;
+}
+
 export function designBase(state: FlowState): DesignRequestBase {
   const width = state.width.mode === "spacing" ? { spacing: state.width.spacingIn } : { tributary: state.width.tributaryFt };
+  const ro = roughOpeningToSend(state);
+  const wall = wallOf(state);
   return {
-    length: state.lengthFt,
-    supports: sortedSupports(state.supports),
+    ...(ro !== undefined ? { roughOpeningFt: ro } : { length: state.lengthFt, supports: sortedSupports(state.supports) }),
     ...width,
     loads: designLoads(state),
     bearing: state.bearingIn,
-    conditions: { wet: state.wet, incised: false, repetitive: state.repetitive, unbracedLength: state.unbracedFt, selfWeight: state.selfWeight },
-    limits: { live: state.limits.live, total: state.limits.total },
+    conditions: {
+      wet: state.wet,
+      // not said: the engine's default by species (NDS 2018 §4.3.8)
+      ...(state.incised === true || state.incised === false ? { incised: state.incised } : {}),
+      // joists say whether they share the load; beams and headers take the engine's rule (3+ plies, NDS 2018 §4.3.9)
+      ...(state.width.mode === "spacing" ? { repetitive: state.repetitive } : {}),
+      unbracedLength: state.unbracedFt,
+      selfWeight: state.selfWeight,
+    },
+    limits: limitsFor(state),
     method: "asd",
+    loadStandard: state.loadStandard ?? "ASCE 7-16",
+    kind: state.kind,
+    ...(wall ? { wallFraming: wall } : {}),
   };
 }
 
@@ -86,10 +128,10 @@ export function checkRequest(state: FlowState, member: MemberSpec): CheckRequest
 
 /**
  * Factors of a combination from its name ("D+0.75L+0.75S" → { D: 1, L: 0.75, S: 0.75 }), as the
- * ASCE 7-22 generator names them; a nested factor such as 0.75(0.6W) multiplies out.
+ * ASCE 7 generator names them (either edition); a nested factor such as 0.75(0.6W) multiplies out.
  */
 export function combinationFactors(name: string): Combination | null {
-  const known = asdCombinations([...LOAD_CASES]).find((c) => c.name === name);
+  const known = [...asdCombinations([...LOAD_CASES], "ASCE 7-16"), ...asdCombinations([...LOAD_CASES], "ASCE 7-22")].find((c) => c.name === name);
   if (known) return known.factors;
   const factors: Combination = {};
   for (const term of name.split("+")) {
@@ -109,12 +151,12 @@ export function combinationFactors(name: string): Combination | null {
 export function diagramBeam(state: FlowState, check: CheckOutput): BeamInput {
   const base = designBase(state);
   const width = state.width.mode === "spacing" ? { spacingIn: state.width.spacingIn } : { tributaryFt: state.width.tributaryFt };
-  const loads: Load[] = takeDown(base.loads, state.lengthFt, width).map((t) => t.load);
+  const loads: Load[] = takeDown(base.loads, state.lengthFt, width, base.loadStandard).map((t) => t.load);
   if (state.selfWeight && check.member.weightPlf > 0) loads.push({ type: "udl", case: "D", from: 0, to: state.lengthFt, w: check.member.weightPlf });
   // an I-joist gives its EI, not a section: the diagram's bending deflection from EI (shear deflection is in the check)
   const EI = check.member.section.EI;
-  if (EI !== undefined && EI > 0) return { length: state.lengthFt, E: EI, I: 1, supports: base.supports, loads };
+  if (EI !== undefined && EI > 0) return { length: state.lengthFt, E: EI, I: 1, supports: sortedSupports(state.supports), loads };
   const factors = check.factors as { EPrime?: number };
   const E = typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : 29_000_000;
-  return { length: state.lengthFt, E, I: check.member.section.I, supports: base.supports, loads };
+  return { length: state.lengthFt, E, I: check.member.section.I, supports: sortedSupports(state.supports), loads };
 }

@@ -4,6 +4,8 @@
  */
 import { z } from "zod";
 import { LOAD_CASES } from "@/lib/solver/types";
+import { LOAD_STANDARDS } from "@/lib/solver/asce7/standard";
+import { WALL_FRAMINGS } from "@/lib/solver/design/kinds";
 import { MATERIAL_FAMILIES, MAX_LENGTH_FT, MEMBER_KINDS, type FlowState } from "./state";
 
 const SPECIES = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir", "Southern Pine"] as const;
@@ -63,6 +65,10 @@ export const flowStateSchema = z
     repetitive: z.boolean(),
     unbracedFt: z.number().min(0, "cannot be negative").max(MAX_LENGTH_FT),
     selfWeight: z.boolean(),
+    loadStandard: z.enum(LOAD_STANDARDS, { error: `must be one of ${LOAD_STANDARDS.join(", ")}` }).optional(),
+    incised: z.boolean().nullable().optional(),
+    wallFraming: z.enum([...WALL_FRAMINGS, "none"], { error: `must be one of ${[...WALL_FRAMINGS, "none"].join(", ")}` }).optional(),
+    roughOpeningFt: z.number().gt(0, "must be more than 0").max(MAX_LENGTH_FT, `must be ${MAX_LENGTH_FT} ft or less`).nullable().optional(),
   })
   .superRefine((s, ctx) => {
     s.supports.forEach((sup, i) => {

@@ -7,12 +7,13 @@
 import type { LoadCase, SupportType } from "@/lib/solver/types";
 import type { SawnGrade, Species } from "@/lib/tables/types";
 import type { RoofExposure, RoofThermal } from "@/lib/solver/asce7/snow";
+import type { LoadStandard } from "@/lib/solver/asce7/standard";
+import { MEMBER_KINDS, type MemberKind, type WallFraming } from "@/lib/solver/design/kinds";
 
 /** The longest member the flow takes, ft (the solver's limit). */
 export const MAX_LENGTH_FT = 200;
 
-export const MEMBER_KINDS = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"] as const;
-export type MemberKind = (typeof MEMBER_KINDS)[number];
+export { MEMBER_KINDS, type MemberKind };
 
 export const KIND_LABELS: Readonly<Record<MemberKind, string>> = {
   "floor-joist": "Floor joist",
@@ -51,7 +52,7 @@ export interface FlowAreaLoad {
   psf: number;
 }
 
-/** Roof snow from ground snow by ASCE 7-22 Chapter 7's flat-roof path, carried over the width. */
+/** Roof snow from ground snow by ASCE 7 Chapter 7's flat-roof path (the edition is FlowState.loadStandard), carried over the width. */
 export interface FlowSnow {
   on: boolean;
   /** ground snow load pg, psf */
@@ -124,6 +125,25 @@ export interface FlowState {
   /** unbraced length of the compression edge, ft; 0 = braced along its length by the floor or roof */
   unbracedFt: number;
   selfWeight: boolean;
+  /** which map the ground snow number comes from: ASCE 7-16 (2021 code or older, the default) or ASCE 7-22 */
+  loadStandard?: LoadStandard;
+  /** treated lumber incised; null or absent = Spanlark's default by species (fir and spruce yes, Southern Pine no) */
+  incised?: boolean | null;
+  /** the stud wall a header or beam sits in; "none" = not in a wall (absent: 2x4 for a header, none otherwise) */
+  wallFraming?: WallFraming | "none";
+  /** a header's rough opening, ft, when the builder gives it instead of the span (span = opening + half the bearing each end) */
+  roughOpeningFt?: number | null;
+}
+
+/** The wall a member of this state must fit, or null. */
+export function wallOf(state: Pick<FlowState, "kind" | "wallFraming">): WallFraming | null {
+  const w = state.wallFraming ?? (state.kind === "header" ? "2x4" : "none");
+  return w === "none" ? null : w;
+}
+
+/** The span a rough opening gives: the opening plus half the bearing at each end, ft. */
+export function spanFromRoughOpeningFt(openingFt: number, bearingIn: number): number {
+  return openingFt + bearingIn / 12;
 }
 
 /** Where the flow is: the state plus the step on screen. */

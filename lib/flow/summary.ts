@@ -4,6 +4,7 @@
  * read it, so they show the same numbers as the answer screen. Pure.
  */
 import type { CheckOutput } from "@/lib/solver/design/check";
+import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import { formatFeetInches, formatInches } from "./length";
 import { mainSpanFt, overhangs, spansFt, type FlowState } from "./state";
@@ -42,6 +43,35 @@ export interface MemberResultSummary {
   tables: string;
   /** when the answer was worked out, ISO 8601 */
   computedAt: string;
+  /** the ASCE 7 edition the answer was worked on (absent in answers saved before it was recorded: ASCE 7-22) */
+  loadStandard?: LoadStandard;
+  /** the basis and assumptions the crew must know, in words (see answerFacts) */
+  facts?: string[];
+}
+
+/** The load basis in words, as the answer, crew link and sheet say it. */
+export function basisWords(standard: LoadStandard, hasSnow: boolean): string {
+  if (!hasSnow) return `Load combinations: ${standard}`;
+  return standard === "ASCE 7-22"
+    ? "Snow basis: ASCE 7-22, ground snow from the newer risk-based map (2024 code), counted at 0.7 (D + 0.7S)"
+    : "Snow basis: ASCE 7-16, ground snow from the map in the 2021 code or older, counted in full (D + S)";
+}
+
+/**
+ * What the answer rests on, in the words the answer screen, the crew link and the sheet all print:
+ * the load basis, how the member is assembled in its wall, whether treated lumber was taken as
+ * incised, a span found from a rough opening, and any bracing the member needs.
+ */
+export function answerFacts(check: CheckOutput): string[] {
+  const facts = [basisWords(check.loadStandard, check.loads.some((l) => l.case === "S"))];
+  const a = check.assembly;
+  if (a.wallFraming !== null) facts.push(`Assemble: ${a.words}, ${a.fits ? "fills" : "does NOT fill"} a ${a.wallFraming} wall`);
+  else if (a.plies > 1) facts.push(`Assemble: ${a.words}, plies nailed together`);
+  const f = check.factors as { incisedBasis?: string; incised?: boolean };
+  if (typeof f.incisedBasis === "string" && (f.incised === true || /treated|as given/.test(f.incisedBasis))) facts.push(`Lumber: ${f.incisedBasis}`);
+  if (check.roughOpening) facts.push(`Span: ${check.roughOpening.note}`);
+  if (check.bracing.instruction) facts.push(`Bracing: ${check.bracing.instruction}`);
+  return facts;
 }
 
 /**
@@ -119,6 +149,8 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     lengthFt: state.lengthFt,
     tables: check.tables,
     computedAt: computedAt.toISOString(),
+    loadStandard: check.loadStandard,
+    facts: answerFacts(check),
   };
 }
 

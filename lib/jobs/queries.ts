@@ -6,6 +6,7 @@ import { Member } from "@/models/member";
 import type { FlowState, MemberKind } from "@/lib/flow/state";
 import type { MemberResultSummary } from "@/lib/flow/summary";
 import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { OrderDetails } from "@/lib/orders/order-list";
 
 /**
  * Reads of jobs and their members. Every query is scoped by the owner's id: a job or member of
@@ -31,6 +32,8 @@ export interface MemberView {
   carriedByMemberId: string | null;
   sortOrder: number;
   updatedAt: Date;
+  /** what the order list needs beyond the sizing (widths, posts, footings) */
+  orderDetails: OrderDetails;
 }
 
 export interface JobView {
@@ -60,6 +63,13 @@ export function memberView(m: Member): MemberView {
     carriedByMemberId: m.carriedByMemberId ?? null,
     sortOrder: m.sortOrder,
     updatedAt: m.updatedAt,
+    orderDetails: {
+      runWidthFt: m.runWidthFt ?? null,
+      postHeightFt: m.postHeightFt ?? null,
+      postSize: m.postSize ?? null,
+      footingDiameterIn: m.footingDiameterIn ?? null,
+      footingDepthIn: m.footingDepthIn ?? null,
+    },
   };
 }
 

@@ -3,6 +3,7 @@
  * names its field and the reason.
  */
 import { z } from "zod";
+import { LOAD_STANDARDS } from "@/lib/solver/asce7/standard";
 import { flowStateSchema } from "@/lib/flow/schema";
 import { memberSchema } from "@/lib/solver/design/schema";
 
@@ -38,6 +39,25 @@ export const saveMemberSchema = z
   });
 export type SaveMemberInput = z.infer<typeof saveMemberSchema>;
 
+const measure = (label: string, unit: string, min: number, max: number) =>
+  z
+    .number({ error: `${label} must be a number in ${unit}` })
+    .finite(`${label} must be a number in ${unit}`)
+    .min(min, `${label} must be at least ${min} ${unit}`)
+    .max(max, `${label} must be at most ${max} ${unit}`)
+    .nullable()
+    .optional();
+
+/** What the order list needs of a member beyond its sizing; null clears a value. */
+export const orderDetailsFields = {
+  /** width of floor, deck or roof the joists or rafters repeat across */
+  runWidthFt: measure("Width", "ft", 1, 200),
+  postHeightFt: measure("Post height", "ft", 1, 30),
+  postSize: z.enum(["4x4", "4x6", "6x6", "8x8"], { error: "Post size must be 4x4, 4x6, 6x6 or 8x8" }).nullable().optional(),
+  footingDiameterIn: measure("Footing diameter", "in", 6, 60),
+  footingDepthIn: measure("Footing depth", "in", 6, 120),
+};
+
 export const updateMemberSchema = z.object({
   memberId: uuid("Member"),
   label: label.optional(),
@@ -45,5 +65,8 @@ export const updateMemberSchema = z.object({
   chosenMember: memberSchema.nullable().optional(),
   /** the member that carries this one (joists on a beam), in the same job; null to clear */
   carriedByMemberId: uuid("Carried by").nullable().optional(),
+  /** work the member out again on this load basis (the job page's one-tap re-check) */
+  loadStandard: z.enum(LOAD_STANDARDS, { error: `Load basis: must be one of ${LOAD_STANDARDS.join(", ")}` }).optional(),
+  ...orderDetailsFields,
 });
 export type UpdateMemberInput = z.infer<typeof updateMemberSchema>;

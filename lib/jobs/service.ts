@@ -101,7 +101,16 @@ export async function duplicateJob(ownerId: string, jobId: string, limit: SavedJ
     const idMap = new Map<string, string>();
     for (const m of members) {
       const c = await Member.create(
-        { jobId: copy.id, label: m.label, kind: m.kind, flowState: m.flowState, resultSummary: m.resultSummary, chosenMember: m.chosenMember, sortOrder: m.sortOrder },
+        {
+          jobId: copy.id,
+          label: m.label,
+          kind: m.kind,
+          flowState: m.flowState,
+          resultSummary: m.resultSummary,
+          chosenMember: m.chosenMember,
+          sortOrder: m.sortOrder,
+          runWidthFt: m.runWidthFt, postHeightFt: m.postHeightFt, postSize: m.postSize, footingDiameterIn: m.footingDiameterIn, footingDepthIn: m.footingDepthIn,
+        },
         { transaction },
       );
       idMap.set(m.id, c.id);
@@ -189,8 +198,14 @@ export async function updateMember(ownerId: string, input: UpdateMemberInput): P
     }
     member.carriedByMemberId = input.carriedByMemberId;
   }
-  if (input.flowState !== undefined || input.chosenMember !== undefined) {
-    const state = (input.flowState ?? member.flowState) as FlowState;
+  if (input.runWidthFt !== undefined) member.runWidthFt = input.runWidthFt;
+  if (input.postHeightFt !== undefined) member.postHeightFt = input.postHeightFt;
+  if (input.postSize !== undefined) member.postSize = input.postSize;
+  if (input.footingDiameterIn !== undefined) member.footingDiameterIn = input.footingDiameterIn;
+  if (input.footingDepthIn !== undefined) member.footingDepthIn = input.footingDepthIn;
+  if (input.flowState !== undefined || input.chosenMember !== undefined || input.loadStandard !== undefined) {
+    const given = (input.flowState ?? member.flowState) as FlowState;
+    const state: FlowState = input.loadStandard !== undefined ? { ...given, loadStandard: input.loadStandard } : given;
     const { summary, chosen } = await computeSummary(state, input.chosenMember !== undefined ? input.chosenMember : member.chosenMember);
     member.flowState = state;
     member.kind = state.kind;
@@ -234,6 +249,7 @@ export async function duplicateMember(ownerId: string, memberId: string): Promis
         chosenMember: m.chosenMember,
         carriedByMemberId: m.carriedByMemberId,
         sortOrder: m.sortOrder + 1,
+        runWidthFt: m.runWidthFt, postHeightFt: m.postHeightFt, postSize: m.postSize, footingDiameterIn: m.footingDiameterIn, footingDepthIn: m.footingDepthIn,
       },
       { transaction },
     );

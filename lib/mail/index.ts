@@ -9,6 +9,8 @@ export interface MailMessage {
   subject: string;
   text: string;
   html: string;
+  /** files sent with it (an order list's CSV and PDF) */
+  attachments?: { filename: string; content: Buffer | string; contentType: string }[];
 }
 
 export interface SentMail {
@@ -44,6 +46,7 @@ export async function sendMail(message: MailMessage): Promise<SentMail> {
     subject: message.subject,
     text: message.text,
     html: message.html,
+    attachments: message.attachments,
   });
   logger.info({ messageId: info.messageId, subject: message.subject }, "mail sent");
   return { messageId: info.messageId };

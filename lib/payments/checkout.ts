@@ -12,7 +12,17 @@ import { hasActiveSubscription } from "./subscriptions";
  * The price is found by lookup key, so the same code runs on the stand-in and on a Stripe account.
  * A user who already has an active subscription is sent to the billing page instead (409).
  */
-export async function startCheckout(user: BillingUser, plan: PlanId, stripe: Stripe = getStripe()): Promise<{ url: string; sessionId: string }> {
+export interface CheckoutReturn {
+  /** the job whose sheet the builder asked to save: after paying they land back on it with the sheet saved */
+  saveSheetForJobId?: string;
+}
+
+/** Where Billing sends the builder on after a paid checkout that started from "Save job sheet". */
+export function saveSheetReturnPath(jobId: string): string {
+  return `/jobs/${jobId}?saveSheet=1`;
+}
+
+export async function startCheckout(user: BillingUser, plan: PlanId, stripe: Stripe = getStripe(), back: CheckoutReturn = {}): Promise<{ url: string; sessionId: string }> {
   if (await hasActiveSubscription(user.id)) {
     throw new HttpError(409, "You already have an active subscription. Manage it on the billing page.");
   }
@@ -27,8 +37,10 @@ export async function startCheckout(user: BillingUser, plan: PlanId, stripe: Str
     customer,
     client_reference_id: user.id,
     line_items: [{ price: price.id, quantity: 1 }],
-    success_url: `${appUrl}/billing?checkout=success&session_id={CHECKOUT_SESSION_ID}`,
-    cancel_url: `${appUrl}/pricing?checkout=cancelled`,
+    success_url: back.saveSheetForJobId
+      ? `${appUrl}/billing?checkout=success&session_id={CHECKOUT_SESSION_ID}&next=${encodeURIComponent(saveSheetReturnPath(back.saveSheetForJobId))}`
+      : `${appUrl}/billing?checkout=success&session_id={CHECKOUT_SESSION_ID}`,
+    cancel_url: back.saveSheetForJobId ? `${appUrl}/pricing?checkout=cancelled&job=${back.saveSheetForJobId}` : `${appUrl}/pricing?checkout=cancelled`,
     metadata: { userId: user.id, plan },
     subscription_data: { metadata: { userId: user.id, plan } },
   });

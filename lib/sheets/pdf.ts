@@ -23,10 +23,10 @@ import { byCaseWords, checkWords, formatCheckValue, formatLb, formatSheetDate, r
 
 export type Paper = "letter" | "a4";
 
-const PAPER_SIZE: Record<Paper, [number, number]> = { letter: [612, 792], a4: [595.28, 841.89] };
-const MARGIN = 48;
+export const PAPER_SIZE: Record<Paper, [number, number]> = { letter: [612, 792], a4: [595.28, 841.89] };
+export const MARGIN = 48;
 
-const COLORS = {
+export const PDF_COLORS = {
   ink: "#15191E",
   graphite: "#5A6270",
   rule: "#D8D4C8",
@@ -70,14 +70,15 @@ export function pdfText(value: string): string {
   return out;
 }
 
-interface Fonts {
+export interface Fonts {
   regular: string;
   bold: string;
 }
 
-const FONTS: Fonts = { regular: "Helvetica", bold: "Helvetica-Bold" };
+export const FONTS: Fonts = { regular: "Helvetica", bold: "Helvetica-Bold" };
 
-class SheetWriter {
+/** A page writer shared by the job sheet, the order list and the crew's site-board PDF. */
+export class SheetWriter {
   readonly doc: PDFKit.PDFDocument;
   readonly fonts: Fonts;
   readonly width: number;
@@ -108,7 +109,7 @@ class SheetWriter {
 
   text(value: string, opts: { size?: number; bold?: boolean; color?: string; x?: number; width?: number; gap?: number; align?: "left" | "right" | "center" } = {}): void {
     const { doc } = this;
-    doc.font(opts.bold ? this.fonts.bold : this.fonts.regular).fontSize(opts.size ?? 10).fillColor(opts.color ?? COLORS.ink);
+    doc.font(opts.bold ? this.fonts.bold : this.fonts.regular).fontSize(opts.size ?? 10).fillColor(opts.color ?? PDF_COLORS.ink);
     doc.text(pdfText(value), opts.x ?? this.left, doc.y, { width: opts.width ?? this.contentWidth, align: opts.align ?? "left" });
     if (opts.gap) doc.moveDown(opts.gap);
   }
@@ -118,7 +119,7 @@ class SheetWriter {
     this.doc.moveDown(0.6);
     this.text(value, { size, bold: true });
     const y = this.doc.y + 2;
-    this.doc.moveTo(this.left, y).lineTo(this.right, y).lineWidth(0.75).strokeColor(COLORS.rule).stroke();
+    this.doc.moveTo(this.left, y).lineTo(this.right, y).lineWidth(0.75).strokeColor(PDF_COLORS.rule).stroke();
     this.doc.y = y + 5;
   }
 
@@ -145,10 +146,10 @@ class SheetWriter {
       const y = doc.y;
       let x = this.left;
       cells.forEach((c, i) => {
-        doc.fillColor(bold ? COLORS.graphite : COLORS.ink).text(pdfText(c), x + 3, y + 3, { width: cols[i] - 6, align: numeric[i] ? "right" : "left" });
+        doc.fillColor(bold ? PDF_COLORS.graphite : PDF_COLORS.ink).text(pdfText(c), x + 3, y + 3, { width: cols[i] - 6, align: numeric[i] ? "right" : "left" });
         x += cols[i];
       });
-      doc.moveTo(this.left, y + h).lineTo(this.right, y + h).lineWidth(bold ? 0.9 : 0.4).strokeColor(COLORS.rule).stroke();
+      doc.moveTo(this.left, y + h).lineTo(this.right, y + h).lineWidth(bold ? 0.9 : 0.4).strokeColor(PDF_COLORS.rule).stroke();
       if (!bold && decorate) decorate(index, cell, y, h);
       doc.x = this.left;
       doc.y = y + h;
@@ -163,12 +164,12 @@ class SheetWriter {
     const { doc } = this;
     const full = w / 1.5;
     const filled = Math.min(ratio, 1.5) * full;
-    doc.rect(x, y, w, 7).lineWidth(0.5).strokeColor(COLORS.rule).stroke();
-    doc.rect(x, y, filled, 7).fillColor(ratio <= 1 ? COLORS.sound : COLORS.over).fill();
-    doc.moveTo(x + full, y - 2).lineTo(x + full, y + 9).lineWidth(1.2).strokeColor(COLORS.ink).stroke();
+    doc.rect(x, y, w, 7).lineWidth(0.5).strokeColor(PDF_COLORS.rule).stroke();
+    doc.rect(x, y, filled, 7).fillColor(ratio <= 1 ? PDF_COLORS.sound : PDF_COLORS.over).fill();
+    doc.moveTo(x + full, y - 2).lineTo(x + full, y + 9).lineWidth(1.2).strokeColor(PDF_COLORS.ink).stroke();
   }
 
-  caution(snapshot: SheetSnapshot): void {
+  caution(snapshot: Pick<SheetSnapshot, "caution">): void {
     const { doc } = this;
     const body = pdfText(snapshot.caution.text);
     const list = snapshot.caution.notChecked.map((s) => `• ${pdfText(s)}`).join("\n");
@@ -177,16 +178,16 @@ class SheetWriter {
     const h = 22 + doc.heightOfString(body, { width: inner }) + 16 + doc.heightOfString(list, { width: inner }) + 12;
     this.ensure(h + 8);
     const top = doc.y;
-    doc.rect(this.left, top, this.contentWidth, h).fillColor(COLORS.cautionBg).fill();
-    doc.rect(this.left, top, 5, h).fillColor(COLORS.caution).fill();
-    doc.rect(this.left, top, this.contentWidth, h).lineWidth(1).strokeColor(COLORS.caution).stroke();
+    doc.rect(this.left, top, this.contentWidth, h).fillColor(PDF_COLORS.cautionBg).fill();
+    doc.rect(this.left, top, 5, h).fillColor(PDF_COLORS.caution).fill();
+    doc.rect(this.left, top, this.contentWidth, h).lineWidth(1).strokeColor(PDF_COLORS.caution).stroke();
     // warning triangle drawn as a path, with its mark
     const tx = this.left + 14;
     const ty = top + 8;
-    doc.moveTo(tx + 6, ty).lineTo(tx + 12, ty + 11).lineTo(tx, ty + 11).closePath().lineWidth(1.2).strokeColor(COLORS.caution).stroke();
+    doc.moveTo(tx + 6, ty).lineTo(tx + 12, ty + 11).lineTo(tx, ty + 11).closePath().lineWidth(1.2).strokeColor(PDF_COLORS.caution).stroke();
     doc.moveTo(tx + 6, ty + 3.5).lineTo(tx + 6, ty + 7.5).stroke();
-    doc.circle(tx + 6, ty + 9.3, 0.6).fillColor(COLORS.caution).fill();
-    doc.font(this.fonts.bold).fontSize(11).fillColor(COLORS.ink).text(pdfText(snapshot.caution.title), tx + 18, top + 8, { width: inner });
+    doc.circle(tx + 6, ty + 9.3, 0.6).fillColor(PDF_COLORS.caution).fill();
+    doc.font(this.fonts.bold).fontSize(11).fillColor(PDF_COLORS.ink).text(pdfText(snapshot.caution.title), tx + 18, top + 8, { width: inner });
     doc.font(this.fonts.regular).fontSize(9.5).text(body, this.left + 14, doc.y + 3, { width: inner });
     doc.font(this.fonts.bold).text("Spanlark does not check:", this.left + 14, doc.y + 5, { width: inner });
     doc.font(this.fonts.regular).text(list, this.left + 14, doc.y + 1, { width: inner });
@@ -236,34 +237,54 @@ class SheetWriter {
 
     // the member's axis and its supports
     const axisY = sy(0);
-    doc.moveTo(plotLeft, axisY).lineTo(plotRight, axisY).lineWidth(0.9).strokeColor(COLORS.ink).stroke();
+    doc.moveTo(plotLeft, axisY).lineTo(plotRight, axisY).lineWidth(0.9).strokeColor(PDF_COLORS.ink).stroke();
     for (const s of supports) {
       const x = sx(s.x);
-      doc.moveTo(x, top + h + 4).lineTo(x + 5, top + h + 12).lineTo(x - 5, top + h + 12).closePath().lineWidth(0.8).strokeColor(COLORS.graphite).stroke();
+      doc.moveTo(x, top + h + 4).lineTo(x + 5, top + h + 12).lineTo(x - 5, top + h + 12).closePath().lineWidth(0.8).strokeColor(PDF_COLORS.graphite).stroke();
     }
 
     // extremes: value and position
-    doc.font(this.fonts.regular).fontSize(8).fillColor(COLORS.ink);
+    doc.font(this.fonts.regular).fontSize(8).fillColor(PDF_COLORS.ink);
     for (const e of d.extremes) {
       const x = sx(e.x);
       const y = sy(e.value);
-      doc.circle(x, y, 1.8).fillColor(COLORS.ink).fill();
+      doc.circle(x, y, 1.8).fillColor(PDF_COLORS.ink).fill();
       const label = pdfText(`${formatCheckValue(e.value, d.unit)} at ${formatFeetInches(e.x)}`);
       const w = doc.widthOfString(label);
       const lx = Math.min(Math.max(x - w / 2, plotLeft), plotRight - w);
       const above = e.value * flip >= 0;
-      doc.fillColor(COLORS.ink).text(label, lx, above ? y - 11 : y + 3, { lineBreak: false });
+      doc.fillColor(PDF_COLORS.ink).text(label, lx, above ? y - 11 : y + 3, { lineBreak: false });
     }
     doc.x = this.left;
     doc.y = top + h + 18;
   }
 }
 
+/** The job's live crew link on a sheet: the address and its QR code (PNG). */
+export interface SheetCrewLink {
+  url: string;
+  qrPng: Buffer;
+}
+
+function drawCrewLink(w: SheetWriter, crew: SheetCrewLink): void {
+  const { doc } = w;
+  const size = 72;
+  w.ensure(size + 10);
+  const top = doc.y + 4;
+  doc.image(crew.qrPng, w.left, top, { width: size, height: size });
+  doc.y = top + 10;
+  w.text("Crew link", { size: 11, bold: true, x: w.left + size + 10, width: w.contentWidth - size - 10 });
+  w.text("Scan for the live member schedule, read only.", { size: 9.5, x: w.left + size + 10, width: w.contentWidth - size - 10 });
+  w.text(crew.url, { size: 8, color: PDF_COLORS.graphite, x: w.left + size + 10, width: w.contentWidth - size - 10 });
+  doc.x = w.left;
+  doc.y = top + size + 6;
+}
+
 function drawHeader(w: SheetWriter, s: SheetSnapshot): void {
   const { doc } = w;
-  w.text("Job sheet", { size: 10, bold: true, color: COLORS.spruce });
+  w.text("Job sheet", { size: 10, bold: true, color: PDF_COLORS.spruce });
   w.text(s.job.name, { size: 20, bold: true });
-  if (s.job.siteAddress) w.text(s.job.siteAddress, { size: 11, color: COLORS.graphite });
+  if (s.job.siteAddress) w.text(s.job.siteAddress, { size: 11, color: PDF_COLORS.graphite });
   doc.moveDown(0.4);
   const by = s.preparedBy.company ? `${s.preparedBy.name}, ${s.preparedBy.company}` : s.preparedBy.name;
   w.table(
@@ -293,15 +314,16 @@ function drawMember(w: SheetWriter, m: SheetMember, index: number): void {
   const { doc } = w;
   doc.addPage();
   doc.outline.addItem(pdfText(m.label));
-  w.text(`Member ${index + 1}: ${m.kindLabel}`, { size: 10, bold: true, color: COLORS.spruce });
+  w.text(`Member ${index + 1}: ${m.kindLabel}`, { size: 10, bold: true, color: PDF_COLORS.spruce });
   w.text(m.label, { size: 16, bold: true });
   w.text(m.headline, { size: 13, bold: true, gap: 0.2 });
   w.text(`${m.memberLabel}. ${m.pass ? "OK" : "Over"} ${ratioPercent(m.ratio)}, governed by ${checkWords(m.governing)}.`, {
     size: 10,
-    color: m.pass ? COLORS.sound : COLORS.over,
+    color: m.pass ? PDF_COLORS.sound : PDF_COLORS.over,
     bold: true,
   });
-  if (m.note) w.text(m.note, { size: 9, color: COLORS.graphite });
+  for (const f of m.facts ?? []) w.text(f, { size: 10 });
+  if (m.note) w.text(m.note, { size: 9, color: PDF_COLORS.graphite });
 
   w.heading("Inputs", 11);
   w.table(["What", "Value"], m.inputs, [0.3, 0.7]);
@@ -384,7 +406,7 @@ function drawFooters(w: SheetWriter, s: SheetSnapshot): void {
   for (let i = range.start; i < range.start + range.count; i++) {
     doc.switchToPage(i);
     const y = w.height - MARGIN + 4;
-    doc.font(w.fonts.regular).fontSize(8).fillColor(COLORS.graphite);
+    doc.font(w.fonts.regular).fontSize(8).fillColor(PDF_COLORS.graphite);
     const left = pdfText(`Spanlark job sheet · ${s.job.name} · saved ${formatSheetDate(s.savedAt)} · tables ${s.tablesLabel}`);
     doc.text(left, w.left, y, { width: w.contentWidth - 70, lineBreak: false, height: 10 });
     doc.text(`Page ${i - range.start + 1} of ${range.count}`, w.right - 70, y, { width: 70, align: "right", lineBreak: false, height: 10 });
@@ -392,7 +414,7 @@ function drawFooters(w: SheetWriter, s: SheetSnapshot): void {
 }
 
 /** The sheet's PDF. The same snapshot gives the same pages (only the file's own id differs). */
-export function renderSheetPdf(snapshot: SheetSnapshot, paper: Paper = "letter"): Promise<Buffer> {
+export function renderSheetPdf(snapshot: SheetSnapshot, paper: Paper = "letter", crew: SheetCrewLink | null = null): Promise<Buffer> {
   return new Promise((resolve, reject) => {
     const doc = new PDFDocument({
       size: PAPER_SIZE[paper],
@@ -415,6 +437,7 @@ export function renderSheetPdf(snapshot: SheetSnapshot, paper: Paper = "letter")
     try {
       const w = new SheetWriter(doc, FONTS, paper);
       drawHeader(w, snapshot);
+      if (crew) drawCrewLink(w, crew);
       w.caution(snapshot);
       drawSchedule(w, snapshot);
       snapshot.members.forEach((m, i) => drawMember(w, m, i));

@@ -6,8 +6,10 @@
 import { CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/components/ui/caution-text";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest, combinationFactors, diagramBeam } from "@/lib/flow/request";
-import { KIND_LABELS, mainSpanFt, sortedSupports, type FlowState, type MemberKind } from "@/lib/flow/state";
-import { headlineFor, spacingOf } from "@/lib/flow/summary";
+import { KIND_LABELS, mainSpanFt, sortedSupports, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
+import { answerFacts, headlineFor, spacingOf } from "@/lib/flow/summary";
+import { EXPOSURE_WORDS, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
+import { LOAD_STANDARD_WORDS } from "@/lib/solver/asce7/standard";
 import { analyzeBeam, type Segment } from "@/lib/solver/beam";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -58,6 +60,8 @@ export interface SheetMember {
   factors: [string, string][];
   limits: CheckOutput["limits"];
   assumptions: string[];
+  /** the load basis and what the crew must know, as the answer screen and crew link say them (absent on sheets saved before) */
+  facts?: string[];
   diagrams: SheetDiagram[];
   /** set when the member's saved answer came from other tables than this sheet's */
   note: string | null;
@@ -156,8 +160,15 @@ function inputRows(state: FlowState): [string, string][] {
   ];
   for (const a of state.areaLoads) if (a.psf > 0) rows.push([`Area load (${a.case})`, `${a.label || a.preset}: ${fmtNumber(a.psf)} psf`]);
   if (state.snow.on && state.snow.groundPsf > 0) {
-    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf, ${state.snow.exposure}, ${state.snow.thermal}`]);
+    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf, ${EXPOSURE_WORDS[state.snow.exposure]}, ${THERMAL_WORDS[state.snow.thermal]}`]);
   }
+  if (state.snow.on || [...state.pointLoads, ...state.lineLoads, ...state.areaLoads].some((l) => l.case === "S")) {
+    rows.push(["Ground snow map", LOAD_STANDARD_WORDS[state.loadStandard ?? "ASCE 7-16"]]);
+  }
+  if (state.kind === "header" && state.roughOpeningFt) rows.push(["Rough opening", formatFeetInches(state.roughOpeningFt)]);
+  const wall = wallOf(state);
+  if (wall) rows.push(["Wall framing", `${wall} wall`]);
+  if (state.incised === true || state.incised === false) rows.push(["Treated lumber incised", state.incised ? "yes (as given)" : "no (as given)"]);
   for (const p of state.pointLoads) rows.push([`Point load (${p.case})`, `${p.label ? `${p.label}: ` : ""}${fmtNumber(p.P)} lb at ${formatFeetInches(p.x)}`]);
   for (const l of state.lineLoads) {
     rows.push([`Line load (${l.case})`, `${l.label ? `${l.label}: ` : ""}${fmtNumber(l.w)} plf from ${formatFeetInches(l.from)} to ${formatFeetInches(l.to)}`]);
@@ -178,6 +189,9 @@ const FACTOR_NAMES: Record<string, string> = {
   FcPerp: "Fc⊥",
   FcPerpPrime: "Fc⊥′",
   shearLoadsNearSupportsIgnored: "Loads within d of supports left out of shear",
+  CrBasis: "Cr, why",
+  incised: "Incised (Ci)",
+  incisedBasis: "Incised, why",
   longTermDeflection: "Long-term deflection, in (Kcr × ΔD + Δrest)",
   flexureLimitState: "Flexure limit state",
   shearClause: "Shear clause",
@@ -311,6 +325,7 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
     factors: factorRows(check.factors),
     limits: check.limits,
     assumptions: check.assumptions,
+    facts: answerFacts(check),
     diagrams: roundSegments(diagramsFor(state, check)),
     note,
     sources: check.member.sources,

@@ -15,6 +15,7 @@ import type {
   SizeFactorRow,
   Species,
   SteelGrade,
+  StockLengthRow,
   WShape,
 } from "./types";
 
@@ -291,6 +292,12 @@ function demoCosts(): CostTable {
  * The starter tables that ship with the code: read by the CLI without a database and loaded by
  * the seeders. Sources are named beside each block of data in the modules above.
  */
+/**
+ * Sawn lumber stocked 8 to 24 ft in 2 ft steps (common practice at lumber yards). Engineered lumber and
+ * steel have no starter row: they are ordered cut to length until the team adds the yard's lengths.
+ */
+export const STARTER_STOCK_LENGTHS: StockLengthRow[] = [{ material: "sawn", lengthsFt: [8, 10, 12, 14, 16, 18, 20, 22, 24] }];
+
 export const STARTER_TABLES: MaterialTables = {
   version: "starter-2026.2",
   sawnSizes: SAWN_SIZES,
@@ -301,4 +308,5 @@ export const STARTER_TABLES: MaterialTables = {
   steelGrades: STEEL_GRADES,
   iJoists: I_JOISTS,
   costs: demoCosts(),
+  stockLengths: STARTER_STOCK_LENGTHS,
 };

@@ -10,6 +10,7 @@ import type {
   SizeFactorRow,
   Species,
   SteelGrade,
+  StockLengthRow,
   WShape,
 } from "./types";
 import { SAWN_SIZES_SOURCE } from "./sawn-sizes";
@@ -23,7 +24,7 @@ import { STEEL_GRADES_SOURCE } from "./steel";
  * refused). No server-only imports: the browser form reads these specs too.
  */
 
-export const TABLE_KEYS = ["sawn-sizes", "sawn-values", "size-factors", "engineered", "i-joists", "steel-shapes", "steel-grades", "costs"] as const;
+export const TABLE_KEYS = ["sawn-sizes", "sawn-values", "size-factors", "engineered", "i-joists", "steel-shapes", "steel-grades", "costs", "stock-lengths"] as const;
 export type TableKey = (typeof TABLE_KEYS)[number];
 
 export function isTableKey(value: string): value is TableKey {
@@ -47,6 +48,7 @@ export interface TableRowMap {
   "steel-shapes": WShape;
   "steel-grades": SteelGrade;
   costs: CostRow;
+  "stock-lengths": StockLengthRow;
 }
 
 export type TableRows = { [K in TableKey]: TableRowMap[K][] };
@@ -480,6 +482,32 @@ export const costSchema: z.ZodType<CostRow> = z.object({
 });
 
 // ---------------------------------------------------------------------------------------------------
+// Stock lengths (the lengths the yard sells each material family in, edited beside the costs)
+
+export const STOCK_MATERIAL_CHOICES = ["sawn", "engineered", "steel"] as const;
+
+const STOCK_LENGTH_FIELDS: FieldSpec[] = [
+  { name: "material", path: "material", label: "Material", kind: "choice", choices: STOCK_MATERIAL_CHOICES },
+  {
+    name: "lengths_ft",
+    path: "lengthsFt",
+    label: "Stock lengths",
+    unit: "ft",
+    kind: "numberList",
+    min: 1,
+    max: 80,
+    hint: "separated by ; e.g. 8;10;12;14;16",
+  },
+];
+const SL = spec(STOCK_LENGTH_FIELDS);
+
+export const stockLengthSchema: z.ZodType<StockLengthRow> = z
+  .object({ material: choice(SL.material, STOCK_MATERIAL_CHOICES), lengthsFt: numList(SL.lengthsFt) })
+  .superRefine((r, ctx) => {
+    if (new Set(r.lengthsFt).size !== r.lengthsFt.length) ctx.addIssue({ code: "custom", path: ["lengthsFt"], message: "Stock lengths must not repeat a length" });
+  });
+
+// ---------------------------------------------------------------------------------------------------
 
 export interface TableSpec<K extends TableKey = TableKey> {
   key: K;
@@ -570,6 +598,15 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     schema: costSchema,
     summary: ["cost_per_ft_usd"],
     keyOf: (r) => r.itemKey,
+  },
+  "stock-lengths": {
+    key: "stock-lengths",
+    title: "Stock lengths",
+    description: "The lengths the yard sells each material in, for order lists; sawn lumber without a row is 8 to 24 ft in 2 ft steps",
+    fields: STOCK_LENGTH_FIELDS,
+    schema: stockLengthSchema,
+    summary: ["lengths_ft"],
+    keyOf: (r) => r.material,
   },
 };
 
@@ -665,13 +702,15 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
       setPath(draft, f.path, raw);
     }
   }
-  if (issues.length > 0) return { ok: false, issues };
+  // The schema runs even when some cells did not read, so every problem of the line is listed at once; a
+  // column already reported is not reported again, and no message is repeated.
   const parsed = table.schema.safeParse(draft);
-  if (parsed.success) return { ok: true, row: parsed.data };
+  if (parsed.success && issues.length === 0) return { ok: true, row: parsed.data };
   const byPath = new Map(table.fields.map((f) => [f.path, f.name]));
-  return {
-    ok: false,
-    issues: parsed.error.issues.map((issue) => {
+  const reported = new Set(issues.map((i) => i.column));
+  const schemaIssues = parsed.success
+    ? []
+    : parsed.error.issues.map((issue) => {
       const segments = issue.path.filter((p): p is string => typeof p === "string");
       let column = "(row)";
       for (let n = segments.length; n > 0; n -= 1) {
@@ -683,8 +722,10 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
       }
       if (column === "(row)" && segments[0] === "sizeRule") column = "size_rule";
       return { column, message: issue.message };
-    }),
-  };
+    });
+  const all = [...issues, ...schemaIssues.filter((i) => !reported.has(i.column))];
+  const seen = new Set<string>();
+  return { ok: false, issues: all.filter((i) => (seen.has(`${i.column}\u0000${i.message}`) ? false : (seen.add(`${i.column}\u0000${i.message}`), true))) };
 }
 
 /** The natural key of a row (TABLE_SPECS[table].keyOf, callable with a table key known only at run time). */

@@ -176,6 +176,15 @@ export interface SteelGrade {
   Fu: number;
 }
 
+/** The material families a yard stocks in set lengths. */
+export type StockMaterial = "sawn" | "engineered" | "steel";
+
+/** The lengths the yard stocks one material family in, ft (an order rounds each piece up to one of them). */
+export interface StockLengthRow {
+  material: StockMaterial;
+  lengthsFt: number[];
+}
+
 /** An optional cost per foot for the yard's own ranking, keyed by an item key (see itemKey). */
 export type CostTable = Record<string, number>;
 
@@ -190,4 +199,6 @@ export interface MaterialTables {
   steelGrades: SteelGrade[];
   iJoists: IJoist[];
   costs: CostTable;
+  /** stock lengths by material family, edited with the cost table; absent or empty = the defaults in lib/orders */
+  stockLengths?: StockLengthRow[];
 }

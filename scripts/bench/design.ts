@@ -1,5 +1,5 @@
 // Design benchmark (issue 4): `npx tsx scripts/bench.ts design` or `npm run bench`.
-// (a) check one member with every ASD combination of ASCE 7-22 (D, L, S on a header);
+// (a) check one member with every ASD combination of ASCE 7-16 (the default basis) (D, L, S on a header);
 // (b) size over the whole seed table (every family, plies 1–4) for a 3-span joist with pattern live load;
 // (c) largest span of one joist by bisection.
 import { checkMember, largestSpan, sizeMember } from "../../lib/solver/design";

@@ -1,6 +1,6 @@
 // Solver benchmark (issue 3): `npx tsx scripts/bench.ts solver` or `npm run bench`.
 // (a) simple span, 3 loads; (b) 4-span continuous beam, 30 loads; (c) (b) with every ASD
-// combination of ASCE 7-22 and pattern live loading. Each analysis also evaluates 200 stations.
+// combination of ASCE 7-16 (the default basis) and pattern live loading. Each analysis also evaluates 200 stations.
 import { analyzeBeam, type StationArrays } from "../../lib/solver/beam";
 import { asdCombinations } from "../../lib/solver/asce7/combinations";
 import { envelope } from "../../lib/solver/envelope";

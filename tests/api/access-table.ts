@@ -157,6 +157,11 @@ export const ACCESS_TABLE: AccessRow[] = [
   },
   { method: "GET", path: "/api/sheets/[id]/pdf", allowed: ["owner"], note: "404 for anyone else's sheet; 403 for the owner without a subscription", setup: crewFixture("sheet") },
 
+  // Order lists and the site-board PDF: the order belongs to the job's owner; the crew PDF opens with a live crew link only.
+  { method: "ACTION", path: "components/orders/actions.ts#emailOrderList", allowed: ["owner"], note: "404 for a job of someone else", setup: orderFixture("mail") },
+  { method: "GET", path: "/api/jobs/[jobId]/order", allowed: ["owner"], note: "404 for a job of someone else", setup: orderFixture("route") },
+  { method: "GET", path: "/api/crew/[token]/pdf", allowed: ["crew"], note: "a made-up token is a 404; no session needed or used", params: { token: "made-up-token-AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA" } },
+
   // Jobs and members (components/jobs/actions.ts): any signed-in account makes its own; everything else belongs
   // to the job's owner and is a 404 for anyone else, whatever the role (a stranger's real job and member here).
   { method: "ACTION", path: "components/jobs/actions.ts#createJob", allowed: SIGNED_IN, note: "makes a job of the caller's own", args: [{ name: "Orchard Row deck", siteAddress: "7 Orchard Row, Larkfield" }] },
@@ -170,6 +175,18 @@ export const ACCESS_TABLE: AccessRow[] = [
   { method: "ACTION", path: "components/jobs/actions.ts#restoreMember", allowed: ["owner"], note: "404 for someone else's deleted member", setup: jobsFixture("deleted-member") },
   { method: "ACTION", path: "components/jobs/actions.ts#duplicateMember", allowed: ["owner"], note: "404 for a member of someone else's job", setup: jobsFixture("member") },
 ];
+
+/** A job owned by an account none of the personas is, and valid arguments for its order list. */
+function orderFixture(kind: "mail" | "route"): () => Promise<AccessFixture> {
+  return async () => {
+    if (!process.env.TEST_DATABASE_URL) return {};
+    const { makeAccount, makeJob } = await import("../crew/fixtures");
+    const owner = await makeAccount("subscriber", "access-order");
+    const { job } = await makeJob(owner.id);
+    if (kind === "route") return { params: { jobId: job.id } };
+    return { args: [{ jobId: job.id, to: "orders@yard.example", note: "" }] };
+  };
+}
 
 /** A job with a member, owned by an account none of the personas is, and valid arguments naming them. */
 function jobsFixture(kind: "save" | "job" | "update-job" | "deleted-job" | "member" | "update-member" | "deleted-member"): () => Promise<AccessFixture> {

@@ -51,6 +51,26 @@ describe("POST /api/check", () => {
     expect(body.checks.length).toBeGreaterThan(3);
   });
 
+  test("takes loadStandard and kind; the answer names the basis", async () => {
+    const res = await post({ ...joist, loadStandard: "ASCE 7-22", kind: "floor-joist" });
+    expect(res.status).toBe(200);
+    const body = await res.json();
+    expect(body.loadStandard).toBe("ASCE 7-22");
+    expect(body.kind).toBe("floor-joist");
+    expect((await (await post(joist)).json()).loadStandard).toBe("ASCE 7-16");
+  });
+
+  test.each([
+    ["loadStandard", { loadStandard: "ASCE 7-05" }, /"ASCE 7-16", "ASCE 7-22"/],
+    ["kind", { kind: "lintel" }, /"floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"/],
+  ])("400 naming %s and its allowed values", async (field, extra, allowed) => {
+    const res = await post({ ...joist, ...extra });
+    expect(res.status).toBe(400);
+    const body = await res.json();
+    const issue = body.issues.find((i: { path: string }) => i.path === field);
+    expect(issue.message).toMatch(allowed);
+  });
+
   test("400 with the field named for bad input; unknown species lists the tables", async () => {
     const res = await post({ ...joist, member: { ...joist.member, species: "Cedar" } });
     expect(res.status).toBe(400);

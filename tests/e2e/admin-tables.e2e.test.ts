@@ -98,7 +98,10 @@ describe("material tables admin", () => {
     expect(await newest.textContent()).toContain("Yard check: lower Fb for No.3 stock");
     expect(await newest.textContent()).toContain("admin@spanlark.test");
     await newest.getByRole("button", { name: "What changed" }).click();
-    await newest.getByTestId("version-changes").getByText(`Fb_psi ${oldFb} → ${newFb}`).waitFor();
+    // in words: the row by species, grade and size class, the column by its label and unit (not "Fb_psi")
+    const changes = newest.getByTestId("version-changes");
+    await changes.getByText(`Fb (psi) ${oldFb} → ${newFb}`).waitFor();
+    expect(await changes.textContent()).not.toMatch(/\||Fb_psi/);
     await screenshot("admin-tables-history-phone");
 
     // A CSV with one bad line: checked, every bad line named, nothing applied.

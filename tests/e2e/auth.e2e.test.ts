@@ -71,11 +71,11 @@ describe("account journey", () => {
     const confirmMail = await waitForMail(email, /Confirm your e-mail/, started);
     await goto(linkIn(confirmMail, "/verify"));
     await page.getByRole("button", { name: "Confirm my e-mail" }).click();
+    // Confirmed and signed in at once: no password to type again
     await page.getByTestId("verify-done").waitFor();
-
-    await page.getByRole("link", { name: "Sign in" }).click();
-    await page.waitForURL(/\/sign-in/);
-    await signIn(page, email, firstPassword);
+    expect(await page.getByTestId("verify-done").textContent()).toContain("you are signed in");
+    await screenshot("auth-verified-signed-in-phone");
+    await goto("/account");
     await page.waitForURL(/\/account$/);
     expect(await page.getByTestId("account-email").textContent()).toBe(email);
     expect(await page.getByTestId("account-role").textContent()).toMatch(/Builder/);
@@ -98,6 +98,12 @@ describe("account journey", () => {
     await page.getByLabel("New password again").fill(newPassword);
     await page.getByRole("button", { name: "Save the new password" }).click();
     await page.getByTestId("reset-done").waitFor();
+    // Password changed and signed in with it; signed out again for the checks below
+    expect(await page.getByTestId("reset-done").textContent()).toContain("You are signed in.");
+    await goto("/account");
+    expect(await page.getByTestId("account-email").textContent()).toBe(email);
+    await page.getByRole("main").getByRole("button", { name: "Sign out" }).click();
+    await page.waitForURL((url) => url.pathname === "/");
 
     // The link worked once.
     await goto(resetLink);

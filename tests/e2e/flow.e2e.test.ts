@@ -35,7 +35,8 @@ describe("sizing flow at 390x844", () => {
     await screenshot("flow-header-3-loads", { fullPage: false });
     await next(page, /Next: Material/);
 
-    // Step 4: built-up sawn lumber by default
+    // Step 4: built-up sawn lumber by default; a 10 ft header under full snow needs three plies, so a 2x6 wall
+    await page.getByText("2x6 wall", { exact: true }).click();
     await screenshot("flow-header-4-material", { fullPage: false });
     await next(page, /See the answer/);
 
@@ -121,7 +122,8 @@ describe("sizing flow at 390x844", () => {
     const { page, context, screenshot, consoleErrors, goto } = await session.open(null, { viewport: "desktop" });
     await context.route("**/favicon.ico", (route) => route.fulfill({ status: 204 }));
     await goto("/size?kind=header");
-    await typeLength(page, /^Span \(between supports\)/, "10-0");
+    // 8 ft: two plies with a spacer carry it in the default 2x4 wall
+    await typeLength(page, /^Span \(between supports\)/, "8-0");
     // the live answer sits beside the inputs
     await page.getByRole("complementary", { name: "Answer so far" }).getByTestId("answer-headline").waitFor({ timeout: 30_000 });
     await screenshot("flow-desktop-2-span", { fullPage: false });
@@ -136,7 +138,7 @@ describe("sizing flow at 390x844", () => {
     // a reload loses nothing
     await page.reload();
     expect(await waitForAnswer(page)).toMatch(/jack stud/);
-    expect(await page.getByText("Header, 10' 0\" span").count()).toBe(1);
+    expect(await page.getByText("Header, 8' 0\" span").count()).toBe(1);
     expect(consoleErrors).toEqual([]);
   }, 120_000);
 

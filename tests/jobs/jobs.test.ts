@@ -40,7 +40,8 @@ function as<T>(user: SessionUser | null, work: () => Promise<T>): Promise<T> {
   return work();
 }
 
-const header10: FlowState = withMainSpan(defaultFlowState("header"), 10);
+// a 10 ft header under the default roof and full snow needs three plies: a 2x6 wall takes them (a 2x4 wall only two)
+const header10: FlowState = withMainSpan({ ...defaultFlowState("header"), wallFraming: "2x6" }, 10);
 const joist13: FlowState = withMainSpan(defaultFlowState("floor-joist"), 13);
 
 function okJob(result: Awaited<ReturnType<Actions["createJob"]>>): string {
@@ -147,12 +148,32 @@ describe.skipIf(!TEST_DB)("jobs and members (PostgreSQL)", () => {
   });
 
   test("edit a member: new inputs are sized again on the server", async () => {
-    const longer = withMainSpan(header10, 14);
+    const longer = withMainSpan(header10, 11);
     const result = await as(owner, () => actions.updateMember({ memberId, label: "H1 kitchen header", flowState: longer, chosenMember: null }));
     expect(result.ok).toBe(true);
     const member = await queries.getMember(owner.id, memberId);
-    expect(member?.resultSummary?.spanFt).toBe(14);
-    expect(member?.flowState.lengthFt).toBe(14);
+    expect(member?.resultSummary?.spanFt).toBe(11);
+    expect(member?.flowState.lengthFt).toBe(11);
+    await as(owner, () => actions.updateMember({ memberId, flowState: header10, chosenMember: null }));
+  });
+
+  test("a member saved on ASCE 7-22 keeps its numbers; one tap re-checks it on ASCE 7-16 (snow counted in full)", async () => {
+    const old = { ...header10, loadStandard: "ASCE 7-22" as const };
+    await as(owner, () => actions.updateMember({ memberId, flowState: old, chosenMember: null }));
+    const before = await queries.getMember(owner.id, memberId);
+    expect(before?.resultSummary?.loadStandard).toBe("ASCE 7-22");
+    const chosen = before?.chosenMember ?? null;
+    const result = await as(owner, () => actions.updateMember({ memberId, loadStandard: "ASCE 7-16" }));
+    expect(result.ok).toBe(true);
+    const after = await queries.getMember(owner.id, memberId);
+    expect(after?.flowState.loadStandard).toBe("ASCE 7-16");
+    expect(after?.resultSummary?.loadStandard).toBe("ASCE 7-16");
+    expect(after?.chosenMember).toEqual(chosen);
+    // the same member under the full snow load works harder
+    expect(after?.resultSummary?.ratio ?? 0).toBeGreaterThan(before?.resultSummary?.ratio ?? 0);
+    expect(after?.resultSummary?.facts?.[0]).toMatch(/ASCE 7-16.*D \+ S/);
+    const bad = await as(owner, () => actions.updateMember({ memberId, loadStandard: "ASCE 7-05" }));
+    expect(bad.ok ? 0 : bad.status).toBe(400);
     await as(owner, () => actions.updateMember({ memberId, flowState: header10, chosenMember: null }));
   });
 

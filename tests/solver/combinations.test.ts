@@ -25,7 +25,7 @@ describe("ASCE 7-22 §2.4.1 ASD basic combinations", () => {
       want: [{ D: 1 }, { D: 1, Lr: 1 }, { D: 1, W: 0.6 }, { D: 1, W: 0.75 * 0.6, Lr: 0.75 }, { D: 0.6, W: 0.6 }],
     },
   ])("cases $cases", ({ cases, want }) => {
-    const got = asdCombinations(cases);
+    const got = asdCombinations(cases, "ASCE 7-22");
     expect(got).toHaveLength(want.length);
     for (const [i, c] of got.entries()) {
       expect(Object.keys(c.factors).sort()).toEqual(Object.keys(want[i]).sort());
@@ -35,7 +35,37 @@ describe("ASCE 7-22 §2.4.1 ASD basic combinations", () => {
   });
 
   test("the names read like the standard's", () => {
-    expect(asdCombinations(["D", "L", "S"]).map((c) => c.name)).toEqual(["D", "D+L", "D+0.7S", "D+0.75L+0.525S"]);
+    expect(asdCombinations(["D", "L", "S"], "ASCE 7-22").map((c) => c.name)).toEqual(["D", "D+L", "D+0.7S", "D+0.75L+0.525S"]);
+  });
+});
+
+// ASCE 7-16 §2.4.1 as transcribed on a public code page (callout.app, "ASCE 7 §2.4.1"):
+// (1) D; (2) D + L; (3) D + (Lr or S or R); (4) D + 0.75L + 0.75(Lr or S or R); (5) D + 0.6W;
+// (6) D + 0.75L + 0.75(0.6W) + 0.75(Lr or S or R); (7) 0.6D + 0.6W. Snow at full value.
+describe("ASCE 7-16 §2.4.1 ASD basic combinations: S at full value (the default basis)", () => {
+  test("D, L, S: D + S and D + 0.75L + 0.75S", () => {
+    const got = asdCombinations(["D", "L", "S"], "ASCE 7-16");
+    expect(got.map((c) => c.factors)).toEqual([{ D: 1 }, { D: 1, L: 1 }, { D: 1, S: 1 }, { D: 1, L: 0.75, S: 0.75 }]);
+    expect(got.map((c) => c.name)).toEqual(["D", "D+L", "D+S", "D+0.75L+0.75S"]);
+  });
+  test("the default edition is ASCE 7-16", () => {
+    expect(asdCombinations(["D", "S"])).toEqual(asdCombinations(["D", "S"], "ASCE 7-16"));
+    expect(lrfdCombinations(["D", "S"])).toEqual(lrfdCombinations(["D", "S"], "ASCE 7-16"));
+  });
+  test("every S factor of 7-22 is 0.7 times the 7-16 one in ASD", () => {
+    const a = asdCombinations(["D", "L", "Lr", "S", "W"], "ASCE 7-16");
+    const b = asdCombinations(["D", "L", "Lr", "S", "W"], "ASCE 7-22");
+    expect(a).toHaveLength(b.length);
+    a.forEach((c, i) => expectClose((b[i].factors.S ?? 0), 0.7 * (c.factors.S ?? 0), 1e-12));
+  });
+});
+
+// ASCE 7-16 §2.3.1 (LRFD) as transcribed on public pages of the 2016 text (idecad wiki, "ASCE 7-16 Section 2.3.1"):
+// 1.4D; 1.2D + 1.6L + 0.5(Lr or S); 1.2D + 1.6(Lr or S) + (L or 0.5W); 1.2D + 1.0W + L + 0.5(Lr or S); 0.9D + 1.0W.
+describe("ASCE 7-16 §2.3.1 LRFD basic combinations", () => {
+  test("D, L, S: 1.6S leading, 0.5S as a companion", () => {
+    const got = lrfdCombinations(["D", "L", "S"], "ASCE 7-16");
+    expect(got.map((c) => c.name)).toEqual(["1.4D", "1.2D+1.6L", "1.2D+1.6L+0.5S", "1.2D+1.6S+L"]);
   });
 });
 
@@ -44,7 +74,7 @@ describe("ASCE 7-22 §2.3.1 LRFD basic combinations (from memory of the 2022 edi
     expect(lrfdCombinations(["D", "L"]).map((c) => c.factors)).toEqual([{ D: 1.4 }, { D: 1.2, L: 1.6 }]);
   });
   test("D, L, S: snow is strength level (1.0S leading, 0.5·0.3S companion)", () => {
-    const got = lrfdCombinations(["D", "L", "S"]);
+    const got = lrfdCombinations(["D", "L", "S"], "ASCE 7-22");
     expect(got.map((c) => c.name)).toEqual(["1.4D", "1.2D+1.6L", "1.2D+1.6L+0.15S", "1.2D+S+L"]);
   });
   test("wind uplift combination 0.9D + 1.0W is present when W is", () => {

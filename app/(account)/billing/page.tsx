@@ -1,5 +1,7 @@
 import type { Metadata } from "next";
 import { redirect } from "next/navigation";
+import { safeReturnPath } from "@/lib/auth/return-path";
+import { env } from "@/lib/env";
 import { openPortalAction } from "@/components/billing/actions";
 import { BillingActionForm } from "@/components/billing/action-form";
 import { FreeTier } from "@/components/billing/plan-cards";
@@ -28,6 +30,9 @@ export default async function BillingPage({ searchParams }: BillingPageProps) {
   const overview = await getBillingOverview(user.id);
   if (!overview) redirect("/sign-in?callbackUrl=%2Fbilling");
   const { role, subscription, limits, hasCustomer } = overview;
+  // Back from a checkout that started on a job's "Save job sheet": once paid, straight back to the job.
+  const next = typeof params.next === "string" && params.next ? safeReturnPath(params.next, env().APP_URL) : null;
+  if (params.checkout === "success" && next && subscription?.active) redirect(next);
   const live = Boolean(subscription && subscription.status !== "canceled" && subscription.status !== "incomplete_expired");
 
   return (
@@ -36,6 +41,11 @@ export default async function BillingPage({ searchParams }: BillingPageProps) {
       {params.checkout === "success" ? (
         <p role="status" className="rounded-card border-2 border-sound bg-sound-bg p-3 font-bold text-sound-ink" data-testid="checkout-result">
           {subscription?.active ? "Payment received. Your subscription is active — thank you." : "Payment received. Confirming it with the payment service; refresh in a moment."}
+          {next ? (
+            <a href={next} className="mt-2 block font-bold">
+              Back to the job
+            </a>
+          ) : null}
         </p>
       ) : null}
       <SubscriptionCard role={role} subscription={subscription} />

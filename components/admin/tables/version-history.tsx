@@ -10,6 +10,7 @@ import { TextField } from "@/components/ui/field";
 import { Spinner } from "@/components/ui/spinner";
 import { useToast } from "@/components/ui/toast";
 import { When } from "./when";
+import { columnWords, rowWords } from "./words";
 import { call, countsText, fetchJson, sendJson, SOURCE_LABEL, type CommitResponse, type TableKey, type TablesVersionDetail, type TablesVersionInfo } from "./api";
 
 export type VersionHistoryProps = {
@@ -31,9 +32,12 @@ function Changes({ id, titles }: { id: string; titles: Record<TableKey, string> 
     <div className="flex flex-col gap-3" data-testid="version-changes">
       {tables.map(([key, change]) => {
         const items = [
-          ...change.changed.map((c) => ({ key: `c-${c.key}`, text: `${c.key.replaceAll("|", " · ")}: ${(c.fields ?? []).map((f) => `${f.column} ${f.before || "(blank)"} → ${f.after || "(blank)"}`).join(", ")}` })),
-          ...change.added.map((c) => ({ key: `a-${c.key}`, text: `Added ${c.key.replaceAll("|", " · ")}` })),
-          ...change.removed.map((c) => ({ key: `r-${c.key}`, text: `Removed ${c.key.replaceAll("|", " · ")}` })),
+          ...change.changed.map((c) => ({
+            key: `c-${c.key}`,
+            text: `${rowWords(key, c.key)}: ${(c.fields ?? []).map((f) => `${columnWords(key, f.column)} ${f.before || "(blank)"} → ${f.after || "(blank)"}`).join(", ")}`,
+          })),
+          ...change.added.map((c) => ({ key: `a-${c.key}`, text: `Added ${rowWords(key, c.key)}` })),
+          ...change.removed.map((c) => ({ key: `r-${c.key}`, text: `Removed ${rowWords(key, c.key)}` })),
         ];
         return (
           <div key={key}>

@@ -1,11 +1,16 @@
 /**
- * Basic load combinations of ASCE/SEI 7-22 (Minimum Design Loads and Associated Criteria for
- * Buildings and Other Structures, 2022 edition), limited to the cases Spanlark carries:
+ * Basic load combinations of ASCE/SEI 7 (Minimum Design Loads and Associated Criteria for Buildings
+ * and Other Structures), 2016 and 2022 editions, limited to the cases Spanlark carries:
  * D, L, Lr, S, W (no rain R, seismic E, fluid F, soil H or self-straining T).
- * ASCE 7-22 snow loads are strength level, hence 0.7S in ASD and 1.0S in LRFD.
+ *
+ * The editions differ in the basis of snow. ASCE 7-16 (and IRC 2021 and earlier) maps ground snow
+ * on the allowable-stress basis: S enters the ASD combinations at full value (D + S,
+ * D + 0.75L + 0.75S) and the LRFD ones at 1.6S leading, 0.5S as a companion. ASCE 7-22 maps
+ * strength-level ground snow: 0.7S in ASD, 1.0S leading and 0.3S (× 0.5) as a companion in LRFD.
  */
 import type { Combination, LoadCase, NamedCombination } from "../types";
 import { LOAD_CASES } from "../types";
+import { DEFAULT_LOAD_STANDARD, type LoadStandard } from "./standard";
 
 /** "Lr or 0.7S" style alternatives are expanded into one combination per roof load present. */
 type Term = { c: LoadCase; f: number };
@@ -59,18 +64,30 @@ function build(raw: { terms: Term[]; needs: LoadCase[] }[], cases: LoadCase[]): 
 
 const T = (c: LoadCase, f: number): Term => ({ c, f });
 
-/** ASCE 7-22 §2.4.1 basic combinations for allowable stress design (combinations 1–7 without E). */
-export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES]): NamedCombination[] {
+/**
+ * Factor on S in the ASD combinations: 1.0 in ASCE 7-16 §2.4.1 (D + (Lr or S or R)), 0.7 in
+ * ASCE 7-22 §2.4.1 (D + (Lr or 0.7S or R)), whose maps are strength level.
+ */
+export function asdSnowFactor(standard: LoadStandard): number {
+  return standard === "ASCE 7-22" ? 0.7 : 1.0;
+}
+
+/**
+ * ASCE 7 §2.4.1 basic combinations for allowable stress design (combinations 1–7 without E), in the
+ * edition given. ASCE 7-16: D; D+L; D+(Lr or S); D+0.75L+0.75(Lr or S); D+0.6W;
+ * D+0.75L+0.75(0.6W)+0.75(Lr or S); 0.6D+0.6W. ASCE 7-22: the same with 0.7S in place of S.
+ */
+export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: LoadStandard = DEFAULT_LOAD_STANDARD): NamedCombination[] {
   const roof: { t: Term; c: LoadCase }[] = [
     { t: T("Lr", 1), c: "Lr" },
-    { t: T("S", 0.7), c: "S" },
+    { t: T("S", asdSnowFactor(standard)), c: "S" },
   ];
   const raw: { terms: Term[]; needs: LoadCase[] }[] = [];
   // (1) D
   raw.push({ terms: [T("D", 1)], needs: [] });
   // (2) D + L
   raw.push({ terms: [T("D", 1), T("L", 1)], needs: ["L"] });
-  // (3) D + (Lr or 0.7S or R)
+  // (3) D + (Lr or S or R) [7-16]; D + (Lr or 0.7S or R) [7-22]
   for (const r of roof) raw.push({ terms: [T("D", 1), r.t], needs: [r.c] });
   // (4) D + 0.75L + 0.75(Lr or 0.7S or R)
   for (const r of roof) raw.push({ terms: [T("D", 1), T("L", 0.75), T(r.c, 0.75 * r.t.f)], needs: [r.c] });
@@ -85,23 +102,26 @@ export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES]): NamedCombi
 }
 
 /**
- * ASCE 7-22 §2.3.1 basic combinations for strength design (LRFD), combinations 1–5 without E
- * (factors as recalled from the 2022 edition, where snow is strength level: 1.0S, and 0.3S as the
- * companion load; from memory).
+ * ASCE 7 §2.3.1 basic combinations for strength design (LRFD), combinations 1–5 without E.
+ * ASCE 7-16: 1.4D; 1.2D+1.6L+0.5(Lr or S or R); 1.2D+1.6(Lr or S or R)+(L or 0.5W);
+ * 1.2D+1.0W+L+0.5(Lr or S or R); 0.9D+1.0W (as transcribed on public pages of the 2016 text).
+ * ASCE 7-22: snow is strength level, 1.0S leading and 0.5(0.3S) as the companion (from memory of
+ * the 2022 edition).
  */
-export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES]): NamedCombination[] {
+export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: LoadStandard = DEFAULT_LOAD_STANDARD): NamedCombination[] {
   const raw: { terms: Term[]; needs: LoadCase[] }[] = [];
+  const v22 = standard === "ASCE 7-22";
   const companions: { t: Term; c: LoadCase }[] = [
     { t: T("Lr", 0.5), c: "Lr" },
-    { t: T("S", 0.15), c: "S" },
+    { t: T("S", v22 ? 0.15 : 0.5), c: "S" },
   ];
   // (1) 1.4D
   raw.push({ terms: [T("D", 1.4)], needs: [] });
   // (2) 1.2D + 1.6L + 0.5(Lr or 0.3S or R)
   raw.push({ terms: [T("D", 1.2), T("L", 1.6)], needs: ["L"] });
   for (const r of companions) raw.push({ terms: [T("D", 1.2), T("L", 1.6), r.t], needs: [r.c] });
-  // (3) 1.2D + 1.6(Lr or R) + (L or 0.5W);  1.2D + 1.0S + (L or 0.5W)
-  for (const lead of [T("Lr", 1.6), T("S", 1)]) {
+  // (3) 1.2D + 1.6(Lr or S or R) + (L or 0.5W) [7-16]; 1.2D + 1.6(Lr or R) + (L or 0.5W) and 1.2D + 1.0S + (L or 0.5W) [7-22]
+  for (const lead of [T("Lr", 1.6), T("S", v22 ? 1 : 1.6)]) {
     raw.push({ terms: [T("D", 1.2), lead, T("L", 1)], needs: [lead.c] });
     raw.push({ terms: [T("D", 1.2), lead, T("W", 0.5)], needs: [lead.c, "W"] });
   }

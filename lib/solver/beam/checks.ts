@@ -38,7 +38,7 @@ function onMemberIssue(issues: InputIssue[], list: string, i: number, key: strin
  * supports). Shared by the zod schema and by analyzeBeam, so both give the same words.
  * Assumes the scalar fields have their types; reports non-finite numbers too.
  */
-export function geometryIssues(input: BeamInput): InputIssue[] {
+export function geometryIssues(input: BeamInput, maxLoads: number = LIMITS.maxLoads): InputIssue[] {
   const issues: InputIssue[] = [];
   const L = input.length;
   if (!finite(L) || L <= 0) {
@@ -65,7 +65,7 @@ export function geometryIssues(input: BeamInput): InputIssue[] {
     }
   }
   const loads = input.loads;
-  if (loads.length > LIMITS.maxLoads) issues.push({ path: "loads", message: `at most ${LIMITS.maxLoads} loads` });
+  if (loads.length > maxLoads) issues.push({ path: "loads", message: `at most ${maxLoads} loads` });
   for (let i = 0; i < loads.length; i++) {
     const ld = loads[i];
     if (ld.type === "point" || ld.type === "moment") {

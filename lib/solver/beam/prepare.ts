@@ -10,7 +10,7 @@
  * between two breakpoints every result is one polynomial (V degree 2, M 3, slope 4, deflection 5).
  */
 import type { BeamInput, LoadCase, SupportType } from "../types";
-import { geometryIssues, SAME_POINT } from "./checks";
+import { geometryIssues, LIMITS, SAME_POINT } from "./checks";
 import { BeamInputError, BeamInstabilityError, formatFt } from "./errors";
 
 /** Per segment in a field: V (3 coefficients), M (4), slope (5), deflection in in (6). */
@@ -257,9 +257,13 @@ function distributedPiece(
   };
 }
 
-/** Validates, checks stability, and builds the breakpoints, the factored stiffness and the load pieces. */
-export function prepareBeam(input: BeamInput): PreparedBeam {
-  const issues = geometryIssues(input);
+/**
+ * Validates, checks stability, and builds the breakpoints, the factored stiffness and the load pieces.
+ * `internalLoads` is how many loads the caller added itself (a member's own weight) on top of the
+ * user's, so they do not count against the user's limit.
+ */
+export function prepareBeam(input: BeamInput, internalLoads = 0): PreparedBeam {
+  const issues = geometryIssues(input, LIMITS.maxLoads + internalLoads);
   if (issues.length) throw new BeamInputError(issues);
   stabilityCheck(input);
 

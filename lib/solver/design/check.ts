@@ -5,14 +5,17 @@
 import type { MaterialTables } from "@/lib/tables/types";
 import { BeamInputError, BeamInstabilityError, CAUTION } from "../beam";
 import type { ZodError } from "zod";
+import type { LoadStandard } from "../asce7/standard";
+import { assemblyFor, wallFor, type Assembly } from "./assembly";
 import { buildContext, type DesignContext } from "./context";
+import type { MemberKind } from "./kinds";
 import { DesignInputError, type DesignIssue } from "./errors";
 import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
 import { evaluateIJoist, type IJoistFactors } from "./i-joist";
 import { evaluateSteel, type SteelFactors } from "./steel";
 import type { CheckName, DesignCheck, SupportReaction } from "./types";
-import { evaluateWood, type WoodFactors } from "./wood";
+import { evaluateWood, resolveCr, resolveIncised, type WoodFactors } from "./wood";
 
 export { CAUTION };
 
@@ -58,6 +61,33 @@ export interface CheckOutput {
   caution: string;
   /** version of the material tables used */
   tables: string;
+  /** the ASCE 7 edition the loads were combined in (and the snow map it reads) */
+  loadStandard: LoadStandard;
+  /** what the member is in the building, when given */
+  kind: MemberKind | null;
+  /** plies, spacers and the wall it sits in (for the answer: "2-ply 2x10 with 1/2 in spacer") */
+  assembly: Assembly;
+  /** the unbraced length checked and, when the member needs braces closer, how close (an instruction, never assumed) */
+  bracing: Bracing;
+  /** a header given by its rough opening: how the span was found */
+  roughOpening: RoughOpening | null;
+}
+
+export interface Bracing {
+  /** the unbraced length given, ft (0 = braced along its length) */
+  givenFt: number;
+  /** the largest brace spacing at which the member passes, ft (to the inch), when closer bracing would make it pass */
+  neededFt: number | null;
+  /** the instruction, e.g. "brace the top flange at 7 ft 0 in or closer" */
+  instruction: string | null;
+}
+
+export interface RoughOpening {
+  openingFt: number;
+  bearingIn: number;
+  /** span = opening + half the bearing at each end, ft */
+  spanFt: number;
+  note: string;
 }
 
 export interface Evaluation {
@@ -176,21 +206,62 @@ export function summarizeMember(m: DesignMember): MemberSummary {
   };
 }
 
+/** Feet and inches to the nearest 1/16 in, as a tape reads: 5.25 → "5 ft 3 in". */
+export function feetInches(ft: number): string {
+  const sixteenths = Math.round(ft * 12 * 16);
+  const feet = Math.floor(sixteenths / (12 * 16));
+  const rest = sixteenths - feet * 12 * 16;
+  const whole = Math.floor(rest / 16);
+  const frac = rest % 16;
+  const g = (a: number, b: number): number => (b === 0 ? a : g(b, a % b));
+  const fracText = frac === 0 ? "" : `${whole > 0 ? "-" : ""}${frac / g(frac, 16)}/${16 / g(frac, 16)}`;
+  return `${feet} ft ${whole > 0 || frac === 0 ? whole : ""}${fracText} in`;
+}
+
+export function roughOpeningOf(input: Omit<CheckInput, "member">): RoughOpening | null {
+  if (input.roughOpeningFt === undefined) return null;
+  const spanFt = input.roughOpeningFt + input.bearing / 12;
+  return {
+    openingFt: input.roughOpeningFt,
+    bearingIn: input.bearing,
+    spanFt,
+    note: `span ${feetInches(spanFt)} = rough opening ${feetInches(input.roughOpeningFt)} + half of the ${input.bearing} in bearing at each end`,
+  };
+}
+
 export function assumptionsFor(input: Omit<CheckInput, "member">, member: DesignMember, ctx: DesignContext): string[] {
   const a: string[] = [];
   const c = input.conditions;
-  a.push(`load combinations: ASCE 7-22 ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}; deflection and reactions at service level (§2.4.1)`);
+  const std = input.loadStandard;
+  a.push(
+    `load combinations: ${std} ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}${ctx.model.cases.includes("S") ? (std === "ASCE 7-22" ? ", snow as 0.7S (strength-level map)" : ", snow at full value, D + S (allowable-stress map)") : ""}; deflection and reactions at service level (§2.4.1)`,
+  );
+  const ro = roughOpeningOf(input);
+  if (ro) a.push(ro.note);
   a.push(c.selfWeight ? `member's own weight counted as dead load: ${Math.round(member.weightPlf * 10) / 10} plf` : "member's own weight not counted");
-  a.push(c.unbracedLength > 0 ? `compression edge braced every ${c.unbracedLength} ft and at the supports` : "compression edge braced continuously (sheathing or decking fastened along it)");
+  a.push(
+    c.unbracedLength > 0
+      ? `compression edge braced at the supports and every ${c.unbracedLength} ft between; that spacing is checked wherever along the span it is worst`
+      : "compression edge braced continuously (sheathing or decking fastened along it)",
+  );
   if (ctx.model.regions.length > 1) {
     a.push("where the member hogs (over an interior support or at an overhang) the bottom edge is in compression: the same bracing is assumed there (blocking or bracing at the supports)");
   }
-  if (ctx.model.patterned) a.push("live load placed span by span for the worst effect (pattern loading, ASCE 7-22 §4.3.3)");
+  if (ctx.model.patterned) a.push(`live load placed span by span for the worst effect (pattern loading, ${std} §4.3.3)`);
   a.push(`bearing length ${input.bearing} in at every support`);
   if (member.kind === "wood") {
     a.push(c.wet ? "wet service" : "dry service (moisture content 19 % or less for sawn lumber, 16 % for glulam)");
     a.push(`temperature up to ${c.temperatureF} °F`);
-    a.push(c.shearIgnoreLoadsNearSupports ? "shear: uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "shear: every load counted, none left out near the supports");
+    a.push(
+      c.shearIgnoreLoadsNearSupports
+        ? "shear read at d from each support face: uniform loads within d left out, point loads within d taken at x/d, x from the face (NDS 2018 §3.4.3.1)"
+        : "shear: every load counted, none left out near the supports",
+    );
+    if (member.dimensionLumber) {
+      const inc = resolveIncised(member, c.incised, c.wet, input.kind);
+      a.push(inc.basis);
+      a.push(resolveCr(member, c.repetitive, input.kind, input.spacing).basis);
+    }
     a.push("span taken centre to centre of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
@@ -215,6 +286,9 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
   const ctx = contextFor(input);
   const ev = evaluateMember(member, ctx);
   const sw = input.conditions.selfWeight ? member.weightPlf : 0;
+  const assembly = assemblyFor(member, wallFor(input.kind, input.wallFraming));
+  const assumptions = assumptionsFor(input, member, ctx);
+  if (assembly.fits === false) assumptions.push(`${assembly.words} is ${assembly.widthIn} in wide and does not fill a ${assembly.wallFraming} wall (${assembly.wallFraming === "2x6" ? "5-1/2" : "3-1/2"} in)`);
   return {
     answer: answerLine(member.label, ev),
     pass: ev.pass,
@@ -230,9 +304,39 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
       ...(sw > 0 ? [{ case: "D", type: "udl", w: Math.round(sw * 100) / 100, note: "D member's own weight" }] : []),
     ],
     limits: ctx.limits,
-    assumptions: assumptionsFor(input, member, ctx),
+    assumptions,
     notChecked: NOT_CHECKED,
     caution: CAUTION,
     tables: tables.version,
+    loadStandard: input.loadStandard,
+    kind: input.kind ?? null,
+    assembly,
+    bracing: bracingFor(input, member, ev),
+    roughOpening: roughOpeningOf(input),
   };
+}
+
+/**
+ * The unbraced length given is the one checked. When the member fails on lateral stability at that
+ * length and passes with braces closer, the answer says how close (to the inch, rounded down), as an
+ * instruction for the crew; nothing is assumed.
+ */
+function bracingFor(input: CheckInput, member: DesignMember, ev: Evaluation): Bracing {
+  const givenFt = input.conditions.unbracedLength;
+  const none: Bracing = { givenFt, neededFt: null, instruction: null };
+  if (givenFt <= 0 || ev.pass) return none;
+  const passesAt = (lbFt: number) => evaluateMember(member, contextFor({ ...input, conditions: { ...input.conditions, unbracedLength: lbFt } })).pass;
+  const minFt = 1 / 12;
+  if (!passesAt(minFt)) return none;
+  let lo = minFt;
+  let hi = givenFt;
+  while ((hi - lo) * 12 > 0.25) {
+    const mid = (lo + hi) / 2;
+    if (passesAt(mid)) lo = mid;
+    else hi = mid;
+  }
+  const neededFt = Math.floor(lo * 12) / 12;
+  if (neededFt < minFt) return none;
+  const edge = member.kind === "steel" ? "top flange" : "top edge";
+  return { givenFt, neededFt, instruction: `brace the ${edge} at ${feetInches(neededFt)} or closer (at ${feetInches(givenFt)} it does not pass)` };
 }

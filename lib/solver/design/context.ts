@@ -3,23 +3,30 @@
  * envelopes (strength, service, live-only) and the conditions. Built once per input.
  */
 import { asdCombinations, lrfdCombinations } from "../asce7/combinations";
+import type { LoadStandard } from "../asce7/standard";
 import { loadDurationFactorCD, timeEffectFactorLambda } from "../nds/nds-2018";
-import type { Combination, LoadCase, NamedCombination } from "../types";
+import type { Combination, Load, LoadCase, NamedCombination } from "../types";
+import type { MemberKind } from "./kinds";
 import { buildLoadModel, type ComboEnvelope, type LoadModel } from "./load-model";
 import { resolveLimits } from "./presets";
 import type { CheckInput, DesignConditions } from "./schema";
+import { loadsForShear, shearZones } from "./shear-near-supports";
 import { takeDown, type TakenDownLoad } from "./take-down";
 
 export interface DesignContext {
   model: LoadModel;
   method: "asd" | "lrfd";
-  /** combinations for strength: ASCE 7-22 §2.4.1 (ASD) or §2.3.1 (LRFD) */
+  /** the ASCE 7 edition of the combinations and of snow */
+  loadStandard: LoadStandard;
+  kind?: MemberKind;
+  /** combinations for strength: ASCE 7 §2.4.1 (ASD) or §2.3.1 (LRFD) of loadStandard */
   strength: ComboEnvelope[];
+  strengthCombinations: NamedCombination[];
   /** per strength combination: the wood load duration factor CD (ASD) or time effect factor λ (LRFD) */
   woodDuration: number[];
   /** write the plain-words notes on each check (the sizing search leaves them out) */
   notes: boolean;
-  /** ASCE 7-22 §2.4.1 combinations at service level: total deflection and the crew's reactions */
+  /** ASCE 7 §2.4.1 combinations at service level (same edition): total deflection and the crew's reactions */
   service: ComboEnvelope[];
   /** the service combinations without D and W: live (or snow, roof live) deflection */
   live: ComboEnvelope[];
@@ -29,6 +36,11 @@ export interface DesignContext {
   spacingIn?: number;
   tributaryFt?: number;
   loads: TakenDownLoad[];
+  /**
+   * The model the wood shear check reads with loads near supports left out (NDS 2018 §3.4.3.1), for a
+   * member of depth d (in): built once per depth and kept.
+   */
+  shearModel(dIn: number): { model: LoadModel; strength: ComboEnvelope[] };
 }
 
 const CASE_ORDER: LoadCase[] = ["D", "L", "Lr", "S", "W"];
@@ -56,37 +68,64 @@ export function liveCombinations(service: NamedCombination[]): NamedCombination[
 
 export type DesignProblem = Omit<CheckInput, "member">;
 
-// The combinations depend only on the cases present: built once per set of cases.
+// The combinations depend only on the edition and the cases present: built once per set.
 const comboCache = new Map<string, { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] }>();
 
-function combinationsFor(cases: LoadCase[]): { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] } {
-  const key = cases.join(",");
+function combinationsFor(cases: LoadCase[], standard: LoadStandard): { asd: NamedCombination[]; lrfd: NamedCombination[]; live: NamedCombination[] } {
+  const key = `${standard}|${cases.join(",")}`;
   let hit = comboCache.get(key);
   if (!hit) {
-    const asd = asdCombinations(cases);
-    hit = { asd, lrfd: lrfdCombinations(cases), live: liveCombinations(asd) };
+    const asd = asdCombinations(cases, standard);
+    hit = { asd, lrfd: lrfdCombinations(cases, standard), live: liveCombinations(asd) };
     comboCache.set(key, hit);
   }
   return hit;
 }
 
 export function buildContext(input: DesignProblem): DesignContext {
-  const loads = takeDown(input.loads, input.length, { spacingIn: input.spacing, tributaryFt: input.tributary });
+  const loads = takeDown(input.loads, input.length, { spacingIn: input.spacing, tributaryFt: input.tributary }, input.loadStandard);
+  const lineLoads = loads.map((l) => l.load);
   const model = buildLoadModel({
     length: input.length,
     supports: input.supports,
-    loads: loads.map((l) => l.load),
+    loads: lineLoads,
     unbracedFt: input.conditions.unbracedLength,
     pattern: input.conditions.patternLiveLoad,
   });
-  const combos = combinationsFor(model.cases);
+  const combos = combinationsFor(model.cases, input.loadStandard);
   const serviceEnv = model.envelopes(combos.asd);
   const strengthCombos = input.method === "lrfd" ? combos.lrfd : combos.asd;
   const strength = input.method === "lrfd" ? model.envelopes(strengthCombos) : serviceEnv;
+  const shearCache = new Map<number, { model: LoadModel; strength: ComboEnvelope[] }>();
+  const shearModel = (dIn: number) => {
+    let hit = shearCache.get(dIn);
+    if (!hit) {
+      const zones = shearZones(input.supports, input.length, input.bearing, dIn);
+      const cut = loadsForShear(lineLoads as (Load & { case: LoadCase })[], zones, input.length, dIn);
+      const m = buildLoadModel({
+        length: input.length,
+        supports: input.supports,
+        loads: cut.loads,
+        unbracedFt: 0,
+        pattern: input.conditions.patternLiveLoad,
+        selfWeightSpans: cut.selfWeightSpans,
+        extraStations: cut.sections,
+        internalLoads: Math.max(0, cut.loads.length - lineLoads.length),
+      });
+      // the same combinations as the strength check (a case left out near the supports still has its factor)
+      hit = { model: m, strength: m.envelopes(strengthCombos) };
+      shearCache.set(dIn, hit);
+    }
+    return hit;
+  };
   return {
     model,
     method: input.method,
+    loadStandard: input.loadStandard,
+    kind: input.kind,
     strength,
+    strengthCombinations: strengthCombos,
+    shearModel,
     woodDuration: strength.map((e) => (input.method === "lrfd" ? timeEffectFactorLambda(e.factors) : loadDurationFactorCD(e.factors))),
     notes: true,
     service: serviceEnv,

@@ -4,7 +4,7 @@
  * once with a reference stiffness, and every combination is formed by superposition. The member's
  * own weight is a separate unit load, scaled per candidate; deflections scale with EI_REF/(E'·I).
  *
- * Pattern live load (ASCE 7-22 §4.3.3): at each station the live load of a region is counted where
+ * Pattern live load (ASCE 7 §4.3.3, 7-16 and 7-22 alike): at each station the live load of a region is counted where
  * it makes that station's value worse, which is the worst of every on/off arrangement of the regions.
  *
  * Units: x in ft, V and reactions in lb, M in lb-ft, deflection in in (positive down), as in the solver.
@@ -26,7 +26,11 @@ export interface ModelRegion {
   i1: number;
 }
 
-/** A length of the member between lateral braces of the compression edge. */
+/**
+ * A length of the member between lateral braces of the compression edge. With braces at a given
+ * spacing that does not divide a region, the segment of that length is tried at several places
+ * along the region (where the braces fall is not known): the checks take the worst placement.
+ */
 export interface BendingSegment {
   from: number;
   to: number;
@@ -92,7 +96,16 @@ export interface LoadModelInput {
   pattern: boolean;
   /** stations per region */
   stationsPerRegion?: number;
+  /** where the member's own weight (1 plf, dead) lies, ft; default the whole member */
+  selfWeightSpans?: [number, number][];
+  /** further stations to evaluate exactly, ft (e.g. shear sections at d from a support face) */
+  extraStations?: number[];
+  /** loads the caller derived from the user's (pieces of a cut load), not counted against the user's limit */
+  internalLoads?: number;
 }
+
+/** How many places an unbraced segment shorter than its region is tried at (evenly, both ends included). */
+export const BRACE_PLACEMENTS = 16;
 
 function arraysOf(prep: PreparedBeam, xs: Float64Array, weights: Float64Array): CaseArrays {
   const resp = respond(prep, weights);
@@ -119,22 +132,28 @@ function nearestIndex(xs: Float64Array, x: number): number {
 
 export function buildLoadModel(input: LoadModelInput): LoadModel {
   const { length: L, supports } = input;
-  const swIndex = input.loads.length;
-  const loads: Load[] = [...input.loads, { type: "udl", from: 0, to: L, w: 1, case: "D" }];
-  const prep = prepareBeam({ length: L, E: E_REF, I: I_REF, supports, loads });
+  const swSpans = (input.selfWeightSpans ?? [[0, L]]).filter(([a, b]) => b - a > 1e-9 * Math.max(L, 1));
+  const swFirst = input.loads.length;
+  const isSelfWeight = (source: number) => source >= swFirst;
+  const loads: Load[] = [...input.loads, ...swSpans.map(([from, to]): Load => ({ type: "udl", from, to, w: 1, case: "D" }))];
+  const prep = prepareBeam({ length: L, E: E_REF, I: I_REF, supports, loads }, swSpans.length + (input.internalLoads ?? 0));
   const eps = Math.max(1e-7 * L, 1e-9);
   const perRegion = input.stationsPerRegion ?? 48;
 
-  // Bending segments: supports brace the compression edge; braces every unbracedFt in between.
+  // Bending segments: supports brace the compression edge. Braces every unbracedFt in between are
+  // checked at the spacing given, the segment slid along the region (its worst place governs); in an
+  // overhang every placement takes Cb = 1.0 (free end, AISC 360-16 §F1).
   const rawSegs: { from: number; to: number; region: number; luFt: number; cantilever: boolean }[] = [];
   prep.regions.forEach((r, ri) => {
     const len = r.to - r.from;
-    const n = input.unbracedFt > 0 ? Math.max(1, Math.ceil(len / input.unbracedFt - 1e-9)) : 1;
-    for (let k = 0; k < n; k++) {
-      const from = r.from + (len * k) / n;
-      const to = r.from + (len * (k + 1)) / n;
-      const cantilever = r.kind !== "span" && (r.kind === "overhang-left" ? k === 0 : k === n - 1);
-      rawSegs.push({ from, to, region: ri, luFt: input.unbracedFt > 0 ? len / n : 0, cantilever });
+    const lb = input.unbracedFt;
+    if (lb <= 0 || lb >= len - 1e-9 * Math.max(L, 1)) {
+      rawSegs.push({ from: r.from, to: r.to, region: ri, luFt: lb > 0 ? len : 0, cantilever: r.kind !== "span" });
+      return;
+    }
+    for (let k = 0; k <= BRACE_PLACEMENTS; k++) {
+      const from = r.from + ((len - lb) * k) / BRACE_PLACEMENTS;
+      rawSegs.push({ from, to: from + lb, region: ri, luFt: lb, cantilever: r.kind !== "span" });
     }
   });
 
@@ -151,6 +170,7 @@ export function buildLoadModel(input: LoadModelInput): LoadModel {
     if (s.from - eps > 0) pts.push(s.from + eps);
     if (s.to + eps < L) pts.push(s.to - eps);
   }
+  for (const x of input.extraStations ?? []) if (x >= 0 && x <= L) pts.push(x);
   pts.sort((a, b) => a - b);
   const uniq: number[] = [];
   for (const p of pts) if (uniq.length === 0 || p - uniq[uniq.length - 1] > eps / 4) uniq.push(p);
@@ -187,16 +207,17 @@ export function buildLoadModel(input: LoadModelInput): LoadModel {
   };
   const perCase: Partial<Record<LoadCase, CaseArrays>> = {};
   for (const c of cases) {
-    const w = pieceWeights((i) => prep.pieces[i].source !== swIndex && prep.pieces[i].loadCase === c);
+    const w = pieceWeights((i) => !isSelfWeight(prep.pieces[i].source) && prep.pieces[i].loadCase === c);
     perCase[c] = w.some((v) => v !== 0) ? arraysOf(prep, xs, w) : zeros(n, ns);
   }
-  const selfWeight = arraysOf(prep, xs, pieceWeights((i) => prep.pieces[i].source === swIndex));
+  const swWeights = pieceWeights((i) => isSelfWeight(prep.pieces[i].source));
+  const selfWeight = swWeights.some((v) => v !== 0) ? arraysOf(prep, xs, swWeights) : zeros(n, ns);
 
   const patterned = input.pattern && prep.regions.length > 1 && present.has("L");
   const liveByRegion: CaseArrays[] = [];
   if (patterned) {
     prep.regions.forEach((_, ri) => {
-      const w = pieceWeights((i) => prep.pieces[i].source !== swIndex && prep.pieces[i].loadCase === "L" && prep.pieces[i].region === ri);
+      const w = pieceWeights((i) => !isSelfWeight(prep.pieces[i].source) && prep.pieces[i].loadCase === "L" && prep.pieces[i].region === ri);
       if (w.some((v) => v !== 0)) liveByRegion.push(arraysOf(prep, xs, w));
     });
   }

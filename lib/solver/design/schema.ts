@@ -7,6 +7,8 @@
 import { z } from "zod";
 import { geometryIssues, LIMITS } from "../beam/checks";
 import type { BeamInput, Load } from "../types";
+import { DEFAULT_LOAD_STANDARD, LOAD_STANDARDS } from "../asce7/standard";
+import { MEMBER_KINDS, WALL_FRAMINGS } from "./kinds";
 
 const loadCase = z.enum(["D", "L", "Lr", "S", "W"], { error: 'must be one of "D", "L", "Lr", "S", "W"' });
 const finite = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine(Number.isFinite, `must be a finite number (${unit})`);
@@ -30,7 +32,7 @@ export const areaLoadSchema = z
 export const snowLoadSchema = z
   .object({
     type: z.literal("snow"),
-    /** ground snow load, psf (ASCE 7-22 §7.2) */
+    /** ground snow load, psf, from the map of the design's loadStandard (ASCE 7-16 or 7-22 §7.2) */
     pg: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be a number of 0 or more (psf)"),
     Ce: positive("exposure factor").optional(),
     Ct: positive("thermal factor").optional(),
@@ -77,9 +79,18 @@ export const conditionsSchema = z
   .object({
     /** wet service (moisture content over 19 % for sawn lumber, 16 % for glulam) */
     wet: z.boolean().default(false),
-    incised: z.boolean().default(false),
-    /** member in a repetitive system (joists or rafters at 24 in or less, at least 3, sheathed) */
-    repetitive: z.boolean().default(false),
+    /**
+     * treated lumber incised (small slits in its faces) so the preservative enters; Ci, NDS 2018 §4.3.8.
+     * Not given: incised for Douglas Fir-Larch, Hem-Fir and Spruce-Pine-Fir dimension lumber in wet
+     * service or on a deck member, not incised otherwise (Southern Pine takes treatment without it).
+     */
+    incised: z.boolean().optional(),
+    /**
+     * member in a repetitive system (joists or rafters at 24 in or less, at least 3, sheathed); Cr, NDS
+     * 2018 §4.3.9. Not given: yes for a floor-joist, deck-joist or rafter kind at 24 in or less, and for a
+     * built-up member of 3 or more plies; false is honoured for every member.
+     */
+    repetitive: z.boolean().optional(),
     /** unbraced length of the compression edge, ft; 0 = continuously braced */
     unbracedLength: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)").default(0),
     selfWeight: z.boolean().default(true),
@@ -87,7 +98,7 @@ export const conditionsSchema = z
     temperatureF: z.number().refine((v) => Number.isFinite(v) && v <= 150, "must be at most 150 °F").default(70),
     /** leave out uniform loads within d of each support in the shear check (NDS 2018 §3.4.3.1(a)) */
     shearIgnoreLoadsNearSupports: z.boolean().default(false),
-    /** place live load span by span for the worst case (ASCE 7-22 §4.3.3) */
+    /** place live load span by span for the worst case (ASCE 7 §4.3.3, the same in 7-16 and 7-22) */
     patternLiveLoad: z.boolean().default(true),
   })
   .strict();
@@ -118,12 +129,47 @@ const designFields = {
   conditions: conditionsSchema.default(() => conditionsSchema.parse({})),
   limits: limitsSchema.default({}),
   method: z.enum(["asd", "lrfd"], { error: 'must be "asd" or "lrfd"' }).default("asd"),
+  /** the edition of ASCE 7 for the combinations and snow (the map the ground snow number comes from) */
+  loadStandard: z.enum(LOAD_STANDARDS, { error: `must be one of ${LOAD_STANDARDS.map((s) => `"${s}"`).join(", ")}` }).default(DEFAULT_LOAD_STANDARD),
+  /** what the member is in the building: sets the repetitive, incised and wall-fit defaults */
+  kind: z.enum(MEMBER_KINDS, { error: `must be one of ${MEMBER_KINDS.map((s) => `"${s}"`).join(", ")}` }).optional(),
+  /** the stud wall a header (or beam in a wall) sits in; only members that fill it are offered; default 2x4 for a header */
+  wallFraming: z.enum(WALL_FRAMINGS, { error: `must be one of ${WALL_FRAMINGS.map((s) => `"${s}"`).join(", ")}` }).optional(),
+  /** rough opening of a header, ft: the span is then the opening plus half the bearing at each end */
+  roughOpeningFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).optional(),
 };
+
+/**
+ * A header given by its rough opening: the span is the opening plus half the bearing at each end
+ * (length = roughOpeningFt + bearing / 12 ft), on two supports at its ends.
+ */
+function withRoughOpening(raw: unknown): unknown {
+  if (raw === null || typeof raw !== "object" || Array.isArray(raw)) return raw;
+  const o = raw as Record<string, unknown>;
+  const ro = o.roughOpeningFt;
+  if (typeof ro !== "number" || !Number.isFinite(ro) || ro <= 0 || o.length !== undefined) return raw;
+  const bearing = typeof o.bearing === "number" && Number.isFinite(o.bearing) && o.bearing > 0 ? o.bearing : 1.5;
+  const length = ro + bearing / 12;
+  return {
+    ...o,
+    length,
+    supports: o.supports ?? [
+      { x: 0, type: "pin" },
+      { x: length, type: "roller" },
+    ],
+  };
+}
 
 type RefineCtx = z.RefinementCtx;
 
 /** Checks that need more than one field: spacing vs tributary, positions on the member, area load fields. */
-function crossFieldIssues(v: { length: number; supports: { x: number; type: "pin" | "roller" | "fixed" }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[] }, ctx: RefineCtx): void {
+function crossFieldIssues(
+  v: { length: number; supports: { x: number; type: "pin" | "roller" | "fixed" }[]; spacing?: number; tributary?: number; loads: z.infer<typeof designLoadSchema>[]; roughOpeningFt?: number; bearing: number },
+  ctx: RefineCtx,
+): void {
+  if (v.roughOpeningFt !== undefined && Math.abs(v.length - (v.roughOpeningFt + v.bearing / 12)) > 1e-9) {
+    ctx.addIssue({ code: "custom", path: ["roughOpeningFt"], message: "give the span (length) or the rough opening (roughOpeningFt), not both" });
+  }
   const hasArea = v.loads.some((l) => (l.type === "area" || l.type === "snow") && l.tributary === undefined);
   if (v.spacing !== undefined && v.tributary !== undefined) {
     ctx.addIssue({ code: "custom", path: ["tributary"], message: "give either spacing (in, for joists) or tributary (ft, for beams and headers), not both" });
@@ -159,7 +205,7 @@ function crossFieldIssues(v: { length: number; supports: { x: number; type: "pin
   }
 }
 
-export const checkInputSchema = z.object({ member: memberSchema, ...designFields }).strict().superRefine(crossFieldIssues);
+export const checkInputSchema = z.preprocess(withRoughOpening, z.object({ member: memberSchema, ...designFields }).strict().superRefine(crossFieldIssues));
 
 export const sizeFamilySchema = z.discriminatedUnion(
   "material",
@@ -182,7 +228,9 @@ export const sizeFamilySchema = z.discriminatedUnion(
   { error: 'must name a family: material "sawn", "engineered", "ijoist", "steel" or "any"' },
 );
 
-export const sizeInputSchema = z
+export const sizeInputSchema = z.preprocess(
+  withRoughOpening,
+  z
   .object({
     member: sizeFamilySchema.default({ material: "any" }),
     ...designFields,
@@ -193,7 +241,8 @@ export const sizeInputSchema = z
     failures: z.number().int().min(0).max(100).default(5),
   })
   .strict()
-  .superRefine(crossFieldIssues);
+  .superRefine(crossFieldIssues),
+);
 
 export const spanInputSchema = z
   .object({

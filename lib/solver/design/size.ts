@@ -6,10 +6,14 @@
 import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
 import { CAUTION } from "../beam";
-import { answerLine, percent, assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, summarizeMember, type CheckOutput } from "./check";
+import type { LoadStandard } from "../asce7/standard";
+import { assemblyFor, wallFor, type Assembly } from "./assembly";
+import { answerLine, percent, assumptionsFor, checkMember, contextFor, evaluateMember, NOT_CHECKED, parseWith, roughOpeningOf, summarizeMember, type CheckOutput, type RoughOpening } from "./check";
+import type { MemberKind, WallFraming } from "./kinds";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
 import { resolveMember, resolveMemberUnchecked, withPlies, type DesignMember } from "./member";
+import { resolveCr, resolveIncised } from "./wood";
 import { sizeInputSchema, spanInputSchema, type MemberSpec, type SizeFamily, type SizeInput, type SpanInput } from "./schema";
 import type { CheckName, DesignCheck } from "./types";
 
@@ -27,6 +31,8 @@ export interface SizeCandidateResult {
   costPerFoot: number | null;
   /** jack studs per support (wood) and bearing needed, for the answer line */
   supports: { x: number; maxDown: number; uplift: number; requiredBearing: number; jackStuds: number | null }[];
+  /** plies, spacers and the wall it fills */
+  assembly: Assembly;
 }
 
 export interface SizeFailure extends SizeCandidateResult {
@@ -46,6 +52,13 @@ export interface SizeOutput {
   notChecked: readonly string[];
   caution: string;
   tables: string;
+  loadStandard: LoadStandard;
+  kind: MemberKind | null;
+  /** the wall the members must fill (headers), null when not in a wall */
+  wallFraming: WallFraming | null;
+  /** how many members the tables hold that do not fit that wall (left out) */
+  notFittingWall: number;
+  roughOpening: RoughOpening | null;
 }
 
 const ALL_PLIES = [1, 2, 3, 4];
@@ -115,7 +128,7 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
   return out;
 }
 
-function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>): SizeCandidateResult {
+function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>, assembly: Assembly): SizeCandidateResult {
   return {
     answer: answerLine(member.label, ev),
     member: member.spec,
@@ -126,6 +139,7 @@ function describe(member: DesignMember, ev: ReturnType<typeof evaluateMember>): 
     depth: member.d,
     costPerFoot: member.costPerFoot === undefined ? null : Math.round(member.costPerFoot * 100) / 100,
     supports: ev.reactions.map((r) => ({ x: r.x, maxDown: r.maxDown, uplift: r.uplift, requiredBearing: r.requiredBearing, jackStuds: r.jackStuds })),
+    assembly,
   };
 }
 
@@ -150,6 +164,8 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   const passing: SizeCandidateResult[] = [];
   const failing: SizeFailure[] = [];
   let checked = 0;
+  let notFitting = 0;
+  const wall = wallFor(input.kind, input.wallFraming);
   let lastMember: DesignMember | null = null;
   // one table lookup per size; other ply counts derive from it
   const onePly = new Map<string, DesignMember | null>();
@@ -171,10 +187,15 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) continue;
     // I-joists: dry service, normal temperature, ASD only (their published values are allowable loads)
     if (member.kind === "ijoist" && (input.conditions.wet || input.conditions.temperatureF > 100 || input.method !== "asd")) continue;
+    const assembly = assemblyFor(member, wall);
+    if (assembly.fits === false) {
+      notFitting++;
+      continue;
+    }
     checked++;
     lastMember = member;
     const ev = evaluateMember(member, ctx);
-    const row = describe(member, ev);
+    const row = describe(member, ev, assembly);
     if (ev.pass) passing.push(row);
     else failing.push({ ...row, reason: reasonOf(ev.checks.find((c) => c.name === ev.governing)) });
   }
@@ -189,13 +210,46 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     passingCount: passing.length,
     assumptions: [
       `candidates: ${describeFamily(input)}`,
-      ...(lastMember ? assumptionsFor(input, lastMember, ctx).filter((a) => !a.startsWith("member's own weight counted")) : []),
+      ...(wall ? [`only members that fill a ${wall} wall (${wall === "2x6" ? "5-1/2" : "3-1/2"} in): sawn plies with 1/2 in spacers between them, or a solid member as wide`] : []),
+      ...(lastMember ? assumptionsFor(input, lastMember, ctx).filter((a) => !a.startsWith("member's own weight counted") && !perMemberWords(input, lastMember).includes(a)) : []),
+      ...familyWoodWords(input),
       ...(input.conditions.selfWeight ? ["each member's own weight counted as dead load"] : []),
     ],
     notChecked: NOT_CHECKED,
     caution: CAUTION,
     tables: tables.version,
+    loadStandard: input.loadStandard,
+    kind: input.kind ?? null,
+    wallFraming: wall,
+    notFittingWall: notFitting,
+    roughOpening: roughOpeningOf(input),
   };
+}
+
+/** The incised and Cr lines of one member (left out of a search's assumptions, which speak of the family). */
+function perMemberWords(input: SizeInput, m: DesignMember): string[] {
+  if (m.kind !== "wood" || !m.dimensionLumber) return [];
+  return [resolveIncised(m, input.conditions.incised, input.conditions.wet, input.kind).basis, resolveCr(m, input.conditions.repetitive, input.kind, input.spacing).basis];
+}
+
+/** Incised and Cr as the search applied them to sawn lumber. */
+function familyWoodWords(input: SizeInput): string[] {
+  if (input.member.material === "steel" || input.member.material === "engineered") return [];
+  const c = input.conditions;
+  const treated = c.wet || input.kind === "deck-joist" || input.kind === "deck-beam";
+  const incised =
+    c.incised === true
+      ? "sawn lumber incised, as given: Ci 0.80 on Fb and Fv, 0.95 on E (NDS 2018 §4.3.8)"
+      : c.incised === false
+        ? "sawn lumber not incised, as given"
+        : treated
+          ? "treated Douglas Fir-Larch, Hem-Fir and Spruce-Pine-Fir assumed incised (Ci, NDS 2018 §4.3.8); Southern Pine not incised"
+          : "sawn lumber not incised (untreated lumber assumed)";
+  const cr =
+    c.repetitive === false
+      ? "Cr = 1.0 for every member (not repetitive, as given)"
+      : "Cr = 1.15 for built-up members of 3 or more plies (plies through-nailed) and for joists or rafters at 24 in or less in a repetitive system; 1.0 otherwise, and never for 2 plies by the built-up rule (NDS 2018 §4.3.9)";
+  return [incised, cr];
 }
 
 function describeFamily(input: SizeInput): string {

@@ -1,10 +1,12 @@
 /**
  * Load take-down: the design input's loads turned into the solver's line loads by case.
  * Area loads (psf) become uniform line loads (plf) over the joist spacing or the tributary width;
- * roof snow comes from the ground snow load by ASCE 7-22 Eq. 7.3-1. Positions in ft, positive down.
+ * roof snow comes from the ground snow load by Eq. 7.3-1 of the chosen ASCE 7 edition (7-16 by default).
+ * Positions in ft, positive down.
  */
 import { areaToLinePlf, findOccupancyPreset } from "../asce7/loads";
 import { designFlatRoofSnow } from "../asce7/snow";
+import { DEFAULT_LOAD_STANDARD, type LoadStandard } from "../asce7/standard";
 import type { Load, LoadCase } from "../types";
 import { DesignInputError } from "./errors";
 import type { DesignLoad } from "./schema";
@@ -20,7 +22,7 @@ export interface TakenDownLoad {
 
 const r1 = (v: number) => Math.round(v * 10) / 10;
 
-export function takeDown(loads: DesignLoad[], lengthFt: number, memberWidth: { spacingIn?: number; tributaryFt?: number }): TakenDownLoad[] {
+export function takeDown(loads: DesignLoad[], lengthFt: number, memberWidth: { spacingIn?: number; tributaryFt?: number }, standard: LoadStandard = DEFAULT_LOAD_STANDARD): TakenDownLoad[] {
   return loads.map((l, i): TakenDownLoad => {
     const width = (l.type === "area" || l.type === "snow") && l.tributary !== undefined ? { tributaryFt: l.tributary } : memberWidth;
     const widthText = width.spacingIn !== undefined ? `${width.spacingIn} in / 12` : `${width.tributaryFt} ft`;
@@ -44,12 +46,12 @@ export function takeDown(loads: DesignLoad[], lengthFt: number, memberWidth: { s
       };
     }
     if (l.type === "snow") {
-      const snow = designFlatRoofSnow({ pg: l.pg, Ce: l.Ce, Ct: l.Ct, Is: l.Is });
+      const snow = designFlatRoofSnow({ pg: l.pg, Ce: l.Ce, Ct: l.Ct, Is: l.Is }, standard);
       const w = areaToLinePlf(snow.ps, width);
       return {
         load: { type: "udl", case: "S", from: l.from ?? 0, to: l.to ?? lengthFt, w },
         from: i,
-        note: `S: pg ${l.pg} psf → pf = 0.7 Ce Ct Is pg = ${r1(snow.pf)} psf, pm = ${r1(snow.pm)} psf (ASCE 7-22 Eq. 7.3-1, §7.3.4); ${r1(snow.ps)} psf × ${widthText} = ${r1(w)} plf`,
+        note: `S: ground snow ${l.pg} psf (${standard} map) → pf = 0.7 Ce Ct Is pg = ${r1(snow.pf)} psf, pm = ${r1(snow.pm)} psf (${snow.clause}); ${r1(snow.ps)} psf × ${widthText} = ${r1(w)} plf`,
       };
     }
     return { load: l, from: i, note: `${l.case} ${l.type} as given` };

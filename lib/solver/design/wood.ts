@@ -27,6 +27,7 @@ import {
 import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common";
 import type { DesignContext } from "./context";
 import { peakAbs } from "./load-model";
+import { DECK_KINDS, REPETITIVE_KINDS, type MemberKind } from "./kinds";
 import type { WoodMember } from "./member";
 import type { DesignCheck, SupportReaction } from "./types";
 
@@ -46,6 +47,11 @@ export interface WoodFactors {
   Cfu: number;
   Ci: { Fb: number; Fv: number; FcPerp: number; E: number };
   Cr: number;
+  /** why Cr is what it is, in words with the clause */
+  CrBasis: string;
+  /** whether the lumber was taken as incised (Ci), and why */
+  incised: boolean;
+  incisedBasis: string;
   /** bearing area factor at the governing support */
   Cb: number;
   Kcr: number;
@@ -62,10 +68,51 @@ export interface WoodFactors {
   EPrime: number;
   Emin: number;
   EminPrime: number;
-  /** NDS 2018 §3.4.3.1(a): uniform loads within d of each support left out of the shear check */
+  /** NDS 2018 §3.4.3.1: uniform loads within d of each support face left out, point loads there taken at x/d */
   shearLoadsNearSupportsIgnored: boolean;
   /** long-term deflection Kcr·ΔD + Δrest at the governing total-deflection point, in (NDS 2018 Eq. 3.5-1) */
   longTermDeflection: number | null;
+}
+
+/** Species whose treated lumber is usually incised so the preservative enters (NDS 2018 §4.3.8; common practice). */
+export const INCISED_SPECIES: readonly string[] = ["Douglas Fir-Larch", "Hem-Fir", "Spruce-Pine-Fir"];
+
+/**
+ * Incised or not (NDS 2018 §4.3.8): as the input says; not said, incised for treated Douglas
+ * Fir-Larch, Hem-Fir and Spruce-Pine-Fir dimension lumber in wet service or on a deck member (the
+ * residential deck tables, IRC 2021 Table R507.6, assume it), not incised otherwise.
+ */
+export function resolveIncised(m: WoodMember, given: boolean | undefined, wet: boolean, kind: MemberKind | undefined): { incised: boolean; basis: string } {
+  if (!m.dimensionLumber) return { incised: false, basis: "Ci does not apply (not sawn dimension lumber)" };
+  if (given === true) return { incised: true, basis: "incised, as given: Ci 0.80 on Fb and Fv, 0.95 on E (NDS 2018 §4.3.8)" };
+  if (given === false) return { incised: false, basis: "not incised, as given" };
+  const species = m.spec.material === "sawn" ? m.spec.species : "";
+  const treated = wet || (kind !== undefined && DECK_KINDS.includes(kind));
+  if (treated && INCISED_SPECIES.includes(species)) {
+    return { incised: true, basis: `treated ${species} assumed incised (usual for this species): Ci 0.80 on Fb and Fv, 0.95 on E (NDS 2018 §4.3.8)` };
+  }
+  if (treated && species === "Southern Pine") return { incised: false, basis: "treated Southern Pine assumed not incised (it takes the preservative without)" };
+  return { incised: false, basis: "not incised (untreated lumber assumed)" };
+}
+
+/**
+ * Cr (NDS 2018 §4.3.9) and why: false is honoured for every member; built-up members of 3 or more
+ * plies qualify by themselves (plies through-nailed); joists and rafters at 24 in or less qualify in a
+ * repetitive system (said, or the floor-joist, deck-joist or rafter kind); two plies never by the built-up rule.
+ */
+export function resolveCr(m: WoodMember, given: boolean | undefined, kind: MemberKind | undefined, spacingIn: number | undefined): { Cr: number; basis: string } {
+  if (!m.dimensionLumber) return { Cr: 1.0, basis: "Cr = 1.0 (applies to dimension lumber only)" };
+  if (given === false) return { Cr: 1.0, basis: "Cr = 1.0 (not a repetitive member, as given)" };
+  if (m.plies >= 3) {
+    const Cr = repetitiveMemberFactorCr({ dimensionLumber: true, plies: m.plies, repetitiveSystem: false });
+    return { Cr, basis: `Cr = ${Cr}: ${m.plies} plies through-nailed, each ply sharing the load (NDS 2018 §4.3.9)` };
+  }
+  const system = given === true || (given === undefined && kind !== undefined && REPETITIVE_KINDS.includes(kind));
+  const Cr = repetitiveMemberFactorCr({ dimensionLumber: true, plies: m.plies, repetitiveSystem: system, spacingIn });
+  if (Cr > 1) return { Cr, basis: `Cr = ${Cr}: joists or rafters at ${spacingIn} in, three or more sheathed together (NDS 2018 §4.3.9)` };
+  if (system && spacingIn === undefined) return { Cr, basis: "Cr = 1.0: a member without a joist spacing is not in a repetitive system (NDS 2018 §4.3.9)" };
+  if (system) return { Cr, basis: `Cr = 1.0: spacing ${spacingIn} in is over 24 in (NDS 2018 §4.3.9)` };
+  return { Cr, basis: m.plies === 2 ? "Cr = 1.0: two plies are not three members (NDS 2018 §4.3.9)" : "Cr = 1.0 (not a repetitive member)" };
 }
 
 export interface MemberEvaluation {
@@ -82,8 +129,9 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
 
   const CM = m.wetTable === "scl" ? { Fb: 1, Fv: 1, FcPerp: 1, E: 1 } : wetServiceFactorCM(m.wetTable, cond.wet, m.Fb * m.CF);
   const Ct = temperatureFactorCt(cond.temperatureF, cond.wet);
-  const Ci = m.dimensionLumber ? incisingFactorCi(cond.incised) : { Fb: 1, Fv: 1, FcPerp: 1, E: 1 };
-  const Cr = repetitiveMemberFactorCr({ dimensionLumber: m.dimensionLumber, plies: m.plies, repetitiveSystem: cond.repetitive, spacingIn: ctx.spacingIn });
+  const inc = resolveIncised(m, cond.incised, cond.wet, ctx.kind);
+  const Ci = m.dimensionLumber ? incisingFactorCi(inc.incised) : { Fb: 1, Fv: 1, FcPerp: 1, E: 1 };
+  const { Cr, basis: CrBasis } = resolveCr(m, cond.repetitive, ctx.kind, ctx.spacingIn);
   // members here bend edgewise (about the strong axis), so the flat use factor stays 1.0
   const Cfu = flatUseFactorCfu(m.nominalDepth, m.nominalThickness, false);
   const KF = lrfd ? FORMAT_CONVERSION_KF : null;
@@ -144,41 +192,21 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
     });
   }
 
-  // Shear, fv = 3V/2A (NDS 2018 §3.4.2), optionally at d from each support (§3.4.3.1(a)).
-  const dFt = m.d / 12;
-  const excluded = (x: number) => cond.shearIgnoreLoadsNearSupports && model.supports.some((s) => Math.abs(x - s.x) < dFt);
+  // Shear, fv = 3V/2A (NDS 2018 §3.4.2); with loads near supports left out, read on the loads of
+  // §3.4.3.1 (uniform loads within d of each face cut out, point loads there at x/d), which give the
+  // shear at exactly d from every support face.
+  const near = cond.shearIgnoreLoadsNearSupports;
+  const sm = near ? ctx.shearModel(m.d) : { model, strength: ctx.strength };
+  const sxs = sm.model.xs;
   const fvBase = adjustedFv(m.Fv, { CD: 1, CM: CM.Fv, Ct: Ct.Fv, Ci: Ci.Fv }) * (lrfd ? FORMAT_CONVERSION_KF.Fv * RESISTANCE_PHI.Fv : 1);
   let bestShear = { ratio: -1, fv: 0, FvPrime: 0, V: 0, x: 0, combination: "" };
-  for (let e = 0; e < ctx.strength.length; e++) {
-    const env = ctx.strength[e];
-    const k = env.fD * sw;
-    let V = 0;
-    let at = 0;
-    for (let i = 0; i < xs.length; i++) {
-      if (cond.shearIgnoreLoadsNearSupports && excluded(xs[i])) continue;
-      const u = k * model.selfWeight.V[i];
-      const v = Math.max(env.Vmax[i] + u, -(env.Vmin[i] + u));
-      if (v > V) {
-        V = v;
-        at = xs[i];
-      }
-    }
-    if (cond.shearIgnoreLoadsNearSupports) {
-      for (const s of model.supports) {
-        for (const x of [s.x - dFt, s.x + dFt]) {
-          if (x <= 0 || x >= model.length || excluded(x)) continue;
-          const v = interpolatedAbs(xs, env.Vmax, env.Vmin, model.selfWeight.V, k, x);
-          if (v > V) {
-            V = v;
-            at = x;
-          }
-        }
-      }
-    }
-    const fv = (1.5 * V) / m.A;
+  for (let e = 0; e < sm.strength.length; e++) {
+    const env = sm.strength[e];
+    const p = peakAbs(sxs, env.Vmax, env.Vmin, sm.model.selfWeight.V, env.fD * sw, 0, sxs.length - 1, false);
+    const fv = (1.5 * p.value) / m.A;
     const FvPrime = fvBase * ctx.woodDuration[e];
     const ratio = fv / FvPrime;
-    if (ratio > bestShear.ratio) bestShear = { ratio, fv, FvPrime, V, x: at, combination: env.name };
+    if (ratio > bestShear.ratio) bestShear = { ratio, fv, FvPrime, V: p.value, x: near ? criticalSection(model.supports, model.length, ctx.bearingIn, m.d, p.x) : p.x, combination: env.name };
   }
   const shearFvPrime = bestShear.FvPrime;
   if (bestShear.ratio >= 0) {
@@ -190,7 +218,9 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ratio: bestShear.ratio,
       combination: bestShear.combination,
       x: round(bestShear.x, 3),
-      note: !ctx.notes ? "" : `fv = 3V/2A with V = ${round(bestShear.V, 0)} lb; ${cond.shearIgnoreLoadsNearSupports ? "uniform loads within d of each support left out (NDS 2018 §3.4.3.1(a))" : "all loads counted, including those within d of the supports"}`,
+      note: !ctx.notes
+        ? ""
+        : `fv = 3V/2A with V = ${round(bestShear.V, 0)} lb; ${near ? `read at d = ${round(m.d, 3)} in from the support face: uniform loads within d left out, point loads within d taken at x/d (NDS 2018 §3.4.3.1)` : "all loads counted, including those within d of the supports"}`,
     });
   }
 
@@ -257,6 +287,9 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
     Cfu,
     Ci,
     Cr,
+    CrBasis,
+    incised: inc.incised,
+    incisedBasis: inc.basis,
     Cb: round(bearingCb, 4),
     Kcr,
     KF: KF ? { ...KF } : null,
@@ -277,12 +310,15 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   return { checks, reactions, factors };
 }
 
-/** |value| at x by linear interpolation between the neighbouring stations (V is linear under uniform load). */
-function interpolatedAbs(xs: Float64Array, hi: Float64Array, lo: Float64Array, unit: Float64Array, k: number, x: number): number {
-  let j = 1;
-  while (j < xs.length - 1 && xs[j] < x) j++;
-  const t = (x - xs[j - 1]) / (xs[j] - xs[j - 1]);
-  const at = (a: Float64Array) => a[j - 1] + t * (a[j] - a[j - 1]);
-  const u = at(unit) * k;
-  return Math.max(at(hi) + u, -(at(lo) + u));
+/**
+ * Where the shear found at x is read: a point between a support's centre and d past its face stands
+ * for the section at d from the face (the loads of §3.4.3.1 leave nothing between), in ft.
+ */
+function criticalSection(supports: { x: number }[], lengthFt: number, bearingIn: number, dIn: number, x: number): number {
+  const reach = (bearingIn / 2 + dIn) / 12;
+  for (const s of supports) {
+    if (x >= s.x && x <= s.x + reach && s.x < lengthFt) return Math.min(lengthFt, s.x + reach);
+    if (x <= s.x && x >= s.x - reach && s.x > 0) return Math.max(0, s.x - reach);
+  }
+  return x;
 }

@@ -67,7 +67,11 @@ export function temperatureFactorCt(tempF = 70, wet = false): { Fb: number; Fv: 
   throw new RangeError("NDS 2018 Table 2.3.3 covers sustained temperatures up to 150 °F");
 }
 
-/** Incising factor Ci for dimension lumber, NDS 2018 Table 4.3.8: 0.80 on Fb, Ft, Fc, Fv; 0.95 on E, Emin; 1.00 on Fc⊥. */
+/**
+ * Incising factor Ci for dimension lumber, NDS 2018 §4.3.8 and Table 4.3.8: 0.80 on Fb, Ft, Fc, Fv;
+ * 0.95 on E, Emin; 1.00 on Fc⊥. Treated Douglas Fir-Larch, Hem-Fir and Spruce-Pine-Fir are usually
+ * incised so the preservative enters; Southern Pine takes it without (common practice).
+ */
 export function incisingFactorCi(incised: boolean): { Fb: number; Fv: number; FcPerp: number; E: number } {
   return incised ? { Fb: 0.8, Fv: 0.8, FcPerp: 1.0, E: 0.95 } : { Fb: 1, Fv: 1, FcPerp: 1, E: 1 };
 }
@@ -75,13 +79,15 @@ export function incisingFactorCi(incised: boolean): { Fb: number; Fv: number; Fc
 /**
  * Repetitive member factor Cr, NDS 2018 §4.3.9: 1.15 on Fb for dimension lumber 2–4 in thick used as
  * joists, rafters or similar, in contact or at most 24 in on centre, at least 3 in number, joined by
- * a load-distributing element. A built-up member of 3 or more plies in contact meets "at least 3 in
- * number" by itself; 1 or 2 plies need the repetitive system around them.
+ * a load-distributing element. A member at a spacing (joists, rafters) qualifies through the system
+ * around it; a member with no spacing (a beam or header) only by being built up of 3 or more plies
+ * in contact, nailed together. Two plies never qualify by themselves.
+ * Examples: 1 ply at 16 in in a repetitive system → 1.15; 2-ply beam (no spacing) → 1.0; 3-ply beam → 1.15.
  */
 export function repetitiveMemberFactorCr(opts: { dimensionLumber: boolean; plies: number; repetitiveSystem: boolean; spacingIn?: number }, Cr = 1.15): number {
   if (!opts.dimensionLumber) return 1.0;
   if (opts.plies >= 3) return Cr;
-  if (opts.repetitiveSystem && (opts.spacingIn === undefined || opts.spacingIn <= 24)) return Cr;
+  if (opts.repetitiveSystem && opts.spacingIn !== undefined && opts.spacingIn <= 24) return Cr;
   return 1.0;
 }
 

@@ -8,6 +8,7 @@ import {
   SizeFactorRow,
   SteelGradeRow,
   SteelShapeRow,
+  StockLengthModel,
 } from "@/models/material-tables";
 import type { TableKey, TableRowMap, TableRows } from "../schemas";
 import { emptyRows } from "./rows";
@@ -78,6 +79,11 @@ async function readCosts(versionId: string, transaction?: Transaction) {
   return rows.map((r) => r.get({ plain: true })).map(({ itemKey, costPerFt }) => ({ itemKey, costPerFt }));
 }
 
+async function readStockLengths(versionId: string, transaction?: Transaction) {
+  const rows = await StockLengthModel.findAll({ where: { versionId }, order: [["material", "ASC"]], transaction });
+  return rows.map((r) => r.get({ plain: true })).map(({ material, lengthsFt }) => ({ material, lengthsFt }));
+}
+
 /** Every table's rows of one version. */
 export async function readVersionRows(versionId: string, transaction?: Transaction): Promise<TableRows> {
   const rows = emptyRows();
@@ -91,9 +97,10 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
     rows["steel-shapes"] = await readSteelShapes(versionId, transaction);
     rows["steel-grades"] = await readSteelGrades(versionId, transaction);
     rows.costs = await readCosts(versionId, transaction);
+    rows["stock-lengths"] = await readStockLengths(versionId, transaction);
     return rows;
   }
-  [rows["sawn-sizes"], rows["sawn-values"], rows["size-factors"], rows.engineered, rows["i-joists"], rows["steel-shapes"], rows["steel-grades"], rows.costs] = await Promise.all([
+  [rows["sawn-sizes"], rows["sawn-values"], rows["size-factors"], rows.engineered, rows["i-joists"], rows["steel-shapes"], rows["steel-grades"], rows.costs, rows["stock-lengths"]] = await Promise.all([
     readSawnSizes(versionId),
     readSawnValues(versionId),
     readSizeFactors(versionId),
@@ -102,11 +109,12 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
     readSteelShapes(versionId),
     readSteelGrades(versionId),
     readCosts(versionId),
+    readStockLengths(versionId),
   ]);
   return rows;
 }
 
-type RowModel = ModelStatic<SawnSizeRow | SawnValueRow | SizeFactorRow | EngineeredProductRow | IJoistRow | SteelShapeRow | SteelGradeRow | CostRowModel>;
+type RowModel = ModelStatic<SawnSizeRow | SawnValueRow | SizeFactorRow | EngineeredProductRow | IJoistRow | SteelShapeRow | SteelGradeRow | CostRowModel | StockLengthModel>;
 
 export const ROW_MODELS: Record<TableKey, RowModel> = {
   "sawn-sizes": SawnSizeRow,
@@ -117,6 +125,7 @@ export const ROW_MODELS: Record<TableKey, RowModel> = {
   "steel-shapes": SteelShapeRow,
   "steel-grades": SteelGradeRow,
   costs: CostRowModel,
+  "stock-lengths": StockLengthModel,
 };
 
 /** Writes one table's rows for a new version. */
@@ -155,6 +164,9 @@ export async function writeTableRows<K extends TableKey>(key: K, versionId: stri
       return;
     case "costs":
       await CostRowModel.bulkCreate((rows as TableRowMap["costs"][]).map((r) => ({ ...r, versionId })), { transaction });
+      return;
+    case "stock-lengths":
+      await StockLengthModel.bulkCreate((rows as TableRowMap["stock-lengths"][]).map((r) => ({ ...r, versionId })), { transaction });
       return;
   }
 }

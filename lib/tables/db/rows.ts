@@ -19,6 +19,7 @@ export function tablesToRows(tables: MaterialTables): TableRows {
     "steel-shapes": tables.steel,
     "steel-grades": tables.steelGrades,
     costs,
+    "stock-lengths": tables.stockLengths ?? [],
   };
 }
 
@@ -33,9 +34,10 @@ export function rowsToTables(version: string, rows: TableRows): MaterialTables {
     steel: rows["steel-shapes"],
     steelGrades: rows["steel-grades"],
     costs: Object.fromEntries(rows.costs.map((c) => [c.itemKey, c.costPerFt])),
+    stockLengths: rows["stock-lengths"],
   };
 }
 
 export function emptyRows(): TableRows {
-  return { "sawn-sizes": [], "sawn-values": [], "size-factors": [], engineered: [], "i-joists": [], "steel-shapes": [], "steel-grades": [], costs: [] };
+  return { "sawn-sizes": [], "sawn-values": [], "size-factors": [], engineered: [], "i-joists": [], "steel-shapes": [], "steel-grades": [], costs: [], "stock-lengths": [] };
 }

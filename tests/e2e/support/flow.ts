@@ -60,7 +60,7 @@ export async function sizeAndSaveMember(page: Page, member: MemberToSave, shot: 
   await page.getByRole("button", { name: "Save to a job" }).click();
   const dialog = page.getByRole("dialog", { name: "Save to a job" });
   await dialog.waitFor();
-  await dialog.getByLabel("Job").selectOption({ value: "new" });
+  await dialog.getByLabel("Job", { exact: true }).selectOption({ value: "new" });
   await dialog.getByLabel("New job's name").fill(member.newJob.name);
   await dialog.getByLabel("Site address").fill(member.newJob.siteAddress);
   await dialog.getByLabel(/Member name/).fill(member.label);

@@ -9,11 +9,12 @@ import { getJob } from "@/lib/jobs/queries";
 export const metadata: Metadata = { title: "Job" };
 export const dynamic = "force-dynamic";
 
-type JobRouteProps = { params: Promise<{ jobId: string }> };
+type JobRouteProps = { params: Promise<{ jobId: string }>; searchParams: Promise<Record<string, string | string[] | undefined>> };
 
 // GET /jobs/[jobId] — one of the caller's jobs with its members; 404 for anyone but the owner
-export default async function JobRoute({ params }: JobRouteProps) {
+export default async function JobRoute({ params, searchParams }: JobRouteProps) {
   const { jobId } = await params;
+  const query = await searchParams;
   const user = await userForPage(`/jobs/${jobId}`);
   const job = await getJob(user.id, jobId);
   if (!job) notFound();
@@ -35,11 +36,18 @@ export default async function JobRoute({ params }: JobRouteProps) {
           spanFt: m.resultSummary?.spanFt ?? null,
           carriedBy: m.carriedByMemberId ? (job.members.find((c) => c.id === m.carriedByMemberId)?.label ?? null) : null,
           carriedById: m.carriedByMemberId,
+          loadStandard: m.flowState.loadStandard ?? "ASCE 7-16",
+          carriesSnow: m.flowState.snow.on || [...m.flowState.areaLoads, ...m.flowState.pointLoads, ...m.flowState.lineLoads].some((l) => l.case === "S"),
+          orderDetails: m.orderDetails,
         })),
       }}
     >
-      <CrewLinkPanel jobId={job.id} />
-      <SheetPanel jobId={job.id} />
+      <CrewLinkPanel jobId={job.id} jobName={job.name} />
+      <SheetPanel
+        jobId={job.id}
+        saveOnArrival={query.saveSheet === "1"}
+        savedSheetId={typeof query.sheet === "string" && /^[0-9a-f-]{36}$/i.test(query.sheet) ? query.sheet : undefined}
+      />
     </JobPage>
   );
 }

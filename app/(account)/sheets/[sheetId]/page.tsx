@@ -8,6 +8,8 @@ import { getSessionUser } from "@/lib/auth/session";
 import { HttpError } from "@/lib/http";
 import { SHEET_LAPSED_WORDS, sheetAccess } from "@/lib/sheets/access";
 import { getJobSheet, type SheetRecord } from "@/lib/sheets/sheets";
+import { liveCrewLinkUrl } from "@/lib/crew/links";
+import { crewQrSvg } from "@/lib/crew/qr";
 
 export const metadata: Metadata = { title: "Job sheet", robots: { index: false, follow: false } };
 export const dynamic = "force-dynamic";
@@ -27,6 +29,8 @@ export default async function SheetPage({ params }: SheetPageProps) {
     throw err;
   }
   const access = await sheetAccess(user);
+  const crewUrl = await liveCrewLinkUrl(user.id, sheet.jobId);
+  const crewQr = crewUrl ? { url: crewUrl, svg: await crewQrSvg(crewUrl) } : null;
   return (
     <div className="flex flex-col gap-4 pb-10">
       <SheetPrintStyles />
@@ -43,7 +47,7 @@ export default async function SheetPage({ params }: SheetPageProps) {
           Printing a job sheet needs a subscription. This sheet can be read on screen at Spanlark; subscribe to print or download it.
         </p>
       )}
-      <SheetDocument snapshot={sheet.snapshot} />
+      <SheetDocument snapshot={sheet.snapshot} crewQr={crewQr} />
     </div>
   );
 }

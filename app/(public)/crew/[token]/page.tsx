@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CrewSchedule } from "@/components/crew/crew-schedule";
+import { buttonClasses } from "@/components/ui/button";
 import { Caution } from "@/components/ui/caution";
 import { WarningIcon } from "@/components/ui/icons";
 import { openCrewLink } from "@/lib/crew/links";
@@ -32,6 +33,9 @@ export default async function CrewPage({ params }: CrewPageProps) {
         {view.job.siteAddress ? <p className="text-lg text-ink-soft">{view.job.siteAddress}</p> : null}
         {view.expiresAt ? <p className="text-ink-soft">This link works until {formatSheetDate(view.expiresAt)}.</p> : null}
       </header>
+      <a href={`/api/crew/${token}/pdf`} download className={`${buttonClasses({ variant: "secondary" })} no-print w-full sm:w-fit`} data-testid="crew-board-pdf">
+        Print for the site board (PDF)
+      </a>
       <p className="flex items-center gap-2 rounded-card border-2 border-caution bg-caution-bg px-3 py-2 font-bold text-caution-ink">
         <WarningIcon className="h-5 w-5 shrink-0" />
         <a href="#caution" className="text-caution-ink">

@@ -3,6 +3,8 @@ import { HttpError, route } from "@/lib/http";
 import { SHEET_REPRINT_DENIED, sheetAccess } from "@/lib/sheets/access";
 import { renderSheetPdf, type Paper } from "@/lib/sheets/pdf";
 import { getJobSheet } from "@/lib/sheets/sheets";
+import { liveCrewLinkUrl } from "@/lib/crew/links";
+import { crewQrPng } from "@/lib/crew/qr";
 
 export const runtime = "nodejs";
 
@@ -25,7 +27,8 @@ export const GET = route<Ctx>(async (req, ctx) => {
   if (!(await sheetAccess(user)).canReprint) throw new HttpError(403, SHEET_REPRINT_DENIED, { upgrade: "/pricing" });
   const paperParam = new URL(req.url).searchParams.get("paper") ?? "letter";
   if (paperParam !== "letter" && paperParam !== "a4") throw new HttpError(400, "invalid input", { issues: [{ path: "paper", message: "must be letter or a4" }] });
-  const pdf = await renderSheetPdf(sheet.snapshot, paperParam as Paper);
+  const crewUrl = await liveCrewLinkUrl(user.id, sheet.jobId);
+  const pdf = await renderSheetPdf(sheet.snapshot, paperParam as Paper, crewUrl ? { url: crewUrl, qrPng: await crewQrPng(crewUrl, 300) } : null);
   return new Response(new Uint8Array(pdf), {
     status: 200,
     headers: {

@@ -1,0 +1,20 @@
+/**
+ * What a member is in the building: the design input's optional `kind`. It sets defaults the
+ * standards leave to the use (the repetitive member factor for joists and rafters, incised treated
+ * lumber for deck members, the wall a header must fit) and tells the answer what to build.
+ */
+export const MEMBER_KINDS = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"] as const;
+export type MemberKind = (typeof MEMBER_KINDS)[number];
+
+/** Joists and rafters: members at a spacing sharing the load through sheathing. */
+export const REPETITIVE_KINDS: readonly MemberKind[] = ["floor-joist", "deck-joist", "rafter"];
+/** Deck members: outdoors, treated lumber, wet service. */
+export const DECK_KINDS: readonly MemberKind[] = ["deck-joist", "deck-beam"];
+/** Members that sit in a stud wall and must fit its thickness. */
+export const WALL_KINDS: readonly MemberKind[] = ["header"];
+
+/** Stud walls a header or beam sits in, and the depth of their studs (in): a 2x4 wall is 3-1/2 in, a 2x6 wall 5-1/2 in. */
+export const WALL_FRAMINGS = ["2x4", "2x6"] as const;
+export type WallFraming = (typeof WALL_FRAMINGS)[number];
+export const WALL_DEPTH_IN: Readonly<Record<WallFraming, number>> = { "2x4": 3.5, "2x6": 5.5 };
+export const DEFAULT_WALL_FRAMING: WallFraming = "2x4";
