@@ -74,7 +74,9 @@ function RowSource({ source, full = false }: { source: string; full?: boolean })
   return (
     <span className="flex flex-col items-start gap-1 text-sm">
       {flagged ? <StatusBadge status="caution" label={FROM_MEMORY} /> : null}
-      <span className={cx("text-graphite", !full && "line-clamp-2")}>{full ? source : citationOf(source)}</span>
+      <span className={cx("text-graphite", !full && "line-clamp-2")} title={full ? undefined : source}>
+        {full ? source : citationOf(source)}
+      </span>
     </span>
   );
 }
@@ -237,8 +239,8 @@ export function TableBrowser({ table }: TableBrowserProps) {
                     </td>
                     {fields.map((f) =>
                       f.name === "source" ? (
-                        <td key={f.name} className="min-w-72 px-2 py-1 align-top">
-                          <RowSource source={r.values.source ?? ""} full />
+                        <td key={f.name} className="min-w-72 px-2 py-1">
+                          <RowSource source={r.values.source ?? ""} />
                         </td>
                       ) : (
                         <td key={f.name} className={cx("px-2 py-1 whitespace-nowrap", f.kind === "number" && "text-right")}>
