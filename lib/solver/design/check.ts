@@ -11,7 +11,7 @@ import { zodIssues } from "@/lib/zod-issues";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
 import { buildContext, type DesignContext } from "./context";
 import type { MemberKind } from "./kinds";
-import { DesignInputError, type DesignIssue } from "./errors";
+import { DesignInputError } from "./errors";
 import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
 import { evaluateIJoist, type IJoistFactors } from "./i-joist";
