@@ -67,7 +67,7 @@ describe.skipIf(!TEST_DB)("jobs and members (PostgreSQL)", () => {
   test("saving works the answer out on the server: a header gets its jack studs", async () => {
     const member = await queries.getMember(owner.id, memberId);
     expect(member?.resultSummary?.pass).toBe(true);
-    expect(member?.resultSummary?.headline).toMatch(/^\d-ply 2x\d+ No\.2 — \d jack studs? each end$/);
+    expect(member?.resultSummary?.headline).toMatch(/^\d-ply 2x\d+ No\.2( with (two )?1\/2" spacers?)? — \d jack studs? each end$/);
     expect(member?.chosenMember?.material).toBe("sawn");
     expect(member?.resultSummary?.spanFt).toBe(10);
   });
