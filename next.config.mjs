@@ -27,6 +27,8 @@ const securityHeaders = [
 const nextConfig = {
   poweredByHeader: false,
   reactStrictMode: true,
+  // forbidden(): admin pages answer 403 to a signed-in account without the admin role (app/forbidden.tsx).
+  experimental: { authInterrupts: true },
   serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pino", "pdfkit"],
   async headers() {
     return [{ source: "/:path*", headers: securityHeaders }];
