@@ -16,7 +16,11 @@ const nextConfig = {
   experimental: { authInterrupts: true },
   serverExternalPackages: ["sequelize", "pg", "pg-hstore", "pino", "pdfkit"],
   async headers() {
-    return [{ source: "/:path*", headers: securityHeaders }];
+    return [
+      { source: "/:path*", headers: securityHeaders },
+      // JSON answers run nothing; pages get theirs with a nonce from proxy.ts.
+      { source: "/api/:path*", headers: [{ key: "Content-Security-Policy", value: "default-src 'none'; frame-ancestors 'none'" }] },
+    ];
   },
 };
 

@@ -52,3 +52,12 @@ describe("contentTypeRefusal", () => {
     expect(contentTypeRefusal("POST", "/api/admin/tables/lumber/import", h({ "content-type": "multipart/form-data; boundary=x" }))).toBeNull();
   });
 });
+
+describe("the engine routes themselves", () => {
+  test.each(["solve", "check", "size"])("/api/%s answers 415 to a text/plain body, before reading it", async (name) => {
+    const { POST } = (await import(`@/app/api/${name}/route`)) as { POST: (req: Request) => Promise<Response> };
+    const res = await POST(new Request(`http://localhost/api/${name}`, { method: "POST", headers: { "content-type": "text/plain" }, body: "{}" }));
+    expect(res.status).toBe(415);
+    expect(((await res.json()) as { error: string }).error).toMatch(/application\/json/);
+  });
+});
