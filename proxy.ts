@@ -32,10 +32,9 @@ export function proxy(req: NextRequest): NextResponse {
 // Sec-Fetch-Site): Next.js reads a request's body before the proxy sees it, so an API request without them must
 // not pass through here, or a 100 MB POST would be read in full before the route's 413 (lib/http.ts). Without
 // either header originRefusal lets a request through anyway. The engine routes' 415 is in readJsonBody.
-const NOT_STATIC = "/((?!api/|_next/static|_next/image|favicon.ico|icon.svg).*)";
 export const config = {
   matcher: [
-    NOT_STATIC,
+    "/((?!api/|_next/static|_next/image|favicon.ico|icon.svg).*)",
     { source: "/api/:path*", has: [{ type: "header", key: "origin" }] },
     { source: "/api/:path*", has: [{ type: "header", key: "sec-fetch-site" }] },
   ],
