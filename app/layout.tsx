@@ -1,5 +1,6 @@
 import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
+import { connection } from "next/server";
 import { Suspense, type ReactNode } from "react";
 import { AdminNavLink } from "@/components/shell/admin-nav-link";
 import { BottomNav } from "@/components/shell/bottom-nav";
@@ -44,7 +45,10 @@ export const viewport: Viewport = {
   viewportFit: "cover",
 };
 
-export default function RootLayout({ children }: { children: ReactNode }) {
+export default async function RootLayout({ children }: { children: ReactNode }) {
+  // Rendered per request: the nonce proxy.ts puts in each response's Content-Security-Policy must be on the
+  // scripts of that very response, which a page built ahead of time cannot have.
+  await connection();
   return (
     <html lang="en" className={`${atkinson.variable} ${plexMono.variable}`}>
       <body className="flex min-h-dvh flex-col bg-paper font-sans text-ink antialiased">

@@ -5,6 +5,7 @@ import { ZodError, type ZodType } from "zod";
 import { databaseUnavailableResponse, isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { logger } from "@/lib/logger";
 import { zodIssues, type FieldIssue } from "@/lib/zod-issues";
+import { contentTypeRefusal } from "@/lib/security/origin";
 
 /** An error with an HTTP status and a message fit to show a user (never a raw internal error). */
 export class HttpError extends Error {
@@ -104,10 +105,13 @@ export function invalidInput(issues: FieldIssue[]): Response {
 }
 
 /**
- * A public solver route's request body as JSON, or its refusal: 413 over the engine routes' cap
+ * A public solver route's request body as JSON, or its refusal: 415 unless declared JSON, 413 over the engine routes' cap
  * (BODY_LIMITS.engine), 400 when the body is not JSON (path "" names the whole body).
  */
 export async function readJsonBody(req: Request, limitBytes: number = BODY_LIMITS.engine): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
+  // 415 before reading anything unless the body is declared JSON (lib/security/origin.ts).
+  const wrongType = contentTypeRefusal(req.method, new URL(req.url).pathname, req.headers);
+  if (wrongType) return { ok: false, response: Response.json({ error: wrongType.error }, { status: wrongType.status }) };
   let text: string;
   try {
     text = await readBodyText(req, limitBytes);

@@ -11,7 +11,7 @@ import { User, type Role } from "@/models/user";
 import { atLeast, runInBackground } from "./background";
 import { normalizeEmail, sha256Hex } from "./crypto";
 import { hashPassword, verifyPassword } from "./password";
-import { hitAll, refund, type Limit, type LimitResult } from "./rate-limit";
+import { hit, hitAll, refund, type Limit, type LimitResult } from "./rate-limit";
 import type { SessionUser } from "./roles";
 import type { ProfileInput, SignUpInput } from "./schemas";
 import { consumeToken, issueToken, TOKEN_LIFETIME_MS } from "./tokens";
@@ -27,6 +27,14 @@ export const LIMITS = {
   resetPerIp: { max: 20, windowMs: HOUR },
   signUpPerEmail: { max: 5, windowMs: HOUR },
   signUpPerIp: { max: 20, windowMs: HOUR },
+  /**
+   * Once an address is over signInPerEmail, its password is still checked, slowly: once per client address per
+   * 2 minutes, and at most 30 times in 15 minutes for the address from all clients together. The owner, who
+   * tries from their own device, gets in with the right password; a guesser gets 40 guesses in 15 minutes, not
+   * unlimited ones.
+   */
+  signInLockedPerClient: { max: 1, windowMs: 2 * MINUTE },
+  signInLockedPerEmail: { max: 30, windowMs: 15 * MINUTE },
 } as const;
 
 /** The public flows answer no sooner than this, whatever they found. */
@@ -202,8 +210,17 @@ export type SignInResult =
  */
 export async function authenticate(email: string, password: string, ip: string): Promise<SignInResult> {
   const limits = limitsFor("sign-in", email, ip);
-  const limited = await hitAll(limits);
-  if (!limited.allowed) return { ok: false, reason: "rate-limited", retryAfterSeconds: limited.retryAfterSeconds };
+  const [perEmail, perIp] = await Promise.all(limits.map((l) => hit(l)));
+  // The client's own limit always holds. The address's limit does not lock its owner out: past it, each client
+  // gets one slow check (LIMITS.signInLocked*), so the right password still gets in.
+  if (!perIp!.allowed) return { ok: false, reason: "rate-limited", retryAfterSeconds: perIp!.retryAfterSeconds };
+  if (!perEmail!.allowed) {
+    const slow = await hitAll([
+      { key: `${emailKey("sign-in-locked", email)}:ip:${ip}`, ...LIMITS.signInLockedPerClient },
+      { key: emailKey("sign-in-locked", email), ...LIMITS.signInLockedPerEmail },
+    ]);
+    if (!slow.allowed) return { ok: false, reason: "rate-limited", retryAfterSeconds: slow.retryAfterSeconds };
+  }
   const user = await findByEmail(email);
   const match = await verifyPassword(password, user?.passwordHash ?? null);
   if (!user || !match) return { ok: false, reason: "invalid" };

@@ -1,5 +1,5 @@
 import "server-only";
-import { redirect } from "next/navigation";
+import { forbidden, redirect } from "next/navigation";
 import type { SessionUser } from "./roles";
 import { getSessionUser } from "./session";
 
@@ -10,8 +10,12 @@ export async function userForPage(returnTo: string): Promise<SessionUser> {
   return user;
 }
 
-/** For admin pages: the account when it is an admin, null when it is signed in with another role. */
-export async function adminForPage(returnTo: string): Promise<SessionUser | null> {
+/**
+ * For admin pages: the account when it is an admin. Signed in with another role, the page answers 403 with
+ * app/forbidden.tsx (Next's forbidden(); experimental.authInterrupts in next.config.mjs).
+ */
+export async function adminForPage(returnTo: string): Promise<SessionUser> {
   const user = await userForPage(returnTo);
-  return user.role === "admin" ? user : null;
+  if (user.role !== "admin") forbidden();
+  return user;
 }

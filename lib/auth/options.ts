@@ -1,6 +1,7 @@
 import "server-only";
 import type { NextAuthOptions } from "next-auth";
 import CredentialsProvider from "next-auth/providers/credentials";
+import { getSequelize } from "@/lib/db";
 import { isDatabaseUnavailable } from "@/lib/db/unavailable";
 import { env } from "@/lib/env";
 import { accountForTicket, authenticate } from "./accounts";
@@ -8,6 +9,25 @@ import { readSignInTicket } from "./ticket";
 import { clientIp } from "./client-ip";
 import { sameOriginRedirect } from "./return-path";
 import { SignInSchema } from "./schemas";
+import { User } from "@/models/user";
+
+/**
+ * Whether the app has ended a session signed in at `authAt` (ms): the account is gone, or its password changed
+ * after that sign-in. A database that cannot answer ends nothing here (getSessionUser asks again and says the
+ * database is down), so a short outage signs nobody out.
+ */
+export async function sessionEnded(userId: string | undefined, authAt: number | undefined): Promise<boolean> {
+  if (!userId) return true;
+  try {
+    getSequelize();
+    const user = await User.findByPk(userId, { attributes: ["id", "passwordChangedAt"] });
+    if (!user) return true;
+    return Boolean(user.passwordChangedAt && (authAt ?? 0) < user.passwordChangedAt.getTime());
+  } catch (err) {
+    if (isDatabaseUnavailable(err)) return false;
+    throw err;
+  }
+}
 
 /** A session lasts 14 days from sign-in; it is not extended by use. */
 export const SESSION_MAX_AGE_SECONDS = 14 * 24 * 60 * 60;
@@ -75,7 +95,10 @@ export function authOptions(): NextAuthOptions {
         }
         return token;
       },
+      // next-auth's session endpoint (GET /api/auth/session) answers with what this returns: an ended session
+      // answers as no session at all ({}), as it does for a visitor who never signed in.
       async session({ session, token }) {
+        if (await sessionEnded(token.sub, token.authAt)) return {} as typeof session;
         session.user = { id: token.sub ?? "", email: token.email ?? null, name: token.name ?? null };
         session.authAt = token.authAt ?? 0;
         return session;

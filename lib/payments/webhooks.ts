@@ -32,11 +32,25 @@ export interface HandledEvent {
  */
 export function verifyStripeEvent(rawBody: string, signature: string | null, stripe: Stripe = getStripe()): Stripe.Event {
   if (!signature) throw new HttpError(400, "missing Stripe-Signature header");
+  let event: Stripe.Event;
   try {
-    return stripe.webhooks.constructEvent(rawBody, signature, env().STRIPE_WEBHOOK_SECRET);
+    event = stripe.webhooks.constructEvent(rawBody, signature, env().STRIPE_WEBHOOK_SECRET);
   } catch {
     throw new HttpError(400, "the Stripe signature does not match this payload");
   }
+  if (!isEventShaped(event)) throw new HttpError(400, "the signed body is not a Stripe event (it needs id, type, created and data.object)");
+  return event;
+}
+
+/** A signed body is still checked for an event's envelope before any of it is read. */
+function isEventShaped(value: unknown): value is Stripe.Event {
+  if (typeof value !== "object" || value === null || Array.isArray(value)) return false;
+  const e = value as Record<string, unknown>;
+  if (typeof e.id !== "string" || e.id === "" || typeof e.type !== "string" || typeof e.created !== "number" || !Number.isFinite(e.created)) return false;
+  const data = e.data as Record<string, unknown> | null | undefined;
+  if (typeof data !== "object" || data === null) return false;
+  const object = data.object as Record<string, unknown> | null | undefined;
+  return typeof object === "object" && object !== null && !Array.isArray(object) && typeof object.id === "string";
 }
 
 const idOf = (v: string | { id: string } | null | undefined): string | null => (v == null ? null : typeof v === "string" ? v : v.id);

@@ -44,17 +44,34 @@ describe.skipIf(!TEST_DB)("rate limits kept in PostgreSQL", () => {
     expect((await hitAll([a, b])).allowed).toBe(false);
   });
 
-  test("sign-in: after the per-address limit even the right password is refused", async () => {
+  test("sign-in: ten wrong passwords do not lock the owner out; the right one gets in at once", async () => {
     const user = await makeUser({ password: "the-right-password" });
-    // Two wrong tries through the real flow, the rest of the allowance spent directly on the same counter.
-    for (let i = 0; i < 2; i++) {
+    const attacker = uniqueIp();
+    for (let i = 0; i < LIMITS.signInPerEmail.max; i++) {
+      expect(await authenticate(user.email, "a-wrong-password", attacker)).toEqual({ ok: false, reason: "invalid" });
+    }
+    // The owner, on their own device, with the right password: in, without waiting 15 minutes.
+    expect((await authenticate(user.email.toUpperCase(), "the-right-password", uniqueIp())).ok).toBe(true);
+    // Even from the address that made the ten wrong tries, the right password is checked once.
+    expect((await authenticate(user.email, "the-right-password", attacker)).ok).toBe(true);
+  });
+
+  test("sign-in: past the per-address limit a guesser gets one check per client per 2 minutes, and 30 in all", async () => {
+    const user = await makeUser({ password: "the-right-password" });
+    const attacker = uniqueIp();
+    for (let i = 0; i < LIMITS.signInPerEmail.max; i++) await authenticate(user.email, "a-wrong-password", attacker);
+    // The slow check: one more guess from this client is checked, the next is refused, even when it is right.
+    expect(await authenticate(user.email, "another-wrong-password", attacker)).toEqual({ ok: false, reason: "invalid" });
+    const blocked = await authenticate(user.email, "the-right-password", attacker);
+    expect(blocked.ok === false && blocked.reason).toBe("rate-limited");
+    expect(blocked.ok === false && blocked.reason === "rate-limited" && blocked.retryAfterSeconds).toBeGreaterThan(60);
+    // Many clients together: 30 slow checks, then every client is refused (the owner too, until the window ends).
+    // (The refused try above counted too: two of the 30 are spent.)
+    for (let i = 2; i < LIMITS.signInLockedPerEmail.max; i++) {
       expect(await authenticate(user.email, "a-wrong-password", uniqueIp())).toEqual({ ok: false, reason: "invalid" });
     }
-    const [perEmail] = limitsFor("sign-in", user.email, uniqueIp());
-    for (let i = 2; i < LIMITS.signInPerEmail.max; i++) await hit(perEmail);
-    const blocked = await authenticate(user.email.toUpperCase(), "the-right-password", uniqueIp());
-    expect(blocked.ok === false && blocked.reason).toBe("rate-limited");
-    expect(blocked.ok === false && blocked.reason === "rate-limited" && blocked.retryAfterSeconds).toBeGreaterThan(0);
+    const spent = await authenticate(user.email, "a-wrong-password", uniqueIp());
+    expect(spent.ok === false && spent.reason).toBe("rate-limited");
   });
 
   test("sign-in: right passwords give their attempt back; only failures use up the allowance", async () => {
@@ -65,11 +82,9 @@ describe.skipIf(!TEST_DB)("rate limits kept in PostgreSQL", () => {
     // One try left on the address's counter: three right passwords in a row all get in.
     for (let i = 0; i < 3; i++) expect((await authenticate(user.email, "the-right-password", ip)).ok).toBe(true);
     expect(await authenticate(user.email, "a-wrong-password", ip)).toEqual({ ok: false, reason: "invalid" });
-    const blocked = await authenticate(user.email, "the-right-password", ip);
-    expect(blocked.ok === false && blocked.reason).toBe("rate-limited");
     const ipCount = await hit({ ...perIp, max: 1000 });
-    // The per-client counter holds the one failure, the refused try and this probe.
-    expect(ipCount.count).toBe(3);
+    // The per-client counter holds the one failure and this probe.
+    expect(ipCount.count).toBe(2);
   });
 
   test("sign-in: one client address trying many addresses is stopped by the per-client limit", async () => {

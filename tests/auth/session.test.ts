@@ -95,3 +95,20 @@ describe.skipIf(!TEST_DB)("role changes by an admin", () => {
     expect(await statusOf(() => changeRole(actor, target.id, "admin"))).toBe(403);
   });
 });
+
+describe.skipIf(!TEST_DB)("next-auth's session callback (what GET /api/auth/session answers)", () => {
+  test("answers no session once the password changed after sign-in, and the user for a later sign-in", async () => {
+    const { authOptions } = await import("@/lib/auth/options");
+    const callback = authOptions().callbacks!.session!;
+    const user = await makeUser();
+    const answer = async (authAt: number) =>
+      (await callback({ session: { expires: new Date(Date.now() + 60_000).toISOString() }, token: { sub: user.id, email: user.email, name: user.name, authAt } } as never)) as unknown as Record<string, unknown>;
+    const signedIn = Date.now() - 60_000;
+    expect(((await answer(signedIn)).user as { id: string }).id).toBe(user.id);
+    await user.update({ passwordChangedAt: new Date() });
+    expect(await answer(signedIn)).toEqual({});
+    expect(((await answer(Date.now() + 1)).user as { id: string }).id).toBe(user.id);
+    await user.destroy();
+    expect(await answer(Date.now() + 1)).toEqual({});
+  });
+});

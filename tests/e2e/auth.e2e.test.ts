@@ -127,11 +127,16 @@ describe("account journey", () => {
     await signIn(page, "dee@hollisrowe.test", "builder-demo-pass");
     await page.waitForURL(/\/admin\/users$/);
     await page.getByTestId("not-allowed").waitFor();
+    // The page says so, and the status says so too: 403 on every admin page for a builder's session.
+    for (const path of ["/admin", "/admin/users", "/admin/tables", "/admin/tables/history"]) {
+      expect((await page.request.get(path, { maxRedirects: 0 })).status(), path).toBe(403);
+    }
 
     const admin = await session.open("/sign-in?callbackUrl=%2Fadmin%2Fusers");
     await signIn(admin.page, "admin@spanlark.test", "admin-demo-pass");
     await admin.page.waitForURL(/\/admin\/users$/);
     await admin.page.getByTestId("user-list").waitFor();
+    expect((await admin.page.request.get("/admin/users", { maxRedirects: 0 })).status()).toBe(200);
     await admin.goto("/admin/users?q=hollisrowe");
     expect(await admin.page.getByTestId("user-list").getByRole("listitem").count()).toBe(2);
     await goto("/account");

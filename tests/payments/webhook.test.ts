@@ -70,6 +70,20 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
     expect(await roleOf(userId)).toBe("builder");
   });
 
+  test.each<[string, unknown]>([
+    ["a JSON array", [1, 2]],
+    ["a bare number", 42],
+    ["null", null],
+    ["an object with no type", { id: "evt_x", created: 1, data: { object: { id: "sub_x" } } }],
+    ["an event without data.object", { id: "evt_y", type: "customer.subscription.created", created: 1, data: {} }],
+  ])("a correctly signed body that is not an event (%s) is a 400, not a 500, and records nothing", async (_label, payload) => {
+    const before = await StripeEvent.count();
+    const res = await deliver(payload as Record<string, unknown>);
+    expect(res.status).toBe(400);
+    expect(String(res.body.error)).toMatch(/not a Stripe event/);
+    expect(await StripeEvent.count()).toBe(before);
+  });
+
   test("a signed body that was changed after signing is a 400", async () => {
     const { customer } = await makeCustomer();
     const event = eventObject("customer.subscription.created", subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd: now() + DAY }), now());
