@@ -10,7 +10,12 @@ const COMPONENTS = rule("lib/ never imports components/: move the shared piece i
   "@/components/**",
   "**/components/**",
 ]);
-const MODELS = rule("components/ and app/ never import models/: take the type from lib/ (e.g. lib/auth/role-list).", ["@/models", "@/models/**", "**/models", "**/models/**"]);
+const MODELS = rule("components/ and app/ never import models/: take the type from lib/ (e.g. lib/auth/role-list).", [
+  "@/models",
+  "@/models/**",
+  "**/models",
+  "**/models/**",
+]);
 const DEV_TOOLS = rule("Shipped code never imports the dev tools in scripts/ (the Stripe stand-in, the CLI, benchmarks).", ["@/scripts/**", "**/scripts/**"]);
 const FRAMEWORK = rule("lib/solver and lib/flow are pure TypeScript: no framework, database or model (they run in the browser, the CLI and tests).", [
   "next",

@@ -3,7 +3,9 @@ import { fileURLToPath } from "node:url";
 
 // Unit and integration tests. Browser tests live in tests/e2e and run through Playwright.
 export default defineConfig({
-  resolve: { alias: { "@": fileURLToPath(new URL("./", import.meta.url)), "server-only": fileURLToPath(new URL("./tests/support/server-only.ts", import.meta.url)) } },
+  resolve: {
+    alias: { "@": fileURLToPath(new URL("./", import.meta.url)), "server-only": fileURLToPath(new URL("./tests/support/server-only.ts", import.meta.url)) },
+  },
   test: {
     include: ["tests/**/*.test.ts", "tests/**/*.test.tsx"],
     exclude: ["tests/e2e/**", "node_modules/**"],

@@ -50,8 +50,8 @@ export default function PageError({ error, retry }: { error: unknown; retry: () 
           Try again in a minute
         </h1>
         <p className="text-lg">
-          Spanlark cannot reach its saved records right now: jobs, sheets and accounts are out of reach for a moment.
-          This page reloads by itself when they are back.
+          Spanlark cannot reach its saved records right now: jobs, sheets and accounts are out of reach for a moment. This page reloads by itself when they are
+          back.
         </p>
         <p className="text-lg">Sizing a member still works: what you enter in the sizing steps is kept on this phone.</p>
         <div className="flex flex-col gap-2 sm:flex-row">
@@ -73,8 +73,7 @@ export default function PageError({ error, retry }: { error: unknown; retry: () 
         This page did not load
       </h1>
       <p className="text-lg">
-        Something went wrong on our side, not with what you typed. What you entered in the sizing steps is kept on this
-        phone, so trying again loses nothing.
+        Something went wrong on our side, not with what you typed. What you entered in the sizing steps is kept on this phone, so trying again loses nothing.
       </p>
       {reference ? (
         <p className="text-ink-soft">

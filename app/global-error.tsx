@@ -18,10 +18,7 @@ export default function GlobalError({ retry }: { error: unknown; retry: () => vo
         <title>Spanlark is having trouble</title>
         <main style={{ maxWidth: "36rem", margin: "0 auto", padding: "2rem 1rem" }}>
           <h1 style={{ fontSize: "1.75rem", margin: "0 0 1rem" }}>Spanlark is having trouble</h1>
-          <p>
-            Something went wrong on our side. What you entered in the sizing steps is kept on this phone. Try again in a
-            moment.
-          </p>
+          <p>Something went wrong on our side. What you entered in the sizing steps is kept on this phone. Try again in a moment.</p>
           <button
             type="button"
             onClick={() => retry()}

@@ -13,8 +13,7 @@ export default function NotFound() {
         Nothing here
       </h1>
       <p className="text-lg">
-        This page does not exist, or it has been taken down. A crew link stops working when its owner revokes it or
-        it runs past its date.
+        This page does not exist, or it has been taken down. A crew link stops working when its owner revokes it or it runs past its date.
       </p>
       <div className="flex flex-col gap-2 sm:flex-row">
         <ButtonLink href="/size" size="lg">

@@ -36,7 +36,9 @@ export const BODY_LIMITS = {
 } as const;
 
 function sizeText(bytes: number): string {
-  return bytes >= 1024 * 1024 ? `${(bytes / (1024 * 1024)).toLocaleString("en-US", { maximumFractionDigits: 1 })} MB` : `${Math.ceil(bytes / 1024).toLocaleString("en-US")} KB`;
+  return bytes >= 1024 * 1024
+    ? `${(bytes / (1024 * 1024)).toLocaleString("en-US", { maximumFractionDigits: 1 })} MB`
+    : `${Math.ceil(bytes / 1024).toLocaleString("en-US")} KB`;
 }
 
 /** 413, with the cap in words and in bytes. */
@@ -108,7 +110,10 @@ export function invalidInput(issues: FieldIssue[]): Response {
  * A public solver route's request body as JSON, or its refusal: 415 unless declared JSON, 413 over the engine routes' cap
  * (BODY_LIMITS.engine), 400 when the body is not JSON (path "" names the whole body).
  */
-export async function readJsonBody(req: Request, limitBytes: number = BODY_LIMITS.engine): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
+export async function readJsonBody(
+  req: Request,
+  limitBytes: number = BODY_LIMITS.engine,
+): Promise<{ ok: true; body: unknown } | { ok: false; response: Response }> {
   // 415 before reading anything unless the body is declared JSON (lib/security/origin.ts).
   const wrongType = contentTypeRefusal(req.method, new URL(req.url).pathname, req.headers);
   if (wrongType) return { ok: false, response: Response.json({ error: wrongType.error }, { status: wrongType.status }) };
@@ -155,10 +160,7 @@ export function route<C>(handler: Handler<C>): Handler<C> {
       }
     }
     res.headers.set("x-request-id", requestId);
-    logger.info(
-      { requestId, method: req.method, path: url.pathname, status: res.status, ms: Math.round(performance.now() - started) },
-      "request",
-    );
+    logger.info({ requestId, method: req.method, path: url.pathname, status: res.status, ms: Math.round(performance.now() - started) }, "request");
     return res;
   };
 }

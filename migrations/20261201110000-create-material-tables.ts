@@ -132,8 +132,27 @@ export async function up({ context: { queryInterface, sequelize } }: { context: 
     );
 
     const shapeColumns = [
-      "w_plf", "area_in2", "d_in", "tw_in", "bf_in", "tf_in", "kdes_in", "ix_in4", "zx_in3", "sx_in3", "rx_in",
-      "iy_in4", "zy_in3", "sy_in3", "ry_in", "j_in4", "cw_in6", "rts_in", "ho_in", "bf_2tf", "h_tw",
+      "w_plf",
+      "area_in2",
+      "d_in",
+      "tw_in",
+      "bf_in",
+      "tf_in",
+      "kdes_in",
+      "ix_in4",
+      "zx_in3",
+      "sx_in3",
+      "rx_in",
+      "iy_in4",
+      "zy_in3",
+      "sy_in3",
+      "ry_in",
+      "j_in4",
+      "cw_in6",
+      "rts_in",
+      "ho_in",
+      "bf_2tf",
+      "h_tw",
     ];
     await queryInterface.createTable(
       "steel_shapes",

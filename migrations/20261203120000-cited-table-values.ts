@@ -14,8 +14,7 @@ export async function up(_: { context: MigrationContext }): Promise<void> {
 export async function down({ context: { sequelize } }: { context: MigrationContext }): Promise<void> {
   // Takes back the version this migration published while it is still the newest; a version published
   // after it was built on it, and is left alone (history is never rewritten from the middle).
-  await sequelize.query(
-    `DELETE FROM table_versions WHERE source = 'seed' AND note LIKE :note AND number = (SELECT MAX(number) FROM table_versions)`,
-    { replacements: { note: `${CITED_UPDATE_NOTE}%` } },
-  );
+  await sequelize.query(`DELETE FROM table_versions WHERE source = 'seed' AND note LIKE :note AND number = (SELECT MAX(number) FROM table_versions)`, {
+    replacements: { note: `${CITED_UPDATE_NOTE}%` },
+  });
 }

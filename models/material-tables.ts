@@ -10,7 +10,18 @@ import { initSteelShape, SteelShapeRow } from "./steel-shape";
 import { initStockLength, StockLengthModel } from "./stock-length";
 import { initTableVersion, TableVersion, TABLE_VERSION_SOURCES, type TableVersionSource } from "./table-version";
 
-export { CostRowModel, EngineeredProductRow, IJoistRow, SawnSizeRow, SawnValueRow, SizeFactorRow, SteelGradeRow, SteelShapeRow, StockLengthModel, TableVersion };
+export {
+  CostRowModel,
+  EngineeredProductRow,
+  IJoistRow,
+  SawnSizeRow,
+  SawnValueRow,
+  SizeFactorRow,
+  SteelGradeRow,
+  SteelShapeRow,
+  StockLengthModel,
+  TableVersion,
+};
 export { TABLE_VERSION_SOURCES, type TableVersionSource };
 
 /** The material table models: one version table and one row table per material table. */

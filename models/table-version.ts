@@ -1,11 +1,4 @@
-import {
-  DataTypes,
-  Model,
-  type CreationOptional,
-  type InferAttributes,
-  type InferCreationAttributes,
-  type Sequelize,
-} from "sequelize";
+import { DataTypes, Model, type CreationOptional, type InferAttributes, type InferCreationAttributes, type Sequelize } from "sequelize";
 
 export type TableVersionSource = "seed" | "edit" | "import" | "restore";
 export const TABLE_VERSION_SOURCES: readonly TableVersionSource[] = ["seed", "edit", "import", "restore"];

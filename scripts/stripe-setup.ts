@@ -19,7 +19,9 @@ if (!parsed.success) {
 }
 
 const stripe = createStripeClient(connectionFromEnv(parsed.data));
-const where = parsed.data.STRIPE_API_HOST ? `${parsed.data.STRIPE_API_PROTOCOL ?? "https"}://${parsed.data.STRIPE_API_HOST}:${parsed.data.STRIPE_API_PORT ?? ""}` : "Stripe";
+const where = parsed.data.STRIPE_API_HOST
+  ? `${parsed.data.STRIPE_API_PROTOCOL ?? "https"}://${parsed.data.STRIPE_API_HOST}:${parsed.data.STRIPE_API_PORT ?? ""}`
+  : "Stripe";
 const deadline = Date.now() + 15_000;
 for (;;) {
   try {

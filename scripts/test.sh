@@ -1,5 +1,5 @@
 #!/usr/bin/env bash
-# `npm test`: type check, lint, unit and integration tests (vitest, against a fresh PostgreSQL database),
+# `npm test`: type check, lint, format check, unit and integration tests (vitest, against a fresh PostgreSQL database),
 # then browser tests in Debian's Chromium against the built app. Ends with one line totalling every runner:
 # "N passed, N failed, N skipped"; exits non-zero when anything failed.
 # `npm test -- --quick` skips the build and the browser tests.
@@ -42,6 +42,9 @@ if node_modules/.bin/tsc --noEmit -p .; then record typecheck 0; else record typ
 
 log "lint (eslint)"
 if node_modules/.bin/eslint . --max-warnings=0; then record lint 0; else record lint 1; fi
+
+log "format (prettier --check)"
+if node_modules/.bin/prettier --check . --log-level=warn; then record format 0; else record format 1; fi
 
 log "unit and integration tests (vitest)"
 node_modules/.bin/tsx scripts/db.ts migrate >/dev/null || record migrate 1

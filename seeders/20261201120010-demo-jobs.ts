@@ -31,13 +31,29 @@ function demoMembers(job: "marsh" | "orchard"): DemoMember[] {
       state: defaultFlowState("deck-beam"),
       details: { postHeightFt: 4, postSize: "6x6", footingDiameterIn: 12, footingDepthIn: 36 },
     },
-    { key: "dj1", label: "DJ1 deck joists", state: withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5), carriedBy: "db1", details: { runWidthFt: 12 } },
+    {
+      key: "dj1",
+      label: "DJ1 deck joists",
+      state: withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5),
+      carriedBy: "db1",
+      details: { runWidthFt: 12 },
+    },
   ];
 }
 
 const JOBS = [
-  { key: "marsh" as const, name: "Marsh Lane addition", siteAddress: "14 Marsh Lane, Larkfield", notes: "Single-storey kitchen and family room addition on the north side." },
-  { key: "orchard" as const, name: "Orchard Row deck", siteAddress: "7 Orchard Row, Larkfield", notes: "Ground-level deck off the back door, treated Southern Pine." },
+  {
+    key: "marsh" as const,
+    name: "Marsh Lane addition",
+    siteAddress: "14 Marsh Lane, Larkfield",
+    notes: "Single-storey kitchen and family room addition on the north side.",
+  },
+  {
+    key: "orchard" as const,
+    name: "Orchard Row deck",
+    siteAddress: "7 Orchard Row, Larkfield",
+    notes: "Ground-level deck off the back door, treated Southern Pine.",
+  },
 ];
 
 export async function up({ context: { sequelize } }: { context: MigrationContext }): Promise<void> {
@@ -95,8 +111,8 @@ export async function up({ context: { sequelize } }: { context: MigrationContext
 }
 
 export async function down({ context: { sequelize } }: { context: MigrationContext }): Promise<void> {
-  await sequelize.query(
-    "DELETE FROM jobs WHERE name IN (:names) AND owner_id IN (SELECT id FROM users WHERE email IN (:emails))",
-    { replacements: { names: JOBS.map((j) => j.name), emails: OWNERS }, type: QueryTypes.DELETE },
-  );
+  await sequelize.query("DELETE FROM jobs WHERE name IN (:names) AND owner_id IN (SELECT id FROM users WHERE email IN (:emails))", {
+    replacements: { names: JOBS.map((j) => j.name), emails: OWNERS },
+    type: QueryTypes.DELETE,
+  });
 }

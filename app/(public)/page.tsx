@@ -20,7 +20,7 @@ const KIND_NOTES: Readonly<Record<MemberKind, string>> = {
 };
 
 const STEPS: ReadonlyArray<{ title: string; body: string }> = [
-  { title: "Say what you are sizing", body: "Pick the member, then type the span the way you measured it: 12' 6\", 12-6 or 150\"." },
+  { title: "Say what you are sizing", body: 'Pick the member, then type the span the way you measured it: 12\' 6", 12-6 or 150".' },
   { title: "Say what it carries", body: "Floor, wall, roof or snow, and how far apart the joists or the supports are." },
   { title: "Build what works", body: "Sizes that pass, best first, each check shown as a bar. Save them to a job and send the crew a link." },
 ];
@@ -34,8 +34,8 @@ export default function HomePage() {
           Size the joist, header or beam in front of you.
         </h1>
         <p className="max-w-prose text-xl text-ink-soft">
-          Spanlark works out which floor joists, headers, beams, deck framing and rafters carry your loads — sawn
-          lumber, built-up plies, engineered wood or steel — and tells you what to build, right on your phone.
+          Spanlark works out which floor joists, headers, beams, deck framing and rafters carry your loads — sawn lumber, built-up plies, engineered wood or
+          steel — and tells you what to build, right on your phone.
         </p>
         <div>
           <ButtonLink href="/size" size="lg" icon={<TapeIcon className="h-6 w-6" />} className="w-full sm:w-auto">
@@ -87,8 +87,7 @@ export default function HomePage() {
           What Spanlark leaves to you
         </h2>
         <p className="max-w-prose">
-          Spanlark checks the member itself: bending, shear, deflection and bearing. It does not check these — look
-          at them on site, or ask an engineer:
+          Spanlark checks the member itself: bending, shear, deflection and bearing. It does not check these — look at them on site, or ask an engineer:
         </p>
         <ul className="grid list-disc gap-1 pl-6 sm:grid-cols-2">
           {NOT_CHECKED.map((item) => (

@@ -34,12 +34,7 @@ export function ProfileForm({ name, company }: ProfileFormProps) {
 
   return (
     <form onSubmit={form.handleSubmit} noValidate className="flex flex-col gap-4">
-      <TextField
-        label="Your name"
-        autoComplete="name"
-        error={form.touched.name ? form.errors.name : undefined}
-        {...form.getFieldProps("name")}
-      />
+      <TextField label="Your name" autoComplete="name" error={form.touched.name ? form.errors.name : undefined} {...form.getFieldProps("name")} />
       <TextField
         label="Company"
         hint="Shown on job sheets you print or share."

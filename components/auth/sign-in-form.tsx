@@ -37,9 +37,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
       setResent("idle");
       const email = values.email.trim();
       const target = safeReturnPath(callbackUrl, window.location.origin);
-      const result = await signIn("credentials", { email, password: values.password, redirect: false, callbackUrl: target }).catch(
-        () => undefined,
-      );
+      const result = await signIn("credentials", { email, password: values.password, redirect: false, callbackUrl: target }).catch(() => undefined);
       if (!result) return setProblem({ kind: "offline" });
       if (result.ok && !result.error) {
         window.location.assign(target);
@@ -64,9 +62,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
     <form onSubmit={form.handleSubmit} noValidate className="flex flex-col gap-4">
       {notice && !problem ? <FormAlert tone="done">{notice}</FormAlert> : null}
       {problem?.kind === "invalid" ? <FormAlert tone="error">That e-mail and password do not match an account. Check both and try again.</FormAlert> : null}
-      {problem?.kind === "limited" ? (
-        <FormAlert tone="error">Too many tries. Wait 15 minutes and try again, or choose a new password below.</FormAlert>
-      ) : null}
+      {problem?.kind === "limited" ? <FormAlert tone="error">Too many tries. Wait 15 minutes and try again, or choose a new password below.</FormAlert> : null}
       {problem?.kind === "offline" ? <FormAlert tone="error">No connection. Check your signal and try again.</FormAlert> : null}
       {problem?.kind === "unavailable" ? (
         <FormAlert tone="error">Spanlark cannot reach its saved records right now. Try again in a minute; sizing still works without signing in.</FormAlert>
@@ -85,13 +81,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
         </FormAlert>
       ) : null}
       <EmailField error={fieldError("email")} {...form.getFieldProps("email")} />
-      <TextField
-        label="Password"
-        type="password"
-        autoComplete="current-password"
-        error={fieldError("password")}
-        {...form.getFieldProps("password")}
-      />
+      <TextField label="Password" type="password" autoComplete="current-password" error={fieldError("password")} {...form.getFieldProps("password")} />
       <Button type="submit" size="lg" fullWidth loading={form.isSubmitting}>
         Sign in
       </Button>
@@ -99,7 +89,10 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
         <Link href="/forgot-password" className="inline-flex min-h-touch items-center justify-center font-bold">
           Forgot your password?
         </Link>
-        <Link href={callbackUrl ? `/sign-up?callbackUrl=${encodeURIComponent(callbackUrl)}` : "/sign-up"} className="inline-flex min-h-touch items-center justify-center font-bold">
+        <Link
+          href={callbackUrl ? `/sign-up?callbackUrl=${encodeURIComponent(callbackUrl)}` : "/sign-up"}
+          className="inline-flex min-h-touch items-center justify-center font-bold"
+        >
           No account yet? Open one
         </Link>
       </p>

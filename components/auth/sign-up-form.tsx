@@ -44,8 +44,8 @@ export function SignUpForm({ callbackUrl }: SignUpFormProps = {}) {
       <div className="flex flex-col gap-4" data-testid="sign-up-sent">
         <FormAlert tone="done">Check your e-mail</FormAlert>
         <p>
-          We sent a message to <strong className="break-all">{sentTo}</strong>. Open the link in it to confirm your address, then sign
-          in. The link works for 48 hours.
+          We sent a message to <strong className="break-all">{sentTo}</strong>. Open the link in it to confirm your address, then sign in. The link works for 48
+          hours.
         </p>
         <p className="text-ink-soft">Nothing after a few minutes? Look in the spam folder, or send it again.</p>
         <Button

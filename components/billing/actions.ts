@@ -34,7 +34,10 @@ export async function startCheckoutAction(_previous: BillingActionResult, form: 
 
 // openPortalAction — open Stripe's billing portal to cancel or resume, any signed-in account with a customer
 export async function openPortalAction(_previous: BillingActionResult, _form: FormData): Promise<BillingActionResult> {
-  const result = await runAction({}, { schema: z.object({}), failed: "The subscription settings could not be opened.", failedStatus: 502, run: (user) => openBillingPortal(user) });
+  const result = await runAction(
+    {},
+    { schema: z.object({}), failed: "The subscription settings could not be opened.", failedStatus: 502, run: (user) => openBillingPortal(user) },
+  );
   if (!result.ok) return result;
   redirect(result.url);
 }

@@ -4,11 +4,7 @@ import { formatMoney, FREE_LIMITS, PLANS, type PlanId } from "@/lib/payments/pla
 import { startCheckoutAction } from "./actions";
 import { BillingActionForm } from "./action-form";
 
-const PAID_FEATURES = [
-  "Save job sheets and print them again whenever you need",
-  "As many saved jobs as you like",
-  "As many live crew links as you like",
-];
+const PAID_FEATURES = ["Save job sheets and print them again whenever you need", "As many saved jobs as you like", "As many live crew links as you like"];
 
 export type PlanCardsProps = {
   /** "subscribe": buttons start checkout; "sign-in": they lead to sign-in; "none": the user already subscribes. */
@@ -41,7 +37,12 @@ function PlanCard({ plan, mode, signInHref, highlight, returnJobId }: { plan: Pl
       </ul>
       <div className="mt-auto pt-2">
         {mode === "subscribe" ? (
-          <BillingActionForm action={startCheckoutAction} fields={returnJobId ? { plan, job: returnJobId } : { plan }} label={`Subscribe ${p.name.toLowerCase()}`} testId={`subscribe-${plan}`} />
+          <BillingActionForm
+            action={startCheckoutAction}
+            fields={returnJobId ? { plan, job: returnJobId } : { plan }}
+            label={`Subscribe ${p.name.toLowerCase()}`}
+            testId={`subscribe-${plan}`}
+          />
         ) : mode === "sign-in" ? (
           <ButtonLink href={signInHref ?? "/sign-in"} size="lg" fullWidth>
             Sign in to subscribe

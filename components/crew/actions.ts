@@ -19,7 +19,13 @@ export async function createCrewLink(input: unknown): Promise<CrewLinkResult> {
     failed: "The crew link could not be made.",
     run: async (user, data) => {
       const limits = await getPlanLimits(user);
-      const link = await createLink({ ownerId: user.id, jobId: data.jobId, label: data.label, expiresInDays: data.expiresInDays, activeLimit: limits.activeCrewLinks });
+      const link = await createLink({
+        ownerId: user.id,
+        jobId: data.jobId,
+        label: data.label,
+        expiresInDays: data.expiresInDays,
+        activeLimit: limits.activeCrewLinks,
+      });
       return { link };
     },
     refresh: (_done, data) => [`/jobs/${data.jobId}`],

@@ -159,7 +159,12 @@ function LinkRow({ link, onChanged, jobName, qrSvg }: { link: CrewLinkView; onCh
             </Button>
           ) : null}
           {link.url ? (
-            <a href={`/api/crew/${link.url.split("/crew/")[1]}/pdf`} download className={buttonClasses({ variant: "secondary" })} data-testid="crew-link-board-pdf">
+            <a
+              href={`/api/crew/${link.url.split("/crew/")[1]}/pdf`}
+              download
+              className={buttonClasses({ variant: "secondary" })}
+              data-testid="crew-link-board-pdf"
+            >
               Site board PDF
             </a>
           ) : null}
@@ -171,13 +176,27 @@ function LinkRow({ link, onChanged, jobName, qrSvg }: { link: CrewLinkView; onCh
       {live && qrSvg && qrOpen ? (
         <figure className="flex flex-col items-center gap-2 rounded-card border-2 border-rule bg-white p-3" data-testid="crew-link-qr">
           {/* the SVG is drawn by the qrcode package from our own link: no outside markup */}
-          <div className="h-56 w-56 [&>svg]:h-full [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: qrSvg }} role="img" aria-label={`QR code of the crew link for ${jobName}`} />
+          <div
+            className="h-56 w-56 [&>svg]:h-full [&>svg]:w-full"
+            dangerouslySetInnerHTML={{ __html: qrSvg }}
+            role="img"
+            aria-label={`QR code of the crew link for ${jobName}`}
+          />
           <figcaption className="text-center text-sm text-ink-soft">Point a phone&apos;s camera at it to open the schedule.</figcaption>
         </figure>
       ) : null}
       {live && mailOpen ? (
         <form onSubmit={send} className="flex flex-col gap-2" noValidate>
-          <TextField label="Send to" type="email" inputMode="email" autoComplete="email" value={to} onChange={(e) => setTo(e.target.value)} required error={mailError ?? undefined} />
+          <TextField
+            label="Send to"
+            type="email"
+            inputMode="email"
+            autoComplete="email"
+            value={to}
+            onChange={(e) => setTo(e.target.value)}
+            required
+            error={mailError ?? undefined}
+          />
           <TextField label="Note (optional)" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} />
           <Button type="submit" loading={pending} className="w-full sm:w-fit">
             Send

@@ -72,8 +72,16 @@ export function chainPoints(chain: BezierChain): Point[] {
 export type DiagramScales = { x: (ft: number) => number; y: (value: number) => number };
 
 /** The scales of one diagram: x over the member, y over the values (deflection drawn downward, as the beam bends). */
-export function diagramScales(lengthFt: number, range: { min: number; max: number }, quantity: DiagramQuantity, width = DIAGRAM_WIDTH, height = DIAGRAM_HEIGHT): DiagramScales {
-  const x = scaleLinear().domain([0, lengthFt]).range([PAD.left, width - PAD.right]);
+export function diagramScales(
+  lengthFt: number,
+  range: { min: number; max: number },
+  quantity: DiagramQuantity,
+  width = DIAGRAM_WIDTH,
+  height = DIAGRAM_HEIGHT,
+): DiagramScales {
+  const x = scaleLinear()
+    .domain([0, lengthFt])
+    .range([PAD.left, width - PAD.right]);
   const span = Math.max(range.max - range.min, 1e-12);
   const lo = range.min - span * 0.04;
   const hi = range.max + span * 0.04;
@@ -103,8 +111,16 @@ const defaultFormat = (v: number) => Math.round(v).toLocaleString("en-US");
 /** One exact diagram (shear, moment or deflection) on squared paper, with its extremes labelled. */
 export function BeamDiagram({ title, quantity, segments, extremes, unit, supports, format = defaultFormat, subtitle, className }: BeamDiagramProps) {
   const lengthFt = segments.length > 0 ? segments[segments.length - 1].x1 : 1;
-  const chain = diagramChain(segments, quantity, extremes.map((e) => e.x));
-  const range = valueRange(segments, quantity, extremes.map((e) => e.x));
+  const chain = diagramChain(
+    segments,
+    quantity,
+    extremes.map((e) => e.x),
+  );
+  const range = valueRange(
+    segments,
+    quantity,
+    extremes.map((e) => e.x),
+  );
   const scales = diagramScales(lengthFt, range, quantity);
   const d = diagramPath(chain, scales);
   const tone = TONES[quantity];
@@ -127,9 +143,25 @@ export function BeamDiagram({ title, quantity, segments, extremes, unit, support
         <rect width={DIAGRAM_WIDTH} height={DIAGRAM_HEIGHT} fill={INK.paper} />
         <path d={GRID_PATH} stroke={INK.grid} strokeWidth={0.75} fill="none" />
         {supports.map((s, i) => (
-          <line key={i} x1={scales.x(s.x)} x2={scales.x(s.x)} y1={PAD.top - 8} y2={DIAGRAM_HEIGHT - PAD.bottom + 8} stroke={INK.ruleStrong} strokeDasharray="3 4" />
+          <line
+            key={i}
+            x1={scales.x(s.x)}
+            x2={scales.x(s.x)}
+            y1={PAD.top - 8}
+            y2={DIAGRAM_HEIGHT - PAD.bottom + 8}
+            stroke={INK.ruleStrong}
+            strokeDasharray="3 4"
+          />
         ))}
-        <path d={d} fill={tone.fill} fillOpacity={quantity === "deflection" ? 0 : 0.85} stroke={tone.stroke} strokeWidth={2.5} strokeDasharray={tone.dash} data-testid={`diagram-path-${quantity}`} />
+        <path
+          d={d}
+          fill={tone.fill}
+          fillOpacity={quantity === "deflection" ? 0 : 0.85}
+          stroke={tone.stroke}
+          strokeWidth={2.5}
+          strokeDasharray={tone.dash}
+          data-testid={`diagram-path-${quantity}`}
+        />
         <line x1={scales.x(0)} x2={scales.x(lengthFt)} y1={axisY} y2={axisY} stroke={INK.ink} strokeWidth={1.5} />
         {extremes.map((e, i) => {
           const px = scales.x(e.x);

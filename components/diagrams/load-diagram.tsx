@@ -22,11 +22,16 @@ const BAND = 19;
 
 /** The loads on the member: line loads as bands stacked by case (each labelled), point loads as arrows, the supports and their reactions. */
 export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subtitle, className }: LoadDiagramProps) {
-  const x = scaleLinear().domain([0, lengthFt]).range([14, DIAGRAM_WIDTH - 14]);
+  const x = scaleLinear()
+    .domain([0, lengthFt])
+    .range([14, DIAGRAM_WIDTH - 14]);
   const bands = loads.filter((l): l is Extract<Load, { type: "udl" }> => l.type === "udl");
   const linear = loads.filter((l): l is Extract<Load, { type: "linear" }> => l.type === "linear");
   const points = loads.filter((l): l is Extract<Load, { type: "point" }> => l.type === "point");
-  const lines = [...bands.map((b) => ({ from: b.from, to: b.to, w1: b.w, w2: b.w, case: b.case ?? "D" })), ...linear.map((b) => ({ from: b.from, to: b.to, w1: b.w1, w2: b.w2, case: b.case ?? "D" }))];
+  const lines = [
+    ...bands.map((b) => ({ from: b.from, to: b.to, w1: b.w, w2: b.w, case: b.case ?? "D" })),
+    ...linear.map((b) => ({ from: b.from, to: b.to, w1: b.w1, w2: b.w2, case: b.case ?? "D" })),
+  ];
   const r0 = (v: number) => Math.round(v).toLocaleString("en-US");
   const summary = [
     ...lines.map((l) => `${l.case} ${r0(l.w1)}${l.w2 !== l.w1 ? ` to ${r0(l.w2)}` : ""} plf from ${formatFeetInches(l.from)} to ${formatFeetInches(l.to)}`),
@@ -40,7 +45,12 @@ export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subti
         <span className="font-bold text-ink">{title}</span>
         {subtitle ? <span className="text-sm text-graphite">{subtitle}</span> : null}
       </figcaption>
-      <svg viewBox={`0 0 ${DIAGRAM_WIDTH} ${H}`} role="img" aria-label={`${title}. ${summary || "No loads."}`} className="block h-auto w-full rounded-lg border-2 border-rule bg-paper-raised">
+      <svg
+        viewBox={`0 0 ${DIAGRAM_WIDTH} ${H}`}
+        role="img"
+        aria-label={`${title}. ${summary || "No loads."}`}
+        className="block h-auto w-full rounded-lg border-2 border-rule bg-paper-raised"
+      >
         <rect width={DIAGRAM_WIDTH} height={H} fill={INK.paper} />
         {lines.slice(0, 4).map((l, i) => {
           const y = BEAM_Y - 4 - (i + 1) * (BAND + 2);
@@ -48,7 +58,15 @@ export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subti
           const x1 = x(l.to);
           return (
             <g key={`l${i}`}>
-              <rect x={x0} y={y} width={Math.max(2, x1 - x0)} height={BAND} fill={i % 2 === 0 ? INK.grid : INK.spruceLight} stroke={INK.graphite} strokeWidth={1.25} />
+              <rect
+                x={x0}
+                y={y}
+                width={Math.max(2, x1 - x0)}
+                height={BAND}
+                fill={i % 2 === 0 ? INK.grid : INK.spruceLight}
+                stroke={INK.graphite}
+                strokeWidth={1.25}
+              />
               <text x={(x0 + x1) / 2} y={y + BAND - 3} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK.ink}>
                 {`${l.case} ${r0(l.w1)}${l.w2 !== l.w1 ? `–${r0(l.w2)}` : ""} plf`}
               </text>
@@ -65,7 +83,17 @@ export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subti
             <g key={`p${i}`}>
               <path d={`M${px} ${top}V${BEAM_Y - 8}`} stroke={INK.ink} strokeWidth={3} />
               <path d={`M${px} ${BEAM_Y - 2}l-7 -12h14z`} fill={INK.ink} />
-              <text x={px} y={top - 6} textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"} fontSize={16} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
+              <text
+                x={px}
+                y={top - 6}
+                textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"}
+                fontSize={16}
+                fontWeight={700}
+                fill={INK.ink}
+                stroke={INK.paper}
+                strokeWidth={4}
+                paintOrder="stroke"
+              >
                 {`${p.case ?? "D"} ${r0(p.P)} lb`}
               </text>
             </g>
@@ -83,7 +111,14 @@ export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subti
                 <path d={`M${px} ${BEAM_Y + 12}l-11 18h22z`} fill={INK.paper} stroke={INK.ink} strokeWidth={2.5} />
               )}
               {reaction ? (
-                <text x={px} y={BEAM_Y + 50} textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"} fontSize={16} fontWeight={700} fill={INK.ink}>
+                <text
+                  x={px}
+                  y={BEAM_Y + 50}
+                  textAnchor={px < 80 ? "start" : px > DIAGRAM_WIDTH - 80 ? "end" : "middle"}
+                  fontSize={16}
+                  fontWeight={700}
+                  fill={INK.ink}
+                >
                   {`R ${r0(reaction.F)} lb`}
                 </text>
               ) : null}

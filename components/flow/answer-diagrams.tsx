@@ -26,8 +26,24 @@ export function AnswerDiagrams({ check }: AnswerDiagramsProps) {
         reactions={d.service.reactions}
         subtitle={`Reactions under ${d.service.combination.name}`}
       />
-      <BeamDiagram title="Shear V (lb)" subtitle={d.strength.combination.name} quantity="V" unit="lb" segments={d.strength.segments} extremes={d.strength.shear} supports={d.supports} />
-      <BeamDiagram title="Moment M (lb-ft)" subtitle={d.strength.combination.name} quantity="M" unit="lb-ft" segments={d.strength.segments} extremes={d.strength.moment} supports={d.supports} />
+      <BeamDiagram
+        title="Shear V (lb)"
+        subtitle={d.strength.combination.name}
+        quantity="V"
+        unit="lb"
+        segments={d.strength.segments}
+        extremes={d.strength.shear}
+        supports={d.supports}
+      />
+      <BeamDiagram
+        title="Moment M (lb-ft)"
+        subtitle={d.strength.combination.name}
+        quantity="M"
+        unit="lb-ft"
+        segments={d.strength.segments}
+        extremes={d.strength.moment}
+        supports={d.supports}
+      />
       <BeamDiagram
         title="Deflection (in, down)"
         subtitle={d.service.combination.name}

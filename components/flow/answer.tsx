@@ -86,7 +86,17 @@ function Problem({ title, issues, onGoTo }: { title: string; issues: { path: str
   );
 }
 
-function CandidateCard({ candidate, check, chosen, onOpen }: { candidate: SizeCandidateResult; check: CheckOutput | undefined; chosen: boolean; onOpen: () => void }) {
+function CandidateCard({
+  candidate,
+  check,
+  chosen,
+  onOpen,
+}: {
+  candidate: SizeCandidateResult;
+  check: CheckOutput | undefined;
+  chosen: boolean;
+  onOpen: () => void;
+}) {
   const verdict = ratioVerdict(candidate.ratio);
   return (
     <li>
@@ -109,7 +119,9 @@ function CandidateCard({ candidate, check, chosen, onOpen }: { candidate: SizeCa
         </span>
         <span className="flex min-h-[13.5rem] flex-col gap-2">
           {check
-            ? check.checks.map((c) => <RatioBar key={c.name} ratio={c.ratio} label={checkTitle(c.name)} governing={c.name === check.governing} detail={checkDetail(c)} />)
+            ? check.checks.map((c) => (
+                <RatioBar key={c.name} ratio={c.ratio} label={checkTitle(c.name)} governing={c.name === check.governing} detail={checkDetail(c)} />
+              ))
             : Array.from({ length: 4 }, (_, i) => <Skeleton key={i} width="100%" height="2.75rem" />)}
         </span>
         <span className="font-bold text-spruce underline underline-offset-4">Full check, every factor</span>
@@ -150,7 +162,11 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
         </p>
         <div className="min-h-[7.5rem] rounded-card border-2 border-ink bg-paper-raised p-4" aria-live="polite">
           {size.error ? (
-            <Problem title="Spanlark cannot size this yet" issues={size.error.issues.length > 0 ? size.error.issues : [{ path: "", message: size.error.message }]} onGoTo={onGoTo} />
+            <Problem
+              title="Spanlark cannot size this yet"
+              issues={size.error.issues.length > 0 ? size.error.issues : [{ path: "", message: size.error.message }]}
+              onGoTo={onGoTo}
+            />
           ) : headline && chosenCandidate ? (
             <>
               <p className="text-sm font-bold tracking-wide text-graphite uppercase">Build</p>
@@ -238,7 +254,15 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
             <p className="text-ink-soft">Lightest first. Tap one for its full check.</p>
             <ul className="grid gap-3 lg:grid-cols-2">
               {size.data
-                ? shown.map((c) => <CandidateCard key={JSON.stringify(c.member)} candidate={c} check={checkOf(c.member)} chosen={chosenSpec !== null && sameSpec(c.member, chosenSpec)} onOpen={() => setDetail(c.member)} />)
+                ? shown.map((c) => (
+                    <CandidateCard
+                      key={JSON.stringify(c.member)}
+                      candidate={c}
+                      check={checkOf(c.member)}
+                      chosen={chosenSpec !== null && sameSpec(c.member, chosenSpec)}
+                      onOpen={() => setDetail(c.member)}
+                    />
+                  ))
                 : Array.from({ length: 2 }, (_, i) => <Skeleton key={i} width="100%" height="20rem" />)}
             </ul>
             {size.data && size.data.failing.length > 0 ? (

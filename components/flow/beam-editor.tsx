@@ -70,7 +70,7 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
     if (!svg) return 0;
     const rect = svg.getBoundingClientRect();
     const u = ((event.clientX - rect.left) / rect.width) * W;
-    return clamp(snapFt(Math.round((((u - LEFT) / (RIGHT - LEFT)) * L) * 12) / 12), 0, L);
+    return clamp(snapFt(Math.round(((u - LEFT) / (RIGHT - LEFT)) * L * 12) / 12), 0, L);
   };
 
   const sorted = sortedSupports(state.supports);
@@ -163,7 +163,15 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
             }}
             className="cursor-grab outline-none focus-visible:[&>circle:first-child]:stroke-focus"
           >
-            <circle cx={px(s.x)} cy={BEAM_Y + BEAM_H + 14} r={26} fill="transparent" stroke={isSelected ? INK.amberDark : "transparent"} strokeWidth={2} strokeDasharray="4 3" />
+            <circle
+              cx={px(s.x)}
+              cy={BEAM_Y + BEAM_H + 14}
+              r={26}
+              fill="transparent"
+              stroke={isSelected ? INK.amberDark : "transparent"}
+              strokeWidth={2}
+              strokeDasharray="4 3"
+            />
             <SupportSymbol type={s.type} px={px(s.x)} selected={isSelected} />
           </g>
         );
@@ -182,11 +190,30 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
         const isOverhang = (i === 0 && hang.left > 1e-9 && sorted.length > 1) || (i === dims.length - 1 && hang.right > 1e-9 && sorted.length > 1);
         return (
           <g key={i}>
-            <text x={mid} y={narrow ? DIM_Y + 22 : DIM_Y - 6} textAnchor="middle" fontSize={15} fontWeight={700} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
+            <text
+              x={mid}
+              y={narrow ? DIM_Y + 22 : DIM_Y - 6}
+              textAnchor="middle"
+              fontSize={15}
+              fontWeight={700}
+              fill={INK.ink}
+              stroke={INK.paper}
+              strokeWidth={4}
+              paintOrder="stroke"
+            >
               {formatFeetInches(d.to - d.from)}
             </text>
             {isOverhang ? (
-              <text x={mid} y={narrow ? DIM_Y - 6 : DIM_Y + 20} textAnchor="middle" fontSize={14} fill={INK.graphite} stroke={INK.paper} strokeWidth={4} paintOrder="stroke">
+              <text
+                x={mid}
+                y={narrow ? DIM_Y - 6 : DIM_Y + 20}
+                textAnchor="middle"
+                fontSize={14}
+                fill={INK.graphite}
+                stroke={INK.paper}
+                strokeWidth={4}
+                paintOrder="stroke"
+              >
                 overhang
               </text>
             ) : null}

@@ -45,7 +45,10 @@ export function ChoiceGroup<T extends string>({ legend, name, value, choices, on
               {look === "cards" ? (
                 <span
                   aria-hidden="true"
-                  className={cx("flex h-6 w-6 shrink-0 items-center justify-center rounded-full border-2", checked ? "border-spruce bg-spruce text-white" : "border-rule-strong bg-paper-raised")}
+                  className={cx(
+                    "flex h-6 w-6 shrink-0 items-center justify-center rounded-full border-2",
+                    checked ? "border-spruce bg-spruce text-white" : "border-rule-strong bg-paper-raised",
+                  )}
                 >
                   {checked ? <CheckIcon className="h-4 w-4" /> : null}
                 </span>

@@ -21,7 +21,11 @@ export type LengthFieldProps = {
 };
 
 /** Checks a typed length against the field's range; the message names the field. */
-export function lengthProblem(label: string, text: string, opts: { minFt?: number; maxFt?: number; exclusiveMin?: boolean }): { feet: number } | { message: string } {
+export function lengthProblem(
+  label: string,
+  text: string,
+  opts: { minFt?: number; maxFt?: number; exclusiveMin?: boolean },
+): { feet: number } | { message: string } {
   const parsed = parseLength(text);
   if (!parsed.ok) return { message: `${label} ${parsed.message}` };
   const { minFt = 0, maxFt = 200, exclusiveMin = false } = opts;

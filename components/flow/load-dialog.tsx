@@ -33,7 +33,12 @@ export function PointLoadDialog({ open, lengthFt, initial, onClose, onSave }: Po
     ? { label: initial.label, x: formatFeetInches(initial.x), P: String(initial.P), case: initial.case }
     : { label: "Post", x: formatFeetInches(lengthFt / 2), P: "", case: "D" };
   return (
-    <Dialog open={open} onClose={onClose} title={initial ? "Change the point load" : "Add a point load"} description="A post or a girder bearing on the member, at one place.">
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title={initial ? "Change the point load" : "Add a point load"}
+      description="A post or a girder bearing on the member, at one place."
+    >
       {open ? (
         <Formik<PointLoadForm>
           initialValues={start}
@@ -47,7 +52,14 @@ export function PointLoadDialog({ open, lengthFt, initial, onClose, onSave }: Po
           {(form) => (
             <Form noValidate className="flex flex-col gap-4">
               <TextField label="Name" {...form.getFieldProps("label")} error={fieldError(form, "label")} />
-              <TextField label="Position from the left end" hint={`0 to ${formatFeetInches(lengthFt)}`} {...form.getFieldProps("x")} error={fieldError(form, "x")} className="figures" autoComplete="off" />
+              <TextField
+                label="Position from the left end"
+                hint={`0 to ${formatFeetInches(lengthFt)}`}
+                {...form.getFieldProps("x")}
+                error={fieldError(form, "x")}
+                className="figures"
+                autoComplete="off"
+              />
               <NumberWithUnitField label="Load" unit="lb" unitSpoken="pounds" {...form.getFieldProps("P")} error={fieldError(form, "P")} />
               <SelectField label="Load case" options={caseOptions} {...form.getFieldProps("case")} error={fieldError(form, "case")} />
               <LoadFormActions editing={initial !== null} onCancel={onClose} />
@@ -73,7 +85,12 @@ export function LineLoadDialog({ open, lengthFt, initial, onClose, onSave }: Lin
     ? { label: initial.label, from: formatFeetInches(initial.from), to: formatFeetInches(initial.to), w: String(initial.w), case: initial.case }
     : { label: "Wall", from: formatFeetInches(0), to: formatFeetInches(lengthFt), w: "", case: "D" };
   return (
-    <Dialog open={open} onClose={onClose} title={initial ? "Change the line load" : "Add a line load"} description="A load spread along the member, such as a wall on it. Set where it starts and ends for a partial load.">
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title={initial ? "Change the line load" : "Add a line load"}
+      description="A load spread along the member, such as a wall on it. Set where it starts and ends for a partial load."
+    >
       {open ? (
         <Formik<LineLoadForm>
           initialValues={start}
@@ -82,7 +99,14 @@ export function LineLoadDialog({ open, lengthFt, initial, onClose, onSave }: Lin
             const from = parseLength(values.from);
             const to = parseLength(values.to);
             if (!from.ok || !to.ok) return;
-            onSave({ id: initial?.id ?? newLoadId("l"), label: values.label.trim() || "Line load", from: from.feet, to: to.feet, w: num(values.w), case: values.case });
+            onSave({
+              id: initial?.id ?? newLoadId("l"),
+              label: values.label.trim() || "Line load",
+              from: from.feet,
+              to: to.feet,
+              w: num(values.w),
+              case: values.case,
+            });
           }}
         >
           {(form) => (
@@ -92,7 +116,14 @@ export function LineLoadDialog({ open, lengthFt, initial, onClose, onSave }: Lin
                 <TextField label="Starts at" {...form.getFieldProps("from")} error={fieldError(form, "from")} className="figures" autoComplete="off" />
                 <TextField label="Ends at" {...form.getFieldProps("to")} error={fieldError(form, "to")} className="figures" autoComplete="off" />
               </div>
-              <NumberWithUnitField label="Load" unit="plf" unitSpoken="pounds per foot" hint="Pounds per foot of member" {...form.getFieldProps("w")} error={fieldError(form, "w")} />
+              <NumberWithUnitField
+                label="Load"
+                unit="plf"
+                unitSpoken="pounds per foot"
+                hint="Pounds per foot of member"
+                {...form.getFieldProps("w")}
+                error={fieldError(form, "w")}
+              />
               <SelectField label="Load case" options={caseOptions} {...form.getFieldProps("case")} error={fieldError(form, "case")} />
               <LoadFormActions editing={initial !== null} onCancel={onClose} />
             </Form>

@@ -96,7 +96,10 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
       {check ? (
         <div className="flex flex-col gap-5">
           <p className="flex flex-wrap items-center gap-2">
-            <StatusBadge status={check.pass ? "pass" : "fail"} label={check.pass ? `Works — ${Math.round(check.ratio * 100)}% used` : `Does not work — ${Math.round(check.ratio * 100)}%`} />
+            <StatusBadge
+              status={check.pass ? "pass" : "fail"}
+              label={check.pass ? `Works — ${Math.round(check.ratio * 100)}% used` : `Does not work — ${Math.round(check.ratio * 100)}%`}
+            />
             {chosen ? <span className="font-bold text-ink">Chosen</span> : null}
           </p>
           <section className="flex flex-col gap-4" aria-label="Checks">
@@ -156,7 +159,9 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
             <ul className="space-y-1 text-sm tabular-nums">
               {check.reactions.map((r, i) => (
                 <li key={i}>
-                  At {formatFeetInches(r.x)}: {fmt(r.maxDown)} lb down ({r.maxDownCombination}){r.uplift > 0 ? `, ${fmt(r.uplift)} lb uplift (${r.upliftCombination})` : ""}; bearing needed {fmt(r.requiredBearing)} in of {fmt(r.bearing)} in
+                  At {formatFeetInches(r.x)}: {fmt(r.maxDown)} lb down ({r.maxDownCombination})
+                  {r.uplift > 0 ? `, ${fmt(r.uplift)} lb uplift (${r.upliftCombination})` : ""}; bearing needed {fmt(r.requiredBearing)} in of {fmt(r.bearing)}{" "}
+                  in
                   {r.jackStuds !== null ? `; ${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"}` : ""}
                 </li>
               ))}
@@ -170,7 +175,10 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
               {check.assumptions.map((a, i) => (
                 <li key={i}>{a}</li>
               ))}
-              <li>Deflection limits: {check.limits.live !== null ? `L/${check.limits.live} live` : "live not checked"}, {check.limits.total !== null ? `L/${check.limits.total} total` : "total not checked"} — {check.limits.source}</li>
+              <li>
+                Deflection limits: {check.limits.live !== null ? `L/${check.limits.live} live` : "live not checked"},{" "}
+                {check.limits.total !== null ? `L/${check.limits.total} total` : "total not checked"} — {check.limits.source}
+              </li>
               <li>Material tables: {check.tables}</li>
             </ul>
           </section>

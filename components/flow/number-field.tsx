@@ -20,7 +20,19 @@ export type FlowNumberFieldProps = {
 };
 
 /** A number with its unit; each good value is used as it is typed, a bad one says why and is not used. */
-export function FlowNumberField({ label, value, unit, unitSpoken, onCommit, min = 0, max = 1e9, exclusiveMin = false, hint, integer = false, containerClassName }: FlowNumberFieldProps) {
+export function FlowNumberField({
+  label,
+  value,
+  unit,
+  unitSpoken,
+  onCommit,
+  min = 0,
+  max = 1e9,
+  exclusiveMin = false,
+  hint,
+  integer = false,
+  containerClassName,
+}: FlowNumberFieldProps) {
   const [error, setError] = useState<string | null>(null);
 
   const problem = (raw: string): string | null => {

@@ -36,10 +36,20 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
   const defaultLabel = `${KIND_LABELS[state.kind]}`;
 
   return (
-    <Dialog open={open} onClose={onClose} title={editing ? "Save the changes" : "Save to a job"} description={editing ? `${editing.label} in ${editing.jobName}` : "Keep this member with the job it belongs to."}>
+    <Dialog
+      open={open}
+      onClose={onClose}
+      title={editing ? "Save the changes" : "Save to a job"}
+      description={editing ? `${editing.label} in ${editing.jobName}` : "Keep this member with the job it belongs to."}
+    >
       {open ? (
         <Formik<SaveMemberForm>
-          initialValues={{ jobId: editing ? editing.jobId : jobs.some((j) => j.id === preferredJobId) && preferredJobId ? preferredJobId : (jobs[0]?.id ?? "new"), newJobName: "", newJobAddress: "", label: editing ? editing.label : defaultLabel }}
+          initialValues={{
+            jobId: editing ? editing.jobId : jobs.some((j) => j.id === preferredJobId) && preferredJobId ? preferredJobId : (jobs[0]?.id ?? "new"),
+            newJobName: "",
+            newJobAddress: "",
+            label: editing ? editing.label : defaultLabel,
+          }}
           validationSchema={saveMemberSchema}
           onSubmit={async (values, helpers) => {
             setServerError(null);
@@ -59,7 +69,11 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               return;
             }
             onClose();
-            const jobName = editing ? editing.jobName : values.jobId === "new" ? values.newJobName : (jobs.find((j) => j.id === values.jobId)?.name ?? "the job");
+            const jobName = editing
+              ? editing.jobName
+              : values.jobId === "new"
+                ? values.newJobName
+                : (jobs.find((j) => j.id === values.jobId)?.name ?? "the job");
             toast.show({ message: `${values.label} saved to ${jobName}` });
             router.refresh();
           }}
@@ -76,11 +90,27 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               ) : null}
               {!editing && form.values.jobId === "new" ? (
                 <>
-                  <TextField label="New job's name" required {...form.getFieldProps("newJobName")} error={form.touched.newJobName ? form.errors.newJobName : undefined} />
-                  <TextField label="Site address" autoComplete="street-address" {...form.getFieldProps("newJobAddress")} error={form.touched.newJobAddress ? form.errors.newJobAddress : undefined} />
+                  <TextField
+                    label="New job's name"
+                    required
+                    {...form.getFieldProps("newJobName")}
+                    error={form.touched.newJobName ? form.errors.newJobName : undefined}
+                  />
+                  <TextField
+                    label="Site address"
+                    autoComplete="street-address"
+                    {...form.getFieldProps("newJobAddress")}
+                    error={form.touched.newJobAddress ? form.errors.newJobAddress : undefined}
+                  />
                 </>
               ) : null}
-              <TextField label="Member name" hint="What the crew calls it, e.g. H1 kitchen header" required {...form.getFieldProps("label")} error={form.touched.label ? form.errors.label : undefined} />
+              <TextField
+                label="Member name"
+                hint="What the crew calls it, e.g. H1 kitchen header"
+                required
+                {...form.getFieldProps("label")}
+                error={form.touched.label ? form.errors.label : undefined}
+              />
               {serverError ? <JobActionAlert problem={serverError} /> : null}
               <div className="flex flex-col-reverse gap-2 sm:flex-row sm:justify-end">
                 <Button variant="secondary" onClick={onClose}>

@@ -66,7 +66,11 @@ function StepNav({ step, onGo }: { step: FlowStepId; onGo: (step: FlowStepId) =>
                 aria-current={here ? "step" : undefined}
                 className={cx(
                   "flex min-h-touch w-full flex-col items-center justify-center gap-0.5 rounded-lg border-2 px-1 text-sm font-bold",
-                  here ? "border-ink bg-ink text-paper" : done ? "border-spruce bg-spruce-light text-spruce-dark" : "border-rule-strong bg-paper-raised text-ink-soft",
+                  here
+                    ? "border-ink bg-ink text-paper"
+                    : done
+                      ? "border-spruce bg-spruce-light text-spruce-dark"
+                      : "border-rule-strong bg-paper-raised text-ink-soft",
                 )}
               >
                 <span className="flex items-center gap-1">
@@ -190,7 +194,9 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
       {step === "span" ? <StepSpan state={state} update={update} /> : null}
       {step === "loads" ? <StepLoads state={state} update={update} /> : null}
       {step === "material" ? <StepMaterial state={state} update={update} /> : null}
-      {step === "answer" ? <Answer state={state} chosen={chosen} onChoose={setChosen} onChosenCheck={setChosenCheck} onGoTo={goTo} action={saveAction} /> : null}
+      {step === "answer" ? (
+        <Answer state={state} chosen={chosen} onChoose={setChosen} onChosenCheck={setChosenCheck} onGoTo={goTo} action={saveAction} />
+      ) : null}
     </>
   );
 
@@ -257,7 +263,17 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
         )}
       </BottomActionBar>
 
-      {signedIn ? <SaveToJob open={saveOpen} onClose={() => setSaveOpen(false)} state={state} chosen={chosenCheck ? chosenCheck.member.spec : chosen} jobs={jobs} editing={editing} preferredJobId={preferredJobId} /> : null}
+      {signedIn ? (
+        <SaveToJob
+          open={saveOpen}
+          onClose={() => setSaveOpen(false)}
+          state={state}
+          chosen={chosenCheck ? chosenCheck.member.spec : chosen}
+          jobs={jobs}
+          editing={editing}
+          preferredJobId={preferredJobId}
+        />
+      ) : null}
     </div>
   );
 }

@@ -42,11 +42,26 @@ function AreaLoadRow({ load, index, onChange, onRemove }: { load: FlowAreaLoad; 
         }}
       />
       <div className="grid grid-cols-2 gap-3">
-        <FlowNumberField label="Load" unit="psf" unitSpoken="pounds per square foot" value={load.psf} min={0} max={1000} onCommit={(psf) => onChange({ ...load, psf, preset: preset && preset.psf === psf ? preset.id : "custom" })} />
-        <SelectField label="Case" options={caseOptions.map((o) => ({ ...o, label: o.value }))} value={load.case} onChange={(event) => onChange({ ...load, case: event.target.value as LoadCase, preset: "custom" })} />
+        <FlowNumberField
+          label="Load"
+          unit="psf"
+          unitSpoken="pounds per square foot"
+          value={load.psf}
+          min={0}
+          max={1000}
+          onCommit={(psf) => onChange({ ...load, psf, preset: preset && preset.psf === psf ? preset.id : "custom" })}
+        />
+        <SelectField
+          label="Case"
+          options={caseOptions.map((o) => ({ ...o, label: o.value }))}
+          value={load.case}
+          onChange={(event) => onChange({ ...load, case: event.target.value as LoadCase, preset: "custom" })}
+        />
       </div>
       <div className="flex items-center justify-between gap-2">
-        <p className="text-sm text-graphite">{preset && preset.psf === load.psf && preset.case === load.case ? `Source: ${preset.source}` : "Your own value"}</p>
+        <p className="text-sm text-graphite">
+          {preset && preset.psf === load.psf && preset.case === load.case ? `Source: ${preset.source}` : "Your own value"}
+        </p>
         <Button variant="ghost" onClick={onRemove} aria-label={`Remove area load ${index + 1}, ${load.label}`}>
           Remove
         </Button>
@@ -64,7 +79,8 @@ export function StepLoads({ state, update }: StepLoadsProps) {
   const widthFt = state.width.mode === "spacing" ? state.width.spacingIn / 12 : state.width.tributaryFt;
   const r1 = (v: number) => (Math.round(v * 10) / 10).toLocaleString("en-US");
   const roofLivePsf = state.areaLoads.filter((a) => a.case === "Lr").reduce((sum, a) => sum + a.psf, 0);
-  const hasOtherSnow = state.pointLoads.some((p) => p.case === "S") || state.lineLoads.some((l) => l.case === "S") || state.areaLoads.some((a) => a.case === "S");
+  const hasOtherSnow =
+    state.pointLoads.some((p) => p.case === "S") || state.lineLoads.some((l) => l.case === "S") || state.areaLoads.some((a) => a.case === "S");
 
   return (
     <div className="flex flex-col gap-6">
@@ -77,7 +93,13 @@ export function StepLoads({ state, update }: StepLoadsProps) {
           name="width-mode"
           look="segments"
           value={state.width.mode}
-          onChange={(mode) => update((s) => ({ ...s, width: mode === "spacing" ? { mode, spacingIn: 16 } : { mode, tributaryFt: 12 }, repetitive: mode === "spacing" ? s.repetitive : false }))}
+          onChange={(mode) =>
+            update((s) => ({
+              ...s,
+              width: mode === "spacing" ? { mode, spacingIn: 16 } : { mode, tributaryFt: 12 },
+              repetitive: mode === "spacing" ? s.repetitive : false,
+            }))
+          }
           choices={[
             { value: "spacing", label: "Joist spacing" },
             { value: "tributary", label: "Tributary width" },
@@ -93,10 +115,27 @@ export function StepLoads({ state, update }: StepLoadsProps) {
               onChange={(v) => update((s) => ({ ...s, width: { mode: "spacing", spacingIn: Number(v) } }))}
               choices={SPACINGS.map((n) => ({ value: String(n), label: `${n} in` }))}
             />
-            <FlowNumberField label="Or type the spacing" unit="in" unitSpoken="inches" value={state.width.spacingIn} min={0} exclusiveMin max={96} onCommit={(spacingIn) => update((s) => ({ ...s, width: { mode: "spacing", spacingIn } }))} />
+            <FlowNumberField
+              label="Or type the spacing"
+              unit="in"
+              unitSpoken="inches"
+              value={state.width.spacingIn}
+              min={0}
+              exclusiveMin
+              max={96}
+              onCommit={(spacingIn) => update((s) => ({ ...s, width: { mode: "spacing", spacingIn } }))}
+            />
           </div>
         ) : (
-          <LengthField label="Tributary width" valueFt={state.width.tributaryFt} minFt={0} exclusiveMin maxFt={60} hint="Half the joist span on each side, added together" onCommit={(tributaryFt) => update((s) => ({ ...s, width: { mode: "tributary", tributaryFt } }))} />
+          <LengthField
+            label="Tributary width"
+            valueFt={state.width.tributaryFt}
+            minFt={0}
+            exclusiveMin
+            maxFt={60}
+            hint="Half the joist span on each side, added together"
+            onCommit={(tributaryFt) => update((s) => ({ ...s, width: { mode: "tributary", tributaryFt } }))}
+          />
         )}
         <TributarySketch mode={state.width.mode} />
       </section>
@@ -120,7 +159,9 @@ export function StepLoads({ state, update }: StepLoadsProps) {
         <div>
           <Button
             variant="secondary"
-            onClick={() => update((s) => ({ ...s, areaLoads: [...s.areaLoads, { id: newLoadId("a"), preset: "custom", label: "Other area load", case: "D", psf: 0 }] }))}
+            onClick={() =>
+              update((s) => ({ ...s, areaLoads: [...s.areaLoads, { id: newLoadId("a"), preset: "custom", label: "Other area load", case: "D", psf: 0 }] }))
+            }
           >
             + Add an area load
           </Button>
@@ -155,10 +196,29 @@ export function StepLoads({ state, update }: StepLoadsProps) {
         ) : null}
         {state.snow.on ? (
           <div className="flex flex-col gap-3">
-            <FlowNumberField label="Ground snow load, pg" unit="psf" unitSpoken="pounds per square foot" hint="The number on that map for your site" value={state.snow.groundPsf} min={0} max={500} onCommit={(groundPsf) => update((s) => ({ ...s, snow: { ...s.snow, groundPsf } }))} />
+            <FlowNumberField
+              label="Ground snow load, pg"
+              unit="psf"
+              unitSpoken="pounds per square foot"
+              hint="The number on that map for your site"
+              value={state.snow.groundPsf}
+              min={0}
+              max={500}
+              onCommit={(groundPsf) => update((s) => ({ ...s, snow: { ...s.snow, groundPsf } }))}
+            />
             <div className="grid gap-3 sm:grid-cols-2">
-              <SelectField label="Roof exposure" options={EXPOSURES} value={state.snow.exposure} onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, exposure: e.target.value as RoofExposure } }))} />
-              <SelectField label="Building heat" options={THERMALS} value={state.snow.thermal} onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, thermal: e.target.value as RoofThermal } }))} />
+              <SelectField
+                label="Roof exposure"
+                options={EXPOSURES}
+                value={state.snow.exposure}
+                onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, exposure: e.target.value as RoofExposure } }))}
+              />
+              <SelectField
+                label="Building heat"
+                options={THERMALS}
+                value={state.snow.thermal}
+                onChange={(e) => update((s) => ({ ...s, snow: { ...s.snow, thermal: e.target.value as RoofThermal } }))}
+              />
             </div>
             <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 rounded-lg bg-paper-sunk p-3 text-ink tabular-nums" aria-label="Roof loads on this member">
               <dt className="font-bold">Roof snow</dt>
@@ -197,7 +257,11 @@ export function StepLoads({ state, update }: StepLoadsProps) {
                 <Button variant="ghost" onClick={() => setPointDialog({ open: true, load: p })} aria-label={`Change ${p.label}`}>
                   Change
                 </Button>
-                <Button variant="ghost" onClick={() => update((s) => ({ ...s, pointLoads: s.pointLoads.filter((x) => x.id !== p.id) }))} aria-label={`Remove ${p.label}`}>
+                <Button
+                  variant="ghost"
+                  onClick={() => update((s) => ({ ...s, pointLoads: s.pointLoads.filter((x) => x.id !== p.id) }))}
+                  aria-label={`Remove ${p.label}`}
+                >
                   Remove
                 </Button>
               </span>
@@ -212,7 +276,11 @@ export function StepLoads({ state, update }: StepLoadsProps) {
                 <Button variant="ghost" onClick={() => setLineDialog({ open: true, load: l })} aria-label={`Change ${l.label}`}>
                   Change
                 </Button>
-                <Button variant="ghost" onClick={() => update((s) => ({ ...s, lineLoads: s.lineLoads.filter((x) => x.id !== l.id) }))} aria-label={`Remove ${l.label}`}>
+                <Button
+                  variant="ghost"
+                  onClick={() => update((s) => ({ ...s, lineLoads: s.lineLoads.filter((x) => x.id !== l.id) }))}
+                  aria-label={`Remove ${l.label}`}
+                >
                   Remove
                 </Button>
               </span>
@@ -235,7 +303,10 @@ export function StepLoads({ state, update }: StepLoadsProps) {
         initial={pointDialog.load}
         onClose={() => setPointDialog({ open: false, load: null })}
         onSave={(load) => {
-          update((s) => ({ ...s, pointLoads: s.pointLoads.some((p) => p.id === load.id) ? s.pointLoads.map((p) => (p.id === load.id ? load : p)) : [...s.pointLoads, load] }));
+          update((s) => ({
+            ...s,
+            pointLoads: s.pointLoads.some((p) => p.id === load.id) ? s.pointLoads.map((p) => (p.id === load.id ? load : p)) : [...s.pointLoads, load],
+          }));
           setPointDialog({ open: false, load: null });
         }}
       />
@@ -245,7 +316,10 @@ export function StepLoads({ state, update }: StepLoadsProps) {
         initial={lineDialog.load}
         onClose={() => setLineDialog({ open: false, load: null })}
         onSave={(load) => {
-          update((s) => ({ ...s, lineLoads: s.lineLoads.some((p) => p.id === load.id) ? s.lineLoads.map((p) => (p.id === load.id ? load : p)) : [...s.lineLoads, load] }));
+          update((s) => ({
+            ...s,
+            lineLoads: s.lineLoads.some((p) => p.id === load.id) ? s.lineLoads.map((p) => (p.id === load.id ? load : p)) : [...s.lineLoads, load],
+          }));
           setLineDialog({ open: false, load: null });
         }}
       />

@@ -13,7 +13,6 @@ import { FlowNumberField } from "./number-field";
 
 export type StepMaterialProps = { state: FlowState; update: (fn: (s: FlowState) => FlowState) => void };
 
-
 const FAMILIES: { value: MaterialFamily; label: string; detail: string }[] = [
   { value: "any", label: "Any", detail: "the lightest member that works, from every table" },
   { value: "sawn", label: "Sawn lumber", detail: "one piece: 2x8, 2x10, 4x12…" },
@@ -51,14 +50,29 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
         legend="Material"
         name="family"
         value={m.family}
-        onChange={(family) => update((s) => ({ ...s, material: { ...s.material, family, plies: family === "sawn" ? 1 : 0, product: family === s.material.family ? s.material.product : "" } }))}
+        onChange={(family) =>
+          update((s) => ({
+            ...s,
+            material: { ...s.material, family, plies: family === "sawn" ? 1 : 0, product: family === s.material.family ? s.material.product : "" },
+          }))
+        }
         choices={FAMILIES.map((f) => ({ value: f.value, label: f.label, detail: f.detail }))}
       />
 
       {m.family === "sawn" || m.family === "built-up" ? (
         <div className="grid gap-3 sm:grid-cols-2">
-          <SelectField label="Species" options={SPECIES.map((s) => ({ value: s, label: s }))} value={m.species} onChange={(e) => update((s) => ({ ...s, material: { ...s.material, species: e.target.value as Species } }))} />
-          <SelectField label="Grade" options={GRADES.map((g) => ({ value: g, label: g }))} value={m.grade} onChange={(e) => update((s) => ({ ...s, material: { ...s.material, grade: e.target.value as SawnGrade } }))} />
+          <SelectField
+            label="Species"
+            options={SPECIES.map((s) => ({ value: s, label: s }))}
+            value={m.species}
+            onChange={(e) => update((s) => ({ ...s, material: { ...s.material, species: e.target.value as Species } }))}
+          />
+          <SelectField
+            label="Grade"
+            options={GRADES.map((g) => ({ value: g, label: g }))}
+            value={m.grade}
+            onChange={(e) => update((s) => ({ ...s, material: { ...s.material, grade: e.target.value as SawnGrade } }))}
+          />
           {m.family === "built-up" ? (
             <SelectField
               label="Plies"
@@ -132,17 +146,39 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
         </h3>
         <SelectField
           label="Deflection limits"
-          options={[...DEFLECTION_PRESETS.map((p) => ({ value: p.id, label: `${p.label}: L/${p.live} live, L/${p.total} total` })), { value: "own", label: "My own limits" }]}
+          options={[
+            ...DEFLECTION_PRESETS.map((p) => ({ value: p.id, label: `${p.label}: L/${p.live} live, L/${p.total} total` })),
+            { value: "own", label: "My own limits" },
+          ]}
           value={preset ? preset.id : "own"}
           hint={preset ? preset.source : "Set below"}
           onChange={(e) => {
             const p = DEFLECTION_PRESETS.find((d) => d.id === e.target.value);
-            if (p && p.live !== null && p.total !== null) update((s) => ({ ...s, limits: { live: p.live ?? s.limits.live, total: p.total ?? s.limits.total } }));
+            if (p && p.live !== null && p.total !== null)
+              update((s) => ({ ...s, limits: { live: p.live ?? s.limits.live, total: p.total ?? s.limits.total } }));
           }}
         />
         <div className="grid grid-cols-2 gap-3">
-          <FlowNumberField label="Live load limit" hint="360 means L/360" unit="L/n" unitSpoken="span divided by this number" value={state.limits.live} min={60} max={2000} onCommit={(live) => update((s) => ({ ...s, limits: { ...s.limits, live } }))} />
-          <FlowNumberField label="Total load limit" hint="240 means L/240" unit="L/n" unitSpoken="span divided by this number" value={state.limits.total} min={60} max={2000} onCommit={(total) => update((s) => ({ ...s, limits: { ...s.limits, total } }))} />
+          <FlowNumberField
+            label="Live load limit"
+            hint="360 means L/360"
+            unit="L/n"
+            unitSpoken="span divided by this number"
+            value={state.limits.live}
+            min={60}
+            max={2000}
+            onCommit={(live) => update((s) => ({ ...s, limits: { ...s.limits, live } }))}
+          />
+          <FlowNumberField
+            label="Total load limit"
+            hint="240 means L/240"
+            unit="L/n"
+            unitSpoken="span divided by this number"
+            value={state.limits.total}
+            min={60}
+            max={2000}
+            onCommit={(total) => update((s) => ({ ...s, limits: { ...s.limits, total } }))}
+          />
         </div>
       </section>
 
@@ -152,7 +188,12 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
         </h3>
         <Checkbox label="Wet service" hint="Outdoors or damp: decks, exposed framing" checked={state.wet} onChange={(wet) => update((s) => ({ ...s, wet }))} />
         {state.width.mode === "spacing" && state.width.spacingIn <= 24 ? (
-          <Checkbox label="Joists share the load" hint="Three or more at 24 in or less, sheathed together (repetitive members, Cr)" checked={state.repetitive} onChange={(repetitive) => update((s) => ({ ...s, repetitive }))} />
+          <Checkbox
+            label="Joists share the load"
+            hint="Three or more at 24 in or less, sheathed together (repetitive members, Cr)"
+            checked={state.repetitive}
+            onChange={(repetitive) => update((s) => ({ ...s, repetitive }))}
+          />
         ) : null}
         <Checkbox label="Count the member's own weight" checked={state.selfWeight} onChange={(selfWeight) => update((s) => ({ ...s, selfWeight }))} />
         <LengthField

@@ -117,7 +117,8 @@ export function StepSpan({ state, update }: StepSpanProps) {
             onCommit={(ft) => update((s) => ({ ...withMainSpan(s, spanFromRoughOpeningFt(ft, s.bearingIn)), roughOpeningFt: ft }))}
           />
           <p className="rounded-lg bg-paper-sunk p-3 text-ink tabular-nums" aria-live="polite">
-            Span {formatFeetInches(spanFromRoughOpeningFt(roughOpening, state.bearingIn))} = rough opening {formatFeetInches(roughOpening)} + half of the {state.bearingIn} in bearing at each end.
+            Span {formatFeetInches(spanFromRoughOpeningFt(roughOpening, state.bearingIn))} = rough opening {formatFeetInches(roughOpening)} + half of the{" "}
+            {state.bearingIn} in bearing at each end.
           </p>
         </div>
       ) : (
@@ -168,14 +169,27 @@ export function StepSpan({ state, update }: StepSpanProps) {
                       update((s) => withOverhang(s, end, snapFt(ft)));
                     }}
                   />
-                  <Button variant="secondary" className={end === "right" ? "self-end" : "self-start"} aria-label={`Remove the ${end} overhang`} onClick={() => onRemoveOverhang(end)}>
+                  <Button
+                    variant="secondary"
+                    className={end === "right" ? "self-end" : "self-start"}
+                    aria-label={`Remove the ${end} overhang`}
+                    onClick={() => onRemoveOverhang(end)}
+                  >
                     Remove
                   </Button>
                 </div>
               ) : (
                 <div key={end} className={end === "right" ? "flex justify-end" : "flex justify-start"}>
-                  <Button id={addId(end)} variant="secondary" className="px-3" aria-label={`Add an overhang at the ${end} end`} onClick={(event) => onAddOverhang(end, event)}>
-                    <span aria-hidden="true">{end === "left" ? "← " : ""}+ Overhang{end === "right" ? " →" : ""}</span>
+                  <Button
+                    id={addId(end)}
+                    variant="secondary"
+                    className="px-3"
+                    aria-label={`Add an overhang at the ${end} end`}
+                    onClick={(event) => onAddOverhang(end, event)}
+                  >
+                    <span aria-hidden="true">
+                      {end === "left" ? "← " : ""}+ Overhang{end === "right" ? " →" : ""}
+                    </span>
                   </Button>
                 </div>
               ),
@@ -225,7 +239,11 @@ export function StepSpan({ state, update }: StepSpanProps) {
             valueFt={state.supports[sel].x}
             minFt={range?.min ?? 0}
             maxFt={range?.max ?? state.lengthFt}
-            hint={range ? `Anywhere from ${formatFeetInches(range.min)} to ${formatFeetInches(range.max)}: on the member, and not past the next support.` : undefined}
+            hint={
+              range
+                ? `Anywhere from ${formatFeetInches(range.min)} to ${formatFeetInches(range.max)}: on the member, and not past the next support.`
+                : undefined
+            }
             onCommit={(ft) => move(sel, ft)}
           />
           <div className="grid grid-cols-4 gap-2" role="group" aria-label="Move the support">
@@ -282,7 +300,11 @@ export function StepSpan({ state, update }: StepSpanProps) {
         min={0}
         exclusiveMin
         max={48}
-        hint={state.kind === "header" ? "How much of the header sits on the jack studs: 1-1/2 in per stud." : "How much of the member sits on the wall, beam or post."}
+        hint={
+          state.kind === "header"
+            ? "How much of the header sits on the jack studs: 1-1/2 in per stud."
+            : "How much of the member sits on the wall, beam or post."
+        }
         onCommit={(bearingIn) =>
           update((s) =>
             s.kind === "header" && s.roughOpeningFt !== null && s.roughOpeningFt !== undefined && s.supports.length === 2

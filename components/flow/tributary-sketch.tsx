@@ -23,12 +23,22 @@ export function TributarySketch({ mode }: TributarySketchProps) {
           <path d="M292 40V102M286 40h12M286 102h12" stroke={INK.ink} strokeWidth={2} />
           <path d="M20 40H280M20 102H280" stroke={INK.amberDark} strokeWidth={1.5} strokeDasharray="5 4" />
           <g fontSize={13} fill={INK.ink} stroke={INK.paper} strokeWidth={4} paintOrder="stroke" textAnchor="middle">
-            <text x={150} y={33}>joists: half their span</text>
-            <text x={150} y={118}>joists: half their span</text>
-            <text x={150} y={62} fontWeight={700}>beam or header</text>
-            <text x={276} y={92} textAnchor="end" fontWeight={700}>width</text>
+            <text x={150} y={33}>
+              joists: half their span
+            </text>
+            <text x={150} y={118}>
+              joists: half their span
+            </text>
+            <text x={150} y={62} fontWeight={700}>
+              beam or header
+            </text>
+            <text x={276} y={92} textAnchor="end" fontWeight={700}>
+              width
+            </text>
           </g>
-          <text x={150} y={148} textAnchor="middle" fontSize={12} fill={INK.graphite}>walls or beams at the joists&apos; far ends</text>
+          <text x={150} y={148} textAnchor="middle" fontSize={12} fill={INK.graphite}>
+            walls or beams at the joists&apos; far ends
+          </text>
         </svg>
         <figcaption className="text-sm text-ink-soft">
           Tributary width: the strip of floor or roof the beam holds up — half the joist span on each side, added together.
@@ -41,13 +51,26 @@ export function TributarySketch({ mode }: TributarySketchProps) {
       <svg viewBox={`0 0 ${W} ${H - 22}`} className="h-auto w-full max-w-sm rounded-lg border-2 border-rule bg-paper-raised" aria-hidden="true">
         <rect x={110} y={22} width={80} height={86} fill={INK.amberLight} />
         {[70, 150, 230].map((x) => (
-          <rect key={x} x={x - 5} y={22} width={10} height={86} fill={x === 150 ? INK.amber : INK.paper} stroke={x === 150 ? INK.amberDark : INK.graphite} strokeWidth={2} />
+          <rect
+            key={x}
+            x={x - 5}
+            y={22}
+            width={10}
+            height={86}
+            fill={x === 150 ? INK.amber : INK.paper}
+            stroke={x === 150 ? INK.amberDark : INK.graphite}
+            strokeWidth={2}
+          />
         ))}
         <path d="M110 118H190M110 112v12M190 112v12" stroke={INK.ink} strokeWidth={2} />
         <path d="M110 22V108M190 22V108" stroke={INK.amberDark} strokeWidth={1.5} strokeDasharray="5 4" />
-        <text x={150} y={15} textAnchor="middle" fontSize={13} fill={INK.ink}>one joist carries one spacing</text>
+        <text x={150} y={15} textAnchor="middle" fontSize={13} fill={INK.ink}>
+          one joist carries one spacing
+        </text>
       </svg>
-      <figcaption className="text-sm text-ink-soft">Joist spacing: centre to centre. Each joist holds the strip of floor from halfway to its neighbours.</figcaption>
+      <figcaption className="text-sm text-ink-soft">
+        Joist spacing: centre to centre. Each joist holds the strip of floor from halfway to its neighbours.
+      </figcaption>
     </figure>
   );
 }

@@ -44,7 +44,13 @@ export function useDebounced<T>(value: T, ms: number): T {
   return settled;
 }
 
-const SWR_OPTIONS = { keepPreviousData: true, revalidateOnFocus: false, revalidateOnReconnect: true, shouldRetryOnError: false, dedupingInterval: 10_000 } as const;
+const SWR_OPTIONS = {
+  keepPreviousData: true,
+  revalidateOnFocus: false,
+  revalidateOnReconnect: true,
+  shouldRetryOnError: false,
+  dedupingInterval: 10_000,
+} as const;
 
 /**
  * The sizing search for the flow's state (POST /api/size), 250 ms after the last change: one request

@@ -39,7 +39,12 @@ export function JobForm({ job, onDone }: JobFormProps) {
       {(form) => (
         <Form noValidate className="flex flex-col gap-4">
           <TextField label="Job name" required {...form.getFieldProps("name")} error={form.touched.name ? form.errors.name : undefined} />
-          <TextField label="Site address" autoComplete="street-address" {...form.getFieldProps("siteAddress")} error={form.touched.siteAddress ? form.errors.siteAddress : undefined} />
+          <TextField
+            label="Site address"
+            autoComplete="street-address"
+            {...form.getFieldProps("siteAddress")}
+            error={form.touched.siteAddress ? form.errors.siteAddress : undefined}
+          />
           <div className="flex flex-col gap-1">
             <label htmlFor="job-notes" className="font-bold">
               Notes

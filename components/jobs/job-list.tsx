@@ -39,7 +39,11 @@ export function JobList({ jobs, query }: JobListProps) {
         </p>
       ) : null}
       {jobs.length === 0 && !query ? (
-        <EmptyState title="No jobs yet" body="Size a member, then save it to a job — or start a job first." action={<ButtonLink href="/size">Size a member</ButtonLink>} />
+        <EmptyState
+          title="No jobs yet"
+          body="Size a member, then save it to a job — or start a job first."
+          action={<ButtonLink href="/size">Size a member</ButtonLink>}
+        />
       ) : (
         <ul className="flex flex-col gap-3">
           {jobs.map((job) => (
@@ -52,7 +56,8 @@ export function JobList({ jobs, query }: JobListProps) {
                   <span className="text-lg font-bold group-hover:underline">{job.name}</span>
                   {job.siteAddress ? <span className="text-ink-soft">{job.siteAddress}</span> : null}
                   <span className="text-sm text-graphite">
-                    {job.memberCount === 1 ? "1 member" : `${job.memberCount} members`} · changed {new Date(job.updatedAt).toLocaleDateString("en-US", { month: "short", day: "numeric", year: "numeric" })}
+                    {job.memberCount === 1 ? "1 member" : `${job.memberCount} members`} · changed{" "}
+                    {new Date(job.updatedAt).toLocaleDateString("en-US", { month: "short", day: "numeric", year: "numeric" })}
                   </span>
                 </span>
                 <ArrowRightIcon className="h-6 w-6 shrink-0 text-spruce" />

@@ -104,7 +104,11 @@ export function JobPage({ job, children }: JobPageProps) {
           Members
         </h2>
         {job.members.length === 0 ? (
-          <EmptyState title="No members yet" body="Size a member and save it to this job." action={<ButtonLink href={`/size?for=${job.id}`}>Size a member</ButtonLink>} />
+          <EmptyState
+            title="No members yet"
+            body="Size a member and save it to this job."
+            action={<ButtonLink href={`/size?for=${job.id}`}>Size a member</ButtonLink>}
+          />
         ) : (
           <ul className="flex flex-col gap-3">
             {job.members.map((m) => {
@@ -120,14 +124,18 @@ export function JobPage({ job, children }: JobPageProps) {
                         {m.carriedBy ? ` · bears on ${m.carriedBy}` : ""}
                       </p>
                     </div>
-                    {verdict ? <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} /> : <StatusBadge status="caution" label="Not sized" />}
+                    {verdict ? (
+                      <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} />
+                    ) : (
+                      <StatusBadge status="caution" label="Not sized" />
+                    )}
                   </div>
                   <p className="text-xl font-bold text-ink">{m.headline ?? "Nothing in the tables worked for these inputs."}</p>
                   {m.loadStandard === "ASCE 7-22" && m.carriesSnow ? (
                     <div className="flex flex-col gap-2 rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-3 text-ink" data-testid="recheck-basis">
                       <p>
-                        Worked out with ground snow from the newer risk-based map (ASCE 7-22, counted at 0.7). Most building departments still give the number from the
-                        map in the 2021 code or older, counted in full.
+                        Worked out with ground snow from the newer risk-based map (ASCE 7-22, counted at 0.7). Most building departments still give the number
+                        from the map in the 2021 code or older, counted in full.
                       </p>
                       <div>
                         <Button
@@ -153,7 +161,10 @@ export function JobPage({ job, children }: JobPageProps) {
                   {job.members.length > 1 ? (
                     <SelectField
                       label="Bears on"
-                      options={[{ value: "", label: "A wall, post or footing" }, ...job.members.filter((c) => c.id !== m.id).map((c) => ({ value: c.id, label: c.label }))]}
+                      options={[
+                        { value: "", label: "A wall, post or footing" },
+                        ...job.members.filter((c) => c.id !== m.id).map((c) => ({ value: c.id, label: c.label })),
+                      ]}
                       value={m.carriedById ?? ""}
                       disabled={pending}
                       onChange={(event) => {
@@ -190,7 +201,9 @@ export function JobPage({ job, children }: JobPageProps) {
           <h2 id="order-title" className="text-2xl font-bold">
             Order list
           </h2>
-          <p className="text-ink-soft">The lumber, studs, posts and concrete these members take, by size and stock length, priced where the yard&apos;s prices are on file.</p>
+          <p className="text-ink-soft">
+            The lumber, studs, posts and concrete these members take, by size and stock length, priced where the yard&apos;s prices are on file.
+          </p>
           <ButtonLink href={`/jobs/${job.id}/order`} className="w-full sm:w-fit" data-testid="open-order">
             Open the order list
           </ButtonLink>

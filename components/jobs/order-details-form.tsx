@@ -98,12 +98,27 @@ export function OrderDetailsForm({ memberId, label, kind, details }: OrderDetail
       </summary>
       <form onSubmit={submit} noValidate className="mt-2 flex flex-col gap-3" aria-label={`Order details of ${label}`}>
         {apply.width ? (
-          <TextField label={WIDTH_WORDS[kind] ?? "Width"} hint="e.g. 16' or 16-6" inputMode="text" value={width} onChange={(e) => setWidth(e.target.value)} error={errors.runWidthFt} name="runWidthFt" />
+          <TextField
+            label={WIDTH_WORDS[kind] ?? "Width"}
+            hint="e.g. 16' or 16-6"
+            inputMode="text"
+            value={width}
+            onChange={(e) => setWidth(e.target.value)}
+            error={errors.runWidthFt}
+            name="runWidthFt"
+          />
         ) : null}
         {apply.posts ? (
           <>
             <div className="grid grid-cols-2 gap-3">
-              <TextField label="Post height" hint="ft, e.g. 4'" value={postHeight} onChange={(e) => setPostHeight(e.target.value)} error={errors.postHeightFt} name="postHeightFt" />
+              <TextField
+                label="Post height"
+                hint="ft, e.g. 4'"
+                value={postHeight}
+                onChange={(e) => setPostHeight(e.target.value)}
+                error={errors.postHeightFt}
+                name="postHeightFt"
+              />
               <SelectField
                 label="Post size"
                 value={postSize}
@@ -113,8 +128,24 @@ export function OrderDetailsForm({ memberId, label, kind, details }: OrderDetail
               />
             </div>
             <div className="grid grid-cols-2 gap-3">
-              <TextField label="Footing across" hint="in" inputMode="decimal" value={diameter} onChange={(e) => setDiameter(e.target.value)} error={errors.footingDiameterIn} name="footingDiameterIn" />
-              <TextField label="Footing depth" hint="in" inputMode="decimal" value={depth} onChange={(e) => setDepth(e.target.value)} error={errors.footingDepthIn} name="footingDepthIn" />
+              <TextField
+                label="Footing across"
+                hint="in"
+                inputMode="decimal"
+                value={diameter}
+                onChange={(e) => setDiameter(e.target.value)}
+                error={errors.footingDiameterIn}
+                name="footingDiameterIn"
+              />
+              <TextField
+                label="Footing depth"
+                hint="in"
+                inputMode="decimal"
+                value={depth}
+                onChange={(e) => setDepth(e.target.value)}
+                error={errors.footingDepthIn}
+                name="footingDepthIn"
+              />
             </div>
             <p className="text-sm text-ink-soft">Spanlark counts posts and concrete; it does not check them.</p>
           </>
@@ -128,7 +159,11 @@ export function OrderDetailsForm({ memberId, label, kind, details }: OrderDetail
           <Button type="submit" variant="secondary" loading={pending}>
             Save
           </Button>
-          {saved ? <span role="status" className="font-bold text-sound-ink">Saved</span> : null}
+          {saved ? (
+            <span role="status" className="font-bold text-sound-ink">
+              Saved
+            </span>
+          ) : null}
         </div>
       </form>
     </details>

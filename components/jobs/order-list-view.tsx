@@ -30,11 +30,21 @@ export function OrderListView({ list }: OrderListViewProps) {
           <table className="w-full border-collapse text-left tabular-nums">
             <thead className="sr-only sm:not-sr-only">
               <tr className="border-b-2 border-rule text-sm text-graphite">
-                <th scope="col" className="py-1 pr-2">Size</th>
-                <th scope="col" className="py-1 pr-2 text-right">Length</th>
-                <th scope="col" className="py-1 pr-2 text-right">Qty</th>
-                <th scope="col" className="hidden py-1 pr-2 sm:table-cell">For</th>
-                <th scope="col" className="py-1 text-right">Price</th>
+                <th scope="col" className="py-1 pr-2">
+                  Size
+                </th>
+                <th scope="col" className="py-1 pr-2 text-right">
+                  Length
+                </th>
+                <th scope="col" className="py-1 pr-2 text-right">
+                  Qty
+                </th>
+                <th scope="col" className="hidden py-1 pr-2 sm:table-cell">
+                  For
+                </th>
+                <th scope="col" className="py-1 text-right">
+                  Price
+                </th>
               </tr>
             </thead>
             <tbody>
@@ -81,8 +91,8 @@ export function OrderListView({ list }: OrderListViewProps) {
         </p>
       ) : null}
       <p className="text-ink-soft">
-        Each piece is rounded up to a stock length; jack and king studs (two king studs each end), rims at both ends of joists, a row of
-        blocking at least every 8 ft and 10% extra concrete follow common practice. Check the list against the plans before you order.
+        Each piece is rounded up to a stock length; jack and king studs (two king studs each end), rims at both ends of joists, a row of blocking at least every
+        8 ft and 10% extra concrete follow common practice. Check the list against the plans before you order.
       </p>
     </div>
   );

@@ -54,7 +54,16 @@ export function OrderEmailForm({ jobId }: OrderToolbarProps) {
     <div className="no-print">
       <form onSubmit={send} noValidate className="flex flex-col gap-2 rounded-card border-2 border-rule bg-paper-raised p-4" aria-label="E-mail the order list">
         <h2 className="text-lg font-bold">E-mail it to the yard</h2>
-        <TextField label="Send to" type="email" inputMode="email" autoComplete="email" value={to} onChange={(e) => setTo(e.target.value)} error={error ?? undefined} data-testid="order-mail-to" />
+        <TextField
+          label="Send to"
+          type="email"
+          inputMode="email"
+          autoComplete="email"
+          value={to}
+          onChange={(e) => setTo(e.target.value)}
+          error={error ?? undefined}
+          data-testid="order-mail-to"
+        />
         <TextField label="Note (optional)" hint="Delivery day, who to call" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} />
         <Button type="submit" loading={pending} className="w-full sm:w-fit" data-testid="order-mail-send">
           Send the order list

@@ -157,7 +157,8 @@ function MemberSection({ m, index }: { m: SheetMember; index: number }) {
           ))}
         </dl>
         <p className="mt-1 text-sm">
-          Deflection limits: {m.limits.live === null ? "—" : `L/${m.limits.live}`} live, {m.limits.total === null ? "—" : `L/${m.limits.total}`} total ({m.limits.source}).
+          Deflection limits: {m.limits.live === null ? "—" : `L/${m.limits.live}`} live, {m.limits.total === null ? "—" : `L/${m.limits.total}`} total (
+          {m.limits.source}).
         </p>
       </div>
 
@@ -187,8 +188,8 @@ function SourcesAppendix({ snapshot }: { snapshot: SheetSnapshot }) {
       </h2>
       {flagged > 0 ? (
         <p className="mb-2 text-sm">
-          Marked <span className="font-bold text-caution-ink">{FROM_MEMORY}</span>: no readable copy of that table confirmed these values. Check them
-          against the printed table.
+          Marked <span className="font-bold text-caution-ink">{FROM_MEMORY}</span>: no readable copy of that table confirmed these values. Check them against
+          the printed table.
         </p>
       ) : null}
       <ul className="list-disc space-y-1 pl-6 text-sm">
@@ -231,7 +232,12 @@ export function SheetDocument({ snapshot: s, crewQr }: SheetDocumentProps) {
         {crewQr ? (
           <figure className="sheet-keep mt-2 flex items-center gap-3" data-testid="sheet-crew-qr">
             {/* the SVG is drawn by the qrcode package from our own crew link */}
-            <div className="h-28 w-28 shrink-0 [&>svg]:h-full [&>svg]:w-full" dangerouslySetInnerHTML={{ __html: crewQr.svg }} role="img" aria-label="QR code of the crew link" />
+            <div
+              className="h-28 w-28 shrink-0 [&>svg]:h-full [&>svg]:w-full"
+              dangerouslySetInnerHTML={{ __html: crewQr.svg }}
+              role="img"
+              aria-label="QR code of the crew link"
+            />
             <figcaption className="min-w-0 text-sm">
               <strong className="block text-base">Crew link</strong>
               Scan for the live member schedule, read only.
@@ -267,28 +273,29 @@ export function SheetDocument({ snapshot: s, crewQr }: SheetDocumentProps) {
               </p>
               <p className="text-lg font-bold">{m.headline}</p>
               <p>
-                Span <span className="font-mono tabular-nums">{formatFeetInches(m.spanFt)}</span> · {m.pass ? "OK" : "Over"} {ratioPercent(m.ratio)} ({checkWords(m.governing)})
+                Span <span className="font-mono tabular-nums">{formatFeetInches(m.spanFt)}</span> · {m.pass ? "OK" : "Over"} {ratioPercent(m.ratio)} (
+                {checkWords(m.governing)})
               </p>
             </li>
           ))}
         </ul>
         <div className="hidden sm:block print:block">
-        <TableShell caption="Member schedule" head={["Member", "Build", "Span", "Result"]}>
-          {s.members.map((m) => (
-            <tr key={m.id} className="border-b border-rule align-top">
-              <th scope="row" className="px-1.5 py-1 font-bold">
-                {m.label}
-                <br />
-                <span className="font-normal text-graphite">{m.kindLabel}</span>
-              </th>
-              <td className="px-1.5 py-1 font-bold">{m.headline}</td>
-              <td className="px-1.5 py-1 font-mono whitespace-nowrap tabular-nums">{formatFeetInches(m.spanFt)}</td>
-              <td className="px-1.5 py-1 whitespace-nowrap">
-                {m.pass ? "OK" : "Over"} {ratioPercent(m.ratio)} ({checkWords(m.governing)})
-              </td>
-            </tr>
-          ))}
-        </TableShell>
+          <TableShell caption="Member schedule" head={["Member", "Build", "Span", "Result"]}>
+            {s.members.map((m) => (
+              <tr key={m.id} className="border-b border-rule align-top">
+                <th scope="row" className="px-1.5 py-1 font-bold">
+                  {m.label}
+                  <br />
+                  <span className="font-normal text-graphite">{m.kindLabel}</span>
+                </th>
+                <td className="px-1.5 py-1 font-bold">{m.headline}</td>
+                <td className="px-1.5 py-1 font-mono whitespace-nowrap tabular-nums">{formatFeetInches(m.spanFt)}</td>
+                <td className="px-1.5 py-1 whitespace-nowrap">
+                  {m.pass ? "OK" : "Over"} {ratioPercent(m.ratio)} ({checkWords(m.governing)})
+                </td>
+              </tr>
+            ))}
+          </TableShell>
         </div>
         {s.skipped.length > 0 ? (
           <div className="mt-2 text-sm">
@@ -311,8 +318,8 @@ export function SheetDocument({ snapshot: s, crewQr }: SheetDocumentProps) {
       <SourcesAppendix snapshot={s} />
 
       <footer className="border-t-2 border-rule pt-2 text-sm text-graphite">
-        Spanlark job sheet · {s.job.name} · saved {formatSheetDate(s.savedAt)} · tables {s.tablesLabel}. The numbers on this sheet were
-        worked out when it was saved and are kept as they were.
+        Spanlark job sheet · {s.job.name} · saved {formatSheetDate(s.savedAt)} · tables {s.tablesLabel}. The numbers on this sheet were worked out when it was
+        saved and are kept as they were.
       </footer>
     </article>
   );

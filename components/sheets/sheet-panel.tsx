@@ -24,8 +24,8 @@ export async function SheetPanel({ jobId, saveOnArrival = false, savedSheetId }:
     <Card title="Job sheets" aria-label="Job sheets">
       <div className="flex flex-col gap-3">
         <p className="text-ink-soft">
-          A job sheet keeps every member as it is worked out today — inputs, loads, checks, reactions, diagrams and the tables used — to print
-          or download for the inspector, the same every time.
+          A job sheet keeps every member as it is worked out today — inputs, loads, checks, reactions, diagrams and the tables used — to print or download for
+          the inspector, the same every time.
         </p>
         {savedSheetId && sheets.some((s) => s.id === savedSheetId) ? (
           <p role="status" className="rounded-card border-2 border-sound bg-sound-bg p-3 font-bold text-sound-ink" data-testid="sheet-saved-after-checkout">

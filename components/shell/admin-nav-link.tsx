@@ -6,7 +6,11 @@ export async function AdminNavLink() {
   const user = await getSessionUser();
   if (user?.role !== "admin") return null;
   return (
-    <Link href="/admin" className="inline-flex min-h-touch items-center rounded-lg border-2 border-spruce px-3 font-bold text-spruce no-underline hover:bg-spruce-light" data-testid="admin-link">
+    <Link
+      href="/admin"
+      className="inline-flex min-h-touch items-center rounded-lg border-2 border-spruce px-3 font-bold text-spruce no-underline hover:bg-spruce-light"
+      data-testid="admin-link"
+    >
       Admin
     </Link>
   );

@@ -27,31 +27,31 @@ export function SiteHeader({ adminLink }: SiteHeaderProps) {
           <Wordmark />
         </Link>
         {crew ? null : (
-        <div className="flex items-center gap-1">
-        <nav aria-label="Main" className="hidden md:block">
-          <ul className="flex items-center gap-1">
-            {NAV_ITEMS.map((item) => {
-              const active = isActive(pathname, item.href);
-              return (
-                <li key={item.href}>
-                  <Link
-                    href={item.href}
-                    aria-current={active ? "page" : undefined}
-                    className={cx(
-                      "inline-flex min-h-touch items-center gap-2 rounded-lg px-3 font-bold no-underline",
-                      active ? "bg-spruce text-white" : "text-ink hover:bg-spruce-light",
-                    )}
-                  >
-                    <NavIcon icon={item.icon} className="h-5 w-5" />
-                    {item.label}
-                  </Link>
-                </li>
-              );
-            })}
-          </ul>
-        </nav>
-        {adminLink}
-        </div>
+          <div className="flex items-center gap-1">
+            <nav aria-label="Main" className="hidden md:block">
+              <ul className="flex items-center gap-1">
+                {NAV_ITEMS.map((item) => {
+                  const active = isActive(pathname, item.href);
+                  return (
+                    <li key={item.href}>
+                      <Link
+                        href={item.href}
+                        aria-current={active ? "page" : undefined}
+                        className={cx(
+                          "inline-flex min-h-touch items-center gap-2 rounded-lg px-3 font-bold no-underline",
+                          active ? "bg-spruce text-white" : "text-ink hover:bg-spruce-light",
+                        )}
+                      >
+                        <NavIcon icon={item.icon} className="h-5 w-5" />
+                        {item.label}
+                      </Link>
+                    </li>
+                  );
+                })}
+              </ul>
+            </nav>
+            {adminLink}
+          </div>
         )}
       </div>
     </header>

@@ -11,10 +11,7 @@ export type CautionProps = {
 /** The safety caution with its warning triangle, on every answer, crew link and job sheet. */
 export function Caution({ variant = "short", className }: CautionProps) {
   return (
-    <aside
-      aria-label="Safety caution"
-      className={cx("rounded-card border-2 border-caution border-l-8 bg-caution-bg p-4 text-ink", className)}
-    >
+    <aside aria-label="Safety caution" className={cx("rounded-card border-2 border-caution border-l-8 bg-caution-bg p-4 text-ink", className)}>
       <p className="flex items-center gap-2 font-bold text-caution-ink">
         <WarningIcon className="h-6 w-6 shrink-0" />
         <span>{CAUTION_TITLE}</span>

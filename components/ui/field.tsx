@@ -67,8 +67,7 @@ function FieldFrame({
   );
 }
 
-export type TextFieldProps = Omit<InputHTMLAttributes<HTMLInputElement>, "size"> &
-  FieldTextProps & { containerClassName?: string };
+export type TextFieldProps = Omit<InputHTMLAttributes<HTMLInputElement>, "size"> & FieldTextProps & { containerClassName?: string };
 
 export function TextField({ label, hint, error, hideLabel, id, className, containerClassName, required, ...input }: TextFieldProps) {
   const ids = useFieldIds(id, hint, error);
@@ -96,19 +95,7 @@ export type SelectFieldProps = Omit<SelectHTMLAttributes<HTMLSelectElement>, "si
     containerClassName?: string;
   };
 
-export function SelectField({
-  label,
-  hint,
-  error,
-  hideLabel,
-  id,
-  options,
-  placeholder,
-  className,
-  containerClassName,
-  required,
-  ...select
-}: SelectFieldProps) {
+export function SelectField({ label, hint, error, hideLabel, id, options, placeholder, className, containerClassName, required, ...select }: SelectFieldProps) {
   const ids = useFieldIds(id, hint, error);
   return (
     <FieldFrame ids={ids} label={label} hint={hint} error={error} hideLabel={hideLabel} required={required} className={containerClassName}>

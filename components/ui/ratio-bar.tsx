@@ -59,9 +59,7 @@ export function RatioBar({ ratio, label, detail, governing = false, showScale = 
           className={cx("absolute inset-y-0 left-0 rounded-l-sm", verdict.pass ? "bg-sound" : "bg-over")}
           style={{
             width: `${fillPercent}%`,
-            backgroundImage: verdict.pass
-              ? undefined
-              : "repeating-linear-gradient(135deg, transparent 0 5px, rgba(255,255,255,0.35) 5px 9px)",
+            backgroundImage: verdict.pass ? undefined : "repeating-linear-gradient(135deg, transparent 0 5px, rgba(255,255,255,0.35) 5px 9px)",
           }}
         />
         <div className="absolute -top-1 -bottom-1 w-0.5 bg-ink" style={{ left: `calc(${limitPercent}% - 1px)` }} />

@@ -64,9 +64,7 @@ function ToastItem({ toast, onDismiss }: { toast: ToastEntry; onDismiss: (id: nu
   }, [id, durationMs, onDismiss]);
 
   return (
-    <div
-      className="pointer-events-auto flex w-full max-w-md items-center gap-3 rounded-card bg-ink px-4 py-2 text-paper shadow-bar"
-    >
+    <div className="pointer-events-auto flex w-full max-w-md items-center gap-3 rounded-card bg-ink px-4 py-2 text-paper shadow-bar">
       <CheckIcon className="h-5 w-5 shrink-0" />
       <p className="flex-1 py-2">{message}</p>
       {undo ? (

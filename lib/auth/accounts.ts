@@ -200,9 +200,7 @@ export async function accountForTicket(userId: string): Promise<SessionUser | nu
 }
 
 export type SignInResult =
-  | { ok: true; user: SessionUser }
-  | { ok: false; reason: "invalid" | "unverified" }
-  | { ok: false; reason: "rate-limited"; retryAfterSeconds: number };
+  { ok: true; user: SessionUser } | { ok: false; reason: "invalid" | "unverified" } | { ok: false; reason: "rate-limited"; retryAfterSeconds: number };
 
 /**
  * Checks an address and password. Unknown address and wrong password give the same answer in about the
@@ -234,12 +232,7 @@ export async function authenticate(email: string, password: string, ip: string):
  * A signed-in account changes its password, giving the current one. Wrong tries count against the same
  * limits as sign-in. Every session, this one included, ends: the person signs in again with the new one.
  */
-export async function changePassword(
-  userId: string,
-  currentPassword: string,
-  newPassword: string,
-  ip: string,
-): Promise<"changed" | "wrong-password"> {
+export async function changePassword(userId: string, currentPassword: string, newPassword: string, ip: string): Promise<"changed" | "wrong-password"> {
   getSequelize();
   const user = await User.findByPk(userId);
   if (!user) throw new HttpError(404, "account not found");
@@ -269,12 +262,13 @@ export const USERS_PAGE_SIZE = 25;
 export async function listUsers({ q, page }: { q: string; page: number }): Promise<{ users: UserListItem[]; total: number }> {
   getSequelize();
   const pattern = `%${q.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
-  const where = q
-    ? { [Op.or]: [{ email: { [Op.iLike]: pattern } }, { name: { [Op.iLike]: pattern } }, { company: { [Op.iLike]: pattern } }] }
-    : {};
+  const where = q ? { [Op.or]: [{ email: { [Op.iLike]: pattern } }, { name: { [Op.iLike]: pattern } }, { company: { [Op.iLike]: pattern } }] } : {};
   const { rows, count } = await User.findAndCountAll({
     where,
-    order: [["createdAt", "DESC"], ["email", "ASC"]],
+    order: [
+      ["createdAt", "DESC"],
+      ["email", "ASC"],
+    ],
     limit: USERS_PAGE_SIZE,
     offset: (page - 1) * USERS_PAGE_SIZE,
   });

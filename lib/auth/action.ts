@@ -77,7 +77,13 @@ export async function runAction<T, R extends object>(input: unknown, steps: Acti
   } catch (err) {
     if (err instanceof HttpError && err.status < 500) {
       const details = (err.details ?? {}) as { issues?: FieldIssue[]; upgrade?: string };
-      return { ok: false, error: err.message, status: err.status, ...(details.issues ? { issues: details.issues } : {}), ...(details.upgrade ? { upgrade: details.upgrade } : {}) };
+      return {
+        ok: false,
+        error: err.message,
+        status: err.status,
+        ...(details.issues ? { issues: details.issues } : {}),
+        ...(details.upgrade ? { upgrade: details.upgrade } : {}),
+      };
     }
     if (isDatabaseUnavailable(err)) return { ok: false, error: DATABASE_DOWN_MESSAGE, status: 503 };
     logger.error({ err }, steps.failed);

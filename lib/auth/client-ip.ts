@@ -42,7 +42,10 @@ export function normaliseAddress(text: string | undefined): string | null {
 /** TRUSTED_PROXIES as a BlockList; throws naming an entry that is neither an address nor a CIDR range. */
 export function parseTrustedProxies(text: string | undefined): BlockList {
   const list = new BlockList();
-  for (const entry of (text ?? "").split(",").map((e) => e.trim()).filter(Boolean)) {
+  for (const entry of (text ?? "")
+    .split(",")
+    .map((e) => e.trim())
+    .filter(Boolean)) {
     const [addressText, bitsText, extra] = entry.split("/");
     const address = normaliseAddress(addressText);
     const family = address ? (isIP(address) === 6 ? "ipv6" : "ipv4") : null;
@@ -72,7 +75,10 @@ export function resolveClientIp(peer: string, forwardedFor: string | undefined, 
   if (!socket) return UNKNOWN_CLIENT;
   if (!isTrusted(socket, trusted)) return socket;
   let client = socket;
-  const hops = (forwardedFor ?? "").split(",").map((h) => h.trim()).filter(Boolean);
+  const hops = (forwardedFor ?? "")
+    .split(",")
+    .map((h) => h.trim())
+    .filter(Boolean);
   for (let i = hops.length - 1; i >= 0; i -= 1) {
     const hop = normaliseAddress(hops[i]);
     if (!hop) break;

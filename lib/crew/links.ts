@@ -109,11 +109,10 @@ export async function createCrewLink(opts: CreateCrewLinkOptions): Promise<CrewL
         transaction,
       });
       if (active >= opts.activeLimit) {
-        throw new HttpError(
-          403,
-          `A free account can keep ${opts.activeLimit} crew links live at once. Revoke one you no longer need, or subscribe for more.`,
-          { limit: opts.activeLimit, upgrade: "/pricing" },
-        );
+        throw new HttpError(403, `A free account can keep ${opts.activeLimit} crew links live at once. Revoke one you no longer need, or subscribe for more.`, {
+          limit: opts.activeLimit,
+          upgrade: "/pricing",
+        });
       }
     }
     return CrewLink.create(

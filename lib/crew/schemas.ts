@@ -11,7 +11,9 @@ export const createCrewLinkSchema = z.object({
   label: z.string().trim().max(80, "must be 80 characters or fewer").optional().default(""),
   expiresInDays: z.coerce
     .number()
-    .refine((d): d is CrewLinkExpiryDays => (CREW_LINK_EXPIRY_DAYS as readonly number[]).includes(d), { message: "must be 0 (no expiry), 1, 7, 30 or 90 days" }),
+    .refine((d): d is CrewLinkExpiryDays => (CREW_LINK_EXPIRY_DAYS as readonly number[]).includes(d), {
+      message: "must be 0 (no expiry), 1, 7, 30 or 90 days",
+    }),
 });
 export type CreateCrewLinkInput = z.infer<typeof createCrewLinkSchema>;
 

@@ -19,10 +19,11 @@ function runner(sequelize: Sequelize, folder: "migrations" | "seeders"): Umzug<M
     migrations: {
       glob: [`${folder}/*.ts`, { cwd: root, ignore: ["**/*.d.ts"] }],
       resolve: ({ name, path: file, context }) => {
-        const load = async () => (await import(/* @vite-ignore */ file as string)) as {
-          up(p: { context: MigrationContext }): Promise<void>;
-          down(p: { context: MigrationContext }): Promise<void>;
-        };
+        const load = async () =>
+          (await import(/* @vite-ignore */ file as string)) as {
+            up(p: { context: MigrationContext }): Promise<void>;
+            down(p: { context: MigrationContext }): Promise<void>;
+          };
         return {
           name,
           up: async () => (await load()).up({ context }),

@@ -95,7 +95,12 @@ function hermite(c: readonly number[], dc: readonly number[], x0: number, a: num
  * starting and ending on the axis (y = 0) so the filled shape closes on the member.
  * `splitAt` lists x positions the curve must pass through as piece ends (the labelled extremes).
  */
-export function diagramChain(segments: readonly DiagramSegment[], quantity: DiagramQuantity, splitAt: readonly number[] = [], deflectionPieces = 8): BezierChain {
+export function diagramChain(
+  segments: readonly DiagramSegment[],
+  quantity: DiagramQuantity,
+  splitAt: readonly number[] = [],
+  deflectionPieces = 8,
+): BezierChain {
   if (segments.length === 0) return { start: [0, 0], pieces: [] };
   const pieces: Array<readonly [Point, Point, Point]> = [];
   const start: Point = [segments[0].x0, 0];

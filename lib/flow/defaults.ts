@@ -21,7 +21,14 @@ const SIMPLE = (lengthFt: number): Pick<FlowState, "lengthFt" | "supports"> => (
 });
 
 /** A wall standing on the header: studs, plates and finishes of about 10 psf over the wall's height (common practice). */
-const WALL_ABOVE = (lengthFt: number): FlowLineLoad => ({ id: "l-wall", label: "Wall above (studs, plates, finishes)", from: 0, to: lengthFt, w: 80, case: "D" });
+const WALL_ABOVE = (lengthFt: number): FlowLineLoad => ({
+  id: "l-wall",
+  label: "Wall above (studs, plates, finishes)",
+  from: 0,
+  to: lengthFt,
+  w: 80,
+  case: "D",
+});
 
 const BASE: Omit<FlowState, "kind" | "lengthFt" | "supports" | "width" | "areaLoads" | "material"> = {
   version: 1,

@@ -37,7 +37,11 @@ export function pointLoadSchema(lengthFt: number): yup.ObjectSchema<PointLoadFor
     P: yup
       .string()
       .required("Load is empty: type the load in lb")
-      .test("number", "Load must be a number of lb more than 0", (v) => Number.isFinite(Number((v ?? "").replace(/,/g, ""))) && Number((v ?? "").replace(/,/g, "")) > 0)
+      .test(
+        "number",
+        "Load must be a number of lb more than 0",
+        (v) => Number.isFinite(Number((v ?? "").replace(/,/g, ""))) && Number((v ?? "").replace(/,/g, "")) > 0,
+      )
       .test("max", "Load must be 1,000,000 lb or less", (v) => Number((v ?? "").replace(/,/g, "")) <= 1_000_000),
     case: caseField,
   });
@@ -63,7 +67,11 @@ export function lineLoadSchema(lengthFt: number): yup.ObjectSchema<LineLoadForm>
     w: yup
       .string()
       .required("Load is empty: type the load in plf")
-      .test("number", "Load must be a number of plf more than 0", (v) => Number.isFinite(Number((v ?? "").replace(/,/g, ""))) && Number((v ?? "").replace(/,/g, "")) > 0)
+      .test(
+        "number",
+        "Load must be a number of plf more than 0",
+        (v) => Number.isFinite(Number((v ?? "").replace(/,/g, ""))) && Number((v ?? "").replace(/,/g, "")) > 0,
+      )
       .test("max", "Load must be 100,000 plf or less", (v) => Number((v ?? "").replace(/,/g, "")) <= 100_000),
     case: caseField,
   });

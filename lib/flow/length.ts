@@ -23,10 +23,7 @@ const FRACTION = String.raw`\d+\s*\/\s*\d+`;
 // inches: a decimal, a whole number with a fraction ("6-1/2", "6 1/2") or a fraction alone ("1/2")
 const INCHES = String.raw`(?:(\d+)(?:\s*-\s*|\s+)(${FRACTION})|(${FRACTION})|(${NUM}))`;
 
-const FEET_INCHES = new RegExp(
-  String.raw`^(${NUM})\s*(?:${FOOT_MARK}|ft|feet|foot)\s*(?:-?\s*${INCHES}\s*(?:${INCH_MARK}|in|inches|inch)?)?$`,
-  "i",
-);
+const FEET_INCHES = new RegExp(String.raw`^(${NUM})\s*(?:${FOOT_MARK}|ft|feet|foot)\s*(?:-?\s*${INCHES}\s*(?:${INCH_MARK}|in|inches|inch)?)?$`, "i");
 const INCHES_ONLY = new RegExp(String.raw`^${INCHES}\s*(?:${INCH_MARK}|in|inches|inch)$`, "i");
 const DASHED = new RegExp(String.raw`^(\d+)\s*-\s*${INCHES}$`);
 const METRIC = new RegExp(String.raw`^(${NUM})\s*(m|cm|mm)$`, "i");
@@ -76,7 +73,11 @@ export function parseLength(raw: string): LengthParse {
   if (m) {
     const inches = inchesFrom(m[2], m[3], m[4], m[5]);
     if (!inches.ok) return inches;
-    if (inches.inches >= 12) return { ok: false, message: `has ${trimNumber(inches.inches)} inches after the feet: inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})` };
+    if (inches.inches >= 12)
+      return {
+        ok: false,
+        message: `has ${trimNumber(inches.inches)} inches after the feet: inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})`,
+      };
     return finite(Number(m[1]) + inches.inches / 12);
   }
 
@@ -84,7 +85,8 @@ export function parseLength(raw: string): LengthParse {
   if (m) {
     const inches = inchesFrom(m[2], m[3], m[4], m[5]);
     if (!inches.ok) return inches;
-    if (inches.inches >= 12) return { ok: false, message: `"${text}" reads as feet-inches, and inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})` };
+    if (inches.inches >= 12)
+      return { ok: false, message: `"${text}" reads as feet-inches, and inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})` };
     return finite(Number(m[1]) + inches.inches / 12);
   }
 

@@ -73,7 +73,14 @@ export function designBase(state: FlowState): DesignRequestBase {
   const standard: LoadStandard = state.loadStandard ?? "ASCE 7-16";
   return {
     ...(span !== undefined && ro !== undefined
-      ? { roughOpeningFt: ro, lengthFt: span, supports: [{ x: 0, type: "pin" as const }, { x: span, type: "roller" as const }] }
+      ? {
+          roughOpeningFt: ro,
+          lengthFt: span,
+          supports: [
+            { x: 0, type: "pin" as const },
+            { x: span, type: "roller" as const },
+          ],
+        }
       : { lengthFt: state.lengthFt, supports: sortedSupports(state.supports) }),
     ...width,
     loads: designLoads(state),
@@ -94,7 +101,6 @@ export function designBase(state: FlowState): DesignRequestBase {
     ...(wall ? { wallFraming: wall } : {}),
   };
 }
-
 
 /** How many passing members the flow asks for, each with its whole check (any of them may be chosen). */
 const SIZE_LIMIT = 12;

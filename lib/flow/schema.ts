@@ -34,7 +34,15 @@ export const flowStateSchema = z
       z.object({ mode: z.literal("tributary"), tributaryFt: z.number().gt(0, "must be more than 0").max(60, "must be 60 ft or less") }),
     ]),
     areaLoads: z
-      .array(z.object({ id, preset: z.string().max(40), label, case: loadCase, psf: z.number().min(0, "cannot be negative").max(1000, "must be 1,000 psf or less") }))
+      .array(
+        z.object({
+          id,
+          preset: z.string().max(40),
+          label,
+          case: loadCase,
+          psf: z.number().min(0, "cannot be negative").max(1000, "must be 1,000 psf or less"),
+        }),
+      )
       .max(20),
     snow: z.object({
       on: z.boolean(),
@@ -48,7 +56,14 @@ export const flowStateSchema = z
     lineLoads: z
       .array(
         z
-          .object({ id, label, from: position, to: position, w: z.number().gt(0, "must be more than 0").max(100_000, "must be 100,000 plf or less"), case: loadCase })
+          .object({
+            id,
+            label,
+            from: position,
+            to: position,
+            w: z.number().gt(0, "must be more than 0").max(100_000, "must be 100,000 plf or less"),
+            case: loadCase,
+          })
           .refine((l) => l.to > l.from, { message: "must end after it starts", path: ["to"] }),
       )
       .max(100),

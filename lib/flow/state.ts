@@ -100,7 +100,14 @@ export function spansFt(state: FlowState): number[] {
 export function withMainSpan(state: FlowState, spanFt: number): FlowState {
   const sorted = sortedSupports(state.supports);
   if (sorted.length < 2) {
-    return { ...state, lengthFt: spanFt, supports: [{ x: 0, type: "pin" }, { x: spanFt, type: "roller" }] };
+    return {
+      ...state,
+      lengthFt: spanFt,
+      supports: [
+        { x: 0, type: "pin" },
+        { x: spanFt, type: "roller" },
+      ],
+    };
   }
   const delta = spanFt - (sorted[1].x - sorted[0].x);
   const pivot = sorted[1].x;

@@ -65,7 +65,12 @@ export function basisWords(standard: LoadStandard, hasSnow: boolean): string {
  * incised, a span found from a rough opening, and any bracing the member needs.
  */
 export function answerFacts(check: CheckOutput): string[] {
-  const facts = [basisWords(check.loadStandard, check.loads.some((l) => l.case === "S"))];
+  const facts = [
+    basisWords(
+      check.loadStandard,
+      check.loads.some((l) => l.case === "S"),
+    ),
+  ];
   const a = check.assembly;
   if (a.wallFraming !== null) facts.push(`Assemble: ${a.words}, ${a.fits ? "fills" : "does NOT fill"} a ${a.wallFraming} wall`);
   else if (a.plies > 1) facts.push(`Assemble: ${a.words}, plies nailed together`);
@@ -101,7 +106,14 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     pass: check.pass,
     governing: check.governing,
     ratio: check.ratio,
-    checks: check.checks.map((c) => ({ name: c.name, ratio: c.ratio, demand: c.demand, capacity: c.capacity, unit: c.unit, combination: c.combination?.name ?? null })),
+    checks: check.checks.map((c) => ({
+      name: c.name,
+      ratio: c.ratio,
+      demand: c.demand,
+      capacity: c.capacity,
+      unit: c.unit,
+      combination: c.combination?.name ?? null,
+    })),
     reactions,
     spanFt: mainSpanFt(state),
     lengthFt: state.lengthFt,

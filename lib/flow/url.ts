@@ -80,7 +80,8 @@ export function resolveFlowStart(params: { s?: string | null; step?: string | nu
 
   const storedLocation = readStoredLocation(stored);
   if (isMemberKind(params.kind)) {
-    if (storedLocation && storedLocation.state.kind === params.kind) return { location: { ...storedLocation, step: step ?? storedLocation.step }, from: "storage" };
+    if (storedLocation && storedLocation.state.kind === params.kind)
+      return { location: { ...storedLocation, step: step ?? storedLocation.step }, from: "storage" };
     return { location: { state: defaultFlowState(params.kind), step: step ?? "span" }, from: "kind" };
   }
   if (storedLocation) return { location: { ...storedLocation, step: step ?? storedLocation.step }, from: "storage" };

@@ -78,7 +78,12 @@ export async function listJobs(ownerId: string, search = ""): Promise<JobListIte
   getSequelize();
   const q = search.trim().slice(0, 120);
   const filter: WhereOptions = q
-    ? { [Op.or]: [sqlWhere(fn("lower", col("Job.name")), Op.like, likePattern(q.toLowerCase())), sqlWhere(fn("lower", col("Job.site_address")), Op.like, likePattern(q.toLowerCase()))] }
+    ? {
+        [Op.or]: [
+          sqlWhere(fn("lower", col("Job.name")), Op.like, likePattern(q.toLowerCase())),
+          sqlWhere(fn("lower", col("Job.site_address")), Op.like, likePattern(q.toLowerCase())),
+        ],
+      }
     : {};
   const jobs = await Job.findAll({
     where: { ownerId, deletedAt: { [Op.is]: null }, ...filter },
@@ -86,7 +91,10 @@ export async function listJobs(ownerId: string, search = ""): Promise<JobListIte
     limit: 200,
   });
   const counts = jobs.length
-    ? ((await Member.count({ where: { jobId: jobs.map((j) => j.id), deletedAt: { [Op.is]: null } }, group: ["job_id"] })) as unknown as { job_id: string; count: number }[])
+    ? ((await Member.count({ where: { jobId: jobs.map((j) => j.id), deletedAt: { [Op.is]: null } }, group: ["job_id"] })) as unknown as {
+        job_id: string;
+        count: number;
+      }[])
     : [];
   const byJob = new Map(counts.map((c) => [c.job_id, Number(c.count)]));
   return jobs.map((j) => ({ id: j.id, name: j.name, siteAddress: j.siteAddress, memberCount: byJob.get(j.id) ?? 0, updatedAt: j.updatedAt }));
@@ -111,8 +119,22 @@ export async function getJob(ownerId: string, jobId: string): Promise<JobView | 
   if (!/^[0-9a-f-]{36}$/i.test(jobId)) return null;
   const job = await Job.findOne({ where: { id: jobId, ownerId, deletedAt: { [Op.is]: null } } });
   if (!job) return null;
-  const members = await Member.findAll({ where: { jobId: job.id, deletedAt: { [Op.is]: null } }, order: [["sortOrder", "ASC"], ["createdAt", "ASC"]] });
-  return { id: job.id, name: job.name, siteAddress: job.siteAddress, notes: job.notes, createdAt: job.createdAt, updatedAt: job.updatedAt, members: members.map(memberView) };
+  const members = await Member.findAll({
+    where: { jobId: job.id, deletedAt: { [Op.is]: null } },
+    order: [
+      ["sortOrder", "ASC"],
+      ["createdAt", "ASC"],
+    ],
+  });
+  return {
+    id: job.id,
+    name: job.name,
+    siteAddress: job.siteAddress,
+    notes: job.notes,
+    createdAt: job.createdAt,
+    updatedAt: job.updatedAt,
+    members: members.map(memberView),
+  };
 }
 
 /** One live member of one of the owner's live jobs; null otherwise. */

@@ -97,7 +97,14 @@ export async function duplicateJob(ownerId: string, jobId: string, limit: SavedJ
     const job = await ownedJob(ownerId, jobId, transaction);
     await assertRoomForJob(ownerId, limit, transaction);
     const copy = await Job.create({ ownerId, name: `${job.name} (copy)`.slice(0, 120), siteAddress: job.siteAddress, notes: job.notes }, { transaction });
-    const members = await Member.findAll({ where: { jobId: job.id, deletedAt: { [Op.is]: null } }, order: [["sortOrder", "ASC"], ["createdAt", "ASC"]], transaction });
+    const members = await Member.findAll({
+      where: { jobId: job.id, deletedAt: { [Op.is]: null } },
+      order: [
+        ["sortOrder", "ASC"],
+        ["createdAt", "ASC"],
+      ],
+      transaction,
+    });
     const idMap = new Map<string, string>();
     for (const m of members) {
       const c = await Member.create(
@@ -109,7 +116,11 @@ export async function duplicateJob(ownerId: string, jobId: string, limit: SavedJ
           resultSummary: m.resultSummary,
           chosenMember: m.chosenMember,
           sortOrder: m.sortOrder,
-          runWidthFt: m.runWidthFt, postHeightFt: m.postHeightFt, postSize: m.postSize, footingDiameterIn: m.footingDiameterIn, footingDepthIn: m.footingDepthIn,
+          runWidthFt: m.runWidthFt,
+          postHeightFt: m.postHeightFt,
+          postSize: m.postSize,
+          footingDiameterIn: m.footingDiameterIn,
+          footingDepthIn: m.footingDepthIn,
         },
         { transaction },
       );
@@ -191,10 +202,12 @@ export async function updateMember(ownerId: string, input: UpdateMemberInput): P
   const member = await ownedMember(ownerId, input.memberId);
   if (input.label !== undefined) member.label = input.label;
   if (input.carriedByMemberId !== undefined) {
-    if (input.carriedByMemberId === member.id) throw new HttpError(400, "invalid input", { issues: [{ path: "carriedByMemberId", message: "Carried by: a member cannot carry itself" }] });
+    if (input.carriedByMemberId === member.id)
+      throw new HttpError(400, "invalid input", { issues: [{ path: "carriedByMemberId", message: "Carried by: a member cannot carry itself" }] });
     if (input.carriedByMemberId !== null) {
       const carrier = await Member.findOne({ where: { id: input.carriedByMemberId, jobId: member.jobId, deletedAt: { [Op.is]: null } } });
-      if (!carrier) throw new HttpError(400, "invalid input", { issues: [{ path: "carriedByMemberId", message: "Carried by: pick a member of the same job" }] });
+      if (!carrier)
+        throw new HttpError(400, "invalid input", { issues: [{ path: "carriedByMemberId", message: "Carried by: pick a member of the same job" }] });
     }
     member.carriedByMemberId = input.carriedByMemberId;
   }
@@ -249,7 +262,11 @@ export async function duplicateMember(ownerId: string, memberId: string): Promis
         chosenMember: m.chosenMember,
         carriedByMemberId: m.carriedByMemberId,
         sortOrder: m.sortOrder + 1,
-        runWidthFt: m.runWidthFt, postHeightFt: m.postHeightFt, postSize: m.postSize, footingDiameterIn: m.footingDiameterIn, footingDepthIn: m.footingDepthIn,
+        runWidthFt: m.runWidthFt,
+        postHeightFt: m.postHeightFt,
+        postSize: m.postSize,
+        footingDiameterIn: m.footingDiameterIn,
+        footingDepthIn: m.footingDepthIn,
       },
       { transaction },
     );

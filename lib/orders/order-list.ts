@@ -170,7 +170,9 @@ function memberPieces(m: OrderMember, tables: MaterialTables, missing: string[],
   if (repeated) {
     if (width && width > 0) count = joistCount(width, spacingIn);
     else {
-      missing.push(`${m.label}: add the ${m.kind === "rafter" ? "roof" : m.kind === "deck-joist" ? "deck" : "floor"} width the ${m.kind === "rafter" ? "rafters" : "joists"} repeat across to count them (one is listed).`);
+      missing.push(
+        `${m.label}: add the ${m.kind === "rafter" ? "roof" : m.kind === "deck-joist" ? "deck" : "floor"} width the ${m.kind === "rafter" ? "rafters" : "joists"} repeat across to count them (one is listed).`,
+      );
     }
   }
   const what = repeated ? (m.kind === "rafter" ? "rafters" : "joists") : "";
@@ -190,7 +192,10 @@ function memberPieces(m: OrderMember, tables: MaterialTables, missing: string[],
       quantity: count * plies * stock.pieces,
       unit: "pcs",
       use: useWords,
-      note: stock.pieces > 1 ? `${m.label} is longer than the longest stock length: ${stock.pieces} pieces per ${plies > 1 ? "ply" : "member"}, joined only over a support` : undefined,
+      note:
+        stock.pieces > 1
+          ? `${m.label} is longer than the longest stock length: ${stock.pieces} pieces per ${plies > 1 ? "ply" : "member"}, joined only over a support`
+          : undefined,
       ref,
       sortKey,
     });
@@ -319,7 +324,18 @@ function headerExtras(
 }
 
 /** Rim joists across both ends of the joists and rows of blocking between them, of the joist's size (common practice). */
-function floorExtras(m: OrderMember, group: string, size: string, ref: ItemRef, sortKey: number, joists: number, spacingIn: number, bIn: number, widthFt: number, tables: MaterialTables): Piece[] {
+function floorExtras(
+  m: OrderMember,
+  group: string,
+  size: string,
+  ref: ItemRef,
+  sortKey: number,
+  joists: number,
+  spacingIn: number,
+  bIn: number,
+  widthFt: number,
+  tables: MaterialTables,
+): Piece[] {
   const pieces: Piece[] = [];
   const stock = stockLengthsOf(tables, "sawn");
   const rim = stockLengthFor(widthFt, stock);
@@ -421,7 +437,18 @@ export function buildOrderList(members: readonly OrderMember[], tables: Material
       held.uses.push(p.use);
       if (p.note && !held.notes.includes(p.note)) held.notes.push(p.note);
     } else {
-      lines.set(key, { group: p.group, item: p.item, lengthFt: p.lengthFt, quantity: p.quantity, unit: p.unit, uses: [p.use], notes: p.note ? [p.note] : [], costPerFt: cost, price: null, sortKey: p.sortKey });
+      lines.set(key, {
+        group: p.group,
+        item: p.item,
+        lengthFt: p.lengthFt,
+        quantity: p.quantity,
+        unit: p.unit,
+        uses: [p.use],
+        notes: p.note ? [p.note] : [],
+        costPerFt: cost,
+        price: null,
+        sortKey: p.sortKey,
+      });
     }
   }
   for (const line of lines.values()) {

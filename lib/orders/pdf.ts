@@ -54,7 +54,10 @@ export function renderOrderPdf(order: JobOrder, paper: Paper = "letter"): Promis
       );
     }
     w.heading("Total", 12);
-    w.text(`${formatDollars(list.total)} for the priced lines${list.unpriced > 0 ? `; ${list.unpriced} line${list.unpriced === 1 ? " has" : "s have"} no price in the cost table` : ""}.`, { size: 11, bold: true, gap: 0.3 });
+    w.text(
+      `${formatDollars(list.total)} for the priced lines${list.unpriced > 0 ? `; ${list.unpriced} line${list.unpriced === 1 ? " has" : "s have"} no price in the cost table` : ""}.`,
+      { size: 11, bold: true, gap: 0.3 },
+    );
     if (list.missing.length > 0) {
       w.heading("Not counted yet", 12);
       for (const m of list.missing) w.text(`• ${m}`, { size: 9.5 });

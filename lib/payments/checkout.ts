@@ -22,7 +22,12 @@ export function saveSheetReturnPath(jobId: string): string {
   return `/jobs/${jobId}?saveSheet=1`;
 }
 
-export async function startCheckout(user: BillingUser, plan: PlanId, stripe: Stripe = getStripe(), back: CheckoutReturn = {}): Promise<{ url: string; sessionId: string }> {
+export async function startCheckout(
+  user: BillingUser,
+  plan: PlanId,
+  stripe: Stripe = getStripe(),
+  back: CheckoutReturn = {},
+): Promise<{ url: string; sessionId: string }> {
   if (await hasActiveSubscription(user.id)) {
     throw new HttpError(409, "You already have an active subscription. Manage it on the billing page.");
   }

@@ -39,7 +39,14 @@ function summarize(row: Subscription): SubscriptionSummary {
 /** The user's subscription that matters: a live one if any, otherwise the most recent; null if never. */
 export async function getSubscription(userId: string): Promise<SubscriptionSummary | null> {
   getSequelize();
-  const rows = await Subscription.findAll({ where: { userId }, order: [["stripeUpdatedAt", "DESC"], ["createdAt", "DESC"]], limit: 20 });
+  const rows = await Subscription.findAll({
+    where: { userId },
+    order: [
+      ["stripeUpdatedAt", "DESC"],
+      ["createdAt", "DESC"],
+    ],
+    limit: 20,
+  });
   if (rows.length === 0) return null;
   const live = rows.find((r) => ACCESS_STATUSES.includes(r.status)) ?? rows.find((r) => !FINAL_STATUSES.includes(r.status));
   return summarize(live ?? rows[0]);

@@ -46,12 +46,12 @@ const REPLACEMENTS: Record<string, string> = {
   "→": "->",
   "←": "<-",
   "√": "sqrt",
-  "Ω": "Omega ",
-  "φ": "phi ",
-  "λ": "lambda ",
-  "Δ": "Delta ",
-  "δ": "delta ",
-  "ξ": "xi",
+  Ω: "Omega ",
+  φ: "phi ",
+  λ: "lambda ",
+  Δ: "Delta ",
+  δ: "delta ",
+  ξ: "xi",
   "⁴": "^4",
   "−": "-",
   "✓": "",
@@ -107,9 +107,15 @@ export class SheetWriter {
     if (this.doc.y + space > this.bottom) this.doc.addPage();
   }
 
-  text(value: string, opts: { size?: number; bold?: boolean; color?: string; x?: number; width?: number; gap?: number; align?: "left" | "right" | "center" } = {}): void {
+  text(
+    value: string,
+    opts: { size?: number; bold?: boolean; color?: string; x?: number; width?: number; gap?: number; align?: "left" | "right" | "center" } = {},
+  ): void {
     const { doc } = this;
-    doc.font(opts.bold ? this.fonts.bold : this.fonts.regular).fontSize(opts.size ?? 10).fillColor(opts.color ?? PDF_COLORS.ink);
+    doc
+      .font(opts.bold ? this.fonts.bold : this.fonts.regular)
+      .fontSize(opts.size ?? 10)
+      .fillColor(opts.color ?? PDF_COLORS.ink);
     doc.text(pdfText(value), opts.x ?? this.left, doc.y, { width: opts.width ?? this.contentWidth, align: opts.align ?? "left" });
     if (opts.gap) doc.moveDown(opts.gap);
   }
@@ -149,7 +155,12 @@ export class SheetWriter {
         doc.fillColor(bold ? PDF_COLORS.graphite : PDF_COLORS.ink).text(pdfText(c), x + 3, y + 3, { width: cols[i] - 6, align: numeric[i] ? "right" : "left" });
         x += cols[i];
       });
-      doc.moveTo(this.left, y + h).lineTo(this.right, y + h).lineWidth(bold ? 0.9 : 0.4).strokeColor(PDF_COLORS.rule).stroke();
+      doc
+        .moveTo(this.left, y + h)
+        .lineTo(this.right, y + h)
+        .lineWidth(bold ? 0.9 : 0.4)
+        .strokeColor(PDF_COLORS.rule)
+        .stroke();
       if (!bold && decorate) decorate(index, cell, y, h);
       doc.x = this.left;
       doc.y = y + h;
@@ -165,8 +176,16 @@ export class SheetWriter {
     const full = w / 1.5;
     const filled = Math.min(ratio, 1.5) * full;
     doc.rect(x, y, w, 7).lineWidth(0.5).strokeColor(PDF_COLORS.rule).stroke();
-    doc.rect(x, y, filled, 7).fillColor(ratio <= 1 ? PDF_COLORS.sound : PDF_COLORS.over).fill();
-    doc.moveTo(x + full, y - 2).lineTo(x + full, y + 9).lineWidth(1.2).strokeColor(PDF_COLORS.ink).stroke();
+    doc
+      .rect(x, y, filled, 7)
+      .fillColor(ratio <= 1 ? PDF_COLORS.sound : PDF_COLORS.over)
+      .fill();
+    doc
+      .moveTo(x + full, y - 2)
+      .lineTo(x + full, y + 9)
+      .lineWidth(1.2)
+      .strokeColor(PDF_COLORS.ink)
+      .stroke();
   }
 
   caution(snapshot: Pick<SheetSnapshot, "caution">): void {
@@ -184,11 +203,31 @@ export class SheetWriter {
     // warning triangle drawn as a path, with its mark
     const tx = this.left + 14;
     const ty = top + 8;
-    doc.moveTo(tx + 6, ty).lineTo(tx + 12, ty + 11).lineTo(tx, ty + 11).closePath().lineWidth(1.2).strokeColor(PDF_COLORS.caution).stroke();
-    doc.moveTo(tx + 6, ty + 3.5).lineTo(tx + 6, ty + 7.5).stroke();
-    doc.circle(tx + 6, ty + 9.3, 0.6).fillColor(PDF_COLORS.caution).fill();
-    doc.font(this.fonts.bold).fontSize(11).fillColor(PDF_COLORS.ink).text(pdfText(snapshot.caution.title), tx + 18, top + 8, { width: inner });
-    doc.font(this.fonts.regular).fontSize(9.5).text(body, this.left + 14, doc.y + 3, { width: inner });
+    doc
+      .moveTo(tx + 6, ty)
+      .lineTo(tx + 12, ty + 11)
+      .lineTo(tx, ty + 11)
+      .closePath()
+      .lineWidth(1.2)
+      .strokeColor(PDF_COLORS.caution)
+      .stroke();
+    doc
+      .moveTo(tx + 6, ty + 3.5)
+      .lineTo(tx + 6, ty + 7.5)
+      .stroke();
+    doc
+      .circle(tx + 6, ty + 9.3, 0.6)
+      .fillColor(PDF_COLORS.caution)
+      .fill();
+    doc
+      .font(this.fonts.bold)
+      .fontSize(11)
+      .fillColor(PDF_COLORS.ink)
+      .text(pdfText(snapshot.caution.title), tx + 18, top + 8, { width: inner });
+    doc
+      .font(this.fonts.regular)
+      .fontSize(9.5)
+      .text(body, this.left + 14, doc.y + 3, { width: inner });
     doc.font(this.fonts.bold).text("Spanlark does not check:", this.left + 14, doc.y + 5, { width: inner });
     doc.font(this.fonts.regular).text(list, this.left + 14, doc.y + 1, { width: inner });
     doc.x = this.left;
@@ -216,11 +255,24 @@ export class SheetWriter {
 
     // squared-paper grid
     doc.lineWidth(0.3).strokeColor(INK.grid);
-    for (let gx = plotLeft; gx <= plotRight + 0.1; gx += (plotRight - plotLeft) / 16) doc.moveTo(gx, top).lineTo(gx, top + h).stroke();
-    for (let k = 0; k <= 4; k++) doc.moveTo(plotLeft, top + (h * k) / 4).lineTo(plotRight, top + (h * k) / 4).stroke();
+    for (let gx = plotLeft; gx <= plotRight + 0.1; gx += (plotRight - plotLeft) / 16)
+      doc
+        .moveTo(gx, top)
+        .lineTo(gx, top + h)
+        .stroke();
+    for (let k = 0; k <= 4; k++)
+      doc
+        .moveTo(plotLeft, top + (h * k) / 4)
+        .lineTo(plotRight, top + (h * k) / 4)
+        .stroke();
 
     const chain: BezierChain = diagramChain(d.segments, d.quantity, xs);
-    const tone = d.quantity === "V" ? { stroke: INK.spruce, fill: INK.spruceLight } : d.quantity === "M" ? { stroke: INK.amberDark, fill: INK.amberLight } : { stroke: INK.ink, fill: null };
+    const tone =
+      d.quantity === "V"
+        ? { stroke: INK.spruce, fill: INK.spruceLight }
+        : d.quantity === "M"
+          ? { stroke: INK.amberDark, fill: INK.amberLight }
+          : { stroke: INK.ink, fill: null };
     const trace = () => {
       doc.moveTo(sx(chain.start[0]), sy(chain.start[1]));
       for (const [c1, c2, p] of chain.pieces) doc.bezierCurveTo(sx(c1[0]), sy(c1[1]), sx(c2[0]), sy(c2[1]), sx(p[0]), sy(p[1]));
@@ -240,7 +292,14 @@ export class SheetWriter {
     doc.moveTo(plotLeft, axisY).lineTo(plotRight, axisY).lineWidth(0.9).strokeColor(PDF_COLORS.ink).stroke();
     for (const s of supports) {
       const x = sx(s.x);
-      doc.moveTo(x, top + h + 4).lineTo(x + 5, top + h + 12).lineTo(x - 5, top + h + 12).closePath().lineWidth(0.8).strokeColor(PDF_COLORS.graphite).stroke();
+      doc
+        .moveTo(x, top + h + 4)
+        .lineTo(x + 5, top + h + 12)
+        .lineTo(x - 5, top + h + 12)
+        .closePath()
+        .lineWidth(0.8)
+        .strokeColor(PDF_COLORS.graphite)
+        .stroke();
     }
 
     // extremes: value and position
@@ -301,7 +360,12 @@ function drawSchedule(w: SheetWriter, s: SheetSnapshot): void {
   w.heading("Member schedule");
   w.table(
     ["Member", "Build", "Span", "Result"],
-    s.members.map((m) => [`${m.label}\n${m.kindLabel}`, m.headline, formatFeetInches(m.spanFt), `${m.pass ? "OK" : "Over"} ${ratioPercent(m.ratio)} (${checkWords(m.governing)})`]),
+    s.members.map((m) => [
+      `${m.label}\n${m.kindLabel}`,
+      m.headline,
+      formatFeetInches(m.spanFt),
+      `${m.pass ? "OK" : "Over"} ${ratioPercent(m.ratio)} (${checkWords(m.governing)})`,
+    ]),
     [0.24, 0.44, 0.12, 0.2],
   );
   if (s.skipped.length > 0) {
@@ -381,7 +445,10 @@ function drawMember(w: SheetWriter, m: SheetMember, index: number): void {
   const half = Math.ceil(m.factors.length / 2);
   const rows = m.factors.slice(0, half).map((f, i) => [f[0], f[1], m.factors[half + i]?.[0] ?? "", m.factors[half + i]?.[1] ?? ""]);
   w.table(["Factor", "Value", "Factor", "Value"], rows, [0.3, 0.2, 0.3, 0.2], [false, true, false, true], 8.5);
-  w.text(`Deflection limits: ${m.limits.live === null ? "—" : `L/${m.limits.live}`} live, ${m.limits.total === null ? "—" : `L/${m.limits.total}`} total (${m.limits.source}).`, { size: 9 });
+  w.text(
+    `Deflection limits: ${m.limits.live === null ? "—" : `L/${m.limits.live}`} live, ${m.limits.total === null ? "—" : `L/${m.limits.total}`} total (${m.limits.source}).`,
+    { size: 9 },
+  );
 
   if (m.assumptions.length > 0) {
     w.heading("Assumptions", 11);

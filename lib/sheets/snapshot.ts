@@ -119,7 +119,6 @@ export interface SheetSource {
   now: Date;
 }
 
-
 function fmtNumber(v: number): string {
   if (!Number.isFinite(v)) return "—";
   const abs = Math.abs(v);
@@ -163,7 +162,10 @@ function inputRows(state: FlowState): [string, string][] {
   if (state.snow.on && state.snow.groundPsf > 0) {
     const exposure = EXPOSURE_WORDS[state.snow.exposure].toLowerCase();
     const heat = THERMAL_WORDS[state.snow.thermal].toLowerCase();
-    rows.push(["Snow (S)", `ground snow ${fmtNumber(state.snow.groundPsf)} psf; roof ${exposure} (Ce ${EXPOSURE_CE[state.snow.exposure]}); building ${heat} (Ct ${THERMAL_CT[state.snow.thermal]})`]);
+    rows.push([
+      "Snow (S)",
+      `ground snow ${fmtNumber(state.snow.groundPsf)} psf; roof ${exposure} (Ce ${EXPOSURE_CE[state.snow.exposure]}); building ${heat} (Ct ${THERMAL_CT[state.snow.thermal]})`,
+    ]);
   }
   if (state.snow.on || [...state.pointLoads, ...state.lineLoads, ...state.areaLoads].some((l) => l.case === "S")) {
     rows.push(["Ground snow map", LOAD_STANDARD_WORDS[state.loadStandard ?? "ASCE 7-16"]]);
@@ -245,7 +247,14 @@ function diagramsFor(check: CheckOutput): SheetDiagram[] {
   return [
     { quantity: "V", title: "Shear", unit: "lb", combination: strength, segments: d.strength.segments, extremes: d.strength.shear },
     { quantity: "M", title: "Moment", unit: "lb-ft", combination: strength, segments: d.strength.segments, extremes: d.strength.moment },
-    { quantity: "deflection", title: "Deflection", unit: "in", combination: d.service.combination.name, segments: d.service.segments, extremes: d.service.deflection },
+    {
+      quantity: "deflection",
+      title: "Deflection",
+      unit: "in",
+      combination: d.service.combination.name,
+      segments: d.service.segments,
+      extremes: d.service.deflection,
+    },
   ];
 }
 

@@ -120,9 +120,7 @@ export function envelope(input: BeamInput, combos: NamedCombination[], opts: Env
   const runs: EnvelopeRun[] = [];
   const coefs = new Float64Array(parts.length);
   for (const combo of combos) {
-    const loaded = Array.from({ length: nreg }, (_, r) =>
-      groups.some((g) => g.region === r && (combo.factors[g.loadCase] ?? 0) !== 0),
-    );
+    const loaded = Array.from({ length: nreg }, (_, r) => groups.some((g) => g.region === r && (combo.factors[g.loadCase] ?? 0) !== 0));
     const seen = new Set<string>();
     for (const set of patternSets(nreg)) {
       const eff = set.map((v, r) => v && loaded[r]);
@@ -160,11 +158,26 @@ export function envelope(input: BeamInput, combos: NamedCombination[], opts: Env
   });
   return {
     runs,
-    Mmax: pick((a) => a.extremes.Mpos, (v, b) => v > b + scale(b)),
-    Mmin: pick((a) => a.extremes.Mneg, (v, b) => v < b - scale(b)),
-    Vabs: pick((a) => a.extremes.Vabs, (v, b) => Math.abs(v) > Math.abs(b) + scale(b)),
-    deflDown: pick((a) => a.extremes.deflDown, (v, b) => v > b + scale(b)),
-    deflUp: pick((a) => a.extremes.deflUp, (v, b) => v < b - scale(b)),
+    Mmax: pick(
+      (a) => a.extremes.Mpos,
+      (v, b) => v > b + scale(b),
+    ),
+    Mmin: pick(
+      (a) => a.extremes.Mneg,
+      (v, b) => v < b - scale(b),
+    ),
+    Vabs: pick(
+      (a) => a.extremes.Vabs,
+      (v, b) => Math.abs(v) > Math.abs(b) + scale(b),
+    ),
+    deflDown: pick(
+      (a) => a.extremes.deflDown,
+      (v, b) => v > b + scale(b),
+    ),
+    deflUp: pick(
+      (a) => a.extremes.deflUp,
+      (v, b) => v < b - scale(b),
+    ),
     reactions,
   };
 }

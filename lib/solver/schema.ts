@@ -42,14 +42,9 @@ export const beamInputSchema = z
       length: num("ft").gt(0, "must be greater than 0 ft").max(LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`),
       E: num("psi").gt(0, "must be greater than 0 psi"),
       I: num("in^4").gt(0, "must be greater than 0 in^4"),
-      supports: z
-        .array(supportSchema, { error: "must be a list of supports" })
-        .max(LIMITS.maxSupports, `at most ${LIMITS.maxSupports} supports`),
+      supports: z.array(supportSchema, { error: "must be a list of supports" }).max(LIMITS.maxSupports, `at most ${LIMITS.maxSupports} supports`),
       loads: z.array(loadSchema, { error: "must be a list of loads" }).max(LIMITS.maxLoads, `at most ${LIMITS.maxLoads} loads`),
-      at: z
-        .array(num("ft"), { error: "must be a list of stations (ft)" })
-        .max(LIMITS.maxStations, `at most ${LIMITS.maxStations} stations`)
-        .optional(),
+      at: z.array(num("ft"), { error: "must be a list of stations (ft)" }).max(LIMITS.maxStations, `at most ${LIMITS.maxStations} stations`).optional(),
     },
     { error: "must be a JSON object with length, E, I, supports and loads" },
   )
@@ -66,4 +61,3 @@ export const beamInputSchema = z
   });
 
 export type BeamInputParsed = z.infer<typeof beamInputSchema>;
-

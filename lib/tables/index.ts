@@ -90,7 +90,11 @@ export function findSawnSize(tables: MaterialTables, name: string): SawnSize {
   const wanted = normalizeSawnSize(name);
   const size = tables.sawnSizes.find((s) => s.name === wanted);
   if (!size) {
-    throw new TableLookupError("member.size", `unknown size "${name}"`, tables.sawnSizes.map((s) => s.name));
+    throw new TableLookupError(
+      "member.size",
+      `unknown size "${name}"`,
+      tables.sawnSizes.map((s) => s.name),
+    );
   }
   return size;
 }
@@ -102,32 +106,18 @@ export function findSawnSize(tables: MaterialTables, name: string): SawnSize {
  * read the widest (Table 4B: wider than 12 in takes the 12 in values, with CF 0.9 from
  * sizeFactorFor).
  */
-export function findSawnValues(
-  tables: MaterialTables,
-  species: Species,
-  grade: SawnGrade,
-  sizeClass: SawnSizeClass,
-  nominalDepth?: number,
-): SawnDesignValues {
+export function findSawnValues(tables: MaterialTables, species: Species, grade: SawnGrade, sizeClass: SawnSizeClass, nominalDepth?: number): SawnDesignValues {
   const ofSpecies = tables.sawnValues.filter((v) => v.species === species);
   if (ofSpecies.length === 0) {
     throw new TableLookupError("member.species", `unknown species "${species}"`, unique(tables.sawnValues.map((v) => v.species)));
   }
   const ofClass = ofSpecies.filter((v) => v.sizeClass === sizeClass);
   if (ofClass.length === 0) {
-    throw new TableLookupError(
-      "member.size",
-      `no ${sizeClass} values for ${species}`,
-      unique(ofSpecies.map((v) => `${v.sizeClass} sizes`)),
-    );
+    throw new TableLookupError("member.size", `no ${sizeClass} values for ${species}`, unique(ofSpecies.map((v) => `${v.sizeClass} sizes`)));
   }
   const rows = ofClass.filter((v) => v.grade === grade);
   if (rows.length === 0) {
-    throw new TableLookupError(
-      "member.grade",
-      `no grade "${grade}" for ${species} ${sizeClass}`,
-      unique(ofClass.map((v) => v.grade)),
-    );
+    throw new TableLookupError("member.grade", `no grade "${grade}" for ${species} ${sizeClass}`, unique(ofClass.map((v) => v.grade)));
   }
   const byDepth = rows.filter((v) => v.nominalDepth !== undefined).sort((a, b) => (a.nominalDepth ?? 0) - (b.nominalDepth ?? 0));
   if (byDepth.length === 0) return rows[0];
@@ -202,7 +192,11 @@ export function findEngineered(tables: MaterialTables, name: string): Engineered
   const wanted = name.trim().toLowerCase();
   const product = tables.engineered.find((p) => p.name.toLowerCase() === wanted);
   if (!product) {
-    throw new TableLookupError("member.product", `unknown engineered product "${name}"`, tables.engineered.map((p) => p.name));
+    throw new TableLookupError(
+      "member.product",
+      `unknown engineered product "${name}"`,
+      tables.engineered.map((p) => p.name),
+    );
   }
   return product;
 }
@@ -211,7 +205,12 @@ export function findEngineered(tables: MaterialTables, name: string): Engineered
 export function findIJoist(tables: MaterialTables, name: string): IJoist {
   const norm = (v: string) => v.trim().toLowerCase().replace(/\s+/g, " ");
   const joist = tables.iJoists.find((j) => norm(j.name) === norm(name));
-  if (!joist) throw new TableLookupError("member.joist", `unknown I-joist "${name}"`, tables.iJoists.map((j) => j.name));
+  if (!joist)
+    throw new TableLookupError(
+      "member.joist",
+      `unknown I-joist "${name}"`,
+      tables.iJoists.map((j) => j.name),
+    );
   return joist;
 }
 
@@ -219,10 +218,18 @@ export function findIJoist(tables: MaterialTables, name: string): IJoist {
 export function checkEngineeredSize(product: EngineeredProduct, widthIn: number, depthIn: number): void {
   const near = (a: number, b: number) => Math.abs(a - b) < 1e-6;
   if (!product.widths.some((w) => near(w, widthIn))) {
-    throw new TableLookupError("member.width", `${product.name} is not made ${widthIn} in wide`, product.widths.map((w) => `${w} in`));
+    throw new TableLookupError(
+      "member.width",
+      `${product.name} is not made ${widthIn} in wide`,
+      product.widths.map((w) => `${w} in`),
+    );
   }
   if (!product.depths.some((d) => near(d, depthIn))) {
-    throw new TableLookupError("member.depth", `${product.name} is not made ${depthIn} in deep`, product.depths.map((d) => `${d} in`));
+    throw new TableLookupError(
+      "member.depth",
+      `${product.name} is not made ${depthIn} in deep`,
+      product.depths.map((d) => `${d} in`),
+    );
   }
 }
 
@@ -230,7 +237,11 @@ export function findWShape(tables: MaterialTables, name: string): WShape {
   const wanted = normalizeShape(name);
   const shape = tables.steel.find((s) => s.name === wanted);
   if (!shape) {
-    throw new TableLookupError("member.shape", `unknown shape "${name}"`, tables.steel.map((s) => s.name));
+    throw new TableLookupError(
+      "member.shape",
+      `unknown shape "${name}"`,
+      tables.steel.map((s) => s.name),
+    );
   }
   return shape;
 }
@@ -239,7 +250,11 @@ export function findSteelGrade(tables: MaterialTables, name: string): SteelGrade
   const wanted = name.trim().toUpperCase();
   const grade = tables.steelGrades.find((g) => g.name.toUpperCase() === wanted);
   if (!grade) {
-    throw new TableLookupError("member.grade", `unknown steel grade "${name}"`, tables.steelGrades.map((g) => g.name));
+    throw new TableLookupError(
+      "member.grade",
+      `unknown steel grade "${name}"`,
+      tables.steelGrades.map((g) => g.name),
+    );
   }
   return grade;
 }

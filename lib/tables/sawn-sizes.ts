@@ -21,13 +21,7 @@ export function rectangleSection(bIn: number, dIn: number): { A: number; Sx: num
  * One dressed size from its nominal and dressed dimensions, with A, Sx, Ix computed.
  * Example: sawnSection(2, 10, 1.5, 9.25, "dimension") gives A 13.875 in², Sx 21.39 in³, Ix 98.93 in⁴.
  */
-export function sawnSection(
-  nominalThickness: number,
-  nominalDepth: number,
-  bIn: number,
-  dIn: number,
-  sizeClass: SawnSizeClass,
-): SawnSize {
+export function sawnSection(nominalThickness: number, nominalDepth: number, bIn: number, dIn: number, sizeClass: SawnSizeClass): SawnSize {
   return {
     name: `${nominalThickness}x${nominalDepth}`,
     nominalThickness,

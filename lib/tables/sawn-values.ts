@@ -14,15 +14,7 @@ const ALL_GRADES: SawnGrade[] = ["Select Structural", "No.1", "No.2", "No.3"];
 
 type Values = [Fb: number, Ft: number, Fv: number, FcPerp: number, Fc: number, E: number, Emin: number];
 
-function row(
-  species: Species,
-  grade: SawnGrade,
-  sizeClass: SawnSizeClass,
-  values: Values,
-  G: number,
-  source: string,
-  nominalDepth?: number,
-): SawnDesignValues {
+function row(species: Species, grade: SawnGrade, sizeClass: SawnSizeClass, values: Values, G: number, source: string, nominalDepth?: number): SawnDesignValues {
   const [Fb, Ft, Fv, FcPerp, Fc, E, Emin] = values;
   const base = { species, grade, sizeClass, Fb, Ft, Fv, FcPerp, Fc, E, Emin, G, source };
   return nominalDepth === undefined ? base : { ...base, nominalDepth };
@@ -62,7 +54,8 @@ const TABLE_4A: SawnDesignValues[] = [
 // footnote says otherwise. The SPIB values effective June 2013. Checked value by value against a
 // Kotlin WoodPropertyService transcription ("NDS 2018 Supplement Table 4B", psi) and against the
 // metric Southern Pine Use Guide values xcfem/xc transcribes (MPa, agreeing after conversion).
-const T4B = "NDS Supplement 2018, Table 4B; checked against a Kotlin WoodPropertyService transcription (psi) and the metric Southern Pine Use Guide values in xcfem/xc";
+const T4B =
+  "NDS Supplement 2018, Table 4B; checked against a Kotlin WoodPropertyService transcription (psi) and the metric Southern Pine Use Guide values in xcfem/xc";
 const SP_G = 0.55;
 const SP_FV = 175;
 const SP_FC_PERP = 565;
@@ -117,9 +110,7 @@ const TABLE_4B_BY_WIDTH: Record<SawnGrade, { E: number; Emin: number; widths: [n
 
 const TABLE_4B: SawnDesignValues[] = ALL_GRADES.flatMap((grade) => {
   const { E, Emin, widths } = TABLE_4B_BY_WIDTH[grade];
-  return widths.map(([depth, Fb, Ft, Fc]) =>
-    row("Southern Pine", grade, "dimension", [Fb, Ft, SP_FV, SP_FC_PERP, Fc, E, Emin], SP_G, T4B, depth),
-  );
+  return widths.map(([depth, Fb, Ft, Fc]) => row("Southern Pine", grade, "dimension", [Fb, Ft, SP_FV, SP_FC_PERP, Fc, E, Emin], SP_G, T4B, depth));
 });
 
 // NDS Supplement 2018, Table 4D — visually graded timbers 5" x 5" and larger, Beams and
@@ -170,21 +161,26 @@ const SIZE_FACTORS_4A: SizeFactorRow[] = TABLE_4A_CF.flatMap(([depth, fb23, fb4,
 const CF_4B = "NDS Supplement 2018, Table 4B size factor footnote; checked against the notes in a Kotlin resolveSawnCf";
 
 const SIZE_FACTORS_4B: SizeFactorRow[] = [
-  ...[4, 6, 8, 10, 12].map(
-    (depth): SizeFactorRow => ({ table: "4B", grades: ALL_GRADES, nominalDepth: depth, nominalThickness: 2, CF_Fb: 1.0, CF_Ft: 1.0, CF_Fc: 1.0, source: CF_4B }),
-  ),
-  ...[4, 6, 8, 10, 12].map(
-    (depth): SizeFactorRow => ({
-      table: "4B",
-      grades: ALL_GRADES,
-      nominalDepth: depth,
-      nominalThickness: 4,
-      CF_Fb: depth >= 8 ? 1.1 : 1.0,
-      CF_Ft: 1.0,
-      CF_Fc: 1.0,
-      source: CF_4B,
-    }),
-  ),
+  ...[4, 6, 8, 10, 12].map((depth): SizeFactorRow => ({
+    table: "4B",
+    grades: ALL_GRADES,
+    nominalDepth: depth,
+    nominalThickness: 2,
+    CF_Fb: 1.0,
+    CF_Ft: 1.0,
+    CF_Fc: 1.0,
+    source: CF_4B,
+  })),
+  ...[4, 6, 8, 10, 12].map((depth): SizeFactorRow => ({
+    table: "4B",
+    grades: ALL_GRADES,
+    nominalDepth: depth,
+    nominalThickness: 4,
+    CF_Fb: depth >= 8 ? 1.1 : 1.0,
+    CF_Ft: 1.0,
+    CF_Fc: 1.0,
+    source: CF_4B,
+  })),
   { table: "4B", grades: ALL_GRADES, nominalDepth: 14, nominalThickness: 0, CF_Fb: 0.9, CF_Ft: 0.9, CF_Fc: 0.9, source: CF_4B },
 ];
 
@@ -197,7 +193,8 @@ export function beamsStringersCF(dIn: number): number {
   return dIn > 12 ? (12 / dIn) ** (1 / 9) : 1.0;
 }
 
-const CF_4D = "NDS Supplement 2018, Table 4D size factor CF = (12/d)^(1/9) for d > 12 in; checked against several open-source NDS codes (e.g. a Kotlin NdsWoodCapacityCalculator)";
+const CF_4D =
+  "NDS Supplement 2018, Table 4D size factor CF = (12/d)^(1/9) for d > 12 in; checked against several open-source NDS codes (e.g. a Kotlin NdsWoodCapacityCalculator)";
 
 // Rows for the 6x10 and 6x12 (dressed depth 9.5 and 11.5 in, both 12 in or less).
 const SIZE_FACTORS_4D: SizeFactorRow[] = [

@@ -23,7 +23,17 @@ import { STEEL_GRADES_SOURCE } from "./steel";
  * refused). No server-only imports: the browser form reads these specs too.
  */
 
-export const TABLE_KEYS = ["sawn-sizes", "sawn-values", "size-factors", "engineered", "i-joists", "steel-shapes", "steel-grades", "costs", "stock-lengths"] as const;
+export const TABLE_KEYS = [
+  "sawn-sizes",
+  "sawn-values",
+  "size-factors",
+  "engineered",
+  "i-joists",
+  "steel-shapes",
+  "steel-grades",
+  "costs",
+  "stock-lengths",
+] as const;
 export type TableKey = (typeof TABLE_KEYS)[number];
 
 export function isTableKey(value: string): value is TableKey {
@@ -99,7 +109,10 @@ function num(f: FieldSpec) {
 
 function text(f: FieldSpec) {
   const max = f.maxLength ?? 200;
-  const s = z.string({ error: `${f.label} must be text` }).trim().max(max, `${f.label} must be at most ${max} characters`);
+  const s = z
+    .string({ error: `${f.label} must be text` })
+    .trim()
+    .max(max, `${f.label} must be at most ${max} characters`);
   return f.optional ? s : s.min(1, `${f.label} is required`);
 }
 
@@ -231,7 +244,16 @@ const SIZE_FACTOR_FIELDS: FieldSpec[] = [
   { name: "table", path: "table", label: "NDS Supplement table", kind: "choice", choices: SIZE_FACTOR_TABLE_CHOICES },
   { name: "grades", path: "grades", label: "Grades", kind: "choiceList", choices: GRADE_CHOICES, hint: "in a CSV file, separated by ;" },
   { name: "nominal_depth_in", path: "nominalDepth", label: "Nominal depth", unit: "in", kind: "number", min: 2, max: 24 },
-  { name: "nominal_thickness_in", path: "nominalThickness", label: "Nominal thickness", unit: "in", kind: "number", min: 0, max: 12, hint: "0 = any thickness" },
+  {
+    name: "nominal_thickness_in",
+    path: "nominalThickness",
+    label: "Nominal thickness",
+    unit: "in",
+    kind: "number",
+    min: 0,
+    max: 12,
+    hint: "0 = any thickness",
+  },
   { name: "CF_Fb", path: "CF_Fb", label: "CF on Fb", kind: "number", min: 0.3, max: 2 },
   { name: "CF_Ft", path: "CF_Ft", label: "CF on Ft", kind: "number", min: 0.3, max: 2 },
   { name: "CF_Fc", path: "CF_Fc", label: "CF on Fc", kind: "number", min: 0.3, max: 2 },
@@ -275,11 +297,46 @@ const ENGINEERED_FIELDS: FieldSpec[] = [
   { name: "FcPerp_psi", path: "FcPerp", label: "Fc⊥", unit: "psi", kind: "number", min: 100, max: 2_500, hint: "bearing" },
   { name: "E_psi", path: "E", label: "E", unit: "psi", kind: "number", min: 500_000, max: 4_000_000 },
   { name: "Emin_psi", path: "Emin", label: "Emin", unit: "psi", kind: "number", min: 200_000, max: 2_500_000 },
-  { name: "size_rule", path: "sizeRule.type", label: "Size rule", kind: "choice", choices: SIZE_RULE_CHOICES, hint: "depth: CF = (ref/d)^n; volume: glulam CV" },
-  { name: "size_ref_depth_in", path: "sizeRule.refDepthIn", label: "Reference depth", unit: "in", kind: "number", min: 1, max: 72, optional: true, hint: "depth rule only" },
+  {
+    name: "size_rule",
+    path: "sizeRule.type",
+    label: "Size rule",
+    kind: "choice",
+    choices: SIZE_RULE_CHOICES,
+    hint: "depth: CF = (ref/d)^n; volume: glulam CV",
+  },
+  {
+    name: "size_ref_depth_in",
+    path: "sizeRule.refDepthIn",
+    label: "Reference depth",
+    unit: "in",
+    kind: "number",
+    min: 1,
+    max: 72,
+    optional: true,
+    hint: "depth rule only",
+  },
   { name: "size_exponent", path: "sizeRule.exponent", label: "Size exponent n", kind: "number", min: 0, max: 1, optional: true, hint: "depth rule only" },
-  { name: "size_max_factor", path: "sizeRule.maxFactor", label: "Largest size factor", kind: "number", min: 1, max: 1.5, optional: true, hint: "depth rule only" },
-  { name: "volume_x", path: "sizeRule.x", label: "Volume factor exponent x", kind: "number", min: 1, max: 50, optional: true, hint: "volume rule only: 10, or 20 for Southern Pine" },
+  {
+    name: "size_max_factor",
+    path: "sizeRule.maxFactor",
+    label: "Largest size factor",
+    kind: "number",
+    min: 1,
+    max: 1.5,
+    optional: true,
+    hint: "depth rule only",
+  },
+  {
+    name: "volume_x",
+    path: "sizeRule.x",
+    label: "Volume factor exponent x",
+    kind: "number",
+    min: 1,
+    max: 50,
+    optional: true,
+    hint: "volume rule only: 10, or 20 for Southern Pine",
+  },
   { name: "widths_in", path: "widths", label: "Widths", unit: "in", kind: "numberList", min: 0.5, max: 12, hint: "one ply; in a CSV file, separated by ;" },
   { name: "depths_in", path: "depths", label: "Depths", unit: "in", kind: "numberList", min: 2, max: 72, hint: "in a CSV file, separated by ;" },
   { name: "density_pcf", path: "density", label: "Density", unit: "lb/ft³", kind: "number", min: 15, max: 70 },
@@ -408,7 +465,16 @@ const I_JOIST_FIELDS: FieldSpec[] = [
   { name: "EI_lb_in2", path: "EI", label: "EI", unit: "lbf-in²", kind: "number", min: 50e6, max: 5e9, hint: "bending stiffness" },
   { name: "M_lb_ft", path: "M", label: "Moment M", unit: "lbf-ft", kind: "number", min: 500, max: 40_000, hint: "allowable, normal load duration" },
   { name: "V_lb", path: "V", label: "Shear V", unit: "lbf", kind: "number", min: 300, max: 6_000 },
-  { name: "IR_lb", path: "IR", label: "Intermediate reaction", unit: "lbf", kind: "number", min: 300, max: 10_000, hint: "3-1/2 in bearing, no web stiffeners" },
+  {
+    name: "IR_lb",
+    path: "IR",
+    label: "Intermediate reaction",
+    unit: "lbf",
+    kind: "number",
+    min: 300,
+    max: 10_000,
+    hint: "3-1/2 in bearing, no web stiffeners",
+  },
   { name: "ER_175_lb", path: "ER175", label: "End reaction, 1-3/4 in", unit: "lbf", kind: "number", min: 200, max: 6_000, hint: "no web stiffeners" },
   { name: "ER_175_stiff_lb", path: "ER175Stiffened", label: "End reaction, 1-3/4 in, stiffened", unit: "lbf", kind: "number", min: 200, max: 6_000 },
   { name: "ER_4_lb", path: "ER4", label: "End reaction, 4 in", unit: "lbf", kind: "number", min: 200, max: 8_000, hint: "no web stiffeners" },
@@ -439,8 +505,10 @@ export const iJoistSchema: z.ZodType<IJoist> = z
   })
   .superRefine((r, ctx) => {
     if (r.ER4 < r.ER175) ctx.addIssue({ code: "custom", path: ["ER4"], message: "End reaction at 4 in must not be less than at 1-3/4 in" });
-    if (r.ER175Stiffened < r.ER175) ctx.addIssue({ code: "custom", path: ["ER175Stiffened"], message: "A stiffened end reaction must not be less than the unstiffened one" });
-    if (r.ER4Stiffened < r.ER4) ctx.addIssue({ code: "custom", path: ["ER4Stiffened"], message: "A stiffened end reaction must not be less than the unstiffened one" });
+    if (r.ER175Stiffened < r.ER175)
+      ctx.addIssue({ code: "custom", path: ["ER175Stiffened"], message: "A stiffened end reaction must not be less than the unstiffened one" });
+    if (r.ER4Stiffened < r.ER4)
+      ctx.addIssue({ code: "custom", path: ["ER4Stiffened"], message: "A stiffened end reaction must not be less than the unstiffened one" });
   });
 
 // ---------------------------------------------------------------------------------------------------
@@ -453,11 +521,9 @@ const STEEL_GRADE_FIELDS: FieldSpec[] = [
 ];
 const SG = spec(STEEL_GRADE_FIELDS);
 
-export const steelGradeSchema: z.ZodType<SteelGrade> = z
-  .object({ name: text(SG.name), Fy: num(SG.Fy), Fu: num(SG.Fu) })
-  .superRefine((r, ctx) => {
-    if (r.Fu < r.Fy) ctx.addIssue({ code: "custom", path: ["Fu"], message: "Fu must not be less than Fy" });
-  });
+export const steelGradeSchema: z.ZodType<SteelGrade> = z.object({ name: text(SG.name), Fy: num(SG.Fy), Fu: num(SG.Fu) }).superRefine((r, ctx) => {
+  if (r.Fu < r.Fy) ctx.addIssue({ code: "custom", path: ["Fu"], message: "Fu must not be less than Fy" });
+});
 
 // ---------------------------------------------------------------------------------------------------
 // Costs per foot (the yard's own prices)
@@ -503,7 +569,8 @@ const SL = spec(STOCK_LENGTH_FIELDS);
 export const stockLengthSchema: z.ZodType<StockLengthRow> = z
   .object({ material: choice(SL.material, STOCK_MATERIAL_CHOICES), lengthsFt: numList(SL.lengthsFt) })
   .superRefine((r, ctx) => {
-    if (new Set(r.lengthsFt).size !== r.lengthsFt.length) ctx.addIssue({ code: "custom", path: ["lengthsFt"], message: "Stock lengths must not repeat a length" });
+    if (new Set(r.lengthsFt).size !== r.lengthsFt.length)
+      ctx.addIssue({ code: "custom", path: ["lengthsFt"], message: "Stock lengths must not repeat a length" });
   });
 
 // ---------------------------------------------------------------------------------------------------
@@ -687,7 +754,10 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
       if (typeof n === "number") setPath(draft, f.path, n);
       else issues.push(n);
     } else if (f.kind === "numberList") {
-      const parts = raw.split(";").map((p) => p.trim()).filter((p) => p !== "");
+      const parts = raw
+        .split(";")
+        .map((p) => p.trim())
+        .filter((p) => p !== "");
       const values: number[] = [];
       for (const part of parts) {
         const n = parseNumberText(f, part);
@@ -696,7 +766,14 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
       }
       setPath(draft, f.path, values);
     } else if (f.kind === "choiceList") {
-      setPath(draft, f.path, raw.split(";").map((p) => p.trim()).filter((p) => p !== ""));
+      setPath(
+        draft,
+        f.path,
+        raw
+          .split(";")
+          .map((p) => p.trim())
+          .filter((p) => p !== ""),
+      );
     } else {
       setPath(draft, f.path, raw);
     }
@@ -710,18 +787,18 @@ export function parseFlatRow<K extends TableKey>(key: K, flat: FlatRow): { ok: t
   const schemaIssues = parsed.success
     ? []
     : parsed.error.issues.map((issue) => {
-      const segments = issue.path.filter((p): p is string => typeof p === "string");
-      let column = "(row)";
-      for (let n = segments.length; n > 0; n -= 1) {
-        const name = byPath.get(segments.slice(0, n).join("."));
-        if (name) {
-          column = name;
-          break;
+        const segments = issue.path.filter((p): p is string => typeof p === "string");
+        let column = "(row)";
+        for (let n = segments.length; n > 0; n -= 1) {
+          const name = byPath.get(segments.slice(0, n).join("."));
+          if (name) {
+            column = name;
+            break;
+          }
         }
-      }
-      if (column === "(row)" && segments[0] === "sizeRule") column = "size_rule";
-      return { column, message: issue.message };
-    });
+        if (column === "(row)" && segments[0] === "sizeRule") column = "size_rule";
+        return { column, message: issue.message };
+      });
   const all = [...issues, ...schemaIssues.filter((i) => !reported.has(i.column))];
   const seen = new Set<string>();
   return { ok: false, issues: all.filter((i) => (seen.has(`${i.column}\u0000${i.message}`) ? false : (seen.add(`${i.column}\u0000${i.message}`), true))) };

@@ -15,7 +15,9 @@ export async function tablesFor(command: string, flags: string[]): Promise<Mater
 /** The database's current published version (lib/tables/db), read through the app's Sequelize instance. */
 async function publishedTables(command: string): Promise<MaterialTables> {
   if (!process.env.DATABASE_URL) {
-    throw new CliInputError(`--db: DATABASE_URL is not set, so the database's published tables are not available here; run ${command} without --db to use the starter tables`);
+    throw new CliInputError(
+      `--db: DATABASE_URL is not set, so the database's published tables are not available here; run ${command} without --db to use the starter tables`,
+    );
   }
   const { getSequelize } = await import("../../lib/db");
   const { currentVersionId, loadVersion } = await import("../../lib/tables/db/queries");

@@ -53,7 +53,11 @@ export function createPrice(store: StandinStore, p: FormObject): PriceObject {
   const productId = str(p, "product");
   let product: ProductObject;
   if (productId) {
-    product = store.products.get(productId) ?? (() => { throw noSuch("product", productId, "product"); })();
+    product =
+      store.products.get(productId) ??
+      (() => {
+        throw noSuch("product", productId, "product");
+      })();
   } else {
     const productData = obj(p, "product_data");
     if (!productData) throw missingParam("product");

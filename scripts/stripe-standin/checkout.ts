@@ -90,7 +90,10 @@ export function retrieveCheckoutSession(store: StandinStore, id: string): Checko
 }
 
 /** What the checkout page shows: the session, its prices and products, and the customer's e-mail. */
-export function checkoutView(store: StandinStore, id: string): {
+export function checkoutView(
+  store: StandinStore,
+  id: string,
+): {
   session: CheckoutSessionObject;
   lines: Array<{ price: PriceObject; product: ProductObject; quantity: number }>;
   email: string | null;

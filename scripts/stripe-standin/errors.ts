@@ -28,8 +28,7 @@ export class StandinApiError extends Error {
 export const missingParam = (param: string) =>
   new StandinApiError(400, "invalid_request_error", `Missing required param: ${param}.`, "parameter_missing", param);
 
-export const invalidParam = (param: string, message: string) =>
-  new StandinApiError(400, "invalid_request_error", message, "parameter_invalid", param);
+export const invalidParam = (param: string, message: string) => new StandinApiError(400, "invalid_request_error", message, "parameter_invalid", param);
 
 export const noSuch = (kind: string, id: string, param = "id") =>
   new StandinApiError(404, "invalid_request_error", `No such ${kind}: '${id}'`, "resource_missing", param);

@@ -61,7 +61,13 @@ function insert(root: Node, parts: string[], value: string, fullKey: string): vo
 function finish(node: Node | string): FormValue {
   if (typeof node === "string") return node;
   const keys = Object.keys(node);
-  const isArray = keys.length > 0 && keys.every((k) => /^\d+$/.test(k)) && keys.map(Number).sort((a, b) => a - b).every((n, i) => n === i);
+  const isArray =
+    keys.length > 0 &&
+    keys.every((k) => /^\d+$/.test(k)) &&
+    keys
+      .map(Number)
+      .sort((a, b) => a - b)
+      .every((n, i) => n === i);
   if (isArray) {
     return keys
       .map(Number)

@@ -218,14 +218,7 @@ export interface EventObject {
 }
 
 export type StandinObject =
-  | ProductObject
-  | PriceObject
-  | CustomerObject
-  | CheckoutSessionObject
-  | SubscriptionObject
-  | InvoiceObject
-  | PortalSessionObject
-  | EventObject;
+  ProductObject | PriceObject | CustomerObject | CheckoutSessionObject | SubscriptionObject | InvoiceObject | PortalSessionObject | EventObject;
 
 const ALPHABET = "0123456789ABCDEFGHIJKLMNOPQRSTUVWXYZabcdefghijklmnopqrstuvwxyz";
 

@@ -31,7 +31,10 @@ export function createPortalSession(store: StandinStore, p: FormObject): PortalS
 }
 
 /** What the portal page shows: the session and the customer's subscriptions, newest first. */
-export function portalView(store: StandinStore, id: string): { session: PortalSessionObject; customer: CustomerObject; subscriptions: SubscriptionObject[]; products: Map<string, ProductObject> } {
+export function portalView(
+  store: StandinStore,
+  id: string,
+): { session: PortalSessionObject; customer: CustomerObject; subscriptions: SubscriptionObject[]; products: Map<string, ProductObject> } {
   const session = store.portalSessions.get(id);
   if (!session) throw noSuch("billing_portal.session", id, "session");
   const customer = store.customers.get(session.customer);

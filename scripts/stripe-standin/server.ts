@@ -52,9 +52,7 @@ export async function startStandinServer(options: StandinServerOptions): Promise
   const host = options.host ?? "127.0.0.1";
   const log = options.log ?? (() => {});
   let publicUrl = `http://${host}:${options.port}`;
-  const sender = options.webhookUrl
-    ? new WebhookSender({ url: options.webhookUrl, secret: options.webhookSecret, log })
-    : null;
+  const sender = options.webhookUrl ? new WebhookSender({ url: options.webhookUrl, secret: options.webhookSecret, log }) : null;
   const standin = new StandinStore({
     get publicUrl() {
       return publicUrl;

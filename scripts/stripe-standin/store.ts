@@ -1,7 +1,19 @@
 /** The Stripe stand-in's state. */
 import { invalidParam, noSuch } from "./errors";
 import { type FormObject, int, str } from "./form";
-import { type CheckoutSessionObject, type CheckoutSessionPrivate, type CustomerObject, type EventObject, type InvoiceObject, newId, type PortalSessionObject, type PriceObject, type ProductObject, type StandinObject, type SubscriptionObject } from "./objects";
+import {
+  type CheckoutSessionObject,
+  type CheckoutSessionPrivate,
+  type CustomerObject,
+  type EventObject,
+  type InvoiceObject,
+  newId,
+  type PortalSessionObject,
+  type PriceObject,
+  type ProductObject,
+  type StandinObject,
+  type SubscriptionObject,
+} from "./objects";
 
 export interface ListResult<T> {
   object: "list";

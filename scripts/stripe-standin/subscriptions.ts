@@ -113,7 +113,8 @@ export function endPeriod(store: StandinStore, sub: SubscriptionObject, fail: bo
   store.emit("customer.subscription.updated", sub, previous);
 }
 
-export function makeInvoice(store: StandinStore,
+export function makeInvoice(
+  store: StandinStore,
   sub: SubscriptionObject,
   customer: CustomerObject,
   reason: InvoiceObject["billing_reason"],
@@ -134,7 +135,11 @@ export function makeInvoice(store: StandinStore,
       description: `${item.quantity} × ${product?.name ?? "Subscription"}`,
       metadata: {},
       period: { start: periodStart, end: periodEnd },
-      pricing: { price_details: { price: item.price.id, product: item.price.product }, type: "price_details" as const, unit_amount_decimal: item.price.unit_amount_decimal },
+      pricing: {
+        price_details: { price: item.price.id, product: item.price.product },
+        type: "price_details" as const,
+        unit_amount_decimal: item.price.unit_amount_decimal,
+      },
       quantity: item.quantity,
     };
   });

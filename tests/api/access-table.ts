@@ -145,8 +145,20 @@ export const ACCESS_TABLE: AccessRow[] = [
   // here, so "owner" is tested on real rows). The crew page (/crew/[token]) is a page, not a route: the only
   // thing a token opens is that read-only page, and no route or action below accepts a token in its place
   // (tests/crew/crew-access.test.ts checks both).
-  { method: "ACTION", path: "components/crew/actions.ts#createCrewLink", allowed: ["owner"], note: "404 for a job of someone else", setup: crewFixture("create") },
-  { method: "ACTION", path: "components/crew/actions.ts#revokeCrewLink", allowed: ["owner"], note: "404 for a link of someone else", setup: crewFixture("link") },
+  {
+    method: "ACTION",
+    path: "components/crew/actions.ts#createCrewLink",
+    allowed: ["owner"],
+    note: "404 for a job of someone else",
+    setup: crewFixture("create"),
+  },
+  {
+    method: "ACTION",
+    path: "components/crew/actions.ts#revokeCrewLink",
+    allowed: ["owner"],
+    note: "404 for a link of someone else",
+    setup: crewFixture("link"),
+  },
   { method: "ACTION", path: "components/crew/actions.ts#sendCrewLink", allowed: ["owner"], note: "404 for a link of someone else", setup: crewFixture("send") },
   {
     method: "ACTION",
@@ -155,25 +167,91 @@ export const ACCESS_TABLE: AccessRow[] = [
     note: "a free builder gets 403 (subscription), anyone else's job 404",
     setup: crewFixture("create"),
   },
-  { method: "GET", path: "/api/sheets/[id]/pdf", allowed: ["owner"], note: "404 for anyone else's sheet; 403 for the owner without a subscription", setup: crewFixture("sheet") },
+  {
+    method: "GET",
+    path: "/api/sheets/[id]/pdf",
+    allowed: ["owner"],
+    note: "404 for anyone else's sheet; 403 for the owner without a subscription",
+    setup: crewFixture("sheet"),
+  },
 
   // Order lists and the site-board PDF: the order belongs to the job's owner; the crew PDF opens with a live crew link only.
-  { method: "ACTION", path: "components/orders/actions.ts#emailOrderList", allowed: ["owner"], note: "404 for a job of someone else", setup: orderFixture("mail") },
+  {
+    method: "ACTION",
+    path: "components/orders/actions.ts#emailOrderList",
+    allowed: ["owner"],
+    note: "404 for a job of someone else",
+    setup: orderFixture("mail"),
+  },
   { method: "GET", path: "/api/jobs/[jobId]/order", allowed: ["owner"], note: "404 for a job of someone else", setup: orderFixture("route") },
-  { method: "GET", path: "/api/crew/[token]/pdf", allowed: ["crew"], note: "a made-up token is a 404; no session needed or used", params: { token: "made-up-token-AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA" } },
+  {
+    method: "GET",
+    path: "/api/crew/[token]/pdf",
+    allowed: ["crew"],
+    note: "a made-up token is a 404; no session needed or used",
+    params: { token: "made-up-token-AAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAAA" },
+  },
 
   // Jobs and members (components/jobs/actions.ts): any signed-in account makes its own; everything else belongs
   // to the job's owner and is a 404 for anyone else, whatever the role (a stranger's real job and member here).
-  { method: "ACTION", path: "components/jobs/actions.ts#createJob", allowed: SIGNED_IN, note: "makes a job of the caller's own", args: [{ name: "Orchard Row deck", siteAddress: "7 Orchard Row, Larkfield" }] },
-  { method: "ACTION", path: "components/jobs/actions.ts#saveMember", allowed: SIGNED_IN, note: "to a new job of the caller's own here; another's job is 404 (tests/jobs)", setup: jobsFixture("save") },
-  { method: "ACTION", path: "components/jobs/actions.ts#updateJob", allowed: ["owner"], note: "404 for a job of someone else", setup: jobsFixture("update-job") },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#createJob",
+    allowed: SIGNED_IN,
+    note: "makes a job of the caller's own",
+    args: [{ name: "Orchard Row deck", siteAddress: "7 Orchard Row, Larkfield" }],
+  },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#saveMember",
+    allowed: SIGNED_IN,
+    note: "to a new job of the caller's own here; another's job is 404 (tests/jobs)",
+    setup: jobsFixture("save"),
+  },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#updateJob",
+    allowed: ["owner"],
+    note: "404 for a job of someone else",
+    setup: jobsFixture("update-job"),
+  },
   { method: "ACTION", path: "components/jobs/actions.ts#deleteJob", allowed: ["owner"], note: "404 for a job of someone else", setup: jobsFixture("job") },
-  { method: "ACTION", path: "components/jobs/actions.ts#restoreJob", allowed: ["owner"], note: "404 for someone else's deleted job", setup: jobsFixture("deleted-job") },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#restoreJob",
+    allowed: ["owner"],
+    note: "404 for someone else's deleted job",
+    setup: jobsFixture("deleted-job"),
+  },
   { method: "ACTION", path: "components/jobs/actions.ts#duplicateJob", allowed: ["owner"], note: "404 for a job of someone else", setup: jobsFixture("job") },
-  { method: "ACTION", path: "components/jobs/actions.ts#updateMember", allowed: ["owner"], note: "404 for a member of someone else's job", setup: jobsFixture("update-member") },
-  { method: "ACTION", path: "components/jobs/actions.ts#deleteMember", allowed: ["owner"], note: "404 for a member of someone else's job", setup: jobsFixture("member") },
-  { method: "ACTION", path: "components/jobs/actions.ts#restoreMember", allowed: ["owner"], note: "404 for someone else's deleted member", setup: jobsFixture("deleted-member") },
-  { method: "ACTION", path: "components/jobs/actions.ts#duplicateMember", allowed: ["owner"], note: "404 for a member of someone else's job", setup: jobsFixture("member") },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#updateMember",
+    allowed: ["owner"],
+    note: "404 for a member of someone else's job",
+    setup: jobsFixture("update-member"),
+  },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#deleteMember",
+    allowed: ["owner"],
+    note: "404 for a member of someone else's job",
+    setup: jobsFixture("member"),
+  },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#restoreMember",
+    allowed: ["owner"],
+    note: "404 for someone else's deleted member",
+    setup: jobsFixture("deleted-member"),
+  },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#duplicateMember",
+    allowed: ["owner"],
+    note: "404 for a member of someone else's job",
+    setup: jobsFixture("member"),
+  },
 ];
 
 /** A job owned by an account none of the personas is, and valid arguments for its order list. */

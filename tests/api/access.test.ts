@@ -63,10 +63,7 @@ async function discover(): Promise<Map<string, Discovered>> {
       }
     }
   }
-  const actionFiles = [
-    ...walk(path.join(root, "components"), (n) => n === "actions.ts"),
-    ...walk(path.join(root, "app"), (n) => n === "actions.ts"),
-  ];
+  const actionFiles = [...walk(path.join(root, "components"), (n) => n === "actions.ts"), ...walk(path.join(root, "app"), (n) => n === "actions.ts")];
   for (const file of actionFiles) {
     const mod = (await import(file)) as Record<string, unknown>;
     for (const [name, value] of Object.entries(mod)) {
@@ -157,15 +154,24 @@ describe("authorization table", () => {
 
   test("every row names a route or action that exists, once", () => {
     const keys = ACCESS_TABLE.map(rowKey);
-    expect(keys.filter((k) => !discovered.has(k)), "stale rows").toEqual([]);
-    expect(keys.filter((k, i) => keys.indexOf(k) !== i), "duplicate rows").toEqual([]);
+    expect(
+      keys.filter((k) => !discovered.has(k)),
+      "stale rows",
+    ).toEqual([]);
+    expect(
+      keys.filter((k, i) => keys.indexOf(k) !== i),
+      "duplicate rows",
+    ).toEqual([]);
   });
 
   test("every row allows someone and says who in known words", () => {
     const known: Allowed[] = ["public", "builder", "subscriber", "admin", "owner", "crew"];
     for (const row of ACCESS_TABLE) {
       expect(row.allowed.length, rowKey(row)).toBeGreaterThan(0);
-      expect(row.allowed.every((a) => known.includes(a)), rowKey(row)).toBe(true);
+      expect(
+        row.allowed.every((a) => known.includes(a)),
+        rowKey(row),
+      ).toBe(true);
     }
   });
 

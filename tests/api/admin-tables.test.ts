@@ -154,7 +154,10 @@ describe.skipIf(!TEST_DB)("admin table routes", () => {
     expect(p.changes.changed.map((c: { key: string }) => c.key).sort()).toEqual(["Douglas Fir-Larch|No.2|dimension|all", "Hem-Fir|No.1|dimension|all"]);
     expect(await versionCount()).toBe(count);
 
-    const applied = await importRoute.POST(await multipart(csvFile(text), { baseVersionId: p.baseVersion.id, note: "Yard corrections" }), params({ table: "sawn-values" }));
+    const applied = await importRoute.POST(
+      await multipart(csvFile(text), { baseVersionId: p.baseVersion.id, note: "Yard corrections" }),
+      params({ table: "sawn-values" }),
+    );
     const a = await applied.json();
     expect(applied.status).toBe(200);
     expect(a).toMatchObject({ created: true, counts: { added: 0, changed: 2, removed: 0 }, version: { source: "import", note: "Yard corrections" } });
@@ -181,7 +184,9 @@ describe.skipIf(!TEST_DB)("admin table routes", () => {
     expect(body.rejected[0].line).toBe(3);
     expect(await versionCount()).toBe(count);
     expect(await currentId()).toBe(before.version);
-    expect((await getCurrentTables()).sawnValues.find((v) => v.species === "Douglas Fir-Larch" && v.grade === "No.2" && v.sizeClass === "dimension")?.Fb).toBe(880);
+    expect((await getCurrentTables()).sawnValues.find((v) => v.species === "Douglas Fir-Larch" && v.grade === "No.2" && v.sizeClass === "dimension")?.Fb).toBe(
+      880,
+    );
   });
 
   test.each([
@@ -197,7 +202,11 @@ describe.skipIf(!TEST_DB)("admin table routes", () => {
   });
 
   test("a request claiming a huge body is refused before it is read", async () => {
-    const req = new Request("http://spanlark.test/x", { method: "POST", body: "x", headers: { "content-length": String(50 * 1024 * 1024), "content-type": "multipart/form-data; boundary=x" } });
+    const req = new Request("http://spanlark.test/x", {
+      method: "POST",
+      body: "x",
+      headers: { "content-length": String(50 * 1024 * 1024), "content-type": "multipart/form-data; boundary=x" },
+    });
     expect((await previewRoute.POST(req, params({ table: "sawn-values" }))).status).toBe(413);
   });
 

@@ -2,7 +2,14 @@ import { describe, expect, test } from "vitest";
 import { POST } from "@/app/api/check/route";
 
 const post = (body: unknown) =>
-  POST(new Request("http://localhost/api/check", { method: "POST", headers: { "content-type": "application/json" }, body: typeof body === "string" ? body : JSON.stringify(body) }), { params: Promise.resolve({}) });
+  POST(
+    new Request("http://localhost/api/check", {
+      method: "POST",
+      headers: { "content-type": "application/json" },
+      body: typeof body === "string" ? body : JSON.stringify(body),
+    }),
+    { params: Promise.resolve({}) },
+  );
 
 const joist = {
   member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10", plies: 1 },
@@ -30,18 +37,38 @@ describe("POST /api/check", () => {
     expect(typeof body.pass).toBe("boolean");
     expect(body.checks.map((c: { name: string }) => c.name)).toEqual(["bending", "shear", "deflection-live", "deflection-total", "bearing"]);
     for (const c of body.checks) {
-      expect(c).toEqual(expect.objectContaining({ demand: expect.any(Number), capacity: expect.any(Number), unit: expect.any(String), ratio: expect.any(Number) }));
+      expect(c).toEqual(
+        expect.objectContaining({ demand: expect.any(Number), capacity: expect.any(Number), unit: expect.any(String), ratio: expect.any(Number) }),
+      );
       expect(c.ratio).toBeCloseTo(c.demand / c.capacity, 2);
     }
-    expect(body.governing).toBe(body.checks.reduce((a: { ratio: number; name: string }, b: { ratio: number; name: string }) => (b.ratio > a.ratio ? b : a)).name);
+    expect(body.governing).toBe(
+      body.checks.reduce((a: { ratio: number; name: string }, b: { ratio: number; name: string }) => (b.ratio > a.ratio ? b : a)).name,
+    );
     expect(body.reactions).toHaveLength(2);
     expect(body.factors.CD).toBe(1);
     expect(body.caution).toMatch(/Preliminary sizing/);
   });
 
   test.each([
-    ["engineered", { ...joist, member: { material: "engineered", product: "LVL 1.9E", width: 1.75, depth: 11.875, plies: 2 }, spacingIn: undefined, tributaryFt: 6 }],
-    ["steel", { ...joist, member: { material: "steel", shape: "W8x18", grade: "A992" }, spacingIn: undefined, tributaryFt: 6, lengthFt: 16, supports: [{ x: 0, type: "pin" }, { x: 16, type: "roller" }] }],
+    [
+      "engineered",
+      { ...joist, member: { material: "engineered", product: "LVL 1.9E", width: 1.75, depth: 11.875, plies: 2 }, spacingIn: undefined, tributaryFt: 6 },
+    ],
+    [
+      "steel",
+      {
+        ...joist,
+        member: { material: "steel", shape: "W8x18", grade: "A992" },
+        spacingIn: undefined,
+        tributaryFt: 6,
+        lengthFt: 16,
+        supports: [
+          { x: 0, type: "pin" },
+          { x: 16, type: "roller" },
+        ],
+      },
+    ],
     ["built-up", { ...joist, member: { ...joist.member, plies: 3 }, spacingIn: undefined, tributaryFt: 6 }],
     ["steel LRFD", { ...joist, member: { material: "steel", shape: "W10x22" }, spacingIn: undefined, tributaryFt: 6, method: "lrfd" }],
   ])("answers for a %s member", async (_label, input) => {

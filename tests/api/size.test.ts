@@ -2,7 +2,9 @@ import { describe, expect, test } from "vitest";
 import { POST } from "@/app/api/size/route";
 
 const post = (body: unknown, query = "") =>
-  POST(new Request(`http://localhost/api/size${query}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }), { params: Promise.resolve({}) });
+  POST(new Request(`http://localhost/api/size${query}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) }), {
+    params: Promise.resolve({}),
+  });
 
 const header = {
   member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" },

@@ -58,7 +58,13 @@ describe("templates", () => {
     { name: "account-exists", mail: accountExistsMail({ name: "Dee Rowe", signInLink: link, resetLink: link }), sizing: false },
     {
       name: "job-shared",
-      mail: jobSharedMail({ link, jobName: "Marsh Lane addition", senderName: "Sam Hollis", senderCompany: "Hollis & Rowe Framing", siteAddress: "14 Marsh Lane, Larkfield" }),
+      mail: jobSharedMail({
+        link,
+        jobName: "Marsh Lane addition",
+        senderName: "Sam Hollis",
+        senderCompany: "Hollis & Rowe Framing",
+        siteAddress: "14 Marsh Lane, Larkfield",
+      }),
       sizing: true,
     },
     {

@@ -102,7 +102,10 @@ describe.skipIf(!TEST_DB)("next-auth's session callback (what GET /api/auth/sess
     const callback = authOptions().callbacks!.session!;
     const user = await makeUser();
     const answer = async (authAt: number) =>
-      (await callback({ session: { expires: new Date(Date.now() + 60_000).toISOString() }, token: { sub: user.id, email: user.email, name: user.name, authAt } } as never)) as unknown as Record<string, unknown>;
+      (await callback({
+        session: { expires: new Date(Date.now() + 60_000).toISOString() },
+        token: { sub: user.id, email: user.email, name: user.name, authAt },
+      } as never)) as unknown as Record<string, unknown>;
     const signedIn = Date.now() - 60_000;
     expect(((await answer(signedIn)).user as { id: string }).id).toBe(user.id);
     await user.update({ passwordChangedAt: new Date() });

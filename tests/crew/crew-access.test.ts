@@ -109,8 +109,22 @@ describe.skipIf(!TEST_DB)("the crew page", () => {
     const { job, header } = await makeJob(owner.id);
     const link = await createCrewLink({ ownerId: owner.id, jobId: job.id, expiresInDays: 0, activeLimit: null });
     const token = tokenOf(link.url);
-    const before = JSON.stringify({ job: (await Job.findByPk(job.id))!.get({ plain: true }), member: (await Member.findByPk(header.id))!.get({ plain: true }) });
-    const payload = { token, crewToken: token, jobId: job.id, memberId: header.id, linkId: link.id, id: header.id, name: "Hacked", label: "Hacked", expiresInDays: 0, to: "x@example.test" };
+    const before = JSON.stringify({
+      job: (await Job.findByPk(job.id))!.get({ plain: true }),
+      member: (await Member.findByPk(header.id))!.get({ plain: true }),
+    });
+    const payload = {
+      token,
+      crewToken: token,
+      jobId: job.id,
+      memberId: header.id,
+      linkId: link.id,
+      id: header.id,
+      name: "Hacked",
+      label: "Hacked",
+      expiresInDays: 0,
+      to: "x@example.test",
+    };
 
     const tried: string[] = [];
     const routes = walk(path.join(root, "app/api"), (n) => n === "route.ts").filter((f) => /jobs|members|crew|sheets/.test(f));

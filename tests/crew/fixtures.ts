@@ -20,12 +20,27 @@ export type Role = "builder" | "subscriber" | "admin";
 
 /** A 10 ft header under a bearing wall (roof dead, roof live and snow over 13 ft; the wall's own weight). */
 export function headerState(): FlowState {
-  return { ...defaultFlowState("header"), lengthFt: 10, supports: [{ x: 0, type: "pin" }, { x: 10, type: "roller" }], lineLoads: [] };
+  return {
+    ...defaultFlowState("header"),
+    lengthFt: 10,
+    supports: [
+      { x: 0, type: "pin" },
+      { x: 10, type: "roller" },
+    ],
+    lineLoads: [],
+  };
 }
 
 /** A 13 ft floor joist at 16 in on centre, 40 psf live and 10 psf dead. */
 export function joistState(): FlowState {
-  return { ...defaultFlowState("floor-joist"), lengthFt: 13, supports: [{ x: 0, type: "pin" }, { x: 13, type: "roller" }] };
+  return {
+    ...defaultFlowState("floor-joist"),
+    lengthFt: 13,
+    supports: [
+      { x: 0, type: "pin" },
+      { x: 13, type: "roller" },
+    ],
+  };
 }
 
 export const HEADER_SPEC: MemberSpec = { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x12", plies: 3 };
@@ -55,13 +70,42 @@ export async function makeJob(ownerId: string, options: { unsized?: boolean } = 
   const { Job } = await import("@/models/job");
   const { Member } = await import("@/models/member");
   getSequelize();
-  const job = await Job.create({ ownerId, name: "Marsh Lane addition", siteAddress: "14 Marsh Lane, Larkfield", notes: "Kitchen opening widened; new joists over the family room." });
+  const job = await Job.create({
+    ownerId,
+    name: "Marsh Lane addition",
+    siteAddress: "14 Marsh Lane, Larkfield",
+    notes: "Kitchen opening widened; new joists over the family room.",
+  });
   const h = headerState();
   const j = joistState();
-  const header = await Member.create({ jobId: job.id, label: "H1 kitchen header", kind: "header", flowState: h, chosenMember: HEADER_SPEC, resultSummary: summaryFor(h, HEADER_SPEC), sortOrder: 0 });
-  const joist = await Member.create({ jobId: job.id, label: "J1 family room joists", kind: "floor-joist", flowState: j, chosenMember: JOIST_SPEC, resultSummary: summaryFor(j, JOIST_SPEC), sortOrder: 1 });
+  const header = await Member.create({
+    jobId: job.id,
+    label: "H1 kitchen header",
+    kind: "header",
+    flowState: h,
+    chosenMember: HEADER_SPEC,
+    resultSummary: summaryFor(h, HEADER_SPEC),
+    sortOrder: 0,
+  });
+  const joist = await Member.create({
+    jobId: job.id,
+    label: "J1 family room joists",
+    kind: "floor-joist",
+    flowState: j,
+    chosenMember: JOIST_SPEC,
+    resultSummary: summaryFor(j, JOIST_SPEC),
+    sortOrder: 1,
+  });
   if (options.unsized) {
-    await Member.create({ jobId: job.id, label: "B1 not sized", kind: "beam", flowState: defaultFlowState("beam"), chosenMember: null, resultSummary: null, sortOrder: 2 });
+    await Member.create({
+      jobId: job.id,
+      label: "B1 not sized",
+      kind: "beam",
+      flowState: defaultFlowState("beam"),
+      chosenMember: null,
+      resultSummary: null,
+      sortOrder: 2,
+    });
   }
   return { job, header, joist };
 }

@@ -143,12 +143,16 @@ describe.skipIf(!TEST_DB)("crew links", () => {
       made.push(await createCrewLink({ ownerId: owner.id, jobId: i % 2 ? other.id : job.id, expiresInDays: 0, activeLimit: FREE_LIMITS.activeCrewLinks }));
     }
     expect(await countActiveCrewLinks(owner.id)).toBe(FREE_LIMITS.activeCrewLinks);
-    const refused = await createCrewLink({ ownerId: owner.id, jobId: job.id, expiresInDays: 0, activeLimit: FREE_LIMITS.activeCrewLinks }).catch((e: unknown) => e);
+    const refused = await createCrewLink({ ownerId: owner.id, jobId: job.id, expiresInDays: 0, activeLimit: FREE_LIMITS.activeCrewLinks }).catch(
+      (e: unknown) => e,
+    );
     expect(refused).toBeInstanceOf(HttpError);
     expect((refused as InstanceType<typeof HttpError>).status).toBe(403);
     expect((refused as Error).message).toMatch(/free account can keep 3 crew links live/i);
     await revokeCrewLink(owner.id, made[0].id);
-    await expect(createCrewLink({ ownerId: owner.id, jobId: job.id, expiresInDays: 0, activeLimit: FREE_LIMITS.activeCrewLinks })).resolves.toMatchObject({ status: "active" });
+    await expect(createCrewLink({ ownerId: owner.id, jobId: job.id, expiresInDays: 0, activeLimit: FREE_LIMITS.activeCrewLinks })).resolves.toMatchObject({
+      status: "active",
+    });
   });
 });
 

@@ -29,7 +29,8 @@ describe.skipIf(!TEST_DB)("migration 20261201125000-create-crew-links-and-job-sh
     const [user, job] = [randomUUID(), randomUUID()];
     await scoped.query("INSERT INTO users (id) VALUES (:user)", { replacements: { user } });
     await scoped.query("INSERT INTO jobs (id) VALUES (:job)", { replacements: { job } });
-    const link = "INSERT INTO crew_links (id, job_id, owner_id, token_hash, token_sealed, created_at, updated_at) VALUES (:id, :job, :user, :hash, 'v1.a.b.c', now(), now())";
+    const link =
+      "INSERT INTO crew_links (id, job_id, owner_id, token_hash, token_sealed, created_at, updated_at) VALUES (:id, :job, :user, :hash, 'v1.a.b.c', now(), now())";
     const hash = "a".repeat(64);
     await scoped.query(link, { replacements: { id: randomUUID(), job, user, hash } });
     await expect(scoped.query(link, { replacements: { id: randomUUID(), job, user, hash } })).rejects.toThrow();
@@ -39,7 +40,10 @@ describe.skipIf(!TEST_DB)("migration 20261201125000-create-crew-links-and-job-sh
       { replacements: { sheet, job, user } },
     );
     await scoped.query("DELETE FROM jobs WHERE id = :job", { replacements: { job } });
-    const rows = await scoped.query<{ job_id: string | null }>("SELECT job_id FROM job_sheets WHERE id = :sheet", { replacements: { sheet }, type: QueryTypes.SELECT });
+    const rows = await scoped.query<{ job_id: string | null }>("SELECT job_id FROM job_sheets WHERE id = :sheet", {
+      replacements: { sheet },
+      type: QueryTypes.SELECT,
+    });
     expect(rows).toEqual([{ job_id: null }]);
     expect(await scoped.query("SELECT id FROM crew_links", { type: QueryTypes.SELECT })).toEqual([]);
 

@@ -1,6 +1,16 @@
 import { createHash } from "node:crypto";
 import { describe, expect, test } from "vitest";
-import { CREW_TOKEN_BYTES, CREW_TOKEN_LENGTH, crewLinkUrl, hashCrewToken, looksLikeCrewToken, newCrewToken, openCrewToken, sealCrewToken, tokenMatchesHash } from "@/lib/crew/token";
+import {
+  CREW_TOKEN_BYTES,
+  CREW_TOKEN_LENGTH,
+  crewLinkUrl,
+  hashCrewToken,
+  looksLikeCrewToken,
+  newCrewToken,
+  openCrewToken,
+  sealCrewToken,
+  tokenMatchesHash,
+} from "@/lib/crew/token";
 
 const SECRET = "test-secret-for-vitest-only-0123456789";
 

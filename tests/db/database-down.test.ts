@@ -59,7 +59,10 @@ describe("isDatabaseUnavailable", () => {
   });
 
   test.each([
-    ["a PostgreSQL shutdown (57P01) wrapped by Sequelize", { name: "SequelizeDatabaseError", parent: { code: "57P01", message: "terminating connection due to administrator command" } }],
+    [
+      "a PostgreSQL shutdown (57P01) wrapped by Sequelize",
+      { name: "SequelizeDatabaseError", parent: { code: "57P01", message: "terminating connection due to administrator command" } },
+    ],
     ["node-postgres losing its connection mid-query", { name: "SequelizeDatabaseError", original: new Error("Connection terminated unexpectedly") }],
     ["a dual-stack connect failure", new AggregateError([Object.assign(new Error("connect"), { code: "ECONNREFUSED" })])],
   ])("%s is unavailability", (_label, err) => {

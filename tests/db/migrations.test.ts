@@ -26,7 +26,9 @@ async function snapshot(): Promise<Snapshot> {
       "SELECT table_name || '.' || column_name || ':' || data_type || ':' || is_nullable AS v FROM information_schema.columns WHERE table_schema = 'public' AND table_name <> 'schema_migrations' ORDER BY 1",
     ),
     indexes: await list("SELECT indexname AS v FROM pg_indexes WHERE schemaname = 'public' AND tablename <> 'schema_migrations' ORDER BY 1"),
-    types: await list("SELECT t.typname AS v FROM pg_type t JOIN pg_namespace n ON n.oid = t.typnamespace WHERE n.nspname = 'public' AND t.typtype = 'e' ORDER BY 1"),
+    types: await list(
+      "SELECT t.typname AS v FROM pg_type t JOIN pg_namespace n ON n.oid = t.typnamespace WHERE n.nspname = 'public' AND t.typtype = 'e' ORDER BY 1",
+    ),
   };
 }
 

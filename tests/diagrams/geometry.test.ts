@@ -27,7 +27,16 @@ describe("a step in the shear diagram at each point load (common practice: a con
     { x: 3, P: 1000 },
     { x: 7, P: 600 },
   ];
-  const a = analyzeBeam({ length: L, E, I, supports: [{ x: 0, type: "pin" }, { x: L, type: "roller" }], loads: loads.map((l) => ({ type: "point" as const, ...l })) });
+  const a = analyzeBeam({
+    length: L,
+    E,
+    I,
+    supports: [
+      { x: 0, type: "pin" },
+      { x: L, type: "roller" },
+    ],
+    loads: loads.map((l) => ({ type: "point" as const, ...l })),
+  });
   const chain = diagramChain(a.segments, "V");
   const vertices = chainVertices(chain);
   // statics: R1 = ΣP(L − a)/L
@@ -64,7 +73,16 @@ describe("a step in the shear diagram at each point load (common practice: a con
 describe("the curves pass through the computed extremes", () => {
   const L = 14;
   const w = 120; // plf
-  const a = analyzeBeam({ length: L, E, I, supports: [{ x: 0, type: "pin" }, { x: L, type: "roller" }], loads: [{ type: "udl", from: 0, to: L, w }] });
+  const a = analyzeBeam({
+    length: L,
+    E,
+    I,
+    supports: [
+      { x: 0, type: "pin" },
+      { x: L, type: "roller" },
+    ],
+    loads: [{ type: "udl", from: 0, to: L, w }],
+  });
 
   // AISC Steel Construction Manual 15th ed., Table 3-23 case 1 (simple beam, uniform load):
   // Mmax = wL²/8 at L/2; Δmax = 5wL⁴/384EI at L/2.
@@ -107,7 +125,10 @@ describe("overhang and partial loads", () => {
     length: 12,
     E,
     I,
-    supports: [{ x: 0, type: "pin" }, { x: 10, type: "roller" }],
+    supports: [
+      { x: 0, type: "pin" },
+      { x: 10, type: "roller" },
+    ],
     loads: [
       { type: "udl", from: 2, to: 8, w: 100 },
       { type: "point", x: 12, P: 300 },

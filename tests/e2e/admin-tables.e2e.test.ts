@@ -129,7 +129,10 @@ describe("material tables admin", () => {
     await goto("/admin/tables/history");
     const start = page.getByTestId(`version-${startNumber}`);
     await start.getByRole("button", { name: "Restore" }).click();
-    await page.getByRole("dialog").getByText(`publishes version ${startNumber + 2}, a copy of version ${startNumber}`).waitFor();
+    await page
+      .getByRole("dialog")
+      .getByText(`publishes version ${startNumber + 2}, a copy of version ${startNumber}`)
+      .waitFor();
     await page.getByRole("dialog").getByLabel("Note for the history").fill("Back to the starter values");
     await page.getByRole("button", { name: "Restore as a new version" }).click();
     await page.getByTestId(`version-${startNumber + 2}`).waitFor();

@@ -17,9 +17,7 @@ async function waitForMail(address: string, subject: RegExp, after: number, time
   while (Date.now() < deadline) {
     const res = await fetch(`${MAIL_API}/api/email`);
     const mails = (await res.json()) as SinkMail[];
-    const found = mails
-      .filter((m) => m.to.some((t) => t.address === address) && subject.test(m.subject) && Date.parse(m.time) >= after - 2000)
-      .at(-1);
+    const found = mails.filter((m) => m.to.some((t) => t.address === address) && subject.test(m.subject) && Date.parse(m.time) >= after - 2000).at(-1);
     if (found) return found;
     await new Promise((resolve) => setTimeout(resolve, 300));
   }
@@ -167,7 +165,10 @@ describe("screens at phone and desktop size", () => {
     await admin.screenshot(`auth-admin-home-${tag}`);
     await admin.goto("/admin/users");
     await admin.screenshot(`auth-admin-users-${tag}`);
-    await admin.page.getByRole("button", { name: /Make admin|Remove admin/ }).first().click();
+    await admin.page
+      .getByRole("button", { name: /Make admin|Remove admin/ })
+      .first()
+      .click();
     await admin.page.getByRole("dialog").waitFor();
     await admin.screenshot(`auth-admin-confirm-${tag}`, { fullPage: false });
     await admin.page.getByRole("button", { name: "Keep as it is" }).click();

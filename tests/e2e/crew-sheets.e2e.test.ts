@@ -24,7 +24,10 @@ async function openDemoJob(account: typeof SAM) {
   const opened = await session.open(null, { viewport: "phone" });
   await signIn(opened.context, account);
   await opened.goto("/jobs");
-  await opened.page.getByRole("link", { name: new RegExp(JOB) }).first().click();
+  await opened.page
+    .getByRole("link", { name: new RegExp(JOB) })
+    .first()
+    .click();
   await opened.page.getByRole("heading", { level: 1, name: JOB }).waitFor();
   return opened;
 }

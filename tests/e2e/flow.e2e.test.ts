@@ -47,7 +47,10 @@ describe("sizing flow at 390x844", () => {
     await screenshot("flow-header-5-answer-full");
 
     // Tap a member for its full check: every check with its ratio, the factors, the loads
-    await page.getByRole("button", { name: /Open the full check/ }).first().click();
+    await page
+      .getByRole("button", { name: /Open the full check/ })
+      .first()
+      .click();
     const detail = page.getByRole("dialog");
     await detail.getByRole("heading", { name: "Factors and design values" }).waitFor();
     expect(await detail.getByText("CD, load duration").count()).toBe(1);
@@ -92,7 +95,10 @@ describe("sizing flow at 390x844", () => {
 
     // Both are on the job's page, with the answers the flow gave
     await goto("/jobs");
-    await page.getByRole("link", { name: new RegExp(DEMO_JOB) }).first().click();
+    await page
+      .getByRole("link", { name: new RegExp(DEMO_JOB) })
+      .first()
+      .click();
     await page.getByRole("heading", { level: 1, name: DEMO_JOB }).waitFor();
     expect(await page.getByText("H1 kitchen header").count()).toBeGreaterThan(0);
     expect(await page.getByText("J1 floor joists").count()).toBeGreaterThan(0);
@@ -159,7 +165,7 @@ describe("sizing flow at 390x844", () => {
     await expect.poll(() => page.getByText(`Deck joist · 12' 0" span with 2' 0" overhang`).count(), { timeout: 15_000 }).toBeGreaterThan(0);
 
     // typed the way it was measured, echoed in feet and inches
-    await overhang.fill("22-1/2\"");
+    await overhang.fill('22-1/2"');
     expect(await page.getByText(`Reads as 1' 10-1/2"`).count()).toBe(1);
     await overhang.blur();
     expect(await overhang.inputValue()).toBe(`1' 10-1/2"`);

@@ -22,7 +22,14 @@ function post(path: string, options: { localAddress?: string; headers?: Record<s
     let bytesSent = 0;
     let answered = false;
     const req = request(
-      { host: url.hostname, port: url.port, path: url.pathname + url.search, method: "POST", localAddress: options.localAddress, headers: { "content-type": "application/json", ...options.headers } },
+      {
+        host: url.hostname,
+        port: url.port,
+        path: url.pathname + url.search,
+        method: "POST",
+        localAddress: options.localAddress,
+        headers: { "content-type": "application/json", ...options.headers },
+      },
       (res) => {
         answered = true;
         let body = "";
@@ -92,10 +99,13 @@ describe("hardening, from outside", () => {
     const opened = await session.open(null);
     const { page } = opened;
     const offsite: string[] = [];
-    await page.context().route((url) => url.hostname.endsWith("evil.example"), (route) => {
-      offsite.push(route.request().url());
-      return route.abort();
-    });
+    await page.context().route(
+      (url) => url.hostname.endsWith("evil.example"),
+      (route) => {
+        offsite.push(route.request().url());
+        return route.abort();
+      },
+    );
     await opened.goto(`/sign-in?callbackUrl=${encodeURIComponent("/\t/evil.example/")}`);
     await page.getByLabel("E-mail").fill("dee@hollisrowe.test");
     await page.getByLabel("Password", { exact: true }).fill("builder-demo-pass");
@@ -139,7 +149,10 @@ describe("hardening, from outside", () => {
   }, 60_000);
 
   test("a server action posted from another origin answers 403, not 500", async () => {
-    const res = await post("/sign-in", { headers: { origin: "https://evil.example", "next-action": "0".repeat(42), "content-type": "text/plain;charset=UTF-8" }, json: [] });
+    const res = await post("/sign-in", {
+      headers: { origin: "https://evil.example", "next-action": "0".repeat(42), "content-type": "text/plain;charset=UTF-8" },
+      json: [],
+    });
     expect(res.status).toBe(403);
   });
 

@@ -40,8 +40,14 @@ describe("one answer at 390x844", () => {
 
     // one edit: back to the span, a new length, the answer again
     calls.length = 0;
-    await page.getByRole("navigation", { name: "Steps" }).getByRole("button", { name: /Span and supports/ }).click();
-    await page.getByLabel(/^Span \(between supports\)/).first().waitFor();
+    await page
+      .getByRole("navigation", { name: "Steps" })
+      .getByRole("button", { name: /Span and supports/ })
+      .click();
+    await page
+      .getByLabel(/^Span \(between supports\)/)
+      .first()
+      .waitFor();
     await typeLength(page, /^Span \(between supports\)/, "7' 6\"");
     await nextStep(page, /Next: Loads/);
     await nextStep(page, /Next: Material/);
@@ -55,7 +61,10 @@ describe("one answer at 390x844", () => {
 
     // back to the saved answer (6 ft) to read it as the screen shows it
     calls.length = 0;
-    await page.getByRole("navigation", { name: "Steps" }).getByRole("button", { name: /Span and supports/ }).click();
+    await page
+      .getByRole("navigation", { name: "Steps" })
+      .getByRole("button", { name: /Span and supports/ })
+      .click();
     await typeLength(page, /^Span \(between supports\)/, "6'");
     await nextStep(page, /Next: Loads/);
     await nextStep(page, /Next: Material/);
@@ -68,7 +77,10 @@ describe("one answer at 390x844", () => {
 
     // the job: a crew link and a sheet
     await page.goto(`${baseUrl()}/jobs`, { waitUntil: "load" });
-    await page.getByRole("link", { name: new RegExp(jobName) }).first().click();
+    await page
+      .getByRole("link", { name: new RegExp(jobName) })
+      .first()
+      .click();
     await page.getByRole("heading", { level: 1, name: jobName }).waitFor();
     const rows = page.getByTestId("crew-link-row");
     const before = await rows.count();

@@ -35,7 +35,10 @@ async function openDeck(viewport: "phone" | "desktop" = "phone") {
   const opened = await session.open(null, { viewport });
   await signIn(opened.context, SAM);
   await opened.goto("/jobs");
-  await opened.page.getByRole("link", { name: new RegExp(DECK) }).first().click();
+  await opened.page
+    .getByRole("link", { name: new RegExp(DECK) })
+    .first()
+    .click();
   await opened.page.getByRole("heading", { level: 1, name: DECK }).waitFor();
   return opened;
 }
@@ -84,7 +87,12 @@ describe("order list", () => {
     await page.getByRole("heading", { level: 1, name: `Order list: ${DECK}` }).waitFor();
     const joists = page.getByTestId("order-line").filter({ hasText: "10 joists" });
     expect(await joists.count()).toBe(0);
-    expect(await page.getByTestId("order-line").filter({ hasText: `${joistCount(16, 16)} joists` }).count()).toBe(1);
+    expect(
+      await page
+        .getByTestId("order-line")
+        .filter({ hasText: `${joistCount(16, 16)} joists` })
+        .count(),
+    ).toBe(1);
     // and back to the seeded 12 ft so other runs start from the same job
     await page.goto(jobUrl, { waitUntil: "load" });
     await dj1.getByText("For the order list").click();
@@ -187,10 +195,18 @@ describe("subscription journey", () => {
     const { page, context, goto, consoleErrors } = opened;
     await context.route("**/favicon.ico", (route) => route.fulfill({ status: 204 }));
     await signUpBuilder(context, "onjob");
-    const member = { kind: "header", span: "6'", label: "H1 back door header", newJob: { name: "Fenwick Close porch", siteAddress: "3 Fenwick Close, Larkfield" } } as const;
+    const member = {
+      kind: "header",
+      span: "6'",
+      label: "H1 back door header",
+      newJob: { name: "Fenwick Close porch", siteAddress: "3 Fenwick Close, Larkfield" },
+    } as const;
     await sizeAndSaveMember(page, member);
     await goto("/jobs");
-    await page.getByRole("link", { name: new RegExp(member.newJob.name) }).first().click();
+    await page
+      .getByRole("link", { name: new RegExp(member.newJob.name) })
+      .first()
+      .click();
     await page.getByRole("heading", { level: 1, name: member.newJob.name }).waitFor();
     const jobPath = new URL(page.url()).pathname;
 
@@ -207,7 +223,10 @@ describe("subscription journey", () => {
       page.getByRole("button", { name: "Subscribe monthly" }).click(),
     ]);
     // paid: back on the job with the sheet saved, not on Billing
-    await Promise.all([page.waitForURL((url) => url.pathname === jobPath && /sheet=/.test(url.search), { timeout: 45_000 }), payWithCard(page, TEST_CARDS.pays)]);
+    await Promise.all([
+      page.waitForURL((url) => url.pathname === jobPath && /sheet=/.test(url.search), { timeout: 45_000 }),
+      payWithCard(page, TEST_CARDS.pays),
+    ]);
     const saved = page.getByTestId("sheet-saved-after-checkout");
     await saved.waitFor({ timeout: 20_000 });
     await saved.scrollIntoViewIfNeeded();
@@ -226,7 +245,10 @@ describe("subscription journey", () => {
     await visitor.page.waitForURL(/\/sign-in\?callbackUrl=/);
     await visitor.page.getByLabel("E-mail").fill(SAM.email);
     await visitor.page.getByLabel("Password").fill(SAM.password);
-    await Promise.all([visitor.page.waitForURL((url) => url.pathname === orderPath, { timeout: 30_000 }), visitor.page.getByRole("button", { name: "Sign in" }).click()]);
+    await Promise.all([
+      visitor.page.waitForURL((url) => url.pathname === orderPath, { timeout: 30_000 }),
+      visitor.page.getByRole("button", { name: "Sign in" }).click(),
+    ]);
     await visitor.page.getByRole("heading", { level: 1, name: `Order list: ${DECK}` }).waitFor();
   });
 });

@@ -23,7 +23,8 @@ async function shoot(page: Page, name: string, fullPage = true): Promise<void> {
 }
 
 // Windows-1252's characters at 0x80-0x9F, where Latin-1 has control codes (Windows-1252 code page, as published by Microsoft)
-const WIN_ANSI_80_9F = "\u20ac\u0081\u201a\u0192\u201e\u2026\u2020\u2021\u02c6\u2030\u0160\u2039\u0152\u008d\u017d\u008f\u0090\u2018\u2019\u201c\u201d\u2022\u2013\u2014\u02dc\u2122\u0161\u203a\u0153\u009d\u017e\u0178";
+const WIN_ANSI_80_9F =
+  "\u20ac\u0081\u201a\u0192\u201e\u2026\u2020\u2021\u02c6\u2030\u0160\u2039\u0152\u008d\u017d\u008f\u0090\u2018\u2019\u201c\u201d\u2022\u2013\u2014\u02dc\u2122\u0161\u203a\u0153\u009d\u017e\u0178";
 
 /**
  * pdfkit writes the standard fonts' text in WinAnsi (Windows-1252), which the stream reader gives back byte
@@ -171,13 +172,21 @@ describe("subscriptions", () => {
     await shoot(page, "payments-sheet-2-subscribed");
 
     // A deck joist sized through the flow at 390x844 and saved to a new job
-    const member = { kind: "deck-joist", span: "11' 6\"", label: "DJ1 deck joists", newJob: { name: "Ashdown back deck", siteAddress: "9 Fenwick Close, Larkfield" } } as const;
+    const member = {
+      kind: "deck-joist",
+      span: "11' 6\"",
+      label: "DJ1 deck joists",
+      newJob: { name: "Ashdown back deck", siteAddress: "9 Fenwick Close, Larkfield" },
+    } as const;
     const headline = await sizeAndSaveMember(page, member, (step) => shoot(page, `payments-sheet-3-flow-${step}`, false));
     expect(headline).toMatch(/^2x\d+ .* at \d+ in o\.c\./);
 
     // The new job's page: the member with its answer, and now a button to save a sheet
     await goto("/jobs");
-    await page.getByRole("link", { name: new RegExp(member.newJob.name) }).first().click();
+    await page
+      .getByRole("link", { name: new RegExp(member.newJob.name) })
+      .first()
+      .click();
     await page.getByRole("heading", { level: 1, name: member.newJob.name }).waitFor();
     expect(await page.getByText(member.label).count()).toBeGreaterThan(0);
     expect(await page.getByText(headline).count()).toBeGreaterThan(0);

@@ -16,31 +16,35 @@ async function signInAsAdmin(opened: OpenedPage, callbackPath: string): Promise<
 }
 
 describe("sources on the admin table screens", () => {
-  test("sawn design values: the Table 4D rows flagged from memory, the others citing where they were checked; I-joists listed", { timeout: 120_000 }, async () => {
-    for (const viewport of ["phone", "desktop"] as const) {
-      const opened = await session.open(null, { viewport });
-      const { page, goto, screenshot, consoleErrors } = opened;
-      await signInAsAdmin(opened, "/admin/tables/sawn-values");
-      const note = page.getByTestId("table-source");
-      await note.waitFor();
-      expect(await note.textContent()).toMatch(/\d+ of \d+ rows are from memory — verify/);
-      await page.getByLabel("Filter").fill("beams-stringers");
-      const list = viewport === "phone" ? page.getByTestId("table-cards") : page.getByTestId("table-grid");
-      await list.waitFor();
-      await expect.poll(() => list.getByText("from memory — verify", { exact: true }).count()).toBeGreaterThan(0);
-      await screenshot(`tables-sources-4d-${viewport}`, { fullPage: false });
-      await page.getByLabel("Filter").fill("Spruce-Pine-Fir Select Structural");
-      await expect.poll(() => list.getByText(/Table 4A/).count()).toBeGreaterThan(0);
-      expect(await list.getByText("from memory — verify", { exact: true }).count()).toBe(0);
-      await screenshot(`tables-sources-spf-${viewport}`, { fullPage: false });
+  test(
+    "sawn design values: the Table 4D rows flagged from memory, the others citing where they were checked; I-joists listed",
+    { timeout: 120_000 },
+    async () => {
+      for (const viewport of ["phone", "desktop"] as const) {
+        const opened = await session.open(null, { viewport });
+        const { page, goto, screenshot, consoleErrors } = opened;
+        await signInAsAdmin(opened, "/admin/tables/sawn-values");
+        const note = page.getByTestId("table-source");
+        await note.waitFor();
+        expect(await note.textContent()).toMatch(/\d+ of \d+ rows are from memory — verify/);
+        await page.getByLabel("Filter").fill("beams-stringers");
+        const list = viewport === "phone" ? page.getByTestId("table-cards") : page.getByTestId("table-grid");
+        await list.waitFor();
+        await expect.poll(() => list.getByText("from memory — verify", { exact: true }).count()).toBeGreaterThan(0);
+        await screenshot(`tables-sources-4d-${viewport}`, { fullPage: false });
+        await page.getByLabel("Filter").fill("Spruce-Pine-Fir Select Structural");
+        await expect.poll(() => list.getByText(/Table 4A/).count()).toBeGreaterThan(0);
+        expect(await list.getByText("from memory — verify", { exact: true }).count()).toBe(0);
+        await screenshot(`tables-sources-spf-${viewport}`, { fullPage: false });
 
-      await goto("/admin/tables/i-joists");
-      await page.getByTestId("table-source").waitFor();
-      await expect.poll(() => page.getByText(/PRI-40 11-7\/8/).count()).toBeGreaterThan(0);
-      await screenshot(`tables-i-joists-${viewport}`, { fullPage: false });
-      expect(consoleErrors).toEqual([]);
-    }
-  });
+        await goto("/admin/tables/i-joists");
+        await page.getByTestId("table-source").waitFor();
+        await expect.poll(() => page.getByText(/PRI-40 11-7\/8/).count()).toBeGreaterThan(0);
+        await screenshot(`tables-i-joists-${viewport}`, { fullPage: false });
+        expect(consoleErrors).toEqual([]);
+      }
+    },
+  );
 });
 
 describe("a floor framed with I-joists", () => {
@@ -59,7 +63,10 @@ describe("a floor framed with I-joists", () => {
     const answer = await waitForAnswer(page);
     expect(answer).toMatch(/^(9-1\/2|11-7\/8|14|16) in PRI-\d0 at 16 in o\.c\./);
     await screenshot("flow-ijoist-5-answer", { fullPage: false });
-    await page.getByRole("button", { name: /Open the full check/ }).first().click();
+    await page
+      .getByRole("button", { name: /Open the full check/ })
+      .first()
+      .click();
     const detail = page.getByRole("dialog");
     await detail.getByText(/EI = /).first().waitFor();
     expect(await detail.getByText(/APA PRI-400/).count()).toBeGreaterThan(0);

@@ -148,7 +148,14 @@ describe("moving a support", () => {
   });
 
   test("it cannot pass or touch its neighbour: it stops 1 in short", () => {
-    const three: FlowState = { ...deckJoist(), supports: [{ x: 0, type: "pin" }, { x: 6, type: "roller" }, { x: 12, type: "roller" }] };
+    const three: FlowState = {
+      ...deckJoist(),
+      supports: [
+        { x: 0, type: "pin" },
+        { x: 6, type: "roller" },
+        { x: 12, type: "roller" },
+      ],
+    };
     expect(supportRange(three, 1)).toEqual({ min: SUPPORT_GAP_FT, max: 12 - SUPPORT_GAP_FT });
     expect(moveSupport(three, 1, 20).supports[1].x).toBeCloseTo(12 - 1 / 12, 12);
     expect(moveSupport(three, 1, 0).supports[1].x).toBeCloseTo(1 / 12, 12);

@@ -63,7 +63,14 @@ describe("span and overhang edits keep the layout", () => {
 
   test("the span in words: one span, two spans, an overhang", () => {
     expect(spanWords(withMainSpan(defaultFlowState("header"), 10))).toBe(`10' 0" span`);
-    const twoSpans: FlowState = { ...withMainSpan(defaultFlowState("floor-joist"), 12), supports: [{ x: 0, type: "pin" }, { x: 7, type: "roller" }, { x: 12, type: "roller" }] };
+    const twoSpans: FlowState = {
+      ...withMainSpan(defaultFlowState("floor-joist"), 12),
+      supports: [
+        { x: 0, type: "pin" },
+        { x: 7, type: "roller" },
+        { x: 12, type: "roller" },
+      ],
+    };
     expect(spanWords(twoSpans)).toBe(`spans 7' 0" + 5' 0"`);
     expect(spanWords(withOverhang(withMainSpan(defaultFlowState("deck-joist"), 11), "right", 1.5))).toBe(`11' 0" span with 1' 6" overhang`);
   });
@@ -83,7 +90,11 @@ describe("URL and local storage", () => {
     expect(decodeFlowState(encoded)).toEqual(s);
   });
 
-  test.each([["garbled", "%%%"], ["not JSON", encodeFlowState(defaultFlowState("beam")).slice(0, 20)], ["empty", ""]])("a %s state is ignored", (_name, text) => {
+  test.each([
+    ["garbled", "%%%"],
+    ["not JSON", encodeFlowState(defaultFlowState("beam")).slice(0, 20)],
+    ["empty", ""],
+  ])("a %s state is ignored", (_name, text) => {
     expect(decodeFlowState(text)).toBeNull();
   });
 
@@ -96,7 +107,10 @@ describe("URL and local storage", () => {
   test("where the flow starts: URL first, then ?kind= (resuming the same kind), then storage, then step 1", () => {
     const header = withMainSpan(defaultFlowState("header"), 9);
     const stored = storeLocation({ state: header, step: "loads" });
-    expect(resolveFlowStart({ s: encodeFlowState(defaultFlowState("rafter")), step: "material" }, stored)).toMatchObject({ from: "url", location: { step: "material", state: { kind: "rafter" } } });
+    expect(resolveFlowStart({ s: encodeFlowState(defaultFlowState("rafter")), step: "material" }, stored)).toMatchObject({
+      from: "url",
+      location: { step: "material", state: { kind: "rafter" } },
+    });
     expect(resolveFlowStart({ kind: "header" }, stored)).toMatchObject({ from: "storage", location: { step: "loads", state: { lengthFt: 9 } } });
     expect(resolveFlowStart({ kind: "floor-joist" }, stored)).toMatchObject({ from: "kind", location: { step: "span", state: { kind: "floor-joist" } } });
     expect(resolveFlowStart({}, stored)).toMatchObject({ from: "storage" });
@@ -109,12 +123,19 @@ describe("the design request", () => {
   test.each([
     [{ family: "any" }, { material: "any" }],
     [{ family: "sawn" }, { material: "sawn", species: "Hem-Fir", grade: "No.1", plies: [1] }],
-    [{ family: "built-up", plies: 0 }, { material: "sawn", species: "Hem-Fir", grade: "No.1", plies: [2, 3, 4] }],
-    [{ family: "built-up", plies: 3 }, { material: "sawn", species: "Hem-Fir", grade: "No.1", plies: [3] }],
+    [
+      { family: "built-up", plies: 0 },
+      { material: "sawn", species: "Hem-Fir", grade: "No.1", plies: [2, 3, 4] },
+    ],
+    [
+      { family: "built-up", plies: 3 },
+      { material: "sawn", species: "Hem-Fir", grade: "No.1", plies: [3] },
+    ],
     [{ family: "engineered", product: "" }, { material: "engineered" }],
     [{ family: "steel" }, { material: "steel", grade: "A992" }],
   ] as const)("material %j → family %j", (m, family) => {
-    expect(sizeFamily({ family: m.family, species: "Hem-Fir", grade: "No.1", plies: "plies" in m ? m.plies : 1, product: "product" in m ? m.product : "" })).toEqual(family);
+    expect(
+      sizeFamily({ family: m.family, species: "Hem-Fir", grade: "No.1", plies: "plies" in m ? m.plies : 1, product: "product" in m ? m.product : "" }),
+    ).toEqual(family);
   });
 });
-

@@ -110,12 +110,21 @@ describe("routes refuse a body over their cap with a JSON 413", () => {
       E: 1_600_000.123456789,
       I: 98.7654321012345,
       supports: Array.from({ length: 20 }, (_, i) => ({ x: (L * i) / 19, type: i === 0 ? "pin" : "roller" })),
-      loads: Array.from({ length: 200 }, (_, i) => ({ type: "linear", from: (L * i) / 200, to: (L * (i + 1)) / 200, w1: -123.456789012345, w2: -234.567890123456, case: "D" })),
+      loads: Array.from({ length: 200 }, (_, i) => ({
+        type: "linear",
+        from: (L * i) / 200,
+        to: (L * (i + 1)) / 200,
+        w1: -123.456789012345,
+        w2: -234.567890123456,
+        case: "D",
+      })),
       at: Array.from({ length: 1000 }, (_, i) => (L * i) / 999),
     };
     const text = JSON.stringify(body);
     expect(new TextEncoder().encode(text).byteLength).toBeLessThan(BODY_LIMITS.engine);
-    const res = await solvePost(new Request("http://localhost/api/solve", { method: "POST", headers: { "content-type": "application/json" }, body: text }), { params: Promise.resolve({}) });
+    const res = await solvePost(new Request("http://localhost/api/solve", { method: "POST", headers: { "content-type": "application/json" }, body: text }), {
+      params: Promise.resolve({}),
+    });
     expect(res.status).toBe(200);
   });
 });

@@ -186,7 +186,9 @@ describe.skipIf(!TEST_DB)("jobs and members (PostgreSQL)", () => {
     const self = await as(owner, () => actions.updateMember({ memberId: joist.id, carriedByMemberId: joist.id }));
     expect(self.ok ? 0 : self.status).toBe(400);
     const otherJob = okJob(await as(owner, () => actions.createJob({ name: "Orchard Row deck", siteAddress: "7 Orchard Row, Larkfield", notes: "" })));
-    const elsewhere = await as(owner, () => actions.saveMember({ jobId: otherJob, label: "DB1 deck beam", flowState: defaultFlowState("deck-beam"), chosenMember: null }));
+    const elsewhere = await as(owner, () =>
+      actions.saveMember({ jobId: otherJob, label: "DB1 deck beam", flowState: defaultFlowState("deck-beam"), chosenMember: null }),
+    );
     if (!elsewhere.ok) throw new Error(elsewhere.error);
     const cross = await as(owner, () => actions.updateMember({ memberId: joist.id, carriedByMemberId: elsewhere.memberId }));
     expect(cross.ok ? 0 : cross.status).toBe(400);

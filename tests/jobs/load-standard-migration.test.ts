@@ -31,10 +31,21 @@ describe.skipIf(!TEST_DB)("migration 20261203090000-record-load-standard-of-save
     const insert = "INSERT INTO members (id, flow_state, result_summary) VALUES (:id, CAST(:fs AS jsonb), CAST(:rs AS jsonb))";
     await db.query(insert, { replacements: { id: older, fs: JSON.stringify({ kind: "header" }), rs: JSON.stringify({ ratio: 0.77 }) } });
     await db.query(insert, { replacements: { id: unsized, fs: JSON.stringify({ kind: "beam" }), rs: null } });
-    await db.query(insert, { replacements: { id: newer, fs: JSON.stringify({ kind: "rafter", loadStandard: "ASCE 7-16" }), rs: JSON.stringify({ ratio: 0.5, loadStandard: "ASCE 7-16" }) } });
+    await db.query(insert, {
+      replacements: {
+        id: newer,
+        fs: JSON.stringify({ kind: "rafter", loadStandard: "ASCE 7-16" }),
+        rs: JSON.stringify({ ratio: 0.5, loadStandard: "ASCE 7-16" }),
+      },
+    });
     const read = async () =>
       Object.fromEntries(
-        (await db.query<{ id: string; fs: Record<string, unknown>; rs: Record<string, unknown> | null }>("SELECT id, flow_state AS fs, result_summary AS rs FROM members", { type: QueryTypes.SELECT })).map((r) => [r.id, r]),
+        (
+          await db.query<{ id: string; fs: Record<string, unknown>; rs: Record<string, unknown> | null }>(
+            "SELECT id, flow_state AS fs, result_summary AS rs FROM members",
+            { type: QueryTypes.SELECT },
+          )
+        ).map((r) => [r.id, r]),
       );
 
     await up({ context });

@@ -12,22 +12,38 @@ async function restricted(filePath: string, code: string): Promise<string[]> {
 describe("import boundaries", () => {
   test.each([
     { file: "lib/sheets/probe.ts", code: 'import { cx } from "@/components/ui/cx";\nexport const a = cx;\n', why: "lib imports components" },
-    { file: "lib/mail/probe.ts", code: 'import { Caution } from "../../components/ui/caution";\nexport const a = Caution;\n', why: "lib imports components (relative)" },
+    {
+      file: "lib/mail/probe.ts",
+      code: 'import { Caution } from "../../components/ui/caution";\nexport const a = Caution;\n',
+      why: "lib imports components (relative)",
+    },
     { file: "components/jobs/probe.ts", code: 'import type { Role } from "@/models/user";\nexport type A = Role;\n', why: "components import models" },
     { file: "app/probe.ts", code: 'import { User } from "@/models";\nexport const a = User;\n', why: "app imports models" },
     { file: "lib/solver/probe.ts", code: 'import { useState } from "react";\nexport const a = useState;\n', why: "the engine imports a framework" },
     { file: "lib/flow/probe.ts", code: 'import { getSequelize } from "@/lib/db";\nexport const a = getSequelize;\n', why: "the flow imports the database" },
     { file: "lib/solver/design/probe.ts", code: 'import { Member } from "@/models/member";\nexport const a = Member;\n', why: "the engine imports a model" },
-    { file: "lib/payments/probe.ts", code: 'import { startStandin } from "@/scripts/stripe-standin/server";\nexport const a = startStandin;\n', why: "shipped code imports a dev tool" },
-  ])("$why: refused", async ({ file, code }) => {
-    expect(await restricted(file, code)).toHaveLength(1);
-  }, 60_000);
+    {
+      file: "lib/payments/probe.ts",
+      code: 'import { startStandin } from "@/scripts/stripe-standin/server";\nexport const a = startStandin;\n',
+      why: "shipped code imports a dev tool",
+    },
+  ])(
+    "$why: refused",
+    async ({ file, code }) => {
+      expect(await restricted(file, code)).toHaveLength(1);
+    },
+    60_000,
+  );
 
   test.each([
     { file: "lib/sheets/probe.ts", code: 'import { CAUTION } from "@/lib/caution";\nexport const a = CAUTION;\n' },
     { file: "components/jobs/probe.ts", code: 'import type { Role } from "@/lib/auth/role-list";\nexport type A = Role;\n' },
     { file: "lib/solver/probe.ts", code: 'import { z } from "zod";\nexport const a = z;\n' },
-  ])("$file may import what it needs", async ({ file, code }) => {
-    expect(await restricted(file, code)).toEqual([]);
-  }, 60_000);
+  ])(
+    "$file may import what it needs",
+    async ({ file, code }) => {
+      expect(await restricted(file, code)).toEqual([]);
+    },
+    60_000,
+  );
 });

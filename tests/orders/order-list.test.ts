@@ -6,16 +6,7 @@ import { withMainSpan, withOverhang, type FlowState } from "@/lib/flow/state";
 import { summarize } from "@/lib/flow/summary";
 import { orderCsv } from "@/lib/orders/csv";
 import { buildOrderList, cutLengthFt, NO_ORDER_DETAILS, type OrderDetails, type OrderLine, type OrderMember } from "@/lib/orders/order-list";
-import {
-  blockingRows,
-  blocksPerPiece,
-  concreteToOrder,
-  footingCubicYards,
-  joistCount,
-  stockLengthFor,
-  stripsPerSheet,
-  studSizeFor,
-} from "@/lib/orders/rules";
+import { blockingRows, blocksPerPiece, concreteToOrder, footingCubicYards, joistCount, stockLengthFor, stripsPerSheet, studSizeFor } from "@/lib/orders/rules";
 import { checkMember, sizeMember } from "@/lib/solver/design";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import { STARTER_TABLES } from "@/lib/tables";
@@ -131,7 +122,10 @@ describe("the demo jobs' order lists, by hand", () => {
       if (line.costPerFt !== null && line.lengthFt !== null) expect(line.price).toBeCloseTo(line.costPerFt * line.lengthFt * line.quantity, 2);
       else expect(line.price).toBeNull();
     }
-    expect(marsh.total).toBeCloseTo(lines(marsh).reduce((s, l) => s + (l.price ?? 0), 0), 2);
+    expect(marsh.total).toBeCloseTo(
+      lines(marsh).reduce((s, l) => s + (l.price ?? 0), 0),
+      2,
+    );
     expect(marsh.unpriced).toBe(lines(marsh).filter((l) => l.price === null).length);
   });
 
@@ -176,8 +170,16 @@ describe("the demo jobs' order lists, by hand", () => {
 
 describe("CSV", () => {
   test("a cell starting with = + - @ is written as text (leading apostrophe), and the file reads back line for line", () => {
-    const evil = member("=HYPERLINK(\"http://x\")", withMainSpan(defaultFlowState("header"), 6));
-    const list = buildOrderList([evil, member("+1 deck", withMainSpan(defaultFlowState("header"), 6)), member("@sum", withMainSpan(defaultFlowState("header"), 6)), member("-2", withMainSpan(defaultFlowState("header"), 6))], STARTER_TABLES);
+    const evil = member('=HYPERLINK("http://x")', withMainSpan(defaultFlowState("header"), 6));
+    const list = buildOrderList(
+      [
+        evil,
+        member("+1 deck", withMainSpan(defaultFlowState("header"), 6)),
+        member("@sum", withMainSpan(defaultFlowState("header"), 6)),
+        member("-2", withMainSpan(defaultFlowState("header"), 6)),
+      ],
+      STARTER_TABLES,
+    );
     const csv = orderCsv(list);
     const rows = Papa.parse<string[]>(csv.trim(), { skipEmptyLines: true }).data;
     expect(rows[0]).toEqual(["group", "item", "length_ft", "quantity", "unit", "cost_per_ft_usd", "price_usd", "for", "notes"]);

@@ -46,7 +46,14 @@ describe.skipIf(!TEST_DB)("subscription life cycle against the stand-in", () => 
 
   async function builder() {
     getSequelize();
-    const user = await User.create({ email: uniqueEmail("cycle"), passwordHash: "x".repeat(60), name: "Dee Tester", company: "Tester Framing", role: "builder", emailVerifiedAt: new Date() });
+    const user = await User.create({
+      email: uniqueEmail("cycle"),
+      passwordHash: "x".repeat(60),
+      name: "Dee Tester",
+      company: "Tester Framing",
+      role: "builder",
+      emailVerifiedAt: new Date(),
+    });
     return { id: user.id, email: user.email, name: user.name, company: user.company };
   }
 

@@ -161,7 +161,17 @@ export function subscriptionObject(s: SubscriptionShape): Record<string, unknown
 }
 
 export function eventObject(type: string, object: Record<string, unknown>, created: number, id = fakeId("evt")): Record<string, unknown> {
-  return { id, object: "event", api_version: "2026-10-28.endive", created, data: { object }, livemode: false, pending_webhooks: 1, request: { id: null, idempotency_key: null }, type };
+  return {
+    id,
+    object: "event",
+    api_version: "2026-10-28.endive",
+    created,
+    data: { object },
+    livemode: false,
+    pending_webhooks: 1,
+    request: { id: null, idempotency_key: null },
+    type,
+  };
 }
 
 export function invoiceObject({

@@ -1,15 +1,5 @@
 import { beforeEach, describe, expect, test, vi } from "vitest";
-import {
-  TEST_DB,
-  eventObject,
-  fakeId,
-  invoiceObject,
-  outbox,
-  sendMailMock,
-  signedRequest,
-  subscriptionObject,
-  uniqueEmail,
-} from "./support";
+import { TEST_DB, eventObject, fakeId, invoiceObject, outbox, sendMailMock, signedRequest, subscriptionObject, uniqueEmail } from "./support";
 
 vi.mock("@/lib/mail", () => ({ sendMail: sendMailMock }));
 
@@ -33,7 +23,10 @@ async function makeCustomer(role: Role = "builder"): Promise<{ userId: string; e
   return { userId: user.id, email, customer };
 }
 
-async function deliver(payload: Record<string, unknown>, options?: Parameters<typeof signedRequest>[1]): Promise<{ status: number; body: Record<string, unknown> }> {
+async function deliver(
+  payload: Record<string, unknown>,
+  options?: Parameters<typeof signedRequest>[1],
+): Promise<{ status: number; body: Record<string, unknown> }> {
   const res = await POST(signedRequest(payload, options), {});
   return { status: res.status, body: (await res.json()) as Record<string, unknown> };
 }
@@ -86,16 +79,26 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
 
   test("a signed body that was changed after signing is a 400", async () => {
     const { customer } = await makeCustomer();
-    const event = eventObject("customer.subscription.created", subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd: now() + DAY }), now());
+    const event = eventObject(
+      "customer.subscription.created",
+      subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd: now() + DAY }),
+      now(),
+    );
     const good = signedRequest(event);
-    const tampered = new Request(good.url, { method: "POST", headers: good.headers, body: JSON.stringify({ ...event, type: "customer.subscription.deleted" }) });
+    const tampered = new Request(good.url, {
+      method: "POST",
+      headers: good.headers,
+      body: JSON.stringify({ ...event, type: "customer.subscription.deleted" }),
+    });
     expect((await POST(tampered, {})).status).toBe(400);
   });
 
   test("customer.subscription.created sets the subscriber role and stores the plan and renewal date", async () => {
     const { userId, customer } = await makeCustomer();
     const periodEnd = now() + 30 * DAY;
-    const res = await deliver(eventObject("customer.subscription.created", subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd }), now()));
+    const res = await deliver(
+      eventObject("customer.subscription.created", subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd }), now()),
+    );
     expect(res).toMatchObject({ status: 200, body: { received: true, duplicate: false, outcome: "applied" } });
     expect(await roleOf(userId)).toBe("subscriber");
     expect(await hasActiveSubscription(userId)).toBe(true);
@@ -107,7 +110,13 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
   test("the same event delivered twice has one effect: one record, one receipt", async () => {
     const { userId, email, customer } = await makeCustomer();
     const subId = fakeId("sub");
-    await deliver(eventObject("customer.subscription.created", subscriptionObject({ id: subId, customer, status: "active", periodStart: now(), periodEnd: now() + 30 * DAY }), now()));
+    await deliver(
+      eventObject(
+        "customer.subscription.created",
+        subscriptionObject({ id: subId, customer, status: "active", periodStart: now(), periodEnd: now() + 30 * DAY }),
+        now(),
+      ),
+    );
     const paid = eventObject("invoice.paid", invoiceObject({ customer, subscription: subId, periodStart: now(), periodEnd: now() + 30 * DAY }), now());
     const first = await deliver(paid);
     const second = await deliver(paid);
@@ -124,7 +133,13 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
   test("the same event sent concurrently is handled once", async () => {
     const { customer } = await makeCustomer();
     const subId = fakeId("sub");
-    await deliver(eventObject("customer.subscription.created", subscriptionObject({ id: subId, customer, status: "active", periodStart: now(), periodEnd: now() + DAY }), now()));
+    await deliver(
+      eventObject(
+        "customer.subscription.created",
+        subscriptionObject({ id: subId, customer, status: "active", periodStart: now(), periodEnd: now() + DAY }),
+        now(),
+      ),
+    );
     const paid = eventObject("invoice.paid", invoiceObject({ customer, subscription: subId, periodStart: now(), periodEnd: now() + DAY }), now());
     const results = await Promise.all(Array.from({ length: 5 }, () => deliver(paid)));
     expect(results.every((r) => r.status === 200)).toBe(true);
@@ -193,7 +208,9 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
     const t0 = now() - 500;
     const base = { id: subId, customer, periodStart: t0, periodEnd: t0 + 30 * DAY };
     await deliver(eventObject("customer.subscription.created", subscriptionObject({ ...base, status: "active" }), t0));
-    const failed = await deliver(eventObject("invoice.payment_failed", invoiceObject({ customer, subscription: subId, paid: false, periodStart: t0, periodEnd: t0 + DAY }), t0 + 100));
+    const failed = await deliver(
+      eventObject("invoice.payment_failed", invoiceObject({ customer, subscription: subId, paid: false, periodStart: t0, periodEnd: t0 + DAY }), t0 + 100),
+    );
     expect(failed.body.outcome).toBe("applied");
     expect(await getSubscription(userId)).toMatchObject({ status: "past_due", active: false });
     expect(await roleOf(userId)).toBe("builder");
@@ -214,9 +231,24 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
 
   test("a subscription found only through its metadata links the customer to the user", async () => {
     getSequelize();
-    const user = await User.create({ email: uniqueEmail("meta"), passwordHash: "x".repeat(60), name: "Meta", company: null, role: "builder", emailVerifiedAt: null });
+    const user = await User.create({
+      email: uniqueEmail("meta"),
+      passwordHash: "x".repeat(60),
+      name: "Meta",
+      company: null,
+      role: "builder",
+      emailVerifiedAt: null,
+    });
     const customer = fakeId("cus");
-    const sub = subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd: now() + DAY, metadata: { userId: user.id, plan: "yearly" }, lookupKey: "unknown_key" });
+    const sub = subscriptionObject({
+      id: fakeId("sub"),
+      customer,
+      status: "active",
+      periodStart: now(),
+      periodEnd: now() + DAY,
+      metadata: { userId: user.id, plan: "yearly" },
+      lookupKey: "unknown_key",
+    });
     expect((await deliver(eventObject("customer.subscription.created", sub, now()))).body.outcome).toBe("applied");
     expect((await StripeCustomer.findByPk(user.id))?.stripeCustomerId).toBe(customer);
     expect(await getSubscription(user.id)).toMatchObject({ plan: "yearly", planName: "Yearly" });
@@ -236,8 +268,18 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
 
   test("plan limits: free tier without a subscription, none with one", async () => {
     const { userId, customer } = await makeCustomer();
-    expect(await getPlanLimits({ id: userId, role: "builder" })).toEqual({ savedJobs: FREE_LIMITS.savedJobs, activeCrewLinks: FREE_LIMITS.activeCrewLinks, canSaveSheets: false });
-    await deliver(eventObject("customer.subscription.created", subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd: now() + DAY }), now()));
+    expect(await getPlanLimits({ id: userId, role: "builder" })).toEqual({
+      savedJobs: FREE_LIMITS.savedJobs,
+      activeCrewLinks: FREE_LIMITS.activeCrewLinks,
+      canSaveSheets: false,
+    });
+    await deliver(
+      eventObject(
+        "customer.subscription.created",
+        subscriptionObject({ id: fakeId("sub"), customer, status: "active", periodStart: now(), periodEnd: now() + DAY }),
+        now(),
+      ),
+    );
     expect(await getPlanLimits({ id: userId, role: "subscriber" })).toEqual({ savedJobs: null, activeCrewLinks: null, canSaveSheets: true });
   });
 });

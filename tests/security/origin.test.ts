@@ -8,7 +8,8 @@ const h = (init: Record<string, string>) => new Headers(init);
 
 describe("originRefusal", () => {
   test("the app's own origin passes on every state-changing method", () => {
-    for (const m of ["POST", "PUT", "PATCH", "DELETE"]) expect(originRefusal(m, "/api/admin/tables/lumber/rows", h({ origin: "https://app.spanlark.test" }), origins)).toBeNull();
+    for (const m of ["POST", "PUT", "PATCH", "DELETE"])
+      expect(originRefusal(m, "/api/admin/tables/lumber/rows", h({ origin: "https://app.spanlark.test" }), origins)).toBeNull();
   });
 
   test.each([

@@ -86,7 +86,20 @@ describe.skipIf(!TEST_DB)("job sheets: frozen when saved", () => {
 
     // an admin publishes new tables, and the builder lengthens the header
     tables.current = editedTables();
-    await Member.update({ flowState: { ...headerState(), lengthFt: 12, supports: [{ x: 0, type: "pin" }, { x: 12, type: "roller" }] }, label: "H1 renamed" }, { where: { id: header.id } });
+    await Member.update(
+      {
+        flowState: {
+          ...headerState(),
+          lengthFt: 12,
+          supports: [
+            { x: 0, type: "pin" },
+            { x: 12, type: "roller" },
+          ],
+        },
+        label: "H1 renamed",
+      },
+      { where: { id: header.id } },
+    );
 
     const after = await getJobSheet(sam.id, saved.sheet.id);
     expect(after.snapshot).toEqual(before.snapshot);

@@ -143,7 +143,16 @@ describe("the sheet's PDF", () => {
       const pdf = await renderSheetPdf(snap, paper);
       expect(isPdf(pdf)).toBe(true);
       const text = pdfStreamText(pdf);
-      for (const words of ["Marsh Lane addition", "H1 kitchen header", "J1 family room joists", "3-ply 2x12 No.2", "Hollis & Rowe Framing", STARTER_TABLES.version, "Check before you build", "B1 not sized"]) {
+      for (const words of [
+        "Marsh Lane addition",
+        "H1 kitchen header",
+        "J1 family room joists",
+        "3-ply 2x12 No.2",
+        "Hollis & Rowe Framing",
+        STARTER_TABLES.version,
+        "Check before you build",
+        "B1 not sized",
+      ]) {
         expect(text, words).toContain(words);
       }
       expect(text).toContain("Preliminary sizing for typical house framing.");
@@ -153,7 +162,14 @@ describe("the sheet's PDF", () => {
 
   test.skipIf(!hasPdftotext())("an outside reader (poppler's pdftotext) finds the same words", async () => {
     const text = pdftotext(await renderSheetPdf(snapshotWith(STARTER_TABLES)));
-    for (const words of ["Marsh Lane addition", "H1 kitchen header", "J1 family room joists", "Hollis & Rowe Framing", "Spanlark does not check", "Reactions and bearing"]) {
+    for (const words of [
+      "Marsh Lane addition",
+      "H1 kitchen header",
+      "J1 family room joists",
+      "Hollis & Rowe Framing",
+      "Spanlark does not check",
+      "Reactions and bearing",
+    ]) {
       expect(text, words).toContain(words);
     }
     expect(text).toMatch(/Page 1 of \d+/);

@@ -11,7 +11,20 @@ import { iJoistSchema } from "@/lib/tables/schemas";
 // 0.05 % (the transcription's own rounding).
 const N_PER_LBF = 4.4482216152605;
 const M_PER_IN = 0.0254;
-type Si = [series: string, h: number, b: number, EI: number, M: number, V: number, IR: number, E44: number, E44s: number, E102: number, E102s: number, K: number];
+type Si = [
+  series: string,
+  h: number,
+  b: number,
+  EI: number,
+  M: number,
+  V: number,
+  IR: number,
+  E44: number,
+  E44s: number,
+  E102: number,
+  E102s: number,
+  K: number,
+];
 const PRI_400_SI: Si[] = [
   ["PRI-20", 0.241, 0.0381, 378815.533464192, 3416.6612180736, 4982.008192, 7561.97672, 3692.023928, 3692.023928, 4982.008192, 4982.008192, 21974214.704],
   ["PRI-40", 0.241, 0.0635, 528045.895131904, 3708.1620759648, 4982.008192, 9608.158656, 4804.079328, 4804.079328, 4982.008192, 4982.008192, 21974214.704],

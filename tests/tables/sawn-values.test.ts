@@ -54,10 +54,50 @@ const TABLE_4A_KOTLIN: [Species, SawnGrade, Values7][] = [
 // NDS Supplement 2018, Table 4B, Southern Pine, as the same Kotlin WoodPropertyService transcribes it:
 // per grade, by width band 2"–4", 5"–6", 8", 10", 12": [Fb, Ft, Fc]; Fv 175, Fc⊥ 565 throughout.
 const TABLE_4B_KOTLIN: Record<SawnGrade, { E: number; Emin: number; byWidth: [number, number, number][] }> = {
-  "Select Structural": { E: 1_800_000, Emin: 660_000, byWidth: [[2350, 1650, 1900], [2100, 1450, 1800], [1950, 1350, 1700], [1700, 1150, 1650], [1600, 1100, 1650]] },
-  "No.1": { E: 1_600_000, Emin: 580_000, byWidth: [[1500, 1000, 1650], [1350, 875, 1550], [1250, 800, 1500], [1050, 700, 1450], [1000, 650, 1400]] },
-  "No.2": { E: 1_400_000, Emin: 510_000, byWidth: [[1100, 675, 1450], [1000, 600, 1400], [925, 550, 1350], [800, 475, 1300], [750, 450, 1250]] },
-  "No.3": { E: 1_300_000, Emin: 470_000, byWidth: [[650, 400, 850], [575, 350, 800], [525, 325, 775], [475, 275, 750], [450, 250, 725]] },
+  "Select Structural": {
+    E: 1_800_000,
+    Emin: 660_000,
+    byWidth: [
+      [2350, 1650, 1900],
+      [2100, 1450, 1800],
+      [1950, 1350, 1700],
+      [1700, 1150, 1650],
+      [1600, 1100, 1650],
+    ],
+  },
+  "No.1": {
+    E: 1_600_000,
+    Emin: 580_000,
+    byWidth: [
+      [1500, 1000, 1650],
+      [1350, 875, 1550],
+      [1250, 800, 1500],
+      [1050, 700, 1450],
+      [1000, 650, 1400],
+    ],
+  },
+  "No.2": {
+    E: 1_400_000,
+    Emin: 510_000,
+    byWidth: [
+      [1100, 675, 1450],
+      [1000, 600, 1400],
+      [925, 550, 1350],
+      [800, 475, 1300],
+      [750, 450, 1250],
+    ],
+  },
+  "No.3": {
+    E: 1_300_000,
+    Emin: 470_000,
+    byWidth: [
+      [650, 400, 850],
+      [575, 350, 800],
+      [525, 325, 775],
+      [475, 275, 750],
+      [450, 250, 725],
+    ],
+  },
 };
 const SP_WIDTHS = [4, 6, 8, 10, 12];
 
@@ -74,7 +114,15 @@ const SP_METRIC: Record<SawnGrade, { Fb: number[]; Ft: number[]; Fc: number[]; E
 };
 const MPA_PER_PSI = 0.006894757;
 
-const valuesOf = (v: { Fb: number; Ft: number; Fv: number; FcPerp: number; Fc: number; E: number; Emin: number }): Values7 => [v.Fb, v.Ft, v.Fv, v.FcPerp, v.Fc, v.E, v.Emin];
+const valuesOf = (v: { Fb: number; Ft: number; Fv: number; FcPerp: number; Fc: number; E: number; Emin: number }): Values7 => [
+  v.Fb,
+  v.Ft,
+  v.Fv,
+  v.FcPerp,
+  v.Fc,
+  v.E,
+  v.Emin,
+];
 
 describe("NDS Supplement 2018 Table 4A against two transcriptions", () => {
   test.each(TABLE_4A_KOTLIN)("Kotlin WoodPropertyService transcription: %s %s", (species, grade, values) => {
@@ -114,7 +162,11 @@ describe("NDS Supplement 2018 Table 4B (Southern Pine) against two transcription
   test.each(rows)("Southern Pine Use Guide (metric) in xcfem/xc: %s, %i in wide, within the metric rounding", (grade, depth, i) => {
     const m = SP_METRIC[grade];
     const v = findSawnValues(T, "Southern Pine", grade, "dimension", depth);
-    for (const [psi, mpa] of [[v.Fb, m.Fb[i]], [v.Ft, m.Ft[i]], [v.Fc, m.Fc[i]]] as const) {
+    for (const [psi, mpa] of [
+      [v.Fb, m.Fb[i]],
+      [v.Ft, m.Ft[i]],
+      [v.Fc, m.Fc[i]],
+    ] as const) {
       expect(Math.abs(psi * MPA_PER_PSI - mpa)).toBeLessThanOrEqual(0.05);
     }
     expect(Math.abs(v.Fv * MPA_PER_PSI - 1.2)).toBeLessThanOrEqual(0.05);
@@ -191,9 +243,7 @@ describe("design values against the NDS's own rules", () => {
 
   // Table 4B: Southern Pine values fall as the width grows (the size effect is built in).
   test.each(SAWN_GRADES.map((g) => [g]))("Southern Pine %s: Fb and Ft fall with width", (grade) => {
-    const rows = T.sawnValues
-      .filter((v) => v.species === "Southern Pine" && v.grade === grade)
-      .sort((a, b) => (a.nominalDepth ?? 0) - (b.nominalDepth ?? 0));
+    const rows = T.sawnValues.filter((v) => v.species === "Southern Pine" && v.grade === grade).sort((a, b) => (a.nominalDepth ?? 0) - (b.nominalDepth ?? 0));
     expect(rows.map((r) => r.nominalDepth)).toEqual([4, 6, 8, 10, 12]);
     for (let i = 1; i < rows.length; i++) {
       expect(rows[i].Fb).toBeLessThan(rows[i - 1].Fb);

@@ -127,7 +127,26 @@ describe("steel grades", () => {
 // AISC Shapes Database v15.0 as ronkok/Hurmet publishes it (site/ce/AISC-v15-wideFlanges.csv, read
 // with the search tool): A, d, bf, tw, tf, kdes, Ix, Zx, Sx, rx, Iy, Zy, Sy, ry, J, Cw, rts. Every field
 // of every Spanlark row must equal the published figure.
-type Published = [name: string, A: number, d: number, bf: number, tw: number, tf: number, kdes: number, Ix: number, Zx: number, Sx: number, rx: number, Iy: number, Zy: number, Sy: number, ry: number, J: number, Cw: number, rts: number];
+type Published = [
+  name: string,
+  A: number,
+  d: number,
+  bf: number,
+  tw: number,
+  tf: number,
+  kdes: number,
+  Ix: number,
+  Zx: number,
+  Sx: number,
+  rx: number,
+  Iy: number,
+  Zy: number,
+  Sy: number,
+  ry: number,
+  J: number,
+  Cw: number,
+  rts: number,
+];
 const AISC_V15_HURMET: Published[] = [
   ["W12x35", 10.3, 12.5, 6.56, 0.3, 0.52, 0.82, 285, 51.2, 45.6, 5.25, 24.5, 11.5, 7.47, 1.54, 0.741, 879, 1.79],
   ["W12x30", 8.79, 12.3, 6.52, 0.26, 0.44, 0.74, 238, 43.1, 38.6, 5.21, 20.3, 9.56, 6.24, 1.52, 0.457, 720, 1.77],

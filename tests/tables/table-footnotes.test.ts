@@ -59,7 +59,7 @@ describe("flat use factor Cfu (NDS Supplement 2018 Table 4A)", () => {
     [8, 1.15, 1.05],
     [10, 1.2, null],
     [12, 1.2, null],
-  ])("width %i in: %f (2\" & 3\" thick), %s (4\" thick)", (width, thin, thick) => {
+  ])('width %i in: %f (2" & 3" thick), %s (4" thick)', (width, thin, thick) => {
     expect(flatUseFactorCfu(width, 2, true)).toBe(thin);
     if (thick !== null) expect(flatUseFactorCfu(width, 4, true)).toBe(thick);
     expect(flatUseFactorCfu(width, 2, false)).toBe(1.0);

@@ -58,7 +58,9 @@ export default async function AccountPage() {
 
       <Card title="Sign out">
         <p className="mb-3 text-ink-soft">Signs out on this device only. Your jobs stay saved.</p>
-        <SignOutButton fullWidth className="sm:w-auto">Sign out</SignOutButton>
+        <SignOutButton fullWidth className="sm:w-auto">
+          Sign out
+        </SignOutButton>
       </Card>
     </div>
   );

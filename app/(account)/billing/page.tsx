@@ -40,7 +40,9 @@ export default async function BillingPage({ searchParams }: BillingPageProps) {
       <PageHeader title="Billing" lead="Your plan, when it renews, and how to cancel or resume it." />
       {params.checkout === "success" ? (
         <p role="status" className="rounded-card border-2 border-sound bg-sound-bg p-3 font-bold text-sound-ink" data-testid="checkout-result">
-          {subscription?.active ? "Payment received. Your subscription is active — thank you." : "Payment received. Confirming it with the payment service; refresh in a moment."}
+          {subscription?.active
+            ? "Payment received. Your subscription is active — thank you."
+            : "Payment received. Confirming it with the payment service; refresh in a moment."}
           {next ? (
             <a href={next} className="mt-2 block font-bold">
               Back to the job

@@ -43,8 +43,7 @@ export default async function PricingPage({ searchParams }: PricingPageProps) {
       ) : null}
       {job && !subscribed ? (
         <p className="rounded-card border-2 border-spruce bg-spruce-light p-3 text-ink" data-testid="pricing-for-sheet">
-          <strong>Saving a job sheet needs a subscription.</strong> Choose a plan: once it is paid you come straight back to your job with the
-          sheet saved.{" "}
+          <strong>Saving a job sheet needs a subscription.</strong> Choose a plan: once it is paid you come straight back to your job with the sheet saved.{" "}
           <a href={`/jobs/${job}`} className="font-bold">
             Back to the job
           </a>

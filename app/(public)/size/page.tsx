@@ -28,7 +28,8 @@ export default async function SizePage({ searchParams }: SizePageProps) {
     const member = await getMember(user.id, memberId);
     if (!member || member.jobId !== jobId) notFound();
     const fromUrl = resolveFlowStart(params, null);
-    const location = fromUrl.from === "url" ? fromUrl.location : { state: member.flowState, step: params.step === "answer" ? ("answer" as const) : ("span" as const) };
+    const location =
+      fromUrl.from === "url" ? fromUrl.location : { state: member.flowState, step: params.step === "answer" ? ("answer" as const) : ("span" as const) };
     return (
       <SizingFlow
         initial={location}

@@ -25,7 +25,11 @@ export default async function AdminTablesPage() {
         title="Material tables"
         back={{ href: "/admin", label: "Admin" }}
         lead="Every size a builder gets is checked against these values. A change publishes a new version; job sheets keep the version they were made with."
-        actions={<ButtonLink href="/admin/tables/history" variant="secondary">History and restore</ButtonLink>}
+        actions={
+          <ButtonLink href="/admin/tables/history" variant="secondary">
+            History and restore
+          </ButtonLink>
+        }
       />
       <section className="mb-6 rounded-card border-2 border-spruce bg-spruce-light p-4" data-testid="current-version">
         <h2 className="text-lg font-bold">{version ? `Current: version ${version.number}` : "Current: the starter tables (not yet in the database)"}</h2>

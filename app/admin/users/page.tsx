@@ -44,10 +44,7 @@ export default async function AdminUsersPage({ searchParams }: UsersPageProps) {
           }
         />
       ) : (
-        <UserList
-          currentUserId={admin.id}
-          users={users.map((u) => ({ ...u, createdAt: u.createdAt.toISOString() }))}
-        />
+        <UserList currentUserId={admin.id} users={users.map((u) => ({ ...u, createdAt: u.createdAt.toISOString() }))} />
       )}
       {pages > 1 ? (
         <nav aria-label="Pages" className="mt-4 flex items-center justify-between gap-2">

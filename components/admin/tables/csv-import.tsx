@@ -74,7 +74,13 @@ export function CsvImport({ table, title, fields, onApplied }: CsvImportProps) {
           Upload a CSV file
         </label>
         <p className="text-sm break-all text-graphite" id={`csv-hint-${table}`}>
-          At most 1 MB, UTF-8, with the header {fields.length > 6 ? `${fields.slice(0, 6).map((f) => f.name).join(",")},…` : fields.map((f) => f.name).join(",")}
+          At most 1 MB, UTF-8, with the header{" "}
+          {fields.length > 6
+            ? `${fields
+                .slice(0, 6)
+                .map((f) => f.name)
+                .join(",")},…`
+            : fields.map((f) => f.name).join(",")}
         </p>
         <input
           ref={input}
@@ -116,8 +122,8 @@ export function CsvImport({ table, title, fields, onApplied }: CsvImportProps) {
           {preview.rejected.length > 0 ? (
             <FormAlert tone="error">
               <p>
-                {preview.rejected.length} of {preview.lineCount} lines in {preview.fileName} have problems, so nothing in the file will be applied. Fix these lines and
-                check the file again:
+                {preview.rejected.length} of {preview.lineCount} lines in {preview.fileName} have problems, so nothing in the file will be applied. Fix these
+                lines and check the file again:
               </p>
               <ul className="mt-2 flex flex-col gap-1 font-normal" data-testid="csv-rejected">
                 {preview.rejected.map((line) => (
@@ -131,7 +137,8 @@ export function CsvImport({ table, title, fields, onApplied }: CsvImportProps) {
           {preview.ok && changes ? (
             <FormAlert tone="info">
               <p data-testid="csv-ok">
-                All {preview.acceptedRows} rows of {preview.fileName} passed. Applying it to {title}: {countsText({ added: changes.added.length, changed: changes.changed.length, removed: changes.removed.length })}.
+                All {preview.acceptedRows} rows of {preview.fileName} passed. Applying it to {title}:{" "}
+                {countsText({ added: changes.added.length, changed: changes.changed.length, removed: changes.removed.length })}.
               </p>
               {changes.changed.length + changes.added.length + changes.removed.length > 0 ? (
                 <ul className="mt-2 flex max-h-60 flex-col gap-1 overflow-y-auto font-normal">
@@ -140,7 +147,8 @@ export function CsvImport({ table, title, fields, onApplied }: CsvImportProps) {
                   ))}
                   {changes.changed.map((c) => (
                     <li key={`c-${c.key}`}>
-                      Change {c.key.replaceAll("|", " · ")}: {(c.fields ?? []).map((f) => `${f.column} ${f.before || "(blank)"} → ${f.after || "(blank)"}`).join(", ")}
+                      Change {c.key.replaceAll("|", " · ")}:{" "}
+                      {(c.fields ?? []).map((f) => `${f.column} ${f.before || "(blank)"} → ${f.after || "(blank)"}`).join(", ")}
                     </li>
                   ))}
                   {changes.removed.map((c) => (
@@ -154,7 +162,13 @@ export function CsvImport({ table, title, fields, onApplied }: CsvImportProps) {
           ) : null}
           {preview.ok && changes && changes.changed.length + changes.added.length + changes.removed.length > 0 ? (
             <>
-              <TextField label="Note for the history" hint="e.g. the yard's prices for March" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} />
+              <TextField
+                label="Note for the history"
+                hint="e.g. the yard's prices for March"
+                value={note}
+                onChange={(e) => setNote(e.target.value)}
+                maxLength={500}
+              />
               <Button onClick={apply} loading={busy === "apply"} className="w-fit">
                 Apply as a new version
               </Button>

@@ -26,7 +26,10 @@ function blankRow(fields: FieldSpec[]): FlatRow {
 }
 
 function GradesField({ field, value, onChange, error }: { field: FieldSpec; value: string; onChange: (v: string) => void; error?: string }) {
-  const chosen = value.split(";").map((v) => v.trim()).filter(Boolean);
+  const chosen = value
+    .split(";")
+    .map((v) => v.trim())
+    .filter(Boolean);
   return (
     <fieldset className="flex flex-col gap-1">
       <legend className="font-bold text-ink">{field.label}</legend>
@@ -119,7 +122,9 @@ export function RowForm({ table, title, fields, baseVersionId, row, onClose, onS
         {problem ? <FormAlert tone="error">{problem}</FormAlert> : null}
         {confirmRemove ? (
           <FormAlert tone="error">
-            <p>Remove {row?.key.replaceAll("|", " · ")} from {title}? This publishes a new version without it.</p>
+            <p>
+              Remove {row?.key.replaceAll("|", " · ")} from {title}? This publishes a new version without it.
+            </p>
             <div className="mt-2 flex flex-wrap gap-2">
               <Button variant="danger" loading={removing} onClick={remove}>
                 Yes, remove it
@@ -141,7 +146,14 @@ export function RowForm({ table, title, fields, baseVersionId, row, onClose, onS
               );
             }
             if (f.kind === "choice") {
-              return <SelectField key={f.name} {...props} options={(f.choices ?? []).map((c) => ({ value: c, label: c }))} placeholder={f.optional ? "(none)" : "Choose"} />;
+              return (
+                <SelectField
+                  key={f.name}
+                  {...props}
+                  options={(f.choices ?? []).map((c) => ({ value: c, label: c }))}
+                  placeholder={f.optional ? "(none)" : "Choose"}
+                />
+              );
             }
             if (f.kind === "number" && f.unit) return <NumberWithUnitField key={f.name} {...props} unit={f.unit} />;
             if (f.kind === "number") return <TextField key={f.name} {...props} inputMode="decimal" autoComplete="off" />;

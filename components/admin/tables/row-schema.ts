@@ -14,7 +14,15 @@ function bound(f: FieldSpec, value: number): string {
 }
 
 function numberChecks(f: FieldSpec, s: yup.StringSchema<string | undefined>, list: boolean): yup.StringSchema<string | undefined> {
-  const parts = (v: string | undefined) => (list ? (v ?? "").split(/[;,]/).map((p) => p.trim()).filter(Boolean) : v ? [v.trim()] : []);
+  const parts = (v: string | undefined) =>
+    list
+      ? (v ?? "")
+          .split(/[;,]/)
+          .map((p) => p.trim())
+          .filter(Boolean)
+      : v
+        ? [v.trim()]
+        : [];
   let out = s.test("number", `${f.label} must be a plain number${list ? " list, separated by ;" : ""}`, (v) => parts(v).every((p) => NUMBER_TEXT.test(p)));
   if (f.min !== undefined) {
     const min = f.min;

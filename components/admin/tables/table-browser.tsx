@@ -63,7 +63,9 @@ function SourcesNote({ hasSource, flagged, total, tableSource }: { hasSource: bo
       <p className="font-bold text-caution-ink">
         {flagged} of {total} rows are {FROM_MEMORY}
       </p>
-      <p className="text-sm">No readable copy of their table confirmed them. Check them against the printed table before relying on them; the job sheet lists them too.</p>
+      <p className="text-sm">
+        No readable copy of their table confirmed them. Check them against the printed table before relying on them; the job sheet lists them too.
+      </p>
     </div>
   );
 }
@@ -139,7 +141,8 @@ export function TableBrowser({ table }: TableBrowserProps) {
       <p className="text-ink-soft" data-testid="table-version">
         {version ? (
           <>
-            Showing version {version.number} (published <When iso={version.createdAt} />). {data.rows.length} rows.
+            Showing version {version.number} (published <When iso={version.createdAt} />
+            ). {data.rows.length} rows.
           </>
         ) : (
           <>The database holds no version yet: showing the starter tables. Run the seeders to publish them.</>
@@ -212,14 +215,21 @@ export function TableBrowser({ table }: TableBrowserProps) {
           {/* Wider screens: the whole table, sortable by its headers, scrolling sideways. */}
           <div className="hidden overflow-x-auto rounded-card border-2 border-rule bg-paper-raised md:block">
             <table className="figures w-full border-collapse text-sm" data-testid="table-grid">
-              <caption className="sr-only">{data.table.title}, version {version?.number ?? "starter"}</caption>
+              <caption className="sr-only">
+                {data.table.title}, version {version?.number ?? "starter"}
+              </caption>
               <thead>
                 <tr className="border-b-2 border-rule bg-paper-sunk">
                   <th scope="col" className="sticky left-0 bg-paper-sunk px-2 py-1 text-left">
                     <span className="sr-only">Edit</span>
                   </th>
                   {fields.map((f) => (
-                    <th key={f.name} scope="col" className="px-2 py-1 text-left align-bottom whitespace-nowrap" aria-sort={sort?.column === f.name ? (sort.direction === "asc" ? "ascending" : "descending") : "none"}>
+                    <th
+                      key={f.name}
+                      scope="col"
+                      className="px-2 py-1 text-left align-bottom whitespace-nowrap"
+                      aria-sort={sort?.column === f.name ? (sort.direction === "asc" ? "ascending" : "descending") : "none"}
+                    >
                       <button type="button" onClick={() => toggleSort(f.name)} className="inline-flex min-h-touch items-center gap-1 font-bold text-ink">
                         {f.label}
                         {f.unit ? <span className="font-normal text-graphite">{f.unit}</span> : null}

@@ -11,7 +11,17 @@ import { Spinner } from "@/components/ui/spinner";
 import { useToast } from "@/components/ui/toast";
 import { When } from "./when";
 import { columnWords, rowWords } from "./words";
-import { call, countsText, fetchJson, sendJson, SOURCE_LABEL, type CommitResponse, type TableKey, type TablesVersionDetail, type TablesVersionInfo } from "./api";
+import {
+  call,
+  countsText,
+  fetchJson,
+  sendJson,
+  SOURCE_LABEL,
+  type CommitResponse,
+  type TableKey,
+  type TablesVersionDetail,
+  type TablesVersionInfo,
+} from "./api";
 
 export type VersionHistoryProps = {
   versions: TablesVersionInfo[];
@@ -81,12 +91,20 @@ export function VersionHistory({ versions, titles }: VersionHistoryProps) {
     if (!restoring) return;
     setBusy(true);
     setProblem(null);
-    const answer = await call<CommitResponse>(`/api/admin/tables/versions/${restoring.id}/restore`, sendJson("POST", { note: note.trim() || undefined, baseVersionId: current?.id }));
+    const answer = await call<CommitResponse>(
+      `/api/admin/tables/versions/${restoring.id}/restore`,
+      sendJson("POST", { note: note.trim() || undefined, baseVersionId: current?.id }),
+    );
     setBusy(false);
     if (!answer.ok) return setProblem(answer.body.error);
     setRestoring(null);
     setNote("");
-    toast.show({ message: answer.body.created && answer.body.version ? `Version ${answer.body.version.number} published, a copy of version ${restoring.number}` : answer.body.message });
+    toast.show({
+      message:
+        answer.body.created && answer.body.version
+          ? `Version ${answer.body.version.number} published, a copy of version ${restoring.number}`
+          : answer.body.message,
+    });
     router.refresh();
   }
 
@@ -99,11 +117,14 @@ export function VersionHistory({ versions, titles }: VersionHistoryProps) {
               <div className="min-w-0">
                 <h3 className="text-lg font-bold">
                   Version {v.number}
-                  {v.id === current?.id ? <span className="ml-2 rounded-full border-2 border-spruce bg-spruce-light px-2 text-sm text-spruce-dark">Current</span> : null}
+                  {v.id === current?.id ? (
+                    <span className="ml-2 rounded-full border-2 border-spruce bg-spruce-light px-2 text-sm text-spruce-dark">Current</span>
+                  ) : null}
                 </h3>
                 <p className="text-ink-soft">
                   {SOURCE_LABEL[v.source]}
-                  {v.restoredFrom ? ` from version ${v.restoredFrom.number ?? "?"}` : ""} · <When iso={v.createdAt} /> · {v.createdBy ? v.createdBy.email : "Spanlark"}
+                  {v.restoredFrom ? ` from version ${v.restoredFrom.number ?? "?"}` : ""} · <When iso={v.createdAt} /> ·{" "}
+                  {v.createdBy ? v.createdBy.email : "Spanlark"}
                 </p>
                 <p className="mt-1 break-words">{v.note}</p>
                 <p className="mt-1 text-sm text-graphite">{countsText(v.counts)}</p>
@@ -148,7 +169,11 @@ export function VersionHistory({ versions, titles }: VersionHistoryProps) {
           </>
         }
       >
-        {problem ? <FormAlert tone="error" className="mb-3">Not restored: {problem}</FormAlert> : null}
+        {problem ? (
+          <FormAlert tone="error" className="mb-3">
+            Not restored: {problem}
+          </FormAlert>
+        ) : null}
         <TextField label="Note for the history" hint="Why go back" value={note} onChange={(e) => setNote(e.target.value)} maxLength={500} />
       </Dialog>
     </>

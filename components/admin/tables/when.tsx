@@ -9,7 +9,11 @@ const subscribe = () => () => undefined;
  * UTC (marked as such) and the browser re-renders in local time once hydrated, without a mismatch.
  */
 export function When({ iso }: { iso: string }) {
-  const local = useSyncExternalStore(subscribe, () => true, () => false);
+  const local = useSyncExternalStore(
+    subscribe,
+    () => true,
+    () => false,
+  );
   const date = new Date(iso);
   const text = local
     ? date.toLocaleString("en-US", { dateStyle: "medium", timeStyle: "short" })

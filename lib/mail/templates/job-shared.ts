@@ -21,7 +21,14 @@ export function jobSharedMail({ link, jobName, senderName, senderCompany, siteAd
     { kind: "para", text: "Hello," },
     { kind: "para", text: `${sender} shared the framing sizes for "${jobName}" with you on Spanlark.` },
   ];
-  if (siteAddress) blocks.push({ kind: "rows", rows: [["Job", jobName], ["Site", siteAddress]] });
+  if (siteAddress)
+    blocks.push({
+      kind: "rows",
+      rows: [
+        ["Job", jobName],
+        ["Site", siteAddress],
+      ],
+    });
   if (note?.trim()) blocks.push({ kind: "para", text: `Note from ${senderName}: ${note.trim()}` });
   blocks.push(
     { kind: "link", label: "Open the job", href: link },

@@ -17,7 +17,14 @@ export function orderListMail({ jobName, siteAddress, senderName, senderCompany,
     { kind: "para", text: "Hello," },
     { kind: "para", text: `${sender} sends this lumber order for "${jobName}". The same list is attached as a spreadsheet (CSV) and a PDF.` },
   ];
-  if (siteAddress) blocks.push({ kind: "rows", rows: [["Job", jobName], ["Deliver to", siteAddress]] });
+  if (siteAddress)
+    blocks.push({
+      kind: "rows",
+      rows: [
+        ["Job", jobName],
+        ["Deliver to", siteAddress],
+      ],
+    });
   if (note?.trim()) blocks.push({ kind: "para", text: `Note from ${senderName}: ${note.trim()}` });
   for (const group of list.groups) {
     blocks.push({ kind: "para", text: group.name });

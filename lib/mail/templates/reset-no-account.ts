@@ -12,7 +12,10 @@ export interface ResetNoAccountMailInput {
 export function resetNoAccountMail({ signUpLink }: ResetNoAccountMailInput): RenderedMail {
   return renderMail("About your Spanlark password request", [
     { kind: "para", text: "Hello," },
-    { kind: "para", text: "Someone asked to set a new Spanlark password for this address, but no Spanlark account uses it. Maybe you signed up with another address?" },
+    {
+      kind: "para",
+      text: "Someone asked to set a new Spanlark password for this address, but no Spanlark account uses it. Maybe you signed up with another address?",
+    },
     { kind: "link", label: "Open an account", href: signUpLink },
     { kind: "para", text: "If you did not ask, ignore this mail; nothing has changed." },
   ]);

@@ -12,8 +12,14 @@ export interface VerifyEmailMailInput {
 export function verifyEmailMail({ name, link, validHours }: VerifyEmailMailInput): RenderedMail {
   return renderMail("Confirm your e-mail for Spanlark", [
     { kind: "para", text: greeting(name) },
-    { kind: "para", text: "Thanks for opening a Spanlark account. Tap the button to confirm this is your address, then sign in to save jobs and share them with your crew." },
+    {
+      kind: "para",
+      text: "Thanks for opening a Spanlark account. Tap the button to confirm this is your address, then sign in to save jobs and share them with your crew.",
+    },
     { kind: "link", label: "Confirm my e-mail", href: link },
-    { kind: "para", text: `The link works once and for ${validHours} hours. If you did not sign up, ignore this mail: no account opens without the confirmation.` },
+    {
+      kind: "para",
+      text: `The link works once and for ${validHours} hours. If you did not sign up, ignore this mail: no account opens without the confirmation.`,
+    },
   ]);
 }

@@ -26,8 +26,20 @@ export const OCCUPANCY_PRESETS: readonly AreaLoadPreset[] = [
   { id: "attic-limited-storage", label: "Uninhabitable attics with limited storage", case: "L", psf: 20, source: "IRC 2021 Table R301.5" },
   { id: "attic-habitable", label: "Habitable attics served by a fixed stair", case: "L", psf: 30, source: "IRC 2021 Table R301.5" },
   { id: "roof-live", label: "Roof live load", case: "Lr", psf: 20, source: "IRC 2021 Table R301.6 (roof slope < 4:12, tributary area ≤ 200 sq ft)" },
-  { id: "floor-dead", label: "Floor dead load (joists, subfloor, finish, ceiling)", case: "D", psf: 10, source: "IRC 2021 span tables' design dead load (common practice)" },
-  { id: "floor-dead-tile", label: "Floor dead load with tile or stone", case: "D", psf: 20, source: "IRC 2021 span tables' 20 psf dead load columns (common practice)" },
+  {
+    id: "floor-dead",
+    label: "Floor dead load (joists, subfloor, finish, ceiling)",
+    case: "D",
+    psf: 10,
+    source: "IRC 2021 span tables' design dead load (common practice)",
+  },
+  {
+    id: "floor-dead-tile",
+    label: "Floor dead load with tile or stone",
+    case: "D",
+    psf: 20,
+    source: "IRC 2021 span tables' 20 psf dead load columns (common practice)",
+  },
   { id: "roof-dead", label: "Roof dead load (framing, sheathing, shingles)", case: "D", psf: 15, source: "common practice" },
 ];
 

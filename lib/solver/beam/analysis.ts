@@ -139,7 +139,13 @@ class Analysis implements BeamAnalysis {
     if (!r) {
       // one buffer for the five arrays: a large typed array's buffer is costly to allocate
       const buf = new Float64Array(5 * n);
-      r = { x: buf.subarray(0, n), V: buf.subarray(n, 2 * n), M: buf.subarray(2 * n, 3 * n), slope: buf.subarray(3 * n, 4 * n), deflection: buf.subarray(4 * n) };
+      r = {
+        x: buf.subarray(0, n),
+        V: buf.subarray(n, 2 * n),
+        M: buf.subarray(2 * n, 3 * n),
+        slope: buf.subarray(3 * n, 4 * n),
+        deflection: buf.subarray(4 * n),
+      };
     }
     const f = this.field;
     const { bp, nseg, tol } = this.prep;
@@ -438,9 +444,7 @@ function clean(v: number): number {
 }
 
 function overflow(): BeamInputError {
-  return new BeamInputError([
-    { path: "E", message: "the results are too large to represent — check the units of E (psi), I (in^4) and the loads" },
-  ]);
+  return new BeamInputError([{ path: "E", message: "the results are too large to represent — check the units of E (psi), I (in^4) and the loads" }]);
 }
 
 export function makeAnalysis(prep: PreparedBeam, resp: Response): BeamAnalysis {

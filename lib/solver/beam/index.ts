@@ -90,9 +90,7 @@ export function solve(input: BeamInput): SolveOutput {
     caution: CAUTION,
   };
   if (!allFinite(out)) {
-    throw new BeamInputError([
-      { path: "E", message: "the results are too large to represent — check the units of E (psi), I (in^4) and the loads" },
-    ]);
+    throw new BeamInputError([{ path: "E", message: "the results are too large to represent — check the units of E (psi), I (in^4) and the loads" }]);
   }
   return out;
 }

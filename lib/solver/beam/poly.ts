@@ -51,7 +51,7 @@ export function bracketedRoot(c: ArrayLike<number>, off: number, deg: number, a:
     if (!(x > a && x < b)) x = 0.5 * (a + b);
     const fx = polyAt(c, off, deg, x);
     if (fx === 0) return x;
-    if ((fx > 0) === (fb > 0)) {
+    if (fx > 0 === fb > 0) {
       b = x;
       fb = fx;
       if (side === -1) fa *= 0.5;
@@ -71,15 +71,7 @@ export function bracketedRoot(c: ArrayLike<number>, off: number, deg: number, a:
  * Roots strictly inside (lo, hi) of the polynomial at c[off..off+deg], given the sorted interior
  * roots of its derivative (`crit`), which split the interval into monotone pieces. Appends to `out`.
  */
-export function rootsFromCritical(
-  c: ArrayLike<number>,
-  off: number,
-  deg: number,
-  lo: number,
-  hi: number,
-  crit: readonly number[],
-  out: number[],
-): void {
+export function rootsFromCritical(c: ArrayLike<number>, off: number, deg: number, lo: number, hi: number, crit: readonly number[], out: number[]): void {
   let a = lo;
   let fa = polyAt(c, off, deg, a);
   for (let i = 0; i <= crit.length; i++) {

@@ -112,9 +112,7 @@ function stabilityCheck(input: BeamInput): void {
     throw new BeamInstabilityError("unstable: the beam has no supports — add at least two supports, or one fixed support");
   }
   if (s.length === 1 && s[0].type !== "fixed") {
-    throw new BeamInstabilityError(
-      `unstable: the beam can rotate about the support at x = ${formatFt(s[0].x)} ft — add a second support or make it fixed`,
-    );
+    throw new BeamInstabilityError(`unstable: the beam can rotate about the support at x = ${formatFt(s[0].x)} ft — add a second support or make it fixed`);
   }
 }
 
@@ -377,9 +375,7 @@ export function prepareBeam(input: BeamInput, internalLoads = 0): PreparedBeam {
     for (let k = 0; k < j; k++) d -= chol[j * nf + k] * chol[j * nf + k];
     if (!(d > 1e-11 * kjj && kjj > 0 && diagMax > 0)) {
       const n = free[j] >> 1;
-      throw new BeamInstabilityError(
-        `unstable: the beam can move freely at x = ${formatFt(nodeX[n])} ft — add a support or make one fixed`,
-      );
+      throw new BeamInstabilityError(`unstable: the beam can move freely at x = ${formatFt(nodeX[n])} ft — add a support or make one fixed`);
     }
     d = Math.sqrt(d);
     chol[j * nf + j] = d;
@@ -408,9 +404,7 @@ export function prepareBeam(input: BeamInput, internalLoads = 0): PreparedBeam {
     if (ld.type === "point" || ld.type === "moment") {
       const b = bpIndex(bp, ld.x, tol);
       const moment = ld.type === "moment";
-      pieces.push(
-        concentratedPiece(source, loadCase, regionOf(regions, bp[b], tol), b, bpNode, nodeX, bp[b], moment ? ld.M : ld.P, moment),
-      );
+      pieces.push(concentratedPiece(source, loadCase, regionOf(regions, bp[b], tol), b, bpNode, nodeX, bp[b], moment ? ld.M : ld.P, moment));
       continue;
     }
     const x0 = bp[bpIndex(bp, ld.from, tol)];
@@ -517,7 +511,7 @@ export function respond(prep: PreparedBeam, weights: ArrayLike<number>): Respons
     field[o + OFF_M + 2] = -q0 / 2;
     field[o + OFF_M + 3] = -q1 / 6;
     const s1 = -M * inv;
-    const s2 = -V * inv / 2;
+    const s2 = (-V * inv) / 2;
     const s3 = (q0 * inv) / 6;
     const s4 = (q1 * inv) / 24;
     field[o + OFF_S] = th;

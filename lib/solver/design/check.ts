@@ -255,7 +255,9 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
       : "compression edge braced continuously (sheathing or decking fastened along it)",
   );
   if (ctx.model.regions.length > 1) {
-    a.push("where the member hogs (over an interior support or at an overhang) the bottom edge is in compression: the same bracing is assumed there (blocking or bracing at the supports)");
+    a.push(
+      "where the member hogs (over an interior support or at an overhang) the bottom edge is in compression: the same bracing is assumed there (blocking or bracing at the supports)",
+    );
   }
   if (ctx.model.patterned) a.push(`live load placed span by span for the worst effect (pattern loading, ${std} §4.3.3)`);
   a.push(`bearing length ${input.bearingIn} in at every support`);
@@ -275,13 +277,19 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     a.push("span taken centre to centre of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
-    a.push("glulam: the table's Fb (tension zone stressed in tension) is used for every moment; where the member hogs over a support or an overhang, confirm Fbx− with the supplier");
+    a.push(
+      "glulam: the table's Fb (tension zone stressed in tension) is used for every moment; where the member hogs over a support or an overhang, confirm Fbx− with the supplier",
+    );
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
   if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
   if (member.kind === "ijoist") {
-    a.push("wood I-joist checked against its published capacities (moment, shear, end and intermediate reactions) and its EI and K; dry service, normal temperature; compression flange braced by the sheathing");
-    a.push("deflection includes shear deflection (K); no holes, notches or cut flanges in the joist; squash blocks, rim and blocking as the joist's installation guide shows");
+    a.push(
+      "wood I-joist checked against its published capacities (moment, shear, end and intermediate reactions) and its EI and K; dry service, normal temperature; compression flange braced by the sheathing",
+    );
+    a.push(
+      "deflection includes shear deflection (K); no holes, notches or cut flanges in the joist; squash blocks, rim and blocking as the joist's installation guide shows",
+    );
   }
   return a;
 }
@@ -291,7 +299,12 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
   const input = parseWith<CheckInput>(checkInputSchema, json);
   const member = resolveMember(input.member, tables);
   if (member.kind === "wood" && member.wetTable === "scl" && input.conditions.wet) {
-    throw new DesignInputError([{ path: "conditions.wet", message: "LVL and PSL are for dry service only here; use sawn lumber or glulam in wet service, or the maker's published wet-use values" }]);
+    throw new DesignInputError([
+      {
+        path: "conditions.wet",
+        message: "LVL and PSL are for dry service only here; use sawn lumber or glulam in wet service, or the maker's published wet-use values",
+      },
+    ]);
   }
   return fullCheck(input, member, contextFor(input), tables);
 }
@@ -302,7 +315,10 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
   const sw = input.conditions.selfWeight ? member.weightPlf : 0;
   const assembly = assemblyFor(member, wallFor(input.kind, input.wallFraming));
   const assumptions = assumptionsFor(input, member, ctx);
-  if (assembly.fits === false) assumptions.push(`${assembly.words} is ${assembly.widthIn} in wide and does not fill a ${assembly.wallFraming} wall (${assembly.wallFraming === "2x6" ? "5-1/2" : "3-1/2"} in)`);
+  if (assembly.fits === false)
+    assumptions.push(
+      `${assembly.words} is ${assembly.widthIn} in wide and does not fill a ${assembly.wallFraming} wall (${assembly.wallFraming === "2x6" ? "5-1/2" : "3-1/2"} in)`,
+    );
   const summary = summarizeMember(member);
   const factors = ev.factors as { EPrime?: number };
   const diagrams = memberDiagrams({
@@ -311,7 +327,12 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     loads: ctx.loads.map((l) => l.load),
     selfWeightPlf: sw,
     // an I-joist gives its EI, not a section: its bending deflection drawn from EI (shear deflection is in the check)
-    EPsi: summary.section.EI !== undefined && summary.section.EI > 0 ? summary.section.EI : member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0 ? factors.EPrime : E_STEEL_KSI * 1000,
+    EPsi:
+      summary.section.EI !== undefined && summary.section.EI > 0
+        ? summary.section.EI
+        : member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0
+          ? factors.EPrime
+          : E_STEEL_KSI * 1000,
     IIn4: summary.section.EI !== undefined && summary.section.EI > 0 ? 1 : summary.section.I,
     checks: ev.checks,
     reactions: ev.reactions,

@@ -40,7 +40,11 @@ export function deflectionCheck(
     }
   }
   const r = model.regions[best.region];
-  const where = !ctx.notes ? "" : r.kind === "span" ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft` : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
+  const where = !ctx.notes
+    ? ""
+    : r.kind === "span"
+      ? `span ${round(r.from, 2)}–${round(r.to, 2)} ft`
+      : `overhang ${round(r.from, 2)}–${round(r.to, 2)} ft, tip against 2 × its length`;
   const check: NamedCheck = {
     name,
     demand: round(best.demand, 4),

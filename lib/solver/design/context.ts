@@ -45,7 +45,6 @@ export interface DesignContext {
   combinations: ReadonlyMap<string, Combination>;
 }
 
-
 function comboName(f: Combination): string {
   return LOAD_CASES.filter((c) => (f[c] ?? 0) !== 0)
     .map((c) => `${f[c] === 1 ? "" : String(Math.round((f[c] as number) * 1e4) / 1e4)}${c}`)

@@ -56,7 +56,11 @@ export function strengthCombination(checks: readonly DesignCheck[]): Combination
 }
 
 /** The service combination: total-load deflection's, else the one giving the largest downward reaction. */
-export function serviceCombination(checks: readonly DesignCheck[], reactions: readonly SupportReaction[], combinations: ReadonlyMap<string, Combination>): CombinationRef | null {
+export function serviceCombination(
+  checks: readonly DesignCheck[],
+  reactions: readonly SupportReaction[],
+  combinations: ReadonlyMap<string, Combination>,
+): CombinationRef | null {
   const total = checks.find((c) => c.name === "deflection-total" && c.combination)?.combination;
   if (total) return total;
   const largest = [...reactions].sort((a, b) => b.maxDown - a.maxDown)[0];
@@ -69,7 +73,10 @@ function mergeBands(loads: readonly (Load & { case: LoadCase })[]): (Load & { ca
   const out: (Load & { case: LoadCase })[] = [];
   for (const l of loads) {
     if (l.type === "udl") {
-      const same = out.find((o): o is Extract<Load, { type: "udl" }> & { case: LoadCase } => o.type === "udl" && o.case === l.case && Math.abs(o.from - l.from) < 1e-9 && Math.abs(o.to - l.to) < 1e-9);
+      const same = out.find(
+        (o): o is Extract<Load, { type: "udl" }> & { case: LoadCase } =>
+          o.type === "udl" && o.case === l.case && Math.abs(o.from - l.from) < 1e-9 && Math.abs(o.to - l.to) < 1e-9,
+      );
       if (same) {
         same.w += l.w;
         continue;
@@ -115,6 +122,11 @@ export function memberDiagrams(src: DiagramSource): MemberDiagrams | null {
     EPsi: src.EPsi,
     IIn4: src.IIn4,
     strength: { combination: strength, segments: compact(a.segments), shear: [extreme(e.Vabs.x, e.Vabs.value, "Largest shear")], moment },
-    service: { combination: service, segments: compact(d.segments), deflection, reactions: d.reactions.map((r) => ({ x: r.x, F: round6(r.F), M: round6(r.M) })) },
+    service: {
+      combination: service,
+      segments: compact(d.segments),
+      deflection,
+      reactions: d.reactions.map((r) => ({ x: r.x, F: round6(r.F), M: round6(r.M) })),
+    },
   };
 }

@@ -128,9 +128,14 @@ function deflectionWithShear(ctx: DesignContext, name: "deflection-live" | "defl
 }
 
 export function evaluateIJoist(m: IJoistMember, ctx: DesignContext): { checks: NamedCheck[]; reactions: SupportReaction[]; factors: IJoistFactors } {
-  if (ctx.method !== "asd") throw new DesignInputError([{ path: "method", message: "I-joists are checked in ASD here (their published values are allowable loads)" }]);
-  if (ctx.conditions.wet) throw new DesignInputError([{ path: "conditions.wet", message: "I-joists are for dry service only (APA PRI-400); use sawn lumber or glulam where it stays wet" }]);
-  if (ctx.conditions.temperatureF > 100) throw new DesignInputError([{ path: "conditions.temperatureF", message: "I-joists are checked at normal temperatures only here (up to 100 °F)" }]);
+  if (ctx.method !== "asd")
+    throw new DesignInputError([{ path: "method", message: "I-joists are checked in ASD here (their published values are allowable loads)" }]);
+  if (ctx.conditions.wet)
+    throw new DesignInputError([
+      { path: "conditions.wet", message: "I-joists are for dry service only (APA PRI-400); use sawn lumber or glulam where it stays wet" },
+    ]);
+  if (ctx.conditions.temperatureF > 100)
+    throw new DesignInputError([{ path: "conditions.temperatureF", message: "I-joists are checked at normal temperatures only here (up to 100 °F)" }]);
   const { model } = ctx;
   const j = m.joist;
   const sw = ctx.conditions.selfWeight ? m.weightPlf : 0;
@@ -189,7 +194,8 @@ export function evaluateIJoist(m: IJoistMember, ctx: DesignContext): { checks: N
     const words = end
       ? `end reaction at ${bearing} in bearing${m.stiffeners ? ", web stiffeners" : ", no web stiffeners"}`
       : "intermediate reaction at 3-1/2 in bearing or more";
-    const shortWords = ctx.bearingIn < least ? `; ${ctx.bearingIn} in given is less than the ${least} in the table starts at, so the answer asks for ${least} in` : "";
+    const shortWords =
+      ctx.bearingIn < least ? `; ${ctx.bearingIn} in given is less than the ${least} in the table starts at, so the answer asks for ${least} in` : "";
     for (let e = 0; e < ctx.strength.length; e++) {
       const env = ctx.strength[e];
       const R = env.Rmax[jx] + env.fD * sw * model.selfWeight.R[jx];
@@ -214,6 +220,16 @@ export function evaluateIJoist(m: IJoistMember, ctx: DesignContext): { checks: N
   return {
     checks,
     reactions,
-    factors: { method: "asd", CD: bend.CD, M: j.M, MPrime: round(bend.cap, 0), V: j.V, VPrime: round(shear.cap, 0), EIPrime: j.EI, K: j.K, webStiffeners: m.stiffeners },
+    factors: {
+      method: "asd",
+      CD: bend.CD,
+      M: j.M,
+      MPrime: round(bend.cap, 0),
+      V: j.V,
+      VPrime: round(shear.cap, 0),
+      EIPrime: j.EI,
+      K: j.K,
+      webStiffeners: m.stiffeners,
+    },
   };
 }

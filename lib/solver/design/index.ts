@@ -2,7 +2,18 @@
 export { checkMember, evaluateMember, NOT_CHECKED, CAUTION, type CheckOutput, type MemberSummary, type Evaluation } from "./check";
 export { sizeMember, largestSpan, candidateSpecs, type SizeOutput, type SizeCandidateResult, type SizeFailure, type SpanOutput } from "./size";
 export { DesignInputError, type DesignIssue } from "./errors";
-export { checkInputSchema, sizeInputSchema, spanInputSchema, memberSchema, type CheckInput, type SizeInput, type SpanInput, type MemberSpec, type SizeFamily, type DesignLoad } from "./schema";
+export {
+  checkInputSchema,
+  sizeInputSchema,
+  spanInputSchema,
+  memberSchema,
+  type CheckInput,
+  type SizeInput,
+  type SpanInput,
+  type MemberSpec,
+  type SizeFamily,
+  type DesignLoad,
+} from "./schema";
 export { DEFLECTION_PRESETS, resolveLimits, type DeflectionPreset } from "./presets";
 export type { DesignCheck, SupportReaction, CheckName } from "./types";
 export type { WoodFactors } from "./wood";

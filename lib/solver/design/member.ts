@@ -130,7 +130,9 @@ export function resolveMemberUnchecked(spec: MemberSpec, tables: MaterialTables)
     const cf = sizeFactorFor(tables, species, grade, size);
     const n = spec.plies;
     if (n > 1 && size.sizeClass !== "dimension") {
-      throw new DesignInputError([{ path: "member.plies", message: `built-up members are made of dimension lumber (2x and 4x); ${size.name} is a timber, use 1 ply` }]);
+      throw new DesignInputError([
+        { path: "member.plies", message: `built-up members are made of dimension lumber (2x and 4x); ${size.name} is a timber, use 1 ply` },
+      ]);
     }
     const weightPlf = (woodDensity(values.G, SAWN_WEIGHT_MOISTURE_PCT) * size.A * n) / 144;
     const item: ItemRef = { material: "sawn", species, grade, size: size.name };
@@ -237,7 +239,11 @@ function checkSpecies(tables: MaterialTables, name: string): Species {
 
 function checkGrade(tables: MaterialTables, species: Species, name: string): SawnGrade {
   const held = [...new Set(tables.sawnValues.filter((v) => v.species === species).map((v) => v.grade))];
-  const norm = (s: string) => s.toLowerCase().replace(/[\s.#]/g, "").replace(/^no/, "");
+  const norm = (s: string) =>
+    s
+      .toLowerCase()
+      .replace(/[\s.#]/g, "")
+      .replace(/^no/, "");
   const hit = held.find((g) => norm(g) === norm(name));
   if (!hit) throw new TableLookupError("member.grade", `unknown grade "${name}" for ${species}`, held);
   return hit;

@@ -30,11 +30,41 @@ const IBC_TOTAL = "IBC 2021 Table 1604.3, D + L column (footnote d not applied: 
 
 export const DEFLECTION_PRESETS: readonly DeflectionPreset[] = [
   { id: "floor", label: "Floors", live: 360, total: 240, source: `live L/360: IRC 2021 Table R301.7 (floors); total L/240: ${IBC_TOTAL}, floor members` },
-  { id: "floor-tile", label: "Floors under tile or stone", live: 480, total: 360, source: "live L/480 and total L/360: common practice (tile and stone makers' guidance), stiffer than IRC 2021 Table R301.7 and IBC 2021 Table 1604.3" },
-  { id: "roof-no-ceiling", label: "Rafters steeper than 3:12, no ceiling attached", live: 180, total: 120, source: `live L/180: IRC 2021 Table R301.7 (rafters over 3:12, no finished ceiling); total L/120: ${IBC_TOTAL}, roof members not supporting a ceiling` },
-  { id: "ceiling-flexible", label: "Roofs and ceilings with flexible finishes (gypsum board)", live: 240, total: 180, source: `live L/240: IRC 2021 Table R301.7 (ceilings with gypsum board or other flexible finishes); total L/180: ${IBC_TOTAL}, roof members supporting a nonplaster ceiling` },
-  { id: "ceiling-brittle", label: "Roofs and ceilings with brittle finishes (plaster, stucco)", live: 360, total: 240, source: `live L/360: IRC 2021 Table R301.7 (ceilings with plaster or stucco); total L/240: ${IBC_TOTAL}, roof members supporting plaster or stucco` },
-  { id: "other", label: "All other structural members", live: 240, total: 180, source: `live L/240: IRC 2021 Table R301.7 (all other structural members); total L/180: ${IBC_TOTAL}, taken as for roof members with a nonplaster ceiling (the table has no row for other members)` },
+  {
+    id: "floor-tile",
+    label: "Floors under tile or stone",
+    live: 480,
+    total: 360,
+    source: "live L/480 and total L/360: common practice (tile and stone makers' guidance), stiffer than IRC 2021 Table R301.7 and IBC 2021 Table 1604.3",
+  },
+  {
+    id: "roof-no-ceiling",
+    label: "Rafters steeper than 3:12, no ceiling attached",
+    live: 180,
+    total: 120,
+    source: `live L/180: IRC 2021 Table R301.7 (rafters over 3:12, no finished ceiling); total L/120: ${IBC_TOTAL}, roof members not supporting a ceiling`,
+  },
+  {
+    id: "ceiling-flexible",
+    label: "Roofs and ceilings with flexible finishes (gypsum board)",
+    live: 240,
+    total: 180,
+    source: `live L/240: IRC 2021 Table R301.7 (ceilings with gypsum board or other flexible finishes); total L/180: ${IBC_TOTAL}, roof members supporting a nonplaster ceiling`,
+  },
+  {
+    id: "ceiling-brittle",
+    label: "Roofs and ceilings with brittle finishes (plaster, stucco)",
+    live: 360,
+    total: 240,
+    source: `live L/360: IRC 2021 Table R301.7 (ceilings with plaster or stucco); total L/240: ${IBC_TOTAL}, roof members supporting plaster or stucco`,
+  },
+  {
+    id: "other",
+    label: "All other structural members",
+    live: 240,
+    total: 180,
+    source: `live L/240: IRC 2021 Table R301.7 (all other structural members); total L/180: ${IBC_TOTAL}, taken as for roof members with a nonplaster ceiling (the table has no row for other members)`,
+  },
 ];
 
 export function deflectionPreset(id: DeflectionPresetId): DeflectionPreset {
@@ -44,7 +74,11 @@ export function deflectionPreset(id: DeflectionPresetId): DeflectionPreset {
 }
 
 /** Limits to apply: the preset (default floors) with any number the input sets on top. */
-export function resolveLimits(limits: { preset?: DeflectionPresetId; live?: number | null; total?: number | null }): { live: number | null; total: number | null; source: string } {
+export function resolveLimits(limits: { preset?: DeflectionPresetId; live?: number | null; total?: number | null }): {
+  live: number | null;
+  total: number | null;
+  source: string;
+} {
   const preset = deflectionPreset(limits.preset ?? "floor");
   const custom = limits.live !== undefined || limits.total !== undefined;
   return {

@@ -13,7 +13,8 @@ import { MEMBER_KINDS, WALL_FRAMINGS } from "./kinds";
 
 const loadCase = z.enum(LOAD_CASES, { error: oneOfMessage(LOAD_CASES) });
 const finite = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine(Number.isFinite, `must be a finite number (${unit})`);
-const positive = (unit: string) => z.number({ error: `must be a number (${unit})` }).refine((v) => Number.isFinite(v) && v > 0, `must be a number greater than 0 (${unit})`);
+const positive = (unit: string) =>
+  z.number({ error: `must be a number (${unit})` }).refine((v) => Number.isFinite(v) && v > 0, `must be a number greater than 0 (${unit})`);
 
 export const areaLoadSchema = z
   .object({
@@ -93,10 +94,16 @@ export const conditionsSchema = z
      */
     repetitive: z.boolean().optional(),
     /** unbraced length of the compression edge, ft; 0 = continuously braced */
-    unbracedLengthFt: z.number().refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)").default(0),
+    unbracedLengthFt: z
+      .number()
+      .refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)")
+      .default(0),
     selfWeight: z.boolean().default(true),
     /** sustained temperature, °F (NDS Table 2.3.3) */
-    temperatureF: z.number().refine((v) => Number.isFinite(v) && v <= 150, "must be at most 150 °F").default(70),
+    temperatureF: z
+      .number()
+      .refine((v) => Number.isFinite(v) && v <= 150, "must be at most 150 °F")
+      .default(70),
     /** leave out uniform loads within d of each support in the shear check (NDS 2018 §3.4.3.1(a)) */
     shearIgnoreLoadsNearSupports: z.boolean().default(false),
     /** place live load span by span for the worst case (ASCE 7 §4.3.3, the same in 7-16 and 7-22) */
@@ -108,8 +115,16 @@ export const limitsSchema = z
   .object({
     preset: z.enum(DEFLECTION_PRESET_IDS, { error: `must be one of ${DEFLECTION_PRESET_IDS.join(", ")}` }).optional(),
     /** span/deflection for live (or snow, roof live) load; null = not checked */
-    live: z.number().refine((v) => Number.isFinite(v) && v > 0, "must be a number greater than 0 (L/n)").nullable().optional(),
-    total: z.number().refine((v) => Number.isFinite(v) && v > 0, "must be a number greater than 0 (L/n)").nullable().optional(),
+    live: z
+      .number()
+      .refine((v) => Number.isFinite(v) && v > 0, "must be a number greater than 0 (L/n)")
+      .nullable()
+      .optional(),
+    total: z
+      .number()
+      .refine((v) => Number.isFinite(v) && v > 0, "must be a number greater than 0 (L/n)")
+      .nullable()
+      .optional(),
   })
   .strict();
 
@@ -123,12 +138,18 @@ const designFields = {
     // Capped here, before the cross-field check compares supports pair by pair.
     .max(LIMITS.maxSupports, `at most ${LIMITS.maxSupports} supports`),
   /** joist spacing, in on centre */
-  spacingIn: positive("in").refine((v) => v <= 96, "must be at most 96 in").optional(),
+  spacingIn: positive("in")
+    .refine((v) => v <= 96, "must be at most 96 in")
+    .optional(),
   /** tributary width, ft */
-  tributaryFt: positive("ft").refine((v) => v <= 60, "must be at most 60 ft").optional(),
+  tributaryFt: positive("ft")
+    .refine((v) => v <= 60, "must be at most 60 ft")
+    .optional(),
   loads: z.array(designLoadSchema).max(LIMITS.maxLoads, `at most ${LIMITS.maxLoads} loads`),
   /** bearing length at each support, in; default 1-1/2 in (IRC R502.6 minimum on wood or metal) */
-  bearingIn: positive("in").refine((v) => v <= 48, "must be at most 48 in").default(1.5),
+  bearingIn: positive("in")
+    .refine((v) => v <= 48, "must be at most 48 in")
+    .default(1.5),
   conditions: conditionsSchema.default(() => conditionsSchema.parse({})),
   limits: limitsSchema.default({}),
   method: z.enum(["asd", "lrfd"], { error: 'must be "asd" or "lrfd"' }).default("asd"),
@@ -137,7 +158,9 @@ const designFields = {
   /** the stud wall a header (or beam in a wall) sits in; only members that fill it are offered; default 2x4 for a header */
   wallFraming: z.enum(WALL_FRAMINGS, { error: `must be one of ${WALL_FRAMINGS.map((s) => `"${s}"`).join(", ")}` }).optional(),
   /** rough opening of a header, ft: the span is then the opening plus half the bearing at each end */
-  roughOpeningFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).optional(),
+  roughOpeningFt: positive("ft")
+    .refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`)
+    .optional(),
 };
 
 /**
@@ -165,7 +188,15 @@ type RefineCtx = z.RefinementCtx;
 
 /** Checks that need more than one field: spacing vs tributary, positions on the member, area load fields. */
 function crossFieldIssues(
-  v: { lengthFt: number; supports: { x: number; type: SupportType }[]; spacingIn?: number; tributaryFt?: number; loads: z.infer<typeof designLoadSchema>[]; roughOpeningFt?: number; bearingIn: number },
+  v: {
+    lengthFt: number;
+    supports: { x: number; type: SupportType }[];
+    spacingIn?: number;
+    tributaryFt?: number;
+    loads: z.infer<typeof designLoadSchema>[];
+    roughOpeningFt?: number;
+    bearingIn: number;
+  },
   ctx: RefineCtx,
 ): void {
   if (v.roughOpeningFt !== undefined && Math.abs(v.lengthFt - (v.roughOpeningFt + v.bearingIn / 12)) > 1e-9) {
@@ -175,7 +206,11 @@ function crossFieldIssues(
   if (v.spacingIn !== undefined && v.tributaryFt !== undefined) {
     ctx.addIssue({ code: "custom", path: ["tributaryFt"], message: "give either spacingIn (joists) or tributaryFt (beams and headers), not both" });
   } else if (hasArea && v.spacingIn === undefined && v.tributaryFt === undefined) {
-    ctx.addIssue({ code: "custom", path: ["spacingIn"], message: "area loads (psf) need spacingIn (joists) or tributaryFt (beams and headers), here or on each area load" });
+    ctx.addIssue({
+      code: "custom",
+      path: ["spacingIn"],
+      message: "area loads (psf) need spacingIn (joists) or tributaryFt (beams and headers), here or on each area load",
+    });
   }
   v.loads.forEach((l, i) => {
     if (l.type === "area") {
@@ -190,7 +225,11 @@ function crossFieldIssues(
       const from = l.from ?? 0;
       const to = l.to ?? v.lengthFt;
       if (!(from >= 0 && to <= v.lengthFt && to > from)) {
-        ctx.addIssue({ code: "custom", path: ["loads", i, l.to !== undefined ? "to" : "from"], message: `must lie on the member, 0 to ${v.lengthFt} ft, with to > from` });
+        ctx.addIssue({
+          code: "custom",
+          path: ["loads", i, l.to !== undefined ? "to" : "from"],
+          message: `must lie on the member, 0 to ${v.lengthFt} ft, with to > from`,
+        });
       }
     }
   });
@@ -253,7 +292,9 @@ export const spanInputSchema = z
     ...designFields,
     /** search range for the largest span, ft */
     minLengthFt: positive("ft").default(1),
-    maxLengthFt: positive("ft").refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`).default(40),
+    maxLengthFt: positive("ft")
+      .refine((v) => v <= LIMITS.maxLengthFt, `must be at most ${LIMITS.maxLengthFt} ft`)
+      .default(40),
     /** bisection stops when the bracket is narrower than this, in */
     toleranceIn: positive("in").default(0.05),
   })

@@ -8,7 +8,22 @@ import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
 import { CAUTION } from "@/lib/caution";
 import type { LoadStandard } from "../asce7/standard";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
-import { answerFor, percent, verdictWords, assumptionsFor, checkMember, contextFor, evaluateMember, fullCheck, NOT_CHECKED, parseWith, roughOpeningOf, summarizeMember, type CheckOutput, type RoughOpening } from "./check";
+import {
+  answerFor,
+  percent,
+  verdictWords,
+  assumptionsFor,
+  checkMember,
+  contextFor,
+  evaluateMember,
+  fullCheck,
+  NOT_CHECKED,
+  parseWith,
+  roughOpeningOf,
+  summarizeMember,
+  type CheckOutput,
+  type RoughOpening,
+} from "./check";
 import type { MemberKind, WallFraming } from "./kinds";
 import type { DesignContext } from "./context";
 import { DesignInputError } from "./errors";
@@ -77,7 +92,10 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
     let species: Species[] = speciesHeld;
     if (f?.species !== undefined) {
       const hit = speciesHeld.find((s) => s.toLowerCase() === f.species?.trim().toLowerCase());
-      if (!hit) throw new DesignInputError([{ path: "member.species", message: new TableLookupError("member.species", `unknown species "${f.species}"`, speciesHeld).message }]);
+      if (!hit)
+        throw new DesignInputError([
+          { path: "member.species", message: new TableLookupError("member.species", `unknown species "${f.species}"`, speciesHeld).message },
+        ]);
       species = [hit];
     }
     const plies = f?.plies ?? (joists ? [1] : ALL_PLIES);
@@ -85,9 +103,16 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
       const gradesHeld = [...new Set(tables.sawnValues.filter((v) => v.species === sp).map((v) => v.grade))];
       let grades: SawnGrade[] = gradesHeld;
       if (f?.grade !== undefined) {
-        const norm = (s: string) => s.toLowerCase().replace(/[\s.#]/g, "").replace(/^no/, "");
+        const norm = (s: string) =>
+          s
+            .toLowerCase()
+            .replace(/[\s.#]/g, "")
+            .replace(/^no/, "");
         const hit = gradesHeld.find((g) => norm(g) === norm(f.grade as string));
-        if (!hit) throw new DesignInputError([{ path: "member.grade", message: new TableLookupError("member.grade", `unknown grade "${f.grade}" for ${sp}`, gradesHeld).message }]);
+        if (!hit)
+          throw new DesignInputError([
+            { path: "member.grade", message: new TableLookupError("member.grade", `unknown grade "${f.grade}" for ${sp}`, gradesHeld).message },
+          ]);
         grades = [hit];
       }
       for (const grade of grades) {
@@ -104,12 +129,23 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
     let products = tables.engineered;
     if (f?.product !== undefined) {
       const hit = tables.engineered.find((p) => p.name.toLowerCase() === f.product?.trim().toLowerCase());
-      if (!hit) throw new DesignInputError([{ path: "member.product", message: new TableLookupError("member.product", `unknown engineered product "${f.product}"`, tables.engineered.map((p) => p.name)).message }]);
+      if (!hit)
+        throw new DesignInputError([
+          {
+            path: "member.product",
+            message: new TableLookupError(
+              "member.product",
+              `unknown engineered product "${f.product}"`,
+              tables.engineered.map((p) => p.name),
+            ).message,
+          },
+        ]);
       products = [hit];
     }
     for (const p of products) {
       const plies = p.kind === "LVL" ? (f?.plies ?? (joists ? [1] : ALL_PLIES)) : [1];
-      for (const width of p.widths) for (const depth of p.depths) for (const n of plies) out.push({ material: "engineered", product: p.name, width, depth, plies: n });
+      for (const width of p.widths)
+        for (const depth of p.depths) for (const n of plies) out.push({ material: "engineered", product: p.name, width, depth, plies: n });
     }
   }
   if (mat === "ijoist" || (mat === "any" && joists)) {
@@ -120,7 +156,9 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
       rows = rows.filter((j) => j.series.toLowerCase() === wanted);
       if (rows.length === 0) {
         const held = [...new Set(tables.iJoists.map((j) => j.series))];
-        throw new DesignInputError([{ path: "member.series", message: new TableLookupError("member.series", `unknown I-joist series "${f.series}"`, held).message }]);
+        throw new DesignInputError([
+          { path: "member.series", message: new TableLookupError("member.series", `unknown I-joist series "${f.series}"`, held).message },
+        ]);
       }
     }
     for (const j of rows) out.push({ material: "ijoist", joist: j.name, stiffeners: f?.stiffeners ?? false });
@@ -176,7 +214,12 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   const onePly = new Map<string, DesignMember | null>();
   for (const spec of specs) {
     const plies = spec.material === "steel" || spec.material === "ijoist" ? 1 : spec.plies;
-    const key = spec.material === "sawn" ? `s|${spec.species}|${spec.grade}|${spec.size}` : spec.material === "engineered" ? `e|${spec.product}|${spec.width}|${spec.depth}` : "";
+    const key =
+      spec.material === "sawn"
+        ? `s|${spec.species}|${spec.grade}|${spec.size}`
+        : spec.material === "engineered"
+          ? `e|${spec.product}|${spec.width}|${spec.depth}`
+          : "";
     let base = key ? onePly.get(key) : undefined;
     if (base === undefined) {
       try {
@@ -218,8 +261,14 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     passingCount: passing.length,
     assumptions: [
       `candidates: ${describeFamily(input)}`,
-      ...(wall ? [`only members that fill a ${wall} wall (${wall === "2x6" ? "5-1/2" : "3-1/2"} in): sawn plies with 1/2 in spacers between them, or a solid member as wide`] : []),
-      ...(lastMember ? assumptionsFor(input, lastMember, ctx).filter((a) => !a.startsWith("member's own weight counted") && !perMemberWords(input, lastMember).includes(a)) : []),
+      ...(wall
+        ? [
+            `only members that fill a ${wall} wall (${wall === "2x6" ? "5-1/2" : "3-1/2"} in): sawn plies with 1/2 in spacers between them, or a solid member as wide`,
+          ]
+        : []),
+      ...(lastMember
+        ? assumptionsFor(input, lastMember, ctx).filter((a) => !a.startsWith("member's own weight counted") && !perMemberWords(input, lastMember).includes(a))
+        : []),
       ...familyWoodWords(input),
       ...(input.conditions.selfWeight ? ["each member's own weight counted as dead load"] : []),
     ],
@@ -237,7 +286,10 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
 /** The incised and Cr lines of one member (left out of a search's assumptions, which speak of the family). */
 function perMemberWords(input: SizeInput, m: DesignMember): string[] {
   if (m.kind !== "wood" || !m.dimensionLumber) return [];
-  return [resolveIncised(m, input.conditions.incised, input.conditions.wet, input.kind).basis, resolveCr(m, input.conditions.repetitive, input.kind, input.spacingIn).basis];
+  return [
+    resolveIncised(m, input.conditions.incised, input.conditions.wet, input.kind).basis,
+    resolveCr(m, input.conditions.repetitive, input.kind, input.spacingIn).basis,
+  ];
 }
 
 /** Incised and Cr as the search applied them to sawn lumber. */
@@ -331,7 +383,8 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
     const xs = [0, ...input.supports.map((sp) => (sp.x * L) / input.lengthFt), L].sort((a, b) => a - b);
     const out: { from: number; to: number; length: number }[] = [];
     for (let i = 1; i < xs.length; i++) {
-      if (xs[i] - xs[i - 1] > 1e-9) out.push({ from: Math.floor(xs[i - 1] * 100) / 100, to: Math.floor(xs[i] * 100) / 100, length: Math.floor((xs[i] - xs[i - 1]) * 100) / 100 });
+      if (xs[i] - xs[i - 1] > 1e-9)
+        out.push({ from: Math.floor(xs[i - 1] * 100) / 100, to: Math.floor(xs[i] * 100) / 100, length: Math.floor((xs[i] - xs[i - 1]) * 100) / 100 });
     }
     return out;
   };
@@ -340,11 +393,29 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
   let hi = input.maxLengthFt;
   const atLo = run(lo);
   if (!atLo.pass) {
-    return { ...base, largestSpan: null, spans: [], largestSpanIn: null, governing: atLo.governing, atMaxLength: false, check: atLo, note: `fails even at ${lo} ft` };
+    return {
+      ...base,
+      largestSpan: null,
+      spans: [],
+      largestSpanIn: null,
+      governing: atLo.governing,
+      atMaxLength: false,
+      check: atLo,
+      note: `fails even at ${lo} ft`,
+    };
   }
   const atHi = run(hi);
   if (atHi.pass) {
-    return { ...base, largestSpan: hi, spans: spansAt(hi), largestSpanIn: hi * 12, governing: null, atMaxLength: true, check: atHi, note: `passes at the search limit of ${hi} ft` };
+    return {
+      ...base,
+      largestSpan: hi,
+      spans: spansAt(hi),
+      largestSpanIn: hi * 12,
+      governing: null,
+      atMaxLength: true,
+      check: atHi,
+      note: `passes at the search limit of ${hi} ft`,
+    };
   }
   let best = atLo;
   let failGov = atHi.governing;

@@ -61,7 +61,14 @@ export interface SteelFactors {
  * carry the reaction Rk (kip); both strengths grow with the bearing length, so bisection finds it.
  * Returns Infinity when even 48 in is not enough.
  */
-export function requiredSteelBearing(s: { d: number; tw: number; tf: number; kdes: number }, Fy: number, Rk: number, nearEndWly: boolean, nearEndWcr: boolean, lrfd: boolean): number {
+export function requiredSteelBearing(
+  s: { d: number; tw: number; tf: number; kdes: number },
+  Fy: number,
+  Rk: number,
+  nearEndWly: boolean,
+  nearEndWcr: boolean,
+  lrfd: boolean,
+): number {
   const ok = (lb: number) => {
     const wly = webLocalYieldingRn(s, Fy, lb, nearEndWly);
     const wcr = webCripplingRn(s, Fy, lb, nearEndWcr);
@@ -129,7 +136,9 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Nam
           ratio,
           combination: env.name,
           x: round(p.x, 3),
-          note: !ctx.notes ? "" : `${lrfd ? "φb Mn" : "Mn/Ωb"} with Mn by ${state} (AISC 360-16 ${state === "flange local buckling" ? "F3" : "F2"}), Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}`,
+          note: !ctx.notes
+            ? ""
+            : `${lrfd ? "φb Mn" : "Mn/Ωb"} with Mn by ${state} (AISC 360-16 ${state === "flange local buckling" ? "F3" : "F2"}), Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}`,
         };
         gov = { Lb: seg.luFt, Cb, Mn, state };
       }
@@ -180,10 +189,28 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Nam
     const yieldCap = avail(webLocalYieldingRn(s, Fy, lb, nearEnd), OMEGA_WLY, PHI_WLY);
     const crippleCap = avail(webCripplingRn(s, Fy, lb, fromEndIn < s.d / 2), OMEGA_WCR, PHI_WCR);
     if (!wly || Rk / yieldCap > wly.ratio) {
-      wly = { name: "web-yielding", demand: round(Rk, 3), capacity: round(yieldCap, 3), unit: "kip", ratio: Rk / yieldCap, combination, x: sup.x, note: `web local yielding at the support, lb = ${lb} in (AISC 360-16 §J10.2)` };
+      wly = {
+        name: "web-yielding",
+        demand: round(Rk, 3),
+        capacity: round(yieldCap, 3),
+        unit: "kip",
+        ratio: Rk / yieldCap,
+        combination,
+        x: sup.x,
+        note: `web local yielding at the support, lb = ${lb} in (AISC 360-16 §J10.2)`,
+      };
     }
     if (!wcr || Rk / crippleCap > wcr.ratio) {
-      wcr = { name: "web-crippling", demand: round(Rk, 3), capacity: round(crippleCap, 3), unit: "kip", ratio: Rk / crippleCap, combination, x: sup.x, note: `web crippling at the support, lb = ${lb} in (AISC 360-16 §J10.3)` };
+      wcr = {
+        name: "web-crippling",
+        demand: round(Rk, 3),
+        capacity: round(crippleCap, 3),
+        unit: "kip",
+        ratio: Rk / crippleCap,
+        combination,
+        x: sup.x,
+        note: `web crippling at the support, lb = ${lb} in (AISC 360-16 §J10.3)`,
+      };
     }
     const required = requiredSteelBearing(s, Fy, Rk, nearEnd, fromEndIn < s.d / 2, lrfd);
     reactions.push({ ...service[j], bearing: lb, requiredBearing: Number.isFinite(required) ? round(required, 2) : 48, jackStuds: null });

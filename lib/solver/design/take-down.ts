@@ -22,7 +22,12 @@ export interface TakenDownLoad {
 
 const r1 = (v: number) => Math.round(v * 10) / 10;
 
-export function takeDown(loads: DesignLoad[], lengthFt: number, memberWidth: { spacingIn?: number; tributaryFt?: number }, standard: LoadStandard = DEFAULT_LOAD_STANDARD): TakenDownLoad[] {
+export function takeDown(
+  loads: DesignLoad[],
+  lengthFt: number,
+  memberWidth: { spacingIn?: number; tributaryFt?: number },
+  standard: LoadStandard = DEFAULT_LOAD_STANDARD,
+): TakenDownLoad[] {
   return loads.map((l, i): TakenDownLoad => {
     const width = (l.type === "area" || l.type === "snow") && l.tributaryFt !== undefined ? { tributaryFt: l.tributaryFt } : memberWidth;
     const widthText = width.spacingIn !== undefined ? `${width.spacingIn} in / 12` : `${width.tributaryFt} ft`;

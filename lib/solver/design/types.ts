@@ -8,15 +8,7 @@ export interface CombinationRef {
 }
 
 export type CheckName =
-  | "bending"
-  | "shear"
-  | "deflection-live"
-  | "deflection-total"
-  | "bearing"
-  | "stability"
-  | "web-yielding"
-  | "web-crippling"
-  | "web-compactness";
+  "bending" | "shear" | "deflection-live" | "deflection-total" | "bearing" | "stability" | "web-yielding" | "web-crippling" | "web-compactness";
 
 export interface DesignCheck {
   name: CheckName;

@@ -100,7 +100,12 @@ export function resolveIncised(m: WoodMember, given: boolean | undefined, wet: b
  * plies qualify by themselves (plies through-nailed); joists and rafters at 24 in or less qualify in a
  * repetitive system (said, or the floor-joist, deck-joist or rafter kind); two plies never by the built-up rule.
  */
-export function resolveCr(m: WoodMember, given: boolean | undefined, kind: MemberKind | undefined, spacingIn: number | undefined): { Cr: number; basis: string } {
+export function resolveCr(
+  m: WoodMember,
+  given: boolean | undefined,
+  kind: MemberKind | undefined,
+  spacingIn: number | undefined,
+): { Cr: number; basis: string } {
   if (!m.dimensionLumber) return { Cr: 1.0, basis: "Cr = 1.0 (applies to dimension lumber only)" };
   if (given === false) return { Cr: 1.0, basis: "Cr = 1.0 (not a repetitive member, as given)" };
   if (m.plies >= 3) {
@@ -176,7 +181,9 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ratio: bestBend.ratio,
       combination: bestBend.combination,
       x: round(bestBend.x, 3),
-      note: !ctx.notes ? "" : `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
+      note: !ctx.notes
+        ? ""
+        : `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
     });
   }
   if (worstRB > 0) {
@@ -206,7 +213,15 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
     const fv = (1.5 * p.value) / m.A;
     const FvPrime = fvBase * ctx.woodDuration[e];
     const ratio = fv / FvPrime;
-    if (ratio > bestShear.ratio) bestShear = { ratio, fv, FvPrime, V: p.value, x: near ? criticalSection(model.supports, model.length, ctx.bearingIn, m.d, p.x) : p.x, combination: env.name };
+    if (ratio > bestShear.ratio)
+      bestShear = {
+        ratio,
+        fv,
+        FvPrime,
+        V: p.value,
+        x: near ? criticalSection(model.supports, model.length, ctx.bearingIn, m.d, p.x) : p.x,
+        combination: env.name,
+      };
   }
   const shearFvPrime = bestShear.FvPrime;
   if (bestShear.ratio >= 0) {
@@ -272,7 +287,9 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       ratio: bestBearing.ratio,
       combination: bestBearing.combination,
       x: bestBearing.x,
-      note: !ctx.notes ? "" : `fc⊥ = R / (b × lb) = ${round(bestBearing.R, 0)} lb / (${round(m.b, 3)} in × ${ctx.bearingIn} in), Cb = ${round(bestBearing.Cb, 3)}; bearing on this member only`,
+      note: !ctx.notes
+        ? ""
+        : `fc⊥ = R / (b × lb) = ${round(bestBearing.R, 0)} lb / (${round(m.b, 3)} in × ${ctx.bearingIn} in), Cb = ${round(bestBearing.Cb, 3)}; bearing on this member only`,
     });
   }
 

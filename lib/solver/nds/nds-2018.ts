@@ -14,10 +14,7 @@ export const LOAD_DURATION_CD: Readonly<Record<LoadCase, number>> = { D: 0.9, L:
  * NDS 2018 §2.3.2 — CD of a combination is that of its shortest-duration load (the largest CD
  * among the cases with a non-zero factor). Example: D+0.75L+0.75S → 1.15.
  */
-export function loadDurationFactorCD(
-  factors: Partial<Record<LoadCase, number>>,
-  table: Readonly<Record<LoadCase, number>> = LOAD_DURATION_CD,
-): number {
+export function loadDurationFactorCD(factors: Partial<Record<LoadCase, number>>, table: Readonly<Record<LoadCase, number>> = LOAD_DURATION_CD): number {
   let cd = 0;
   for (const [c, f] of Object.entries(factors) as [LoadCase, number][]) {
     if (f !== 0 && table[c] > cd) cd = table[c];
@@ -187,7 +184,10 @@ export function longTermDeflection(deltaLongTermIn: number, deltaShortTermIn: nu
 }
 
 /** Adjusted bending design value (ASD), NDS 2018 Table 4.3.1: Fb' = Fb CD CM Ct CL CF Cfu Ci Cr (CV and CL not combined for glulam, §5.3.6). */
-export function adjustedFb(Fb: number, f: { CD: number; CM: number; Ct: number; CL: number; CF: number; Cfu: number; Ci: number; Cr: number; CV?: number }): number {
+export function adjustedFb(
+  Fb: number,
+  f: { CD: number; CM: number; Ct: number; CL: number; CF: number; Cfu: number; Ci: number; Cr: number; CV?: number },
+): number {
   const stability = f.CV === undefined ? f.CL : Math.min(f.CL, f.CV);
   return Fb * f.CD * f.CM * f.Ct * stability * f.CF * f.Cfu * f.Ci * f.Cr;
 }

@@ -95,7 +95,10 @@ export function parseTableCsv<K extends TableKey>(table: K, input: string): CsvP
   const firstLineOfKey = new Map<string, number>();
   for (const record of data) {
     if (record.cells.length !== header.length) {
-      rejected.push({ line: record.line, issues: [{ column: "(row)", message: `has ${record.cells.length} values; the header has ${header.length} columns` }] });
+      rejected.push({
+        line: record.line,
+        issues: [{ column: "(row)", message: `has ${record.cells.length} values; the header has ${header.length} columns` }],
+      });
       continue;
     }
     const flat: FlatRow = Object.fromEntries(header.map((name, i) => [name, restoreCell(record.cells[i])]));

@@ -69,7 +69,11 @@ export interface ImportPreview {
 }
 
 /** Compares a clean upload with the current tables, writing nothing. */
-export async function previewUpload<K extends TableKey>(table: K, upload: ReadUpload<K>, currentNumber: (id: string) => Promise<number | null>): Promise<ImportPreview> {
+export async function previewUpload<K extends TableKey>(
+  table: K,
+  upload: ReadUpload<K>,
+  currentNumber: (id: string) => Promise<number | null>,
+): Promise<ImportPreview> {
   const { parsed } = upload;
   const ok = csvIsClean(parsed);
   const current: MaterialTables = await getCurrentTables();

@@ -19,53 +19,97 @@ import { emptyRows } from "./rows";
  */
 
 async function readSawnSizes(versionId: string, transaction?: Transaction) {
-  const rows = await SawnSizeRow.findAll({ where: { versionId }, order: [["nominalThickness", "ASC"], ["nominalDepth", "ASC"]], transaction });
-  return rows.map((r) => r.get({ plain: true })).map(({ name, nominalThickness, nominalDepth, b, d, A, Sx, Ix, sizeClass }) => ({ name, nominalThickness, nominalDepth, b, d, A, Sx, Ix, sizeClass }));
+  const rows = await SawnSizeRow.findAll({
+    where: { versionId },
+    order: [
+      ["nominalThickness", "ASC"],
+      ["nominalDepth", "ASC"],
+    ],
+    transaction,
+  });
+  return rows
+    .map((r) => r.get({ plain: true }))
+    .map(({ name, nominalThickness, nominalDepth, b, d, A, Sx, Ix, sizeClass }) => ({ name, nominalThickness, nominalDepth, b, d, A, Sx, Ix, sizeClass }));
 }
 
 async function readSawnValues(versionId: string, transaction?: Transaction) {
   const rows = await SawnValueRow.findAll({
     where: { versionId },
-    order: [["species", "ASC"], ["sizeClass", "ASC"], ["grade", "ASC"], ["nominalDepth", "ASC"]],
+    order: [
+      ["species", "ASC"],
+      ["sizeClass", "ASC"],
+      ["grade", "ASC"],
+      ["nominalDepth", "ASC"],
+    ],
     transaction,
   });
-  return rows.map((r) => r.get({ plain: true })).map(({ species, grade, sizeClass, nominalDepth, Fb, Ft, Fv, FcPerp, Fc, E, Emin, G, source }) =>
-    nominalDepth === null
-      ? { species, grade, sizeClass, Fb, Ft, Fv, FcPerp, Fc, E, Emin, G, source }
-      : { species, grade, sizeClass, nominalDepth, Fb, Ft, Fv, FcPerp, Fc, E, Emin, G, source },
-  );
+  return rows
+    .map((r) => r.get({ plain: true }))
+    .map(({ species, grade, sizeClass, nominalDepth, Fb, Ft, Fv, FcPerp, Fc, E, Emin, G, source }) =>
+      nominalDepth === null
+        ? { species, grade, sizeClass, Fb, Ft, Fv, FcPerp, Fc, E, Emin, G, source }
+        : { species, grade, sizeClass, nominalDepth, Fb, Ft, Fv, FcPerp, Fc, E, Emin, G, source },
+    );
 }
 
 async function readSizeFactors(versionId: string, transaction?: Transaction) {
   const rows = await SizeFactorRow.findAll({
     where: { versionId },
-    order: [["tableRef", "ASC"], ["nominalThickness", "ASC"], ["nominalDepth", "ASC"]],
+    order: [
+      ["tableRef", "ASC"],
+      ["nominalThickness", "ASC"],
+      ["nominalDepth", "ASC"],
+    ],
     transaction,
   });
-  return rows.map((r) => r.get({ plain: true })).map(({ tableRef, grades, nominalDepth, nominalThickness, CF_Fb, CF_Ft, CF_Fc, source }) => ({
-    table: tableRef,
-    grades,
-    nominalDepth,
-    nominalThickness,
-    CF_Fb,
-    CF_Ft,
-    CF_Fc,
-    source,
-  }));
+  return rows
+    .map((r) => r.get({ plain: true }))
+    .map(({ tableRef, grades, nominalDepth, nominalThickness, CF_Fb, CF_Ft, CF_Fc, source }) => ({
+      table: tableRef,
+      grades,
+      nominalDepth,
+      nominalThickness,
+      CF_Fb,
+      CF_Ft,
+      CF_Fc,
+      source,
+    }));
 }
 
 async function readEngineered(versionId: string, transaction?: Transaction) {
-  const rows = await EngineeredProductRow.findAll({ where: { versionId }, order: [["kind", "ASC"], ["name", "ASC"]], transaction });
+  const rows = await EngineeredProductRow.findAll({
+    where: { versionId },
+    order: [
+      ["kind", "ASC"],
+      ["name", "ASC"],
+    ],
+    transaction,
+  });
   return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, FbNeg, ...product }) => (FbNeg === null ? product : { ...product, FbNeg }));
 }
 
 async function readIJoists(versionId: string, transaction?: Transaction) {
-  const rows = await IJoistRow.findAll({ where: { versionId }, order: [["d", "ASC"], ["EI", "ASC"], ["name", "ASC"]], transaction });
+  const rows = await IJoistRow.findAll({
+    where: { versionId },
+    order: [
+      ["d", "ASC"],
+      ["EI", "ASC"],
+      ["name", "ASC"],
+    ],
+    transaction,
+  });
   return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, ...joist }) => joist);
 }
 
 async function readSteelShapes(versionId: string, transaction?: Transaction) {
-  const rows = await SteelShapeRow.findAll({ where: { versionId }, order: [["d", "ASC"], ["W", "ASC"]], transaction });
+  const rows = await SteelShapeRow.findAll({
+    where: { versionId },
+    order: [
+      ["d", "ASC"],
+      ["W", "ASC"],
+    ],
+    transaction,
+  });
   return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, ...shape }) => shape);
 }
 
@@ -100,7 +144,17 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
     rows["stock-lengths"] = await readStockLengths(versionId, transaction);
     return rows;
   }
-  [rows["sawn-sizes"], rows["sawn-values"], rows["size-factors"], rows.engineered, rows["i-joists"], rows["steel-shapes"], rows["steel-grades"], rows.costs, rows["stock-lengths"]] = await Promise.all([
+  [
+    rows["sawn-sizes"],
+    rows["sawn-values"],
+    rows["size-factors"],
+    rows.engineered,
+    rows["i-joists"],
+    rows["steel-shapes"],
+    rows["steel-grades"],
+    rows.costs,
+    rows["stock-lengths"],
+  ] = await Promise.all([
     readSawnSizes(versionId),
     readSawnValues(versionId),
     readSizeFactors(versionId),
@@ -114,7 +168,9 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
   return rows;
 }
 
-type RowModel = ModelStatic<SawnSizeRow | SawnValueRow | SizeFactorRow | EngineeredProductRow | IJoistRow | SteelShapeRow | SteelGradeRow | CostRowModel | StockLengthModel>;
+type RowModel = ModelStatic<
+  SawnSizeRow | SawnValueRow | SizeFactorRow | EngineeredProductRow | IJoistRow | SteelShapeRow | SteelGradeRow | CostRowModel | StockLengthModel
+>;
 
 export const ROW_MODELS: Record<TableKey, RowModel> = {
   "sawn-sizes": SawnSizeRow,
@@ -133,7 +189,10 @@ export async function writeTableRows<K extends TableKey>(key: K, versionId: stri
   if (rows.length === 0) return;
   switch (key) {
     case "sawn-sizes":
-      await SawnSizeRow.bulkCreate((rows as TableRowMap["sawn-sizes"][]).map((r) => ({ ...r, versionId })), { transaction });
+      await SawnSizeRow.bulkCreate(
+        (rows as TableRowMap["sawn-sizes"][]).map((r) => ({ ...r, versionId })),
+        { transaction },
+      );
       return;
     case "sawn-values":
       await SawnValueRow.bulkCreate(
@@ -154,19 +213,34 @@ export async function writeTableRows<K extends TableKey>(key: K, versionId: stri
       );
       return;
     case "i-joists":
-      await IJoistRow.bulkCreate((rows as TableRowMap["i-joists"][]).map((r) => ({ ...r, versionId })), { transaction });
+      await IJoistRow.bulkCreate(
+        (rows as TableRowMap["i-joists"][]).map((r) => ({ ...r, versionId })),
+        { transaction },
+      );
       return;
     case "steel-shapes":
-      await SteelShapeRow.bulkCreate((rows as TableRowMap["steel-shapes"][]).map((r) => ({ ...r, versionId })), { transaction });
+      await SteelShapeRow.bulkCreate(
+        (rows as TableRowMap["steel-shapes"][]).map((r) => ({ ...r, versionId })),
+        { transaction },
+      );
       return;
     case "steel-grades":
-      await SteelGradeRow.bulkCreate((rows as TableRowMap["steel-grades"][]).map((r) => ({ ...r, versionId })), { transaction });
+      await SteelGradeRow.bulkCreate(
+        (rows as TableRowMap["steel-grades"][]).map((r) => ({ ...r, versionId })),
+        { transaction },
+      );
       return;
     case "costs":
-      await CostRowModel.bulkCreate((rows as TableRowMap["costs"][]).map((r) => ({ ...r, versionId })), { transaction });
+      await CostRowModel.bulkCreate(
+        (rows as TableRowMap["costs"][]).map((r) => ({ ...r, versionId })),
+        { transaction },
+      );
       return;
     case "stock-lengths":
-      await StockLengthModel.bulkCreate((rows as TableRowMap["stock-lengths"][]).map((r) => ({ ...r, versionId })), { transaction });
+      await StockLengthModel.bulkCreate(
+        (rows as TableRowMap["stock-lengths"][]).map((r) => ({ ...r, versionId })),
+        { transaction },
+      );
       return;
   }
 }

@@ -39,5 +39,15 @@ export function rowsToTables(version: string, rows: TableRows): MaterialTables {
 }
 
 export function emptyRows(): TableRows {
-  return { "sawn-sizes": [], "sawn-values": [], "size-factors": [], engineered: [], "i-joists": [], "steel-shapes": [], "steel-grades": [], costs: [], "stock-lengths": [] };
+  return {
+    "sawn-sizes": [],
+    "sawn-values": [],
+    "size-factors": [],
+    engineered: [],
+    "i-joists": [],
+    "steel-shapes": [],
+    "steel-grades": [],
+    costs: [],
+    "stock-lengths": [],
+  };
 }

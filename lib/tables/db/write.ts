@@ -35,8 +35,7 @@ export interface CommitOptions {
 }
 
 export type CommitResult =
-  | { created: true; version: TablesVersionInfo; summary: ChangeSummary }
-  | { created: false; version: TablesVersionInfo | null; summary: ChangeSummary };
+  { created: true; version: TablesVersionInfo; summary: ChangeSummary } | { created: false; version: TablesVersionInfo | null; summary: ChangeSummary };
 
 function sequelizeOf(): Sequelize {
   const sequelize = TableVersion.sequelize;
@@ -44,7 +43,10 @@ function sequelizeOf(): Sequelize {
   return sequelize;
 }
 
-export async function commitVersion(options: CommitOptions, build: (current: TableRows, transaction: Transaction) => Promise<TableRows> | TableRows): Promise<CommitResult> {
+export async function commitVersion(
+  options: CommitOptions,
+  build: (current: TableRows, transaction: Transaction) => Promise<TableRows> | TableRows,
+): Promise<CommitResult> {
   const sequelize = sequelizeOf();
   const outcome = await sequelize.transaction(async (transaction) => {
     await sequelize.query("SELECT pg_advisory_xact_lock(hashtext(:channel))", { replacements: { channel: TABLE_VERSIONS_CHANNEL }, transaction });
@@ -119,7 +121,11 @@ export async function saveRow<K extends TableKey>(input: SaveRowInput<K>, option
       if (newKey !== input.originalKey && existing.has(newKey)) {
         throw new TablesChangeError(409, `${spec.title} already has a row "${newKey}"; edit that row instead`);
       }
-      return replaceTable(current, input.table, rows.map((r) => (spec.keyOf(r) === input.originalKey ? input.row : r)));
+      return replaceTable(
+        current,
+        input.table,
+        rows.map((r) => (spec.keyOf(r) === input.originalKey ? input.row : r)),
+      );
     }
     if (existing.has(newKey)) throw new TablesChangeError(409, `${spec.title} already has a row "${newKey}"; edit that row instead`);
     return replaceTable(current, input.table, [...rows, input.row]);
@@ -132,7 +138,11 @@ export async function deleteRow<K extends TableKey>(table: K, key: string, optio
   return commitVersion({ ...options, source: "edit" }, (current) => {
     const rows: TableRowMap[K][] = current[table];
     if (!rows.some((r) => spec.keyOf(r) === key)) throw new TablesChangeError(404, `no row "${key}" in ${spec.title}`);
-    return replaceTable(current, table, rows.filter((r) => spec.keyOf(r) !== key));
+    return replaceTable(
+      current,
+      table,
+      rows.filter((r) => spec.keyOf(r) !== key),
+    );
   });
 }
 
@@ -156,7 +166,12 @@ export function applyImport<K extends TableKey>(current: TableRows, table: K, im
 }
 
 /** Imports rows into one table as one new version (or none, when the rows change nothing). */
-export async function importRows<K extends TableKey>(table: K, rows: TableRowMap[K][], mode: ImportMode, options: Omit<CommitOptions, "source">): Promise<CommitResult> {
+export async function importRows<K extends TableKey>(
+  table: K,
+  rows: TableRowMap[K][],
+  mode: ImportMode,
+  options: Omit<CommitOptions, "source">,
+): Promise<CommitResult> {
   return commitVersion({ ...options, source: "import" }, (current) => applyImport(current, table, rows, mode));
 }
 

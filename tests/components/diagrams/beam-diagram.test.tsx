@@ -9,7 +9,19 @@ const L = 12;
 const w = 150;
 const P = 900;
 const a = 4;
-const beam = { length: L, E: 1_600_000, I: 98, supports: [{ x: 0, type: "pin" as const }, { x: L, type: "roller" as const }], loads: [{ type: "udl" as const, from: 0, to: L, w, case: "D" as const }, { type: "point" as const, x: a, P, case: "L" as const }] };
+const beam = {
+  length: L,
+  E: 1_600_000,
+  I: 98,
+  supports: [
+    { x: 0, type: "pin" as const },
+    { x: L, type: "roller" as const },
+  ],
+  loads: [
+    { type: "udl" as const, from: 0, to: L, w, case: "D" as const },
+    { type: "point" as const, x: a, P, case: "L" as const },
+  ],
+};
 const result = analyzeBeam(beam);
 
 describe("BeamDiagram", () => {
@@ -19,7 +31,14 @@ describe("BeamDiagram", () => {
     expect(result.reactions[0].F).toBeCloseTo(R1, 9);
     const m = result.extremes.Mpos;
     const html = renderToStaticMarkup(
-      <BeamDiagram title="Moment M (lb-ft)" quantity="M" unit="lb-ft" segments={result.segments} extremes={[{ x: m.x, value: m.value, label: "Largest moment" }]} supports={beam.supports} />,
+      <BeamDiagram
+        title="Moment M (lb-ft)"
+        quantity="M"
+        unit="lb-ft"
+        segments={result.segments}
+        extremes={[{ x: m.x, value: m.value, label: "Largest moment" }]}
+        supports={beam.supports}
+      />,
     );
     const label = `${Math.round(m.value).toLocaleString("en-US")} lb-ft at`;
     expect(html).toContain(label);
@@ -29,12 +48,17 @@ describe("BeamDiagram", () => {
   });
 
   test("the shear diagram's path has a vertical step at the post", () => {
-    const html = renderToStaticMarkup(<BeamDiagram title="Shear V (lb)" quantity="V" unit="lb" segments={result.segments} extremes={[]} supports={beam.supports} />);
+    const html = renderToStaticMarkup(
+      <BeamDiagram title="Shear V (lb)" quantity="V" unit="lb" segments={result.segments} extremes={[]} supports={beam.supports} />,
+    );
     const d = /data-testid="diagram-path-V"/.test(html) ? (/<path d="([^"]+)"[^>]*data-testid="diagram-path-V"/.exec(html)?.[1] ?? "") : "";
     expect(d).not.toBe("");
     // consecutive end points with the same x: the step
     const start = /^M(-?[\d.]+),(-?[\d.]+)/.exec(d);
-    const ends = [[Number(start?.[1]), Number(start?.[2])], ...[...d.matchAll(/C[^C]*?,?(-?[\d.]+),(-?[\d.]+)(?=C|$)/g)].map((m) => [Number(m[1]), Number(m[2])])];
+    const ends = [
+      [Number(start?.[1]), Number(start?.[2])],
+      ...[...d.matchAll(/C[^C]*?,?(-?[\d.]+),(-?[\d.]+)(?=C|$)/g)].map((m) => [Number(m[1]), Number(m[2])]),
+    ];
     const steps = ends.filter((p, i) => i > 0 && Math.abs(p[0] - ends[i - 1][0]) < 1e-6 && Math.abs(p[1] - ends[i - 1][1]) > 1);
     // the post's x on the drawing: the same scale the diagram uses
     const scales = diagramScales(L, { min: -1, max: 1 }, "V");

@@ -50,11 +50,7 @@ describe("SelectField", () => {
       />,
     );
     const select = screen.getByLabelText<HTMLSelectElement>("Species and grade");
-    expect(Array.from(select.options).map((option) => option.textContent)).toEqual([
-      "Choose one",
-      "Douglas Fir-Larch No.2",
-      "Spruce-Pine-Fir No.2",
-    ]);
+    expect(Array.from(select.options).map((option) => option.textContent)).toEqual(["Choose one", "Douglas Fir-Larch No.2", "Spruce-Pine-Fir No.2"]);
   });
 });
 

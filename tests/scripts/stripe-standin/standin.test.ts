@@ -87,7 +87,9 @@ describe("webhook signature", () => {
     ["a changed body", (t: number) => signatureHeader(payload.replace("evt_1", "evt_2"), WEBHOOK_SECRET, t)],
     ["a stale timestamp (over 300 s)", (t: number) => signatureHeader(payload, WEBHOOK_SECRET, t - 301)],
   ])("the SDK rejects %s", (_label, header) => {
-    expect(() => sdk.webhooks.constructEvent(payload, header(Math.floor(Date.now() / 1000)), WEBHOOK_SECRET)).toThrow(Stripe.errors.StripeSignatureVerificationError);
+    expect(() => sdk.webhooks.constructEvent(payload, header(Math.floor(Date.now() / 1000)), WEBHOOK_SECRET)).toThrow(
+      Stripe.errors.StripeSignatureVerificationError,
+    );
   });
 });
 
@@ -215,7 +217,13 @@ describe("the stand-in through the official SDK", () => {
     const done = await stripe.checkout.sessions.retrieve(session.id, { expand: ["subscription"] });
     expect(done).toMatchObject({ status: "complete", payment_status: "paid" });
     const sub = done.subscription as Stripe.Subscription;
-    expect(sub).toMatchObject({ object: "subscription", status: "active", customer, cancel_at_period_end: false, metadata: { userId: "user-123", plan: "monthly" } });
+    expect(sub).toMatchObject({
+      object: "subscription",
+      status: "active",
+      customer,
+      cancel_at_period_end: false,
+      metadata: { userId: "user-123", plan: "monthly" },
+    });
     const item = sub.items.data[0];
     expect(item.current_period_end).toBe(addInterval(item.current_period_start, "month", 1));
 
@@ -331,7 +339,11 @@ describe("the stand-in through the official SDK", () => {
     const subId = (await stripe.checkout.sessions.retrieve(session.id)).subscription as string;
     const before = await stripe.subscriptions.retrieve(subId);
     const control = async (body: Record<string, string>) => {
-      const res = await fetch(`${standin.url}/_control/advance`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });
+      const res = await fetch(`${standin.url}/_control/advance`, {
+        method: "POST",
+        headers: { "content-type": "application/json" },
+        body: JSON.stringify(body),
+      });
       expect(res.status).toBe(200);
       return (await res.json()) as { events: string[] };
     };

@@ -83,7 +83,16 @@ describe("span results", () => {
   });
 
   test("a lone fixed support inside the member: two cantilevers", () => {
-    const r = analyzeBeam(beam(10, [fixed(4)], [{ type: "point", x: 0, P: 100 }, { type: "point", x: 10, P: 100 }]));
+    const r = analyzeBeam(
+      beam(
+        10,
+        [fixed(4)],
+        [
+          { type: "point", x: 0, P: 100 },
+          { type: "point", x: 10, P: 100 },
+        ],
+      ),
+    );
     expect(r.spans.map((s) => s.kind)).toEqual(["overhang-left", "overhang-right"]);
     // AISC Manual 15th ed., Table 3-23 case 22 on each side: Δ = Pl³/(3EI)
     expectClose(r.spans[0].deflection.value, ((100 * 4 ** 3) / (3 * EI)) * 12, 1e-9);
@@ -99,11 +108,17 @@ describe("span results", () => {
 
 describe("segments", () => {
   test("cover the member without gaps and break at every load point and support", () => {
-    const r = analyzeBeam(beam(20, [pin(0), roller(8), roller(20)], [
-      { type: "point", x: 3, P: 500 },
-      { type: "linear", from: 5, to: 11, w1: 0, w2: 300 },
-      { type: "moment", x: 15, M: 800 },
-    ]));
+    const r = analyzeBeam(
+      beam(
+        20,
+        [pin(0), roller(8), roller(20)],
+        [
+          { type: "point", x: 3, P: 500 },
+          { type: "linear", from: 5, to: 11, w1: 0, w2: 300 },
+          { type: "moment", x: 15, M: 800 },
+        ],
+      ),
+    );
     const xs = r.segments.flatMap((s) => [s.x0, s.x1]);
     expect([...new Set(xs)]).toEqual([0, 3, 5, 8, 11, 15, 20]);
     for (let i = 1; i < r.segments.length; i++) expect(r.segments[i].x0).toBe(r.segments[i - 1].x1);

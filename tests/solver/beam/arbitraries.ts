@@ -9,15 +9,16 @@ const CASES: LoadCase[] = ["D", "L", "Lr", "S", "W"];
  */
 export const layoutArb = fc
   .record({
-    length: fc.oneof(fc.integer({ min: 2, max: 60 }), fc.integer({ min: 100, max: 20_000 }).map((k) => k / 100)),
+    length: fc.oneof(
+      fc.integer({ min: 2, max: 60 }),
+      fc.integer({ min: 100, max: 20_000 }).map((k) => k / 100),
+    ),
     cantilever: fc.boolean(),
     slots: fc.uniqueArray(fc.integer({ min: 0, max: 50 }), { minLength: 2, maxLength: 6 }),
     types: fc.array(fc.constantFrom<SupportType>("pin", "roller", "fixed"), { minLength: 6, maxLength: 6 }),
   })
   .map(({ length, cantilever, slots, types }) => {
-    const supports: Support[] = cantilever
-      ? [{ x: (slots[0] / 50) * length, type: "fixed" }]
-      : slots.map((s, i) => ({ x: (s / 50) * length, type: types[i] }));
+    const supports: Support[] = cantilever ? [{ x: (slots[0] / 50) * length, type: "fixed" }] : slots.map((s, i) => ({ x: (s / 50) * length, type: types[i] }));
     return { length, supports };
   });
 
@@ -32,9 +33,7 @@ function loadArb(length: number): fc.Arbitrary<Load> {
   return fc.oneof(
     fc.record({ x: pos, P: mag(5000), c }).map(({ x, P, c: lc }): Load => ({ type: "point", x, P, case: lc })),
     fc.record({ r: range, w: mag(800), c }).map(({ r, w, c: lc }): Load => ({ type: "udl", from: r[0], to: r[1], w, case: lc })),
-    fc
-      .record({ r: range, w1: mag(800), w2: mag(800), c })
-      .map(({ r, w1, w2, c: lc }): Load => ({ type: "linear", from: r[0], to: r[1], w1, w2, case: lc })),
+    fc.record({ r: range, w1: mag(800), w2: mag(800), c }).map(({ r, w1, w2, c: lc }): Load => ({ type: "linear", from: r[0], to: r[1], w1, w2, case: lc })),
     fc.record({ x: pos, M: mag(8000), c }).map(({ x, M, c: lc }): Load => ({ type: "moment", x, M, case: lc })),
   );
 }

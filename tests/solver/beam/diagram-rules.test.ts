@@ -10,34 +10,56 @@ import { beam, EI, expectClose, fixed, pin, roller } from "./helpers";
 const layouts: { name: string; input: BeamInput }[] = [
   {
     name: "simple span with a post load, a partial wall and a hip (triangular) load",
-    input: beam(16, [pin(0), roller(16)], [
-      { type: "point", x: 5, P: 2200 },
-      { type: "udl", from: 8, to: 13, w: 350 },
-      { type: "linear", from: 0, to: 6, w1: 0, w2: 240 },
-    ]),
+    input: beam(
+      16,
+      [pin(0), roller(16)],
+      [
+        { type: "point", x: 5, P: 2200 },
+        { type: "udl", from: 8, to: 13, w: 350 },
+        { type: "linear", from: 0, to: 6, w1: 0, w2: 240 },
+      ],
+    ),
   },
   {
     name: "deck beam with overhangs at both ends",
-    input: beam(20, [pin(2.5), roller(16)], [
-      { type: "udl", from: 0, to: 20, w: 180 },
-      { type: "point", x: 20, P: 400 },
-      { type: "moment", x: 9, M: 1500 },
-    ]),
+    input: beam(
+      20,
+      [pin(2.5), roller(16)],
+      [
+        { type: "udl", from: 0, to: 20, w: 180 },
+        { type: "point", x: 20, P: 400 },
+        { type: "moment", x: 9, M: 1500 },
+      ],
+    ),
   },
   {
     name: "joists continuous over three spans with a clockwise couple",
-    input: beam(36, [pin(0), roller(12), roller(24), roller(36)], [
-      { type: "udl", from: 0, to: 36, w: 60 },
-      { type: "moment", x: 18, M: -900 },
-      { type: "point", x: 30, P: 700 },
-    ]),
+    input: beam(
+      36,
+      [pin(0), roller(12), roller(24), roller(36)],
+      [
+        { type: "udl", from: 0, to: 36, w: 60 },
+        { type: "moment", x: 18, M: -900 },
+        { type: "point", x: 30, P: 700 },
+      ],
+    ),
   },
 ];
 
 const simplySupportedOrFree: { name: string; input: BeamInput }[] = [
   layouts[0],
   layouts[1],
-  { name: "cantilever, free right end", input: beam(6, [fixed(0)], [{ type: "udl", from: 1, to: 6, w: 90 }, { type: "point", x: 4, P: 300 }]) },
+  {
+    name: "cantilever, free right end",
+    input: beam(
+      6,
+      [fixed(0)],
+      [
+        { type: "udl", from: 1, to: 6, w: 90 },
+        { type: "point", x: 4, P: 300 },
+      ],
+    ),
+  },
 ];
 
 describe("common practice: both diagrams start and end at zero on a free or simply supported beam", () => {
@@ -113,7 +135,16 @@ describe("common practice: a clockwise couple is an upward step in the moment di
     { C: 1200, x: 5 },
     { C: -800, x: 11 },
   ])("C = $C lb-ft at x = $x ft on a 14 ft simple span", ({ C, x }) => {
-    const a = analyzeBeam(beam(14, [pin(0), roller(14)], [{ type: "moment", x, M: C }, { type: "udl", from: 0, to: 14, w: 100 }]));
+    const a = analyzeBeam(
+      beam(
+        14,
+        [pin(0), roller(14)],
+        [
+          { type: "moment", x, M: C },
+          { type: "udl", from: 0, to: 14, w: 100 },
+        ],
+      ),
+    );
     const h = 1e-7;
     expectClose(a.evaluate(x).M - a.evaluate(x - h).M, C, 1e-6);
     // and the shear does not step there (over h it changes by the line load only: −w·h)
@@ -165,8 +196,12 @@ describe("common practice: the moment has a local extreme where the shear crosse
       E: 1_000_000,
       I: 5,
       supports: [
-        { x: 23.904, type: "roller" }, { x: 2.656, type: "roller" }, { x: 25.232, type: "fixed" },
-        { x: 15.272, type: "fixed" }, { x: 3.984, type: "pin" }, { x: 7.304, type: "roller" },
+        { x: 23.904, type: "roller" },
+        { x: 2.656, type: "roller" },
+        { x: 25.232, type: "fixed" },
+        { x: 15.272, type: "fixed" },
+        { x: 3.984, type: "pin" },
+        { x: 7.304, type: "roller" },
       ],
       loads: [
         { type: "udl", from: 0.913, to: 4.648, w: 2, case: "D" },

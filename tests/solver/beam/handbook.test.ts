@@ -30,21 +30,21 @@ describe("simple beams", () => {
     }
   });
 
-  test.each([{ l: 15, W: 3000 }, { l: 9, W: 800 }])(
-    "Table 3-23 case 2, simple beam — load increasing uniformly to one end (l=$l ft, W=$W lb total)",
-    ({ l, W }) => {
-      const a = analyzeBeam(beam(l, [pin(0), roller(l)], [{ type: "linear", from: 0, to: l, w1: 0, w2: (2 * W) / l }]));
-      expectClose(a.reactions[0].F, W / 3, REL);
-      expectClose(a.reactions[1].F, (2 * W) / 3, REL);
-      expectClose(a.extremes.Mpos.value, (2 * W * l) / (9 * Math.sqrt(3)), REL);
-      expectClose(a.extremes.Mpos.x, l / Math.sqrt(3), 1e-8);
-      const dx = (x: number) => ((W * x * (3 * x ** 4 - 10 * l * l * x * x + 7 * l ** 4)) / (180 * EI * l * l)) * IN;
-      const xMax = l * Math.sqrt(1 - Math.sqrt(8 / 15));
-      expectClose(a.extremes.deflDown.value, dx(xMax), REL);
-      expectClose(a.extremes.deflDown.x, xMax, 1e-7);
-      expectClose(a.evaluate(0.4 * l).deflection, dx(0.4 * l), REL);
-    },
-  );
+  test.each([
+    { l: 15, W: 3000 },
+    { l: 9, W: 800 },
+  ])("Table 3-23 case 2, simple beam — load increasing uniformly to one end (l=$l ft, W=$W lb total)", ({ l, W }) => {
+    const a = analyzeBeam(beam(l, [pin(0), roller(l)], [{ type: "linear", from: 0, to: l, w1: 0, w2: (2 * W) / l }]));
+    expectClose(a.reactions[0].F, W / 3, REL);
+    expectClose(a.reactions[1].F, (2 * W) / 3, REL);
+    expectClose(a.extremes.Mpos.value, (2 * W * l) / (9 * Math.sqrt(3)), REL);
+    expectClose(a.extremes.Mpos.x, l / Math.sqrt(3), 1e-8);
+    const dx = (x: number) => ((W * x * (3 * x ** 4 - 10 * l * l * x * x + 7 * l ** 4)) / (180 * EI * l * l)) * IN;
+    const xMax = l * Math.sqrt(1 - Math.sqrt(8 / 15));
+    expectClose(a.extremes.deflDown.value, dx(xMax), REL);
+    expectClose(a.extremes.deflDown.x, xMax, 1e-7);
+    expectClose(a.evaluate(0.4 * l).deflection, dx(0.4 * l), REL);
+  });
 
   test.each([
     { a: 3, b: 6, c: 5, w: 300 },
@@ -63,7 +63,10 @@ describe("simple beams", () => {
     expectClose(r.extremes.zeroShear[0], aa + R1 / w, REL);
   });
 
-  test.each([{ l: 16, P: 2000 }, { l: 10, P: 650 }])("Table 3-23 case 7, simple beam — concentrated load at center (l=$l)", ({ l, P }) => {
+  test.each([
+    { l: 16, P: 2000 },
+    { l: 10, P: 650 },
+  ])("Table 3-23 case 7, simple beam — concentrated load at center (l=$l)", ({ l, P }) => {
     const a = analyzeBeam(beam(l, [pin(0), roller(l)], [{ type: "point", x: l / 2, P }]));
     expectClose(a.extremes.Mpos.value, (P * l) / 4, REL);
     expectClose(a.extremes.deflDown.value, ((P * l ** 3) / (48 * EI)) * IN, REL);
@@ -90,41 +93,45 @@ describe("simple beams", () => {
 });
 
 describe("beams overhanging one support", () => {
-  test.each([{ l: 12, a: 3, w: 200 }, { l: 10, a: 4, w: 75 }])(
-    "Table 3-23 case 24, beam overhanging one support — uniformly distributed load (l=$l, a=$a)",
-    ({ l, a, w }) => {
-      const r = analyzeBeam(beam(l + a, [pin(0), roller(l)], [{ type: "udl", from: 0, to: l + a, w }]));
-      expectClose(r.reactions[0].F, (w * (l * l - a * a)) / (2 * l), REL);
-      expectClose(r.reactions[1].F, (w * (l + a) ** 2) / (2 * l), REL);
-      const x1 = (l / 2) * (1 - (a * a) / (l * l));
-      expectClose(r.extremes.Mpos.value, (w * (l + a) ** 2 * (l - a) ** 2) / (8 * l * l), REL);
-      expectClose(r.extremes.Mpos.x, x1, REL);
-      expectClose(r.extremes.Mneg.value, (-w * a * a) / 2, REL);
-      expectClose(r.extremes.Mneg.x, l, REL);
-      // Δ at the free end = wa(4a²l − l³ + 3a³)/(24EI), upward when negative
-      expectClose(r.evaluate(l + a).deflection, ((w * a * (4 * a * a * l - l ** 3 + 3 * a ** 3)) / (24 * EI)) * IN, REL, 1e-3);
-      expect(r.spans.map((s) => s.kind)).toEqual(["span", "overhang-right"]);
-    },
-  );
+  test.each([
+    { l: 12, a: 3, w: 200 },
+    { l: 10, a: 4, w: 75 },
+  ])("Table 3-23 case 24, beam overhanging one support — uniformly distributed load (l=$l, a=$a)", ({ l, a, w }) => {
+    const r = analyzeBeam(beam(l + a, [pin(0), roller(l)], [{ type: "udl", from: 0, to: l + a, w }]));
+    expectClose(r.reactions[0].F, (w * (l * l - a * a)) / (2 * l), REL);
+    expectClose(r.reactions[1].F, (w * (l + a) ** 2) / (2 * l), REL);
+    const x1 = (l / 2) * (1 - (a * a) / (l * l));
+    expectClose(r.extremes.Mpos.value, (w * (l + a) ** 2 * (l - a) ** 2) / (8 * l * l), REL);
+    expectClose(r.extremes.Mpos.x, x1, REL);
+    expectClose(r.extremes.Mneg.value, (-w * a * a) / 2, REL);
+    expectClose(r.extremes.Mneg.x, l, REL);
+    // Δ at the free end = wa(4a²l − l³ + 3a³)/(24EI), upward when negative
+    expectClose(r.evaluate(l + a).deflection, ((w * a * (4 * a * a * l - l ** 3 + 3 * a ** 3)) / (24 * EI)) * IN, REL, 1e-3);
+    expect(r.spans.map((s) => s.kind)).toEqual(["span", "overhang-right"]);
+  });
 
-  test.each([{ l: 12, a: 4, P: 900 }, { l: 8, a: 2, P: 300 }, { l: 0.5, a: 150, P: 10 }])(
-    "Table 3-23 case 26, beam overhanging one support — concentrated load at end of overhang (l=$l, a=$a)",
-    ({ l, a, P }) => {
-      const r = analyzeBeam(beam(l + a, [pin(0), roller(l)], [{ type: "point", x: l + a, P }]));
-      expectClose(r.reactions[0].F, (-P * a) / l, REL); // pulls down: the beam must be held down
-      expectClose(r.reactions[1].F, (P * (l + a)) / l, REL);
-      expectClose(r.extremes.Mneg.value, -P * a, REL);
-      // between supports the beam lifts: Δ = Pal²/(9√3 EI) at x = l/√3
-      expectClose(r.extremes.deflUp.value, (-(P * a * l * l) / (9 * Math.sqrt(3) * EI)) * IN, REL);
-      expectClose(r.extremes.deflUp.x, l / Math.sqrt(3), 1e-7);
-      expectClose(r.extremes.deflDown.value, ((P * a * a * (l + a)) / (3 * EI)) * IN, REL);
-      expectClose(r.extremes.deflDown.x, l + a, REL);
-    },
-  );
+  test.each([
+    { l: 12, a: 4, P: 900 },
+    { l: 8, a: 2, P: 300 },
+    { l: 0.5, a: 150, P: 10 },
+  ])("Table 3-23 case 26, beam overhanging one support — concentrated load at end of overhang (l=$l, a=$a)", ({ l, a, P }) => {
+    const r = analyzeBeam(beam(l + a, [pin(0), roller(l)], [{ type: "point", x: l + a, P }]));
+    expectClose(r.reactions[0].F, (-P * a) / l, REL); // pulls down: the beam must be held down
+    expectClose(r.reactions[1].F, (P * (l + a)) / l, REL);
+    expectClose(r.extremes.Mneg.value, -P * a, REL);
+    // between supports the beam lifts: Δ = Pal²/(9√3 EI) at x = l/√3
+    expectClose(r.extremes.deflUp.value, (-(P * a * l * l) / (9 * Math.sqrt(3) * EI)) * IN, REL);
+    expectClose(r.extremes.deflUp.x, l / Math.sqrt(3), 1e-7);
+    expectClose(r.extremes.deflDown.value, ((P * a * a * (l + a)) / (3 * EI)) * IN, REL);
+    expectClose(r.extremes.deflDown.x, l + a, REL);
+  });
 });
 
 describe("cantilevers", () => {
-  test.each([{ l: 6, w: 120 }, { l: 3.5, w: 400 }])("Table 3-23 case 19, cantilever — uniformly distributed load (l=$l)", ({ l, w }) => {
+  test.each([
+    { l: 6, w: 120 },
+    { l: 3.5, w: 400 },
+  ])("Table 3-23 case 19, cantilever — uniformly distributed load (l=$l)", ({ l, w }) => {
     const r = analyzeBeam(beam(l, [fixed(0)], [{ type: "udl", from: 0, to: l, w }]));
     expectClose(r.reactions[0].F, w * l, REL);
     expectClose(r.reactions[0].M, (-w * l * l) / 2, REL); // counterclockwise holds the beam up
@@ -135,7 +142,10 @@ describe("cantilevers", () => {
     expectClose(r.evaluate(l - x).deflection, ((w * (x ** 4 - 4 * l ** 3 * x + 3 * l ** 4)) / (24 * EI)) * IN, REL);
   });
 
-  test.each([{ l: 5, P: 700 }, { l: 8, P: 150 }])("Table 3-23 case 22, cantilever — concentrated load at free end (l=$l)", ({ l, P }) => {
+  test.each([
+    { l: 5, P: 700 },
+    { l: 8, P: 150 },
+  ])("Table 3-23 case 22, cantilever — concentrated load at free end (l=$l)", ({ l, P }) => {
     const r = analyzeBeam(beam(l, [fixed(0)], [{ type: "point", x: l, P }]));
     expectClose(r.reactions[0].F, P, REL);
     expectClose(r.extremes.Mneg.value, -P * l, REL);
@@ -152,7 +162,10 @@ describe("cantilevers", () => {
 });
 
 describe("beams fixed at one end, supported at the other (propped cantilevers)", () => {
-  test.each([{ l: 14, w: 300 }, { l: 6, w: 80 }])("Table 3-23 case 12, uniformly distributed load (l=$l)", ({ l, w }) => {
+  test.each([
+    { l: 14, w: 300 },
+    { l: 6, w: 80 },
+  ])("Table 3-23 case 12, uniformly distributed load (l=$l)", ({ l, w }) => {
     const r = analyzeBeam(beam(l, [roller(0), fixed(l)], [{ type: "udl", from: 0, to: l, w }]));
     expectClose(r.reactions[0].F, (3 * w * l) / 8, REL);
     expectClose(r.reactions[1].F, (5 * w * l) / 8, REL);
@@ -178,7 +191,10 @@ describe("beams fixed at one end, supported at the other (propped cantilevers)",
 });
 
 describe("beams fixed at both ends", () => {
-  test.each([{ l: 18, w: 500 }, { l: 4, w: 60 }])("Table 3-23 case 15, uniformly distributed load (l=$l)", ({ l, w }) => {
+  test.each([
+    { l: 18, w: 500 },
+    { l: 4, w: 60 },
+  ])("Table 3-23 case 15, uniformly distributed load (l=$l)", ({ l, w }) => {
     const r = analyzeBeam(beam(l, [fixed(0), fixed(l)], [{ type: "udl", from: 0, to: l, w }]));
     expectClose(r.reactions[0].F, (w * l) / 2, REL);
     expectClose(r.reactions[0].M, (-w * l * l) / 12, REL);
@@ -189,7 +205,10 @@ describe("beams fixed at both ends", () => {
     expectClose(r.extremes.inflection[0], (l / 2) * (1 - 1 / Math.sqrt(3)), REL);
   });
 
-  test.each([{ a: 4, b: 8, P: 2500 }, { a: 5, b: 5, P: 100 }])("Table 3-23 case 18, concentrated load at any point (a=$a, b=$b)", ({ a, b, P }) => {
+  test.each([
+    { a: 4, b: 8, P: 2500 },
+    { a: 5, b: 5, P: 100 },
+  ])("Table 3-23 case 18, concentrated load at any point (a=$a, b=$b)", ({ a, b, P }) => {
     const l = a + b;
     const r = analyzeBeam(beam(l, [fixed(0), fixed(l)], [{ type: "point", x: a, P }]));
     expectClose(r.reactions[0].F, (P * b * b * (3 * a + b)) / l ** 3, REL);
@@ -202,7 +221,10 @@ describe("beams fixed at both ends", () => {
 });
 
 describe("continuous beams", () => {
-  test.each([{ l: 12, w: 100 }, { l: 16, w: 45 }])("Table 3-23, continuous beam — two equal spans — uniformly distributed load (l=$l)", ({ l, w }) => {
+  test.each([
+    { l: 12, w: 100 },
+    { l: 16, w: 45 },
+  ])("Table 3-23, continuous beam — two equal spans — uniformly distributed load (l=$l)", ({ l, w }) => {
     const r = analyzeBeam(beam(2 * l, [pin(0), roller(l), roller(2 * l)], [{ type: "udl", from: 0, to: 2 * l, w }]));
     expectClose(r.reactions[0].F, (3 * w * l) / 8, REL);
     expectClose(r.reactions[1].F, (10 * w * l) / 8, REL);
@@ -235,7 +257,10 @@ describe("continuous beams", () => {
     expectClose(r.extremes.Mneg.value, (-3 * P * l) / 32, REL);
   });
 
-  test.each([{ l: 12, w: 100 }, { l: 8, w: 333 }])(
+  test.each([
+    { l: 12, w: 100 },
+    { l: 8, w: 333 },
+  ])(
     "AISC Manual 15th ed., continuous beam — three equal spans — uniformly distributed load (coefficients 0.4, 1.1, 0.08, 0.025, −0.100; from memory) (l=$l)",
     ({ l, w }) => {
       const r = analyzeBeam(beam(3 * l, [pin(0), roller(l), roller(2 * l), roller(3 * l)], [{ type: "udl", from: 0, to: 3 * l, w }]));

@@ -99,12 +99,11 @@ describe("superposition (linear elasticity)", () => {
   test("the beam under two load sets together equals the sum of the two, and factors scale the answer", () => {
     fc.assert(
       fc.property(beamArb, beamArb, fc.double({ min: -3, max: 3, noNaN: true }), (b1, b2, k) => {
-        const other = b2.loads
-          .map((ld): Load => {
-            const f = b1.length / b2.length;
-            const m = (x: number) => Math.min(x * f, b1.length);
-            return ld.type === "point" || ld.type === "moment" ? { ...ld, x: m(ld.x) } : { ...ld, from: m(ld.from), to: m(ld.to) };
-          });
+        const other = b2.loads.map((ld): Load => {
+          const f = b1.length / b2.length;
+          const m = (x: number) => Math.min(x * f, b1.length);
+          return ld.type === "point" || ld.type === "moment" ? { ...ld, x: m(ld.x) } : { ...ld, from: m(ld.from), to: m(ld.to) };
+        });
         const A = analyzeBeam(b1);
         const B = analyzeBeam({ ...b1, loads: other });
         const AB = analyzeBeam({ ...b1, loads: [...b1.loads, ...other] });

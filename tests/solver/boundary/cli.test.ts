@@ -44,8 +44,16 @@ describe("solve CLI", { timeout: 90_000 }, () => {
   });
 
   test.each([
-    { name: "a support off the member", body: '{"length":10,"E":1600000,"I":178,"supports":[{"x":12,"type":"pin"},{"x":0,"type":"pin"}],"loads":[]}', want: "supports.0.x: must be on the member, between 0 and 10 ft (got 12)" },
-    { name: "a single pin", body: '{"length":10,"E":1600000,"I":178,"supports":[{"x":4,"type":"pin"}],"loads":[]}', want: "unstable: the beam can rotate about the support at x = 4 ft — add a second support or make it fixed" },
+    {
+      name: "a support off the member",
+      body: '{"length":10,"E":1600000,"I":178,"supports":[{"x":12,"type":"pin"},{"x":0,"type":"pin"}],"loads":[]}',
+      want: "supports.0.x: must be on the member, between 0 and 10 ft (got 12)",
+    },
+    {
+      name: "a single pin",
+      body: '{"length":10,"E":1600000,"I":178,"supports":[{"x":4,"type":"pin"}],"loads":[]}',
+      want: "unstable: the beam can rotate about the support at x = 4 ft — add a second support or make it fixed",
+    },
     { name: "not JSON", body: "{length: 10", want: "input is not valid JSON" },
   ])("$name: exit 2 and the reason on standard error", async ({ body, want }) => {
     const r = await runCli(body);

@@ -5,7 +5,9 @@ import { solve } from "@/lib/solver/beam";
 import type { BeamInput } from "@/lib/solver/types";
 
 function post(body: string): Promise<Response> {
-  return POST(new Request("http://localhost/api/solve", { method: "POST", headers: { "content-type": "application/json" }, body }), { params: Promise.resolve({}) });
+  return POST(new Request("http://localhost/api/solve", { method: "POST", headers: { "content-type": "application/json" }, body }), {
+    params: Promise.resolve({}),
+  });
 }
 
 const deck: BeamInput = {

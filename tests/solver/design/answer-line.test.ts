@@ -11,12 +11,22 @@ describe("what the supports need, in words", () => {
     { studs: [1, 1], words: "1 jack stud each end" },
     { studs: [2, 3], words: "2 jack studs at support 1, 3 jack studs at support 2" },
   ])("jack studs $studs → $words", ({ studs, words }) => {
-    expect(supportWords(studs.map((jackStuds) => ({ jackStuds, requiredBearing: 1 })), "studs")).toBe(words);
+    expect(
+      supportWords(
+        studs.map((jackStuds) => ({ jackStuds, requiredBearing: 1 })),
+        "studs",
+      ),
+    ).toBe(words);
   });
 
   test("no studs: the bearing, never under 1-1/2 in (IRC 2021 R502.6)", () => {
     expect(supportWords([{ jackStuds: null, requiredBearing: 0.4 }])).toBe(`1-1/2" bearing at the support`);
-    expect(supportWords([{ jackStuds: null, requiredBearing: 2.3 }, { jackStuds: null, requiredBearing: 1 }])).toBe(`2-5/16" bearing each end`);
+    expect(
+      supportWords([
+        { jackStuds: null, requiredBearing: 2.3 },
+        { jackStuds: null, requiredBearing: 1 },
+      ]),
+    ).toBe(`2-5/16" bearing each end`);
     const three = [0.4, 2.3, 0.9].map((b) => ({ jackStuds: null, requiredBearing: b }));
     expect(supportWords(three)).toBe(`2-5/16" bearing at each support`);
   });
@@ -42,9 +52,16 @@ describe("the answer line follows the kind of member", () => {
   });
 
   test("a beam in a stud wall gets jack studs; a spacer between plies is named", () => {
-    expect(answerLine({ spec: dfl("2x10", 2), label: "2-ply 2x10 Douglas Fir-Larch No.2", kind: "beam", inStudWall: true, assembly: { plies: 2, spacerIn: 0.5 }, supports: two(2, 2) })).toBe(
-      `2-ply 2x10 No.2 with 1/2" spacer — 2 jack studs each end`,
-    );
+    expect(
+      answerLine({
+        spec: dfl("2x10", 2),
+        label: "2-ply 2x10 Douglas Fir-Larch No.2",
+        kind: "beam",
+        inStudWall: true,
+        assembly: { plies: 2, spacerIn: 0.5 },
+        supports: two(2, 2),
+      }),
+    ).toBe(`2-ply 2x10 No.2 with 1/2" spacer — 2 jack studs each end`);
   });
 });
 
@@ -71,7 +88,19 @@ describe("the routes' answer is the same line", () => {
   });
 
   test("a header with 3 in of bearingIn: the jack studs cover the bearing the check used (two 1-1/2 in studs)", () => {
-    const header = { ...joist, member: dfl("2x10", 2), kind: "header", spacingIn: undefined, tributaryFt: 4, bearingIn: 3, lengthFt: 5, supports: [{ x: 0, type: "pin" }, { x: 5, type: "roller" }] };
+    const header = {
+      ...joist,
+      member: dfl("2x10", 2),
+      kind: "header",
+      spacingIn: undefined,
+      tributaryFt: 4,
+      bearingIn: 3,
+      lengthFt: 5,
+      supports: [
+        { x: 0, type: "pin" },
+        { x: 5, type: "roller" },
+      ],
+    };
     const r = checkMember(header, STARTER_TABLES);
     const bearing = r.checks.find((c) => c.name === "bearing")!;
     expect(bearing.ratio).toBeLessThan(1);
@@ -91,7 +120,10 @@ describe("the routes' answer is the same line", () => {
   });
 
   test("the sizing search writes the same line for each member", () => {
-    const size = sizeMember({ ...joist, member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" }, kind: "floor-joist", fullChecks: 2 }, STARTER_TABLES);
+    const size = sizeMember(
+      { ...joist, member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" }, kind: "floor-joist", fullChecks: 2 },
+      STARTER_TABLES,
+    );
     for (const p of size.passing.slice(0, 2)) expect(p.answer).toBe(p.check!.answer);
     expect(size.passing[0].answer).toMatch(/ at 16 in o\.c\. — 1-1\/2" bearing each end on the plate, beam or hanger$/);
   });

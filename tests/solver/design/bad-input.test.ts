@@ -25,11 +25,21 @@ function issuesOf(fn: () => unknown): { path: string; message: string }[] {
 
 describe("bad input names the field and the reason", () => {
   test.each([
-    ["unknown species lists the species the tables hold", { ...base, member: { ...base.member, species: "Oak" } }, "member.species", /Douglas Fir-Larch, Hem-Fir, Spruce-Pine-Fir, Southern Pine/],
+    [
+      "unknown species lists the species the tables hold",
+      { ...base, member: { ...base.member, species: "Oak" } },
+      "member.species",
+      /Douglas Fir-Larch, Hem-Fir, Spruce-Pine-Fir, Southern Pine/,
+    ],
     ["unknown size lists the sizes", { ...base, member: { ...base.member, size: "2x9" } }, "member.size", /2x4, 2x6, 2x8, 2x10, 2x12/],
     ["unknown grade lists the grades", { ...base, member: { ...base.member, grade: "Stud" } }, "member.grade", /Select Structural, No\.1, No\.2, No\.3/],
     ["unknown W-shape lists the shapes", { ...base, member: { material: "steel", shape: "W8x99" } }, "member.shape", /W8x18/],
-    ["unknown engineered product lists the products", { ...base, member: { material: "engineered", product: "LVL 9E", depth: 11.875 } }, "member.product", /LVL 1\.9E/],
+    [
+      "unknown engineered product lists the products",
+      { ...base, member: { material: "engineered", product: "LVL 9E", depth: 11.875 } },
+      "member.product",
+      /LVL 1\.9E/,
+    ],
     ["engineered depth not made", { ...base, member: { material: "engineered", product: "LVL 1.9E", depth: 10 } }, "member.depth", /11\.875 in/],
     ["spacing and tributary both", { ...base, tributaryFt: 4 }, "tributaryFt", /not both/],
     ["neither spacing nor tributary with area loads", { ...base, spacingIn: undefined }, "spacingIn", /area loads \(psf\) need spacingIn/],
@@ -40,7 +50,12 @@ describe("bad input names the field and the reason", () => {
     ["an unknown load case", { ...base, loads: [{ type: "area", case: "X", psf: 40 }] }, "loads.0", /./],
     ["one pin cannot hold the member", { ...base, supports: [{ x: 0, type: "pin" }] }, "supports", /unstable/],
     ["five plies", { ...base, member: { ...base.member, plies: 5 } }, "member.plies", /1 to 4 plies/],
-    ["LVL in wet service", { ...base, member: { material: "engineered", product: "LVL 1.9E", depth: 11.875 }, conditions: { wet: true } }, "conditions.wet", /dry service only/],
+    [
+      "LVL in wet service",
+      { ...base, member: { material: "engineered", product: "LVL 1.9E", depth: 11.875 }, conditions: { wet: true } },
+      "conditions.wet",
+      /dry service only/,
+    ],
     ["method not asd or lrfd", { ...base, method: "lsd" }, "method", /"asd" or "lrfd"/],
   ])("%s", (_label, input, path, message) => {
     const issues = issuesOf(() => checkMember(input, STARTER_TABLES));
@@ -77,7 +92,11 @@ describe("supports are capped at the schema, before the pairwise checks", () => 
   ])("16,000 supports, %s: one issue on supports naming the cap, for check, size and span", (_label, xOf) => {
     const supports = Array.from({ length: 16_000 }, (_, i) => ({ x: xOf(i), type: "pin" }));
     const input = { ...base, supports };
-    for (const run of [() => checkMember(input, STARTER_TABLES), () => sizeMember({ ...input, member: { material: "sawn" } }, STARTER_TABLES), () => largestSpan(input, STARTER_TABLES)]) {
+    for (const run of [
+      () => checkMember(input, STARTER_TABLES),
+      () => sizeMember({ ...input, member: { material: "sawn" } }, STARTER_TABLES),
+      () => largestSpan(input, STARTER_TABLES),
+    ]) {
       const issues = issuesOf(run);
       expect(issues).toEqual([{ path: "supports", message: "at most 20 supports" }]);
     }

@@ -6,7 +6,12 @@ const root = fileURLToPath(new URL("../../../", import.meta.url));
 const tsx = `${root}node_modules/.bin/tsx`;
 
 function cli(command: string, input: unknown, ...flags: string[]) {
-  const r = spawnSync(tsx, ["scripts/cli.ts", command, "-", ...flags], { cwd: root, input: JSON.stringify(input), encoding: "utf8", env: { ...process.env, DATABASE_URL: "" } });
+  const r = spawnSync(tsx, ["scripts/cli.ts", command, "-", ...flags], {
+    cwd: root,
+    input: JSON.stringify(input),
+    encoding: "utf8",
+    env: { ...process.env, DATABASE_URL: "" },
+  });
   return { status: r.status, stdout: r.stdout, stderr: r.stderr };
 }
 

@@ -81,7 +81,7 @@ describe("12 ft header under a bearing wall: 8 ft of floor at 15 psf dead + 40 p
     expect(best.label).toBe("3-ply 2x12 Douglas Fir-Larch No.2");
     const w = 440 + (rho * 3 * 1.5 * 11.25) / 144;
     const S = (4.5 * 11.25 ** 2) / 6;
-    expect(best.ratio).toBeCloseTo(((w * 144) / 8) * 12 / S / (900 * 1.15), 3);
+    expect(best.ratio).toBeCloseTo((((w * 144) / 8) * 12) / S / (900 * 1.15), 3);
     expect(best.governing).toBe("bending");
     expect(best.supports.map((s) => s.jackStuds)).toEqual([3 / 1.5, 3 / 1.5]);
     expect(best.supports[0].maxDown).toBe(Math.round(w * 6));
@@ -91,13 +91,16 @@ describe("12 ft header under a bearing wall: 8 ft of floor at 15 psf dead + 40 p
     const w = 440 + (rho * 2 * 1.5 * 11.25) / 144;
     const S = (3 * 11.25 ** 2) / 6;
     const f = r.failing.find((x) => x.label === "2-ply 2x12 Douglas Fir-Larch No.2");
-    expect(f?.ratio).toBeCloseTo(((w * 144) / 8) * 12 / S / 900, 3);
+    expect(f?.ratio).toBeCloseTo((((w * 144) / 8) * 12) / S / 900, 3);
   });
 
   test("a steel beam for the same header: W-shapes pass and their checks read AISC 360-16", () => {
     const steel = sizeMember({ ...input, member: { material: "steel" } }, STARTER_TABLES);
     expect(steel.passing.length).toBeGreaterThan(0);
-    const best = checkMember({ ...input, member: { material: "steel", shape: steel.passing[0].member.material === "steel" ? steel.passing[0].member.shape : "" } }, STARTER_TABLES);
+    const best = checkMember(
+      { ...input, member: { material: "steel", shape: steel.passing[0].member.material === "steel" ? steel.passing[0].member.shape : "" } },
+      STARTER_TABLES,
+    );
     expect(best.pass).toBe(true);
     expect(best.checks.map((c) => c.name)).toEqual(expect.arrayContaining(["bending", "shear", "deflection-live", "web-yielding", "web-crippling"]));
   });
@@ -144,7 +147,17 @@ describe("overhang, uplift and pattern live load", () => {
   test("the overhang tip is checked against twice its length", () => {
     const notes = r.checks.filter((c) => c.name.startsWith("deflection")).map((c) => c.note);
     expect(notes.length).toBe(2);
-    const tip = checkMember({ ...deck, lengthFt: 18, supports: [{ x: 0, type: "pin" }, { x: 10, type: "roller" }] }, STARTER_TABLES);
+    const tip = checkMember(
+      {
+        ...deck,
+        lengthFt: 18,
+        supports: [
+          { x: 0, type: "pin" },
+          { x: 10, type: "roller" },
+        ],
+      },
+      STARTER_TABLES,
+    );
     expect(tip.checks.find((c) => c.name === "deflection-live")?.note).toMatch(/overhang .* 2 × its length/);
   });
 

@@ -25,7 +25,7 @@ describe("LVL, PSL and glulam headers and beams", () => {
     const CF = Math.min((12 / 11.875) ** 0.136, 1.18); // depth factor typical of LVL literature (the table's rule)
     const w = 55 * 7; // plf
     const S = (3.5 * 11.875 ** 2) / 6;
-    const fb = ((w * 14 ** 2) / 8) * 12 / S;
+    const fb = (((w * 14 ** 2) / 8) * 12) / S;
     const bending = r.checks.find((c) => c.name === "bending");
     expect(bending?.ratio).toBeCloseTo(fb / (lvl.Fb * CF * 1.0), 3);
     expect((r.factors as WoodFactors).CF).toBeCloseTo(CF, 4);
@@ -46,7 +46,14 @@ describe("LVL, PSL and glulam headers and beams", () => {
   });
 
   test("glulam braced only at the ends: the smaller of CL and CV is used, never both", () => {
-    const r = checkMember({ ...span(24), member: { material: "engineered", product: "Glulam 24F-V4 DF", width: 3.125, depth: 12 }, conditions: { selfWeight: false, unbracedLengthFt: 24 } }, STARTER_TABLES);
+    const r = checkMember(
+      {
+        ...span(24),
+        member: { material: "engineered", product: "Glulam 24F-V4 DF", width: 3.125, depth: 12 },
+        conditions: { selfWeight: false, unbracedLengthFt: 24 },
+      },
+      STARTER_TABLES,
+    );
     const f = r.factors as WoodFactors;
     const CV = f.CV ?? 1;
     expect(f.CL).toBeLessThan(CV);
@@ -61,10 +68,12 @@ describe("LVL, PSL and glulam headers and beams", () => {
     expect(bending?.capacity).toBeCloseTo(900 * 1.0 * 1.15 * 2.54 * 0.85 * 0.8, 0);
     const wu = (1.2 * 15 + 1.6 * 40) * 7;
     const S = (4.5 * 11.25 ** 2) / 6;
-    expect(bending?.demand).toBeCloseTo(((wu * 144) / 8) * 12 / S, 0);
+    expect(bending?.demand).toBeCloseTo((((wu * 144) / 8) * 12) / S, 0);
   });
 
   test("PSL is one piece: two plies are refused, naming the field", () => {
-    expect(() => checkMember({ ...span(12), member: { material: "engineered", product: "PSL 2.0E", width: 3.5, depth: 11.875, plies: 2 } }, STARTER_TABLES)).toThrow(/member.plies/);
+    expect(() =>
+      checkMember({ ...span(12), member: { material: "engineered", product: "PSL 2.0E", width: 3.5, depth: 11.875, plies: 2 } }, STARTER_TABLES),
+    ).toThrow(/member.plies/);
   });
 });

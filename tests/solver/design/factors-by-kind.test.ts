@@ -22,7 +22,14 @@ const simple = (L: number) => ({
 describe("Cr, NDS 2018 §4.3.9: at least three members joined by a load-distributing element", () => {
   const beam = (plies: number, conditions: Record<string, unknown>, extra: Record<string, unknown> = {}) =>
     checkMember(
-      { member: sawn("2x10", plies), ...simple(10), tributaryFt: 6, loads: [{ type: "area", case: "L", psf: 40 }], conditions: { selfWeight: false, ...conditions }, ...extra },
+      {
+        member: sawn("2x10", plies),
+        ...simple(10),
+        tributaryFt: 6,
+        loads: [{ type: "area", case: "L", psf: 40 }],
+        conditions: { selfWeight: false, ...conditions },
+        ...extra,
+      },
       STARTER_TABLES,
     );
   test.each([
@@ -50,7 +57,14 @@ describe("Cr, NDS 2018 §4.3.9: at least three members joined by a load-distribu
     ["header", 16, undefined, 1.0],
   ])("kind %s at %i in, repetitive %s → Cr %f", (kind, spacing, repetitive, Cr) => {
     const r = checkMember(
-      { member: sawn("2x10", 1), ...simple(12), spacingIn: spacing, kind, loads: [{ type: "area", case: "L", psf: 40 }], conditions: { selfWeight: false, ...(repetitive === undefined ? {} : { repetitive }) } },
+      {
+        member: sawn("2x10", 1),
+        ...simple(12),
+        spacingIn: spacing,
+        kind,
+        loads: [{ type: "area", case: "L", psf: 40 }],
+        conditions: { selfWeight: false, ...(repetitive === undefined ? {} : { repetitive }) },
+      },
       STARTER_TABLES,
     );
     expect((r.factors as WoodFactors).Cr).toBe(Cr);
@@ -103,7 +117,13 @@ describe("Ci, NDS 2018 §4.3.8: treated fir and spruce incised by default in wet
 describe("the unbraced length given is the one checked, placed where it is worst", () => {
   test("wood: lu = 5 ft on a 12 ft span is checked at 5 ft (not 12/3 = 4 ft): CL by NDS 2018 Eq. 3.3-6", () => {
     const r = checkMember(
-      { member: sawn("2x10", 1), ...simple(12), tributaryFt: 2, loads: [{ type: "area", case: "L", psf: 40 }], conditions: { selfWeight: false, unbracedLengthFt: 5, repetitive: false } },
+      {
+        member: sawn("2x10", 1),
+        ...simple(12),
+        tributaryFt: 2,
+        loads: [{ type: "area", case: "L", psf: 40 }],
+        conditions: { selfWeight: false, unbracedLengthFt: 5, repetitive: false },
+      },
       STARTER_TABLES,
     );
     const s = findSawnSize(STARTER_TABLES, "2x10");
@@ -153,7 +173,25 @@ describe("the unbraced length given is the one checked, placed where it is worst
     expect(r.bracing.neededFt).not.toBeNull();
     expect(r.bracing.neededFt ?? 99).toBeLessThan(10);
     expect(r.bracing.instruction).toMatch(/^brace the top flange at \d+ ft/);
-    const at = (lb: number) => checkMember({ ...JSON.parse(JSON.stringify({ member: { material: "steel", shape: "W12x14" }, ...simple(14), loads: [{ type: "udl", case: "D", from: 0, to: 14, w: 250 }, { type: "udl", case: "L", from: 0, to: 14, w: 600 }], bearingIn: 4, limits: { live: null, total: null } })), conditions: { selfWeight: false, unbracedLengthFt: lb } }, STARTER_TABLES).pass;
+    const at = (lb: number) =>
+      checkMember(
+        {
+          ...JSON.parse(
+            JSON.stringify({
+              member: { material: "steel", shape: "W12x14" },
+              ...simple(14),
+              loads: [
+                { type: "udl", case: "D", from: 0, to: 14, w: 250 },
+                { type: "udl", case: "L", from: 0, to: 14, w: 600 },
+              ],
+              bearingIn: 4,
+              limits: { live: null, total: null },
+            }),
+          ),
+          conditions: { selfWeight: false, unbracedLengthFt: lb },
+        },
+        STARTER_TABLES,
+      ).pass;
     expect(at(r.bracing.neededFt ?? 0)).toBe(true);
     expect(at((r.bracing.neededFt ?? 0) + 2 / 12)).toBe(false);
   });

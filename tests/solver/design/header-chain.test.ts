@@ -77,10 +77,10 @@ describe("header under a bearing wall with roof snow and a floor above (hand che
   });
 
   test.each([
-    ["bending", "D+0.75L+0.525S", () => ((wGov * 36) / 8) * 12 / S / (900 * 1.15 * 1.1)],
+    ["bending", "D+0.75L+0.525S", () => (((wGov * 36) / 8) * 12) / S / (900 * 1.15 * 1.1)],
     ["shear", "D+0.75L+0.525S", () => (1.5 * wGov * 3) / A / (180 * 1.15)],
-    ["deflection-live", "0.75L+0.525S", () => ((5 * ((0.75 * 240 + 0.525 * 294) / 12) * 72 ** 4) / (384 * 1.6e6 * I)) / (72 / 360)],
-    ["deflection-total", "D+0.75L+0.525S", () => ((5 * (wGov / 12) * 72 ** 4) / (384 * 1.6e6 * I)) / (72 / 240)],
+    ["deflection-live", "0.75L+0.525S", () => (5 * ((0.75 * 240 + 0.525 * 294) / 12) * 72 ** 4) / (384 * 1.6e6 * I) / (72 / 360)],
+    ["deflection-total", "D+0.75L+0.525S", () => (5 * (wGov / 12) * 72 ** 4) / (384 * 1.6e6 * I) / (72 / 240)],
     ["bearing", "D+0.75L+0.525S", () => (wGov * 3) / (3 * 3) / 625],
   ])("%s ratio and governing combination %s", (name, combo, ratio) => {
     const c = byName(name);

@@ -47,7 +47,10 @@ describe("a 5 ft 0 in rough opening with the flow's default header loads", () =>
   });
 
   test("in a 2x6 wall: three plies with two 1/2 in spacers (5-1/2 in)", () => {
-    const r = sizeMember({ ...header({ wallFraming: "2x6" }), member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" }, limit: 50 }, STARTER_TABLES);
+    const r = sizeMember(
+      { ...header({ wallFraming: "2x6" }), member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2" }, limit: 50 },
+      STARTER_TABLES,
+    );
     const built = r.passing.filter((p) => p.assembly.plies > 1);
     expect(built.length).toBeGreaterThan(0);
     for (const p of built) expect(p.assembly).toMatchObject({ plies: 3, spacers: 2, widthIn: 5.5 });
@@ -61,7 +64,18 @@ describe("a 5 ft 0 in rough opening with the flow's default header loads", () =>
 
   test("span and rough opening together are refused, naming roughOpeningFt", () => {
     try {
-      checkMember({ ...header(), lengthFt: 6, supports: [{ x: 0, type: "pin" }, { x: 6, type: "roller" }], member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 2 } }, STARTER_TABLES);
+      checkMember(
+        {
+          ...header(),
+          lengthFt: 6,
+          supports: [
+            { x: 0, type: "pin" },
+            { x: 6, type: "roller" },
+          ],
+          member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 2 },
+        },
+        STARTER_TABLES,
+      );
       expect.unreachable();
     } catch (err) {
       expect(err).toBeInstanceOf(DesignInputError);

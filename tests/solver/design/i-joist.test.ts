@@ -79,7 +79,16 @@ describe("PRI-40 9-1/2 at 16 in o.c. over 13.5 ft (worked example, formulas comp
   });
 
   test("load duration: a snow load raises M' by CD = 1.15 (NDS 2018 Table 2.3.2)", () => {
-    const snow = checkMember(floor("PRI-40 9-1/2", { loads: [{ type: "udl", case: "S", from: 0, to: SPAN, w: 100 }, { type: "udl", case: "D", from: 0, to: SPAN, w: 20 }], spacingIn: undefined }), T);
+    const snow = checkMember(
+      floor("PRI-40 9-1/2", {
+        loads: [
+          { type: "udl", case: "S", from: 0, to: SPAN, w: 100 },
+          { type: "udl", case: "D", from: 0, to: SPAN, w: 20 },
+        ],
+        spacingIn: undefined,
+      }),
+      T,
+    );
     const b = snow.checks.find((c) => c.name === "bending")!;
     expect(b.combination?.name).toMatch(/^D\+(\d*\.?\d*)S$/); // ASCE 7-22 §2.4.1 names it with its snow factor
     expect(b.capacity).toBe(Math.round(2735 * 1.15));
@@ -165,6 +174,8 @@ describe("sizing a floor with I-joists", () => {
   });
 
   test("an unknown joist names the field and lists the table", () => {
-    expect(() => checkMember({ ...request, member: { material: "ijoist", joist: "PRI-99 12" } }, T)).toThrow(/unknown I-joist "PRI-99 12"; the tables hold PRI-20 9-1\/2/);
+    expect(() => checkMember({ ...request, member: { material: "ijoist", joist: "PRI-99 12" } }, T)).toThrow(
+      /unknown I-joist "PRI-99 12"; the tables hold PRI-20 9-1\/2/,
+    );
   });
 });

@@ -183,7 +183,7 @@ describe("reference values read through the design member (NDS Supplement 2018)"
   test("a 3-ply 2x12 multiplies the section by three", () => {
     const m = wood({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x12", plies: 3 });
     expect(m.b).toBe(4.5);
-    expect(m.S).toBeCloseTo(3 * (1.5 * 11.25 ** 2) / 6, 9);
+    expect(m.S).toBeCloseTo((3 * (1.5 * 11.25 ** 2)) / 6, 9);
     expect(m.label).toBe("3-ply 2x12 Douglas Fir-Larch No.2");
   });
 });

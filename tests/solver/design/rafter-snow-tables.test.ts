@@ -43,7 +43,9 @@ const TABLE: Record<string, Record<Species, string[]>> = {
 };
 
 const CASES = Object.entries(TABLE).flatMap(([size, rows]) =>
-  (Object.entries(rows) as [Species, string[]][]).flatMap(([species, cells]) => cells.map((cell, i) => [`${species} No.2 ${size} @${SPACINGS[i]}`, species, size, SPACINGS[i], cell] as const)),
+  (Object.entries(rows) as [Species, string[]][]).flatMap(([species, cells]) =>
+    cells.map((cell, i) => [`${species} No.2 ${size} @${SPACINGS[i]}`, species, size, SPACINGS[i], cell] as const),
+  ),
 );
 
 const ftIn = (s: string) => {

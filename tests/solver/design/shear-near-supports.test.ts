@@ -111,7 +111,10 @@ describe("§3.4.3.1(a) and the section at exactly d from each face (uniform load
     const ref = analyzeBeam({ length: 18, E: 1.6e6, I: s.Ix, supports, loads });
     const Vref = Math.max(...[0, 9 - 1e-9, 9, 18 - 1e-9].map((x) => Math.abs(ref.evaluate(x).V)));
     const r = checkMember(
-      { ...joist(18, [{ type: "udl", case: "L", from: 0, to: 18, w: 300 }], supports), conditions: { selfWeight: false, shearIgnoreLoadsNearSupports: true, repetitive: false, patternLiveLoad: false } },
+      {
+        ...joist(18, [{ type: "udl", case: "L", from: 0, to: 18, w: 300 }], supports),
+        conditions: { selfWeight: false, shearIgnoreLoadsNearSupports: true, repetitive: false, patternLiveLoad: false },
+      },
       STARTER_TABLES,
     );
     expect(shear(r)?.demand).toBeCloseTo((1.5 * Vref) / s.A, 1);

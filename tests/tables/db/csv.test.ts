@@ -1,7 +1,16 @@
 import { describe, expect, test } from "vitest";
 import { STARTER_TABLES } from "@/lib/tables";
 import fc from "fast-check";
-import { csvIsClean, describeRejectedLine, expectedHeader, MAX_CSV_BYTES, neutraliseCell, parseTableCsv, restoreCell, tableToCsv } from "@/lib/tables/csv/format";
+import {
+  csvIsClean,
+  describeRejectedLine,
+  expectedHeader,
+  MAX_CSV_BYTES,
+  neutraliseCell,
+  parseTableCsv,
+  restoreCell,
+  tableToCsv,
+} from "@/lib/tables/csv/format";
 import { CsvUploadError, readCsvUpload } from "@/lib/tables/csv/upload";
 import { tablesToRows } from "@/lib/tables/db/rows";
 import { rowsOf, tablesProblems } from "@/lib/tables/db/validate";
@@ -45,7 +54,14 @@ describe("parseTableCsv", () => {
   });
 
   test("every bad line is listed by its own number, counting blank lines and quoted line breaks", () => {
-    const text = [VALUES_HEADER, DFL_NO2, "", HF_NO2.replace(",850,", ",-5,"), DFL_NO2.replace("NDS Supplement 2018 Table 4A", '"NDS Supplement 2018\nTable 4A"').replace(",No.2,", ",No.1,"), "Hem-Fir,No.2"].join("\r\n");
+    const text = [
+      VALUES_HEADER,
+      DFL_NO2,
+      "",
+      HF_NO2.replace(",850,", ",-5,"),
+      DFL_NO2.replace("NDS Supplement 2018 Table 4A", '"NDS Supplement 2018\nTable 4A"').replace(",No.2,", ",No.1,"),
+      "Hem-Fir,No.2",
+    ].join("\r\n");
     const result = parseTableCsv("sawn-values", text);
     expect(result.rejected.map((r) => r.line)).toEqual([4, 7]);
     expect(result.rejected[1].issues[0].message).toMatch(/2 values/);
@@ -149,7 +165,7 @@ describe("formula-like cells in downloaded CSV", () => {
   // OWASP "CSV Injection" (owasp.org/www-community/attacks/CSV_Injection): cells beginning with = + - @, tab or
   // carriage return are run as formulas by spreadsheet programs; prefixing a single quote makes them text.
   test.each([
-    ["=HYPERLINK(\"http://evil.example\",\"table\")", "'=HYPERLINK(\"http://evil.example\",\"table\")"],
+    ['=HYPERLINK("http://evil.example","table")', '\'=HYPERLINK("http://evil.example","table")'],
     ["+SUM(1,2)", "'+SUM(1,2)"],
     ["-2+3+cmd|' /C calc'!A0", "'-2+3+cmd|' /C calc'!A0"],
     ["@SUM(1,2)", "'@SUM(1,2)"],
@@ -191,7 +207,7 @@ describe("formula-like cells in downloaded CSV", () => {
   test("a downloaded table with formula-like text reads back to the same rows", () => {
     const rows = rowsOf(tablesToRows(STARTER_TABLES), "sawn-values").slice(0, 3);
     const tricky = [
-      { ...rows[0], source: "=HYPERLINK(\"http://evil.example\",\"NDS\")" },
+      { ...rows[0], source: '=HYPERLINK("http://evil.example","NDS")' },
       { ...rows[1], source: "-see NDS Supplement 2018 Table 4A" },
       { ...rows[2], source: "@NDS 2018" },
     ];

@@ -48,7 +48,9 @@ describe.skipIf(!TEST_DB)("material table versions", () => {
   test("an empty database serves the starter tables, and seeding publishes them as version 1 unchanged", async () => {
     expect((await getCurrentTables()).version).toBe(STARTER_TABLES.version);
     // Nothing can be edited or imported until the starter tables are published.
-    await expect(importRows("steel-grades", [{ name: "A36", Fy: 36, Fu: 58 }], "merge", { actor: admin, note: "too early" })).rejects.toMatchObject({ status: 409 });
+    await expect(importRows("steel-grades", [{ name: "A36", Fy: 36, Fu: 58 }], "merge", { actor: admin, note: "too early" })).rejects.toMatchObject({
+      status: 409,
+    });
     expect(await versionCount()).toBe(0);
     const seeded = await seedTables(STARTER_TABLES, "Starter tables");
     expect(seeded?.created).toBe(true);
@@ -101,7 +103,9 @@ describe.skipIf(!TEST_DB)("material table versions", () => {
     const oldest = versions[versions.length - 1];
     const count = await versionCount();
     const grade = STARTER_TABLES.steelGrades[0];
-    await expect(saveRow({ table: "steel-grades", row: { ...grade, Fu: 66 }, originalKey: grade.name }, { actor: admin, note: "x", baseVersionId: oldest.id })).rejects.toMatchObject({
+    await expect(
+      saveRow({ table: "steel-grades", row: { ...grade, Fu: 66 }, originalKey: grade.name }, { actor: admin, note: "x", baseVersionId: oldest.id }),
+    ).rejects.toMatchObject({
       status: 409,
     });
     expect(await versionCount()).toBe(count);
@@ -111,7 +115,10 @@ describe.skipIf(!TEST_DB)("material table versions", () => {
     const current = await getCurrentTables();
     const count = await versionCount();
     const grade = current.steelGrades[0];
-    const result = await saveRow({ table: "steel-grades", row: { ...grade }, originalKey: grade.name }, { actor: admin, note: "no-op", baseVersionId: current.version });
+    const result = await saveRow(
+      { table: "steel-grades", row: { ...grade }, originalKey: grade.name },
+      { actor: admin, note: "no-op", baseVersionId: current.version },
+    );
     expect(result.created).toBe(false);
     expect(await versionCount()).toBe(count);
   });
@@ -120,7 +127,9 @@ describe.skipIf(!TEST_DB)("material table versions", () => {
     const current = await getCurrentTables();
     const grade = current.steelGrades[0];
     await expect(saveRow({ table: "steel-grades", row: grade }, { actor: admin, note: "dup" })).rejects.toMatchObject({ status: 409 });
-    await expect(saveRow({ table: "steel-grades", row: grade, originalKey: "A1011" }, { actor: admin, note: "missing" })).rejects.toMatchObject({ status: 404 });
+    await expect(saveRow({ table: "steel-grades", row: grade, originalKey: "A1011" }, { actor: admin, note: "missing" })).rejects.toMatchObject({
+      status: 404,
+    });
     await expect(deleteRow("steel-grades", "A1011", { actor: admin, note: "missing" })).rejects.toBeInstanceOf(TablesChangeError);
   });
 

@@ -33,7 +33,12 @@ export default async function CrewPage({ params }: CrewPageProps) {
         {view.job.siteAddress ? <p className="text-lg text-ink-soft">{view.job.siteAddress}</p> : null}
         {view.expiresAt ? <p className="text-ink-soft">This link works until {formatSheetDate(view.expiresAt)}.</p> : null}
       </header>
-      <a href={`/api/crew/${token}/pdf`} download className={`${buttonClasses({ variant: "secondary" })} no-print w-full sm:w-fit`} data-testid="crew-board-pdf">
+      <a
+        href={`/api/crew/${token}/pdf`}
+        download
+        className={`${buttonClasses({ variant: "secondary" })} no-print w-full sm:w-fit`}
+        data-testid="crew-board-pdf"
+      >
         Print for the site board (PDF)
       </a>
       <p className="flex items-center gap-2 rounded-card border-2 border-caution bg-caution-bg px-3 py-2 font-bold text-caution-ink">
@@ -60,8 +65,8 @@ export default async function CrewPage({ params }: CrewPageProps) {
         <Caution variant="full" />
       </div>
       <p className="text-ink-soft">
-        Loads are the largest at each support under the service load combinations. Jack studs are 1-1/2 in studs
-        under each end of a header. Ask the builder before changing any size.
+        Loads are the largest at each support under the service load combinations. Jack studs are 1-1/2 in studs under each end of a header. Ask the builder
+        before changing any size.
       </p>
     </article>
   );

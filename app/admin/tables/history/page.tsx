@@ -27,7 +27,11 @@ export default async function AdminTablesHistoryPage() {
       ) : (
         <>
           <VersionHistory versions={versions} titles={titles} />
-          {total > versions.length ? <p className="mt-3 text-graphite">Showing the newest {versions.length} of {total} versions.</p> : null}
+          {total > versions.length ? (
+            <p className="mt-3 text-graphite">
+              Showing the newest {versions.length} of {total} versions.
+            </p>
+          ) : null}
         </>
       )}
     </>

@@ -10,8 +10,5 @@ export const runtime = "nodejs";
 export const POST = route(async (req) => {
   const { email } = await parseJson(req, EmailOnlySchema);
   await resendVerification(email, clientIp(req.headers));
-  return NextResponse.json(
-    { ok: true, message: "If that address has an unconfirmed account, a new link is on its way." },
-    { status: 202 },
-  );
+  return NextResponse.json({ ok: true, message: "If that address has an unconfirmed account, a new link is on its way." }, { status: 202 });
 });

@@ -26,7 +26,11 @@ export const GET = route<Ctx>(async (req, ctx) => {
   const headers = { "cache-control": "private, no-store" };
   if (format.data === "csv") {
     return new Response(orderCsv(order.list), {
-      headers: { ...headers, "content-type": "text/csv; charset=utf-8", "content-disposition": `attachment; filename="${orderFileName(order.job.name, "csv")}"` },
+      headers: {
+        ...headers,
+        "content-type": "text/csv; charset=utf-8",
+        "content-disposition": `attachment; filename="${orderFileName(order.job.name, "csv")}"`,
+      },
     });
   }
   const pdf = await renderOrderPdf(order, paper.data ?? "letter");

@@ -26,7 +26,8 @@ export const GET = route<Ctx>(async (req, ctx) => {
   const sheet = await getJobSheet(user.id, id);
   if (!(await sheetAccess(user)).canReprint) throw new HttpError(403, SHEET_REPRINT_DENIED, { upgrade: "/pricing" });
   const paperParam = new URL(req.url).searchParams.get("paper") ?? "letter";
-  if (paperParam !== "letter" && paperParam !== "a4") throw new HttpError(400, "invalid input", { issues: [{ path: "paper", message: "must be letter or a4" }] });
+  if (paperParam !== "letter" && paperParam !== "a4")
+    throw new HttpError(400, "invalid input", { issues: [{ path: "paper", message: "must be letter or a4" }] });
   const crewUrl = await liveCrewLinkUrl(user.id, sheet.jobId);
   const pdf = await renderSheetPdf(sheet.snapshot, paperParam as Paper, crewUrl ? { url: crewUrl, qrPng: await crewQrPng(crewUrl, 300) } : null);
   return new Response(new Uint8Array(pdf), {

@@ -28,8 +28,6 @@ export const POST = route(async (req: Request, ctx: Ctx) => {
     created: result.created,
     version: result.version,
     counts: { added: result.summary.added, changed: result.summary.changed, removed: result.summary.removed },
-    message: result.created
-      ? `published version ${result.version.number}`
-      : "the tables already hold exactly these rows, so no new version was published",
+    message: result.created ? `published version ${result.version.number}` : "the tables already hold exactly these rows, so no new version was published",
   });
 });

@@ -13,7 +13,9 @@ function parseValues<K extends TableKey>(table: K, values: Record<string, string
   const known = new Set(TABLE_SPECS[table].fields.map((f) => f.name));
   const unknown = Object.keys(values).filter((name) => !known.has(name));
   if (unknown.length > 0) {
-    throw new HttpError(400, "invalid input", { issues: unknown.map((name) => ({ path: `values.${name}`, message: `${TABLE_SPECS[table].title} has no column ${name}` })) });
+    throw new HttpError(400, "invalid input", {
+      issues: unknown.map((name) => ({ path: `values.${name}`, message: `${TABLE_SPECS[table].title} has no column ${name}` })),
+    });
   }
   const parsed = parseFlatRow(table, values);
   if (!parsed.ok) throw new HttpError(400, "invalid input", { issues: parsed.issues.map((i) => ({ path: `values.${i.column}`, message: i.message })) });
@@ -47,9 +49,7 @@ export const PUT = route(async (req: Request, ctx: Ctx) => {
   const body = await parseJson(req, editRowBody);
   const row = parseValues(table, body.values);
   const note = body.note || `Edited ${body.originalKey} in ${TABLE_SPECS[table].title}`;
-  return answer(
-    await tablesOperation(() => saveRow({ table, row, originalKey: body.originalKey }, { actor, note, baseVersionId: body.baseVersionId })),
-  );
+  return answer(await tablesOperation(() => saveRow({ table, row, originalKey: body.originalKey }, { actor, note, baseVersionId: body.baseVersionId })));
 });
 
 // DELETE /api/admin/tables/[table]/rows — remove one row as a new version, admin
