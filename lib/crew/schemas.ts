@@ -9,11 +9,9 @@ const uuid = z.string().uuid("must be a job or link id");
 export const createCrewLinkSchema = z.object({
   jobId: uuid,
   label: z.string().trim().max(80, "must be 80 characters or fewer").optional().default(""),
-  expiresInDays: z.coerce
-    .number()
-    .refine((d): d is CrewLinkExpiryDays => (CREW_LINK_EXPIRY_DAYS as readonly number[]).includes(d), {
-      message: "must be 0 (no expiry), 1, 7, 30 or 90 days",
-    }),
+  expiresInDays: z.coerce.number().refine((d): d is CrewLinkExpiryDays => (CREW_LINK_EXPIRY_DAYS as readonly number[]).includes(d), {
+    message: "must be 0 (no expiry), 1, 7, 30 or 90 days",
+  }),
 });
 export type CreateCrewLinkInput = z.infer<typeof createCrewLinkSchema>;
 
