@@ -5,10 +5,10 @@ import type { EngineeredProduct, EngineeredSizeRule } from "./types";
  *
  * These are not one maker's product. LVL and PSL values are typical of published literature for
  * the named E grade; every maker publishes its own, and the maker's values govern. The 2.0E LVL and
- * PSL rows agree with one maker's published 2.0E values as an open-source data file transcribes
+ * PSL rows agree with one maker's published 2.0E values as an open-source data file reproduces
  * them (qsaad/stroogle data/wood/EngineeredSpecies.js); the 1.9E LVL row was not checked. Glulam
  * values are the NDS Supplement (2018 edition) Table 5A reference values for the named combination;
- * the open-source transcriptions found disagree on Fbx− (1,450 vs 1,850 psi for 24F-V4; balanced or
+ * the open-source published copies found disagree on Fbx− (1,450 vs 1,850 psi for 24F-V4; balanced or
  * not for 24F-1.8E), so the glulam rows stay from memory and flagged.
  */
 

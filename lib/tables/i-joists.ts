@@ -8,7 +8,7 @@ import type { IJoist } from "./types";
  * every APA EWS member mill's PRI joists meet them. A maker's own joist series carries its own values
  * (the admin can add them as rows).
  *
- * Checked value by value against the ASD design properties xcfem/xc transcribes in SI units
+ * Checked value by value against the ASD design properties xcfem/xc reproduces in SI units
  * (python_modules/materials/awc_nds/aux/pr_400_i_joists.json, from its spreadsheet
  * asd_design_properties_apa_ews_performance_rated_i_joists), converted back here: every figure comes
  * back a round lbf, lbf-ft or 10⁶ lbf-in² value. PRI-40 9-1/2 (EI 184 × 10⁶ lbf-in², K 4.94 × 10⁶ lbf)
@@ -19,7 +19,7 @@ import type { IJoist } from "./types";
  * 9-1/2 and 11-7/8 in joists, 4 plf for 14 and 16 in, on the heavy side of what the joists weigh.
  */
 const PRI_400 =
-  "APA PRI-400 design properties (APA Form Z725); checked against the SI transcription in xcfem/xc (awc_nds/aux/pr_400_i_joists.json); weight is an allowance";
+  "APA PRI-400 design properties (APA Form Z725); checked against the SI published copy in xcfem/xc (awc_nds/aux/pr_400_i_joists.json); weight is an allowance";
 
 /** [series, depth in, flange width in, EI 10⁶ lbf-in², M lbf-ft, V lbf, IR lbf, ER 1-3/4 in, ER 1-3/4 in stiffened, ER 4 in, ER 4 in stiffened, K 10⁶ lbf] */
 type Row = [string, number, number, number, number, number, number, number, number, number, number, number];

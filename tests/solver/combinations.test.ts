@@ -39,7 +39,7 @@ describe("ASCE 7-22 §2.4.1 ASD basic combinations", () => {
   });
 });
 
-// ASCE 7-16 §2.4.1 as transcribed on a public code page (callout.app, "ASCE 7 §2.4.1"):
+// ASCE 7-16 §2.4.1 as reproduced on a public code page (callout.app, "ASCE 7 §2.4.1"):
 // (1) D; (2) D + L; (3) D + (Lr or S or R); (4) D + 0.75L + 0.75(Lr or S or R); (5) D + 0.6W;
 // (6) D + 0.75L + 0.75(0.6W) + 0.75(Lr or S or R); (7) 0.6D + 0.6W. Snow at full value.
 describe("ASCE 7-16 §2.4.1 ASD basic combinations: S at full value (the default basis)", () => {
@@ -60,7 +60,7 @@ describe("ASCE 7-16 §2.4.1 ASD basic combinations: S at full value (the default
   });
 });
 
-// ASCE 7-16 §2.3.1 (LRFD) as transcribed on public pages of the 2016 text (idecad wiki, "ASCE 7-16 Section 2.3.1"):
+// ASCE 7-16 §2.3.1 (LRFD) as reproduced on public pages of the 2016 text (idecad wiki, "ASCE 7-16 Section 2.3.1"):
 // 1.4D; 1.2D + 1.6L + 0.5(Lr or S); 1.2D + 1.6(Lr or S) + (L or 0.5W); 1.2D + 1.0W + L + 0.5(Lr or S); 0.9D + 1.0W.
 describe("ASCE 7-16 §2.3.1 LRFD basic combinations", () => {
   test("D, L, S: 1.6S leading, 0.5S as a companion", () => {

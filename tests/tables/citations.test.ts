@@ -41,7 +41,7 @@ describe("every starter row cites its source", () => {
 
 describe("citation words", () => {
   test("an answer shows the citation only", () => {
-    expect(citationOf("NDS Supplement 2018, Table 4A; checked against a transcription")).toBe("NDS Supplement 2018, Table 4A");
+    expect(citationOf("NDS Supplement 2018, Table 4A; checked against a published copy")).toBe("NDS Supplement 2018, Table 4A");
     expect(citationOf("NDS Supplement 2018, Table 4D, Beams and Stringers; from memory — verify against the printed table")).toBe(
       "NDS Supplement 2018, Table 4D, Beams and Stringers",
     );

@@ -3,12 +3,12 @@ import { depthWords, findIJoist, I_JOISTS, STARTER_TABLES } from "@/lib/tables";
 import { isFromMemory } from "@/lib/tables/citations";
 import { iJoistSchema } from "@/lib/tables/schemas";
 
-// APA PRI-400 performance-rated I-joists, ASD design properties, as xcfem/xc transcribes them in SI units
+// APA PRI-400 performance-rated I-joists, ASD design properties, as xcfem/xc reproduces them in SI units
 // (python_modules/materials/awc_nds/aux/pr_400_i_joists.json, read with the search tool): depth h (m),
 // flange width b (m), EI (N·m²), moment (N·m), shear (N), intermediate reaction (N), end reactions at
 // 44 mm and 102 mm bearing without / with web stiffeners (N), K (N). Converted here with the exact
 // definitions 1 lbf = 4.4482216152605 N, 1 in = 0.0254 m; every Spanlark value must come back within
-// 0.05 % (the transcription's own rounding).
+// 0.05 % (the published copy's own rounding).
 const N_PER_LBF = 4.4482216152605;
 const M_PER_IN = 0.0254;
 type Si = [
@@ -40,7 +40,7 @@ const PRI_400_SI: Si[] = [
 ];
 const DEPTH_OF: Record<number, number> = { 0.241: 9.5, 0.302: 11.875, 0.356: 14, 0.406: 16 };
 
-describe("I-joists against APA PRI-400 (ASD design properties, xcfem/xc transcription in SI)", () => {
+describe("I-joists against APA PRI-400 (ASD design properties, xcfem/xc published copy in SI)", () => {
   test.each(PRI_400_SI)("%s at %f m", (series, h, b, EI, M, V, IR, E44, E44s, E102, E102s, K) => {
     const d = DEPTH_OF[h];
     const j = findIJoist(STARTER_TABLES, `${series} ${depthWords(d)}`);

@@ -16,7 +16,7 @@ const T = STARTER_TABLES;
 
 type Values7 = [Fb: number, Ft: number, Fv: number, FcPerp: number, Fc: number, E: number, Emin: number];
 
-// NDS Supplement 2018, Table 4A, as transcribed in xcfem/xc, python_modules/materials/awc_nds/
+// NDS Supplement 2018, Table 4A, as reproduced in xcfem/xc, python_modules/materials/awc_nds/
 // dimensional_lumber.py (classes DouglasFirLarchWood, HemFirWood, SprucePineFirWood; psi, read with
 // the search tool). Fb, Ft, Fv, Fc⊥, Fc, E, Emin. Exact match expected, except the one slip below.
 const TABLE_4A_XCFEM: [Species, SawnGrade, Values7][] = [
@@ -28,14 +28,14 @@ const TABLE_4A_XCFEM: [Species, SawnGrade, Values7][] = [
   ["Hem-Fir", "No.1", [975, 625, 150, 405, 1350, 1_500_000, 550_000]],
   ["Hem-Fir", "No.2", [850, 525, 150, 405, 1300, 1_300_000, 470_000]],
   ["Hem-Fir", "No.3", [500, 300, 150, 405, 725, 1_200_000, 440_000]],
-  // xcfem/xc prints Select Structural Fb 1,150; the transcription below and a trade table say 1,250
+  // xcfem/xc prints Select Structural Fb 1,150; the published copy below and a trade table say 1,250
   ["Spruce-Pine-Fir", "Select Structural", [1150, 700, 135, 425, 1400, 1_500_000, 550_000]],
   ["Spruce-Pine-Fir", "No.1", [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
   ["Spruce-Pine-Fir", "No.2", [875, 450, 135, 425, 1150, 1_400_000, 510_000]],
   ["Spruce-Pine-Fir", "No.3", [500, 250, 135, 425, 650, 1_200_000, 440_000]],
 ];
 
-// NDS Supplement 2018, Table 4A, as a Kotlin WoodPropertyService transcribes it ("NDS 2018 Supplement
+// NDS Supplement 2018, Table 4A, as a Kotlin WoodPropertyService reproduces it ("NDS 2018 Supplement
 // Table 4A"; Hem-Fir No.3 not in it). Same columns, exact match expected.
 const TABLE_4A_KOTLIN: [Species, SawnGrade, Values7][] = [
   ["Douglas Fir-Larch", "Select Structural", [1500, 1000, 180, 625, 1700, 1_900_000, 690_000]],
@@ -51,7 +51,7 @@ const TABLE_4A_KOTLIN: [Species, SawnGrade, Values7][] = [
   ["Spruce-Pine-Fir", "No.3", [500, 250, 135, 425, 650, 1_200_000, 440_000]],
 ];
 
-// NDS Supplement 2018, Table 4B, Southern Pine, as the same Kotlin WoodPropertyService transcribes it:
+// NDS Supplement 2018, Table 4B, Southern Pine, as the same Kotlin WoodPropertyService reproduces it:
 // per grade, by width band 2"–4", 5"–6", 8", 10", 12": [Fb, Ft, Fc]; Fv 175, Fc⊥ 565 throughout.
 const TABLE_4B_KOTLIN: Record<SawnGrade, { E: number; Emin: number; byWidth: [number, number, number][] }> = {
   "Select Structural": {
@@ -101,7 +101,7 @@ const TABLE_4B_KOTLIN: Record<SawnGrade, { E: number; Emin: number; byWidth: [nu
 };
 const SP_WIDTHS = [4, 6, 8, 10, 12];
 
-// The Southern Pine Use Guide (metric edition) values xcfem/xc transcribes (dimensional_lumber.py,
+// The Southern Pine Use Guide (metric edition) values xcfem/xc reproduces (dimensional_lumber.py,
 // southern_pine_data), MPa / GPa, by width 38–89, 140, 184, 235, 286 mm: [Fb], [Ft], [Fc], E, Emin.
 // Converted here with 1 psi = 0.006894757 MPa, each must round to the psi value (Southern Pine values
 // are multiples of 25 psi, E of 100,000 psi, Emin of 10,000 psi); the metric figures carry one decimal,
@@ -124,18 +124,18 @@ const valuesOf = (v: { Fb: number; Ft: number; Fv: number; FcPerp: number; Fc: n
   v.Emin,
 ];
 
-describe("NDS Supplement 2018 Table 4A against two transcriptions", () => {
-  test.each(TABLE_4A_KOTLIN)("Kotlin WoodPropertyService transcription: %s %s", (species, grade, values) => {
+describe("NDS Supplement 2018 Table 4A against two published copies", () => {
+  test.each(TABLE_4A_KOTLIN)("Kotlin WoodPropertyService published copy: %s %s", (species, grade, values) => {
     const v = findSawnValues(T, species, grade, "dimension");
     expect(valuesOf(v)).toEqual(values);
     expect(v.source).toContain("NDS Supplement 2018, Table 4A");
     expect(v.source).not.toMatch(/from memory/);
   });
 
-  test.each(TABLE_4A_XCFEM)("xcfem/xc transcription: %s %s", (species, grade, values) => {
+  test.each(TABLE_4A_XCFEM)("xcfem/xc published copy: %s %s", (species, grade, values) => {
     const v = findSawnValues(T, species, grade, "dimension");
     if (species === "Spruce-Pine-Fir" && grade === "Select Structural") {
-      // the one disagreement: Spanlark follows 1,250 (the other transcription and 1,500 psi for a 2x8
+      // the one disagreement: Spanlark follows 1,250 (the other published copy and 1,500 psi for a 2x8
       // in the JLC field guide table = 1,250 × Table 4A CF 1.2); every other value matches
       expect(v.Fb).toBe(1250);
       expect(1250 * 1.2).toBe(1500);
@@ -147,10 +147,10 @@ describe("NDS Supplement 2018 Table 4A against two transcriptions", () => {
   });
 });
 
-describe("NDS Supplement 2018 Table 4B (Southern Pine) against two transcriptions", () => {
+describe("NDS Supplement 2018 Table 4B (Southern Pine) against two published copies", () => {
   const rows = SAWN_GRADES.flatMap((grade) => SP_WIDTHS.map((depth, i) => [grade, depth, i] as const));
 
-  test.each(rows)("Kotlin WoodPropertyService transcription: %s, %i in wide", (grade, depth, i) => {
+  test.each(rows)("Kotlin WoodPropertyService published copy: %s, %i in wide", (grade, depth, i) => {
     const { E, Emin, byWidth } = TABLE_4B_KOTLIN[grade];
     const [Fb, Ft, Fc] = byWidth[i];
     const v = findSawnValues(T, "Southern Pine", grade, "dimension", depth);
@@ -197,7 +197,7 @@ describe("NDS Supplement 2018 Table 4D rows are flagged from memory", () => {
   });
 
   // Specific gravity G as Tables 4A/4B print it (and NDS 2018 Table 12.3.3A): Spruce-Pine-Fir 0.42 as
-  // the Kotlin transcription notes; the others from memory.
+  // the Kotlin published copy notes; the others from memory.
   test.each([
     ["Douglas Fir-Larch", 0.5],
     ["Hem-Fir", 0.43],
@@ -254,7 +254,7 @@ describe("design values against the NDS's own rules", () => {
 
 // NDS Supplement 2018, Table 4A "Size Factors, CF" as xcfem/xc (dimensional_lumber.py:
 // fb_size_factor_y3/y4, fc_size_factor_y; Ft uses the 2"&3" Fb schedule) and a Kotlin
-// ndsTable4ASizeFactor transcribe it: [size, CF for Fb, Ft, Fc]. Fb splits 2"&3" thick vs 4" thick.
+// ndsTable4ASizeFactor reproduce it: [size, CF for Fb, Ft, Fc]. Fb splits 2"&3" thick vs 4" thick.
 const TABLE_4A_CF: [size: string, Fb: number, Ft: number, Fc: number][] = [
   ["2x4", 1.5, 1.5, 1.15],
   ["2x6", 1.3, 1.3, 1.1],
@@ -280,7 +280,7 @@ describe("size factors", () => {
     expect(cf.table).toBe("4A");
   });
 
-  // NDS Supplement 2018, Table 4B footnote, as a Kotlin resolveSawnCf transcribes its notes: size is
+  // NDS Supplement 2018, Table 4B footnote, as a Kotlin resolveSawnCf reproduces its notes: size is
   // already in the values, except Fb × 1.1 "permitted" for 4" thick lumber 8" and wider.
   test.each([
     ["2x4", 1.0],
@@ -297,7 +297,7 @@ describe("size factors", () => {
   });
 
   // NDS Supplement 2018, Table 4D: CF = (12/d)^(1/9) for d > 12 in (as several open-source NDS codes
-  // transcribe it), computed here from the rule.
+  // reproduce it), computed here from the rule.
   test.each([
     [7.5, 1.0],
     [11.5, 1.0],

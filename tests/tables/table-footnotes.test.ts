@@ -2,12 +2,12 @@ import { describe, expect, test } from "vitest";
 import { flatUseFactorCfu, wetServiceFactorCM } from "@/lib/solver/nds/nds-2018";
 
 // The adjustment factors printed beside the NDS Supplement 2018 design value tables, checked against
-// open-source transcriptions read with the search tool. The factors live with the NDS rules in
+// open-source published copies read with the search tool. The factors live with the NDS rules in
 // lib/solver/nds; their sources are the tables' footnotes, so the checks sit with the tables.
 
 describe("wet service factor CM (NDS Supplement 2018 Tables 4A, 4B, 4D, 5A)", () => {
   // Table 4A footnote, as Kodestruct's NDS wet service code (GetDimensionalLumberC_M, "when (Fb)(CF)
-  // ≤ 1,150 psi, CM = 1.0") and xcfem/xc dimensional_lumber.py transcribe it: Fb 0.85 unless
+  // ≤ 1,150 psi, CM = 1.0") and xcfem/xc dimensional_lumber.py reproduce it: Fb 0.85 unless
   // Fb·CF ≤ 1,150 psi, Fv 0.97, Fc⊥ 0.67, E and Emin 0.9.
   test.each([
     [990, 1.0],
@@ -29,12 +29,12 @@ describe("wet service factor CM (NDS Supplement 2018 Tables 4A, 4B, 4D, 5A)", ()
   });
 
   // Table 4D (timbers 5"x5" and larger), as Kodestruct (GetTimberC_M) and xcfem/xc
-  // (getWetServiceFactor, sawn lumber) transcribe it: Fb, Fv, E 1.0; Fc⊥ 0.67 (Fc 0.91 not used here).
+  // (getWetServiceFactor, sawn lumber) reproduce it: Fb, Fv, E 1.0; Fc⊥ 0.67 (Fc 0.91 not used here).
   test("Table 4D: Fb 1.0, Fv 1.0, Fc⊥ 0.67, E 1.0", () => {
     expect(wetServiceFactorCM("4D", true)).toEqual({ Fb: 1.0, Fv: 1.0, FcPerp: 0.67, E: 1.0 });
   });
 
-  // Table 5A (glulam), as xcfem/xc getWetServiceFactor transcribes it (moisture content 16% or more):
+  // Table 5A (glulam), as xcfem/xc getWetServiceFactor reproduces it (moisture content 16% or more):
   // Fb 0.8, Fv 0.875, Fc⊥ 0.53, E and Emin 0.833.
   test("Table 5A glulam: Fb 0.8, Fv 0.875, Fc⊥ 0.53, E 0.833", () => {
     expect(wetServiceFactorCM("glulam", true)).toEqual({ Fb: 0.8, Fv: 0.875, FcPerp: 0.53, E: 0.833 });
@@ -46,8 +46,8 @@ describe("wet service factor CM (NDS Supplement 2018 Tables 4A, 4B, 4D, 5A)", ()
 });
 
 describe("flat use factor Cfu (NDS Supplement 2018 Table 4A)", () => {
-  // As xcfem/xc dimensional_lumber.py transcribes it (flat_use_y3 for 2" & 3" thick, flat_use_y4 for
-  // 4" thick), by nominal width. The 4" thick, 10" and wider entry is left out: that transcription reads
+  // As xcfem/xc dimensional_lumber.py reproduces it (flat_use_y3 for 2" & 3" thick, flat_use_y4 for
+  // 4" thick), by nominal width. The 4" thick, 10" and wider entry is left out: that published copy reads
   // 1.05 at 10" rising to 1.1 beyond, Spanlark holds 1.1 (from memory). Spanlark bends every member
   // edgewise, so Cfu is 1.0 in every answer today; the entry stays flagged in the report until read.
   test.each([

@@ -104,7 +104,7 @@ export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: L
 /**
  * ASCE 7 §2.3.1 basic combinations for strength design (LRFD), combinations 1–5 without E.
  * ASCE 7-16: 1.4D; 1.2D+1.6L+0.5(Lr or S or R); 1.2D+1.6(Lr or S or R)+(L or 0.5W);
- * 1.2D+1.0W+L+0.5(Lr or S or R); 0.9D+1.0W (as transcribed on public pages of the 2016 text).
+ * 1.2D+1.0W+L+0.5(Lr or S or R); 0.9D+1.0W (as reproduced on public pages of the 2016 text).
  * ASCE 7-22: snow is strength level, 1.0S leading and 0.5(0.3S) as the companion (from memory of
  * the 2022 edition).
  */

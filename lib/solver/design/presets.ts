@@ -3,10 +3,10 @@
  *
  * Live-load limits: IRC 2021 Table R301.7 (floors L/360; ceilings with plaster or stucco L/360;
  * ceilings with gypsum board or other flexible finishes L/240; rafters steeper than 3:12 with no
- * finished ceiling L/180; all other structural members L/240), as transcribed on a public page of the
+ * finished ceiling L/180; all other structural members L/240), as reproduced on a public page of the
  * table (scribd, "IRC Table R301.7"). IRC R301.7 has no total-load column.
  * Total-load limits: IBC 2021 Table 1604.3, column D + L (roof members supporting plaster or stucco
- * l/240, nonplaster ceiling l/180, not supporting a ceiling l/120; floor members l/240), as transcribed
+ * l/240, nonplaster ceiling l/180, not supporting a ceiling l/120; floor members l/240), as reproduced
  * on up.codes ("1604.3 Serviceability"). Footnote d of that table (the D + L limit applies to the creep
  * part of dead-load deflection plus live load; for dry wood, 0.5D + L) is NOT applied: Spanlark checks
  * the immediate D + L deflection against it, which is larger, so the check is the conservative one.

@@ -8,7 +8,7 @@ import type { Species } from "@/lib/tables/types";
  * snow load 30 psf, ceiling not attached to rafters, L/Δ = 180, dead load 10 psf, No.2 grade. The
  * residential tables carry the column's ground snow as the roof snow and combine D + S (the older,
  * allowable-stress basis: Spanlark's default ASCE 7-16 reading), CD = 1.15 for snow, Cr = 1.15.
- * Table figures as transcribed in a public contractor's reference script ("8.2 Span Tables", IRC 2021
+ * Table figures as reproduced in a public contractor's reference script ("8.2 Span Tables", IRC 2021
  * Table R802.4.1(3), No.2 rows at 12, 16, 19.2 and 24 in; found with the search tool's code index).
  * Tables (4) to (6) (ceiling attached, 50 psf) were not found in a source we could read; they are not
  * checked here. The tables print ft-in rounded down and measure spans horizontally; we accept −1 in to +2 in,

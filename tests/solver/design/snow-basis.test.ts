@@ -9,7 +9,7 @@ import { findSawnSize, sawnValuesForSize, sizeFactorFor, STARTER_TABLES } from "
  * ASCE 7-16 §7.3, Eq. 7.3-1: pf = 0.7 Ce Ct Is pg; §7.3.4: pm = Is pg (pg ≤ 20 psf) or 20 Is (pg > 20 psf).
  * ASCE 7-16 §2.4.1 (ASD): D; D + L; D + (Lr or S); D + 0.75L + 0.75(Lr or S) — snow at full value.
  * ASCE 7-22 §2.4.1 (ASD): the same with 0.7S (strength-level ground snow maps).
- * Sources: ASCE 7 §2.4.1 and §7.3 as transcribed on public code pages (callout.app "ASCE 7 §2.4.1",
+ * Sources: ASCE 7 §2.4.1 and §7.3 as reproduced on public code pages (callout.app "ASCE 7 §2.4.1",
  * "ASCE 7 §7.3"; engineeringexamples.net for Eq. 7.3-1 with Is); NDS 2018 Table 2.3.2 for CD.
  */
 
