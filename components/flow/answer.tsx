@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useEffect, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
 import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
@@ -14,10 +15,15 @@ import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
-import { AnswerDiagrams } from "./answer-diagrams";
-import { MemberDetail } from "./member-detail";
 import { useSize } from "./use-design";
 import { checkDetail, checkTitle } from "./words";
+
+// the diagrams (d3) and the full check load with the answer, not with the flow's first screen
+const AnswerDiagrams = dynamic(() => import("./answer-diagrams").then((m) => m.AnswerDiagrams), {
+  ssr: false,
+  loading: () => <Skeleton width="100%" height="40rem" />,
+});
+const MemberDetail = dynamic(() => import("./member-detail").then((m) => m.MemberDetail), { ssr: false });
 
 export type AnswerProps = {
   state: FlowState;

@@ -6,7 +6,7 @@
 import { CAUTION, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest } from "@/lib/flow/request";
-import { KIND_LABELS, mainSpanFt, sortedSupports, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
+import { KIND_LABELS, mainSpanFt, sortedSupports, SUPPORT_WORDS, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
 import { answerFacts, spacingOf } from "@/lib/flow/summary";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
@@ -127,7 +127,7 @@ function fmtNumber(v: number): string {
 }
 
 function widthWords(state: FlowState): string {
-  return state.width.mode === "spacing" ? `${fmtNumber(state.width.spacingIn)} in on centre` : `${fmtNumber(state.width.tributaryFt)} ft tributary width`;
+  return state.width.mode === "spacing" ? `${fmtNumber(state.width.spacingIn)} in on center` : `${fmtNumber(state.width.tributaryFt)} ft tributary width`;
 }
 
 function materialWords(state: FlowState): string {
@@ -150,7 +150,7 @@ function materialWords(state: FlowState): string {
 
 function inputRows(state: FlowState): [string, string][] {
   const supports = sortedSupports(state.supports)
-    .map((s) => `${s.type} at ${formatFeetInches(s.x)}`)
+    .map((s) => `${SUPPORT_WORDS[s.type].short} at ${formatFeetInches(s.x)}`)
     .join(", ");
   const rows: [string, string][] = [
     ["Member", KIND_LABELS[state.kind]],
