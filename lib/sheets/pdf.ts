@@ -170,7 +170,7 @@ export class SheetWriter {
     doc.moveDown(0.3);
   }
 
-  /** A ratio bar with a marked 100% line, a word and a percentage: never colour alone. */
+  /** A ratio bar with a marked 100% line, a word and a percentage: never color alone. */
   ratioBar(x: number, y: number, w: number, ratio: number): void {
     const { doc } = this;
     const full = w / 1.5;

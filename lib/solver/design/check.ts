@@ -274,7 +274,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
       a.push(inc.basis);
       a.push(resolveCr(member, c.repetitive, input.kind, input.spacingIn).basis);
     }
-    a.push("span taken centre to centre of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
+    a.push("span taken center to center of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
     a.push(

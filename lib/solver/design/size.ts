@@ -439,7 +439,7 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
     governing: failGov,
     atMaxLength: false,
     check: best,
-    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.lengthFt) ? "centre to centre of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
+    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.lengthFt) ? "center to center of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
   };
 }
 
