@@ -106,32 +106,37 @@ function CandidateCard({
   const verdict = ratioVerdict(candidate.ratio);
   return (
     <li>
-      <button
-        type="button"
-        onClick={onOpen}
+      {/* The card reads as text; its one control is "Full check, every factor", named by those very words (and the
+          member, for a screen reader), stretched over the whole card so a tap anywhere on it opens the check. */}
+      <div
         className={cx(
-          "flex w-full flex-col gap-3 rounded-card border-2 bg-paper-raised p-4 text-left hover:border-spruce",
+          "relative flex w-full flex-col gap-3 rounded-card border-2 bg-paper-raised p-4 text-left hover:border-spruce",
           chosen ? "border-amber border-l-8" : "border-rule",
         )}
-        aria-label={`${candidate.label}: ${verdict.text}, ${checkTitle(candidate.governing)} governs.${chosen ? " Chosen." : ""} Open the full check.`}
       >
-        <span className="flex flex-wrap items-center justify-between gap-2">
-          <span className="text-xl font-bold text-ink">{shortLabel(candidate.member, candidate.label)}</span>
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h3 className="text-xl font-bold text-ink">{shortLabel(candidate.member, candidate.label)}</h3>
           <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} />
-        </span>
-        <span className="text-ink-soft">
+        </div>
+        <p className="text-ink-soft">
           {candidate.label} · {checkTitle(candidate.governing)} governs · {Math.round(candidate.weightPlf * 10) / 10} plf
           {chosen ? <span className="ml-2 rounded bg-amber-light px-1.5 font-bold text-ink">chosen</span> : null}
-        </span>
-        <span className="flex min-h-[13.5rem] flex-col gap-2">
+        </p>
+        <div className="flex min-h-[13.5rem] flex-col gap-2">
           {check
             ? check.checks.map((c) => (
                 <RatioBar key={c.name} ratio={c.ratio} label={checkTitle(c.name)} governing={c.name === check.governing} detail={checkDetail(c)} />
               ))
             : Array.from({ length: 4 }, (_, i) => <Skeleton key={i} width="100%" height="2.75rem" />)}
-        </span>
-        <span className="font-bold text-spruce underline underline-offset-4">Full check, every factor</span>
-      </button>
+        </div>
+        <button
+          type="button"
+          onClick={onOpen}
+          className="min-h-touch self-start text-left font-bold text-spruce underline underline-offset-4 after:absolute after:inset-0 after:rounded-card after:content-['']"
+        >
+          Full check, every factor<span className="sr-only"> of {candidate.label}</span>
+        </button>
+      </div>
     </li>
   );
 }

@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useState, type MouseEvent } from "react";
+import { useId, useLayoutEffect, useRef, useState, type MouseEvent } from "react";
 import { TextField } from "@/components/ui/field";
 import { formatFeetInches, parseLength } from "@/lib/flow/length";
 import { useTypedDraft } from "./use-typed-draft";
@@ -75,13 +75,21 @@ export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, excl
   };
   const { text, editing: focused, error, setText, checkNow, inputProps } = useTypedDraft(inputId, formatFeetInches(valueFt), check);
 
+  // where the caret goes once a key's mark is in the field (set as the field renders, before anything else is typed)
+  const caret = useRef<number | null>(null);
+  useLayoutEffect(() => {
+    if (caret.current === null) return;
+    const input = document.getElementById(inputId);
+    if (input instanceof HTMLInputElement) input.setSelectionRange(caret.current, caret.current);
+    caret.current = null;
+  });
   const type = (insert: string) => {
     const input = document.getElementById(inputId);
     if (!(input instanceof HTMLInputElement)) return;
     const start = input.selectionStart ?? text.length;
     const end = input.selectionEnd ?? text.length;
+    caret.current = start + insert.length;
     setText(text.slice(0, start) + insert + text.slice(end));
-    requestAnimationFrame(() => input.setSelectionRange(start + insert.length, start + insert.length));
   };
   // the keys keep the focus (and the phone's keypad) in the field
   const keepFocus = (event: MouseEvent) => event.preventDefault();

@@ -28,7 +28,7 @@ export const MARGIN = 48;
 
 export const PDF_COLORS = {
   ink: "#15191E",
-  graphite: "#5A6270",
+  graphite: "#434A56",
   rule: "#D8D4C8",
   spruce: "#1E5B4F",
   sound: "#1F7A3A",

@@ -48,7 +48,7 @@ describe("sizing flow at 390x844", () => {
 
     // Tap a member for its full check: every check with its ratio, the factors, the loads
     await page
-      .getByRole("button", { name: /Open the full check/ })
+      .getByRole("button", { name: /Full check, every factor/ })
       .first()
       .click();
     const detail = page.getByRole("dialog");
