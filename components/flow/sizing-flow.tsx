@@ -133,14 +133,14 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   // builder tried to go on with one (the step then says so and stays)
   const problems = useRef(new Map<string, string>());
   const [problemCount, setProblemCount] = useState(0);
-  const [held, setHeld] = useState<string | null>(null);
+  const [held, setHeld] = useState(false);
   const reportProblem = useCallback<ReportFieldProblem>((fieldId, message) => {
     const had = problems.current.get(fieldId) ?? null;
     if (had === message) return;
     if (message === null) problems.current.delete(fieldId);
     else problems.current.set(fieldId, message);
     setProblemCount(problems.current.size);
-    if (problems.current.size === 0) setHeld(null);
+    if (problems.current.size === 0) setHeld(false);
   }, []);
   const editJob = editing?.jobId;
   const editMember = editing?.memberId;
@@ -205,17 +205,16 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   const update = useCallback((fn: (s: FlowState) => FlowState) => setLocation((loc) => ({ ...loc, state: fn(loc.state) })), []);
 
   const goTo = useCallback((next: FlowStepId) => {
-    const [first] = problems.current.entries();
-    if (first) {
+    const [fieldId] = problems.current.keys();
+    if (fieldId) {
       // a bad entry holds the step: going on would carry the value from before as if it were the one typed
-      const [fieldId, message] = first;
-      setHeld(message);
+      setHeld(true);
       const field = document.getElementById(fieldId);
       field?.scrollIntoView({ block: "center" });
       field?.focus();
       return;
     }
-    setHeld(null);
+    setHeld(false);
     setLocation((loc) => ({ ...loc, step: next }));
     window.scrollTo({ top: 0 });
     requestAnimationFrame(() => headingRef.current?.focus());
@@ -231,11 +230,14 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   };
 
   const returnTo = `/size${flowSearch({ state, step: "answer" }, extra)}&save=1`;
-  const summaryLine = (
-    <span className="font-bold tabular-nums">
-      {KIND_LABELS[state.kind]} · {spanWords(state)}
-    </span>
-  );
+  const summaryLine =
+    problemCount > 0 ? (
+      <span className="font-bold text-over-ink">Fix the field marked in red</span>
+    ) : (
+      <span className="font-bold tabular-nums">
+        {KIND_LABELS[state.kind]} · {spanWords(state)}
+      </span>
+    );
 
   const saveAction = signedIn ? (
     <Button
@@ -302,7 +304,7 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
           </h2>
           {held && problemCount > 0 ? (
             <p role="alert" className="rounded-card border-2 border-over bg-over-bg p-3 font-bold text-over-ink" data-testid="step-held">
-              Fix this first, then go on: {held}
+              Not yet: fix the field marked in red, then go on.
             </p>
           ) : null}
           <FieldProblemsContext.Provider value={reportProblem}>{stepBody}</FieldProblemsContext.Provider>

@@ -43,7 +43,7 @@ export default async function CrewPage({ params }: CrewPageProps) {
       </a>
       <p className="flex items-center gap-2 rounded-card border-2 border-caution bg-caution-bg px-3 py-2 font-bold text-caution-ink">
         <WarningIcon className="h-5 w-5 shrink-0" />
-        <a href="#caution" className="text-caution-ink">
+        <a href="#caution" className="inline-flex min-h-touch items-center text-caution-ink">
           Check before you build: read the caution below the schedule.
         </a>
       </p>
