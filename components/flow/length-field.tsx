@@ -117,7 +117,7 @@ export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, excl
         }}
       />
       {focused ? (
-        <div role="group" aria-label={`Marks for ${label}`} className="mt-2 flex gap-1.5" data-testid="length-keys">
+        <div role="group" aria-label="Length marks" className="mt-2 flex gap-1.5" data-testid="length-keys">
           {KEYS.map((key) => (
             <button
               key={key.shown}
