@@ -60,7 +60,7 @@ if [ "$QUICK" = 0 ]; then
       node_modules/.bin/tsx scripts/db.ts migrate && node_modules/.bin/tsx scripts/db.ts seed &&
         { [ ! -f scripts/stripe-setup.ts ] || node_modules/.bin/tsx scripts/stripe-setup.ts; }
     ) > .data/logs/e2e-db.log 2>&1 || { record e2e-db 1; cat .data/logs/e2e-db.log >&2; }
-    DATABASE_URL="$E2E_DATABASE_URL" NODE_ENV=production LOG_LEVEL=warn \
+    DATABASE_URL="$E2E_DATABASE_URL" NODE_ENV=production LOG_LEVEL=warn SPANLARK_WORKERS="${SPANLARK_WORKERS:-1}" \
       node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT" > .data/logs/e2e-app.log 2>&1 &
     SERVICE_PIDS+=($!)
     if wait_for_url "$E2E_BASE_URL/api/health" "the app"; then

@@ -84,17 +84,19 @@ async function findByEmail(email: string): Promise<User | null> {
   return User.findOne({ where: { email: normalizeEmail(email) } });
 }
 
-async function mailVerification(user: User): Promise<void> {
+/** The confirmation link; `returnTo` (a safe path, lib/auth/schemas.ts) is where the confirmed builder carries on. */
+async function mailVerification(user: User, returnTo: string | null = null): Promise<void> {
   const token = await issueToken(user.id, "verify-email");
   const hours = TOKEN_LIFETIME_MS["verify-email"] / HOUR;
-  await sendMail({ to: user.email, ...verifyEmailMail({ name: user.name, link: link("/verify", { token }), validHours: hours }) });
+  const params: Record<string, string> = returnTo ? { token, next: returnTo } : { token };
+  await sendMail({ to: user.email, ...verifyEmailMail({ name: user.name, link: link("/verify", params), validHours: hours }) });
 }
 
 /**
  * Opens a builder account and mails a confirmation link. An address that already has an account gets a
  * mail saying so instead; the caller answers the same way in both cases.
  */
-export async function signUp(input: SignUpInput, ip: string): Promise<void> {
+export async function signUp(input: Omit<SignUpInput, "returnTo"> & { returnTo?: string | null }, ip: string): Promise<void> {
   await atLeast(PUBLIC_FLOW_MIN_MS, async () => {
     throwIfBlocked(await hitAll(limitsFor("sign-up", input.email, ip)));
     const passwordHash = await hashPassword(input.password);
@@ -117,7 +119,7 @@ export async function signUp(input: SignUpInput, ip: string): Promise<void> {
         role: "builder",
         emailVerifiedAt: null,
       });
-      runInBackground("mail verify-email", () => mailVerification(user));
+      runInBackground("mail verify-email", () => mailVerification(user, input.returnTo ?? null));
     } catch (err) {
       // Two sign-ups with one address at the same moment: the second is an existing account.
       if (!(err instanceof UniqueConstraintError)) throw err;
@@ -126,11 +128,11 @@ export async function signUp(input: SignUpInput, ip: string): Promise<void> {
 }
 
 /** Mails a fresh confirmation link to an unconfirmed account; answers the same for any address. */
-export async function resendVerification(email: string, ip: string): Promise<void> {
+export async function resendVerification(email: string, ip: string, returnTo: string | null = null): Promise<void> {
   await atLeast(PUBLIC_FLOW_MIN_MS, async () => {
     throwIfBlocked(await hitAll(limitsFor("sign-up", email, ip)));
     const user = await findByEmail(email);
-    if (user && !user.emailVerifiedAt) runInBackground("mail verify-email", () => mailVerification(user));
+    if (user && !user.emailVerifiedAt) runInBackground("mail verify-email", () => mailVerification(user, returnTo));
   });
 }
 
