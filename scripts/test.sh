@@ -25,6 +25,7 @@ if [ -z "${EXTERNAL_DATABASE:-}" ]; then
   bash scripts/pg.sh recreate-db spanlark_test >/dev/null
   bash scripts/pg.sh recreate-db spanlark_e2e >/dev/null
   E2E_DATABASE_URL="$(bash scripts/pg.sh url spanlark_e2e)"
+  export E2E_OWNS_PG=1   # browser tests may add databases to this cluster, or stop and start it (database-down, instances)
 else
   E2E_DATABASE_URL="${E2E_DATABASE_URL:-$DATABASE_URL}"
 fi
