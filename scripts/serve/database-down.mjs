@@ -86,57 +86,57 @@ export function isPageRequest(req) {
 /**
  * Wraps `res` so that a page response with a status of 500 or more is held back until the database has been
  * probed: then either the plain 503 page or the original response is sent. Other responses pass untouched.
+ * The wrappers stay in place and call the methods they wrapped: Next.js wraps them again (compression), and
+ * putting the originals back would cut its wrappers out.
  */
 export function holdFailedPages(req, res, isDown = databaseIsDown) {
   if (!isPageRequest(req)) return;
   const original = { writeHead: res.writeHead, write: res.write, end: res.end, flushHeaders: res.flushHeaders };
-  const restore = () => Object.assign(res, original);
   const held = []; // [method, args]
   let holding = null; // null = undecided, true = holding back a failure, false = passing through
 
   const decide = (status) => {
-    if (holding !== null) return holding;
-    holding = (status ?? res.statusCode) >= 500;
-    if (!holding) restore();
+    if (holding === null) holding = (status ?? res.statusCode) >= 500;
     return holding;
   };
 
   const finish = async () => {
     const down = await isDown().catch(() => false);
-    restore();
+    holding = false;
     if (down && !res.headersSent) {
       for (const name of res.getHeaderNames()) res.removeHeader(name);
-      res.writeHead(503, {
+      original.writeHead.call(res, 503, {
         "content-type": "text/html; charset=utf-8",
         "retry-after": String(RETRY_AFTER_SECONDS),
         "cache-control": "no-store",
         "content-security-policy": "default-src 'none'; style-src 'unsafe-inline'; base-uri 'none'; form-action 'none'; frame-ancestors 'none'",
         "x-content-type-options": "nosniff",
       });
-      res.end(req.method === "HEAD" ? undefined : DATABASE_DOWN_PAGE);
+      original.end.call(res, req.method === "HEAD" ? undefined : DATABASE_DOWN_PAGE);
       return;
     }
-    for (const [method, args] of held) res[method](...args);
+    for (const [method, args] of held) original[method].apply(res, args);
   };
 
   res.writeHead = function (status, ...rest) {
-    if (!decide(status)) return res.writeHead(status, ...rest);
+    if (!decide(status)) return original.writeHead.call(res, status, ...rest);
     res.statusCode = status;
-    held.push(["writeHead", [status, ...rest]]);
+    // Held back, the headers are not sent, so each write asks for them again (Node's implicit header): keep the first.
+    if (!held.some(([method]) => method === "writeHead")) held.push(["writeHead", [status, ...rest]]);
     return res;
   };
   res.flushHeaders = function () {
-    if (!decide()) return res.flushHeaders();
+    if (!decide()) return original.flushHeaders.call(res);
   };
   res.write = function (...args) {
-    if (!decide()) return res.write(...args);
+    if (!decide()) return original.write.apply(res, args);
     const callback = typeof args.at(-1) === "function" ? args.pop() : null;
     held.push(["write", args]);
     if (callback) queueMicrotask(() => callback());
     return true;
   };
   res.end = function (...args) {
-    if (!decide()) return res.end(...args);
+    if (!decide()) return original.end.apply(res, args);
     const callback = typeof args.at(-1) === "function" ? args.pop() : null;
     held.push(["end", args]);
     void finish().finally(() => callback?.());

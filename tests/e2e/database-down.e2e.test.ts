@@ -42,6 +42,8 @@ describe.skipIf(!ownsTestCluster())("the database stops under the running app, t
     await builder.signIn(baseUrl(), BUILDER.email, BUILDER.password);
     const jobsBefore = await builder.fetch(`${baseUrl()}/jobs`);
     expect(jobsBefore.status).toBe(200);
+    const jobsPage = await jobsBefore.text(); // the whole page arrives and the response ends
+    expect(jobsPage).toContain("</html>");
     const checked = await postJson("/api/check", joist); // the app now holds the current tables in memory
     expect(checked.status).toBe(200);
     const version = ((await checked.json()) as { tables: string }).tables;
@@ -99,6 +101,7 @@ describe.skipIf(!ownsTestCluster())("the database stops under the running app, t
       500,
     );
     expect(back.value).toBe(200);
+    expect(await (await builder.fetch(`${baseUrl()}/jobs`)).text()).toContain("</html>");
     expect((await fetch(`${baseUrl()}/api/health`)).status).toBe(200);
     expect((await postJson("/api/check", joist)).status).toBe(200);
   }, 120_000);

@@ -92,7 +92,7 @@ describe.skipIf(!ownsTestCluster())("two app processes on one database", () => {
       rows: Array<{ key: string; values: Record<string, string> }>;
     };
     expect(table.version.id).toBe(before.tables);
-    const row = table.rows.find((r) => r.values.species === "Hem-Fir" && r.values.grade === "No.2" && /dimension/i.test(r.values.sizeClass ?? ""));
+    const row = table.rows.find((r) => r.values.species === "Hem-Fir" && r.values.grade === "No.2" && /dimension/i.test(r.values.size_class ?? ""));
     expect(row, "a Hem-Fir No.2 dimension lumber row in the seeded tables").toBeTruthy();
     const fb = Number(row!.values.Fb_psi);
     const edited = await admin.json(`${a.url}/api/admin/tables/sawn-values/rows`, "PUT", {

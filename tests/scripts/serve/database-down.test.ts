@@ -5,6 +5,8 @@
 import { createServer, type IncomingMessage, type ServerResponse } from "node:http";
 import type { AddressInfo } from "node:net";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
+// @ts-expect-error -- Next.js's own copy of the compression middleware ships without types
+import compression from "next/dist/compiled/compression";
 import { DATABASE_DOWN_PAGE, databaseIsDown, holdFailedPages, isPageRequest } from "@/scripts/serve/database-down.mjs";
 
 let down = true;
@@ -23,9 +25,12 @@ function app(req: IncomingMessage, res: ServerResponse): void {
   setTimeout(() => res.end(`by the app, ${status}</p>`), 5);
 }
 
+// Next.js compresses responses by wrapping res.write/res.end again after the server's wrappers; the same
+// compression middleware Next.js ships runs here, so the wrappers are tested the way they are layered in the app.
+const compress = compression({ threshold: 0 });
 const server = createServer((req, res) => {
   holdFailedPages(req, res, isDown);
-  app(req, res);
+  compress(req, res, () => app(req, res));
 });
 let base = "";
 beforeAll(async () => {
@@ -50,7 +55,7 @@ describe("pages while the database is down", () => {
 
   test("the same failure with the database answering is the app's own response, unchanged", async () => {
     down = false;
-    const res = await fetch(`${base}/jobs?status=500`);
+    const res = await fetch(`${base}/jobs?status=500`, { headers: { "accept-encoding": "gzip" } });
     expect(res.status).toBe(500);
     expect(res.headers.get("x-from-app")).toBe("yes");
     expect(await res.text()).toBe("<p>rendered by the app, 500</p>");
@@ -59,8 +64,9 @@ describe("pages while the database is down", () => {
   test("a page that works, or an API route, is never held back nor probed", async () => {
     down = true;
     const before = probes;
-    const ok = await fetch(`${base}/size?status=200`);
+    const ok = await fetch(`${base}/size?status=200`, { headers: { "accept-encoding": "gzip" } });
     expect(ok.status).toBe(200);
+    expect(ok.headers.get("content-encoding")).toBe("gzip"); // fetch unzips it: the whole body arrived, and the response ended
     expect(await ok.text()).toBe("<p>rendered by the app, 200</p>");
     const api = await fetch(`${base}/api/jobs?status=503`);
     expect(api.status).toBe(503);
