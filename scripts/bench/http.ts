@@ -3,7 +3,7 @@
 // node:http server on the same machine as the ceiling. `npm run bench http`; needs the built app (`npx next build`)
 // and a PostgreSQL: DATABASE_URL, or the local cluster (scripts/pg.sh, SPANLARK_PG_PORT) which it starts.
 // Every run is bounded (BENCH_HTTP_SECONDS, default 10 s, 50 connections) and on 127.0.0.1 only.
-import { execFileSync, spawn, type ChildProcess } from "node:child_process";
+import { execFileSync, spawn, spawnSync, type ChildProcess } from "node:child_process";
 import { randomBytes } from "node:crypto";
 import { existsSync } from "node:fs";
 import { availableParallelism, loadavg } from "node:os";
@@ -25,9 +25,14 @@ interface Figures {
   non2xx: number;
 }
 
+/** Set when this benchmark started the local cluster, so it stops it again. */
+let startedCluster = false;
+
 function databaseUrl(): string {
   if (process.env.DATABASE_URL) return process.env.DATABASE_URL;
-  execFileSync("bash", ["scripts/pg.sh", "start"], { cwd: ROOT, stdio: "ignore" });
+  const started = spawnSync("bash", ["scripts/pg.sh", "start"], { cwd: ROOT, encoding: "utf8" });
+  if (started.status !== 0) throw new Error(`scripts/pg.sh start failed: ${started.stderr}`);
+  startedCluster = /started on/.test(started.stderr);
   execFileSync("bash", ["scripts/pg.sh", "ensure-db", "spanlark_bench"], { cwd: ROOT, stdio: "ignore" });
   return execFileSync("bash", ["scripts/pg.sh", "url", "spanlark_bench"], { cwd: ROOT }).toString().trim();
 }
@@ -117,8 +122,13 @@ export async function run(): Promise<void> {
   const dbUrl = databaseUrl();
   console.log(`\nHTTP throughput, GET /api/health (answers after a "SELECT 1"): ${CONNECTIONS} connections, ${SECONDS} s each, ${cores} cores`);
   console.log(`load average before: ${loadavg()[0]!.toFixed(1)}`);
-  const rows = [await bareNode(), await spanlark(1, dbUrl)];
-  if (cores > 1) rows.push(await spanlark(cores, dbUrl));
+  const rows = [await bareNode()];
+  try {
+    rows.push(await spanlark(1, dbUrl));
+    if (cores > 1) rows.push(await spanlark(cores, dbUrl));
+  } finally {
+    if (startedCluster) execFileSync("bash", ["scripts/pg.sh", "stop"], { cwd: ROOT, stdio: "ignore" });
+  }
   console.log("| server | requests/s | p50 | p99 | errors | non-2xx |");
   console.log("|---|---|---|---|---|---|");
   for (const r of rows) {
