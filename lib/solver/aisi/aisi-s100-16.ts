@@ -71,7 +71,7 @@ export function midlinePoints(s: CfsDimensions): [number, number][] {
     pts.push([xl, D / 2 - lip]);
     arc(xl - r, yf - r, 0, Math.PI / 2);
   } else {
-    pts.push([xl, yf]);
+    pts.push([B, yf]); // a track's flange runs to its free edge
   }
   arc(xw + r, yf - r, Math.PI / 2, Math.PI);
   arc(xw + r, -yf + r, Math.PI, (3 * Math.PI) / 2);
@@ -79,7 +79,7 @@ export function midlinePoints(s: CfsDimensions): [number, number][] {
     arc(xl - r, -yf + r, (3 * Math.PI) / 2, 2 * Math.PI);
     pts.push([xl, -D / 2 + lip]);
   } else {
-    pts.push([xl, -yf]);
+    pts.push([B, -yf]);
   }
   return pts;
 }
@@ -333,7 +333,9 @@ export function effectiveSection(s: CfsDimensions, f: number): EffectiveSection 
   }
   const yna = -shift;
   const Ie = els.reduce((a, e) => a + e.Io + e.A * (e.y - yna) ** 2, 0);
-  return { Ie, Se: Ie / (D / 2 - yna), shift };
+  // the linear method's corner figures differ from the arc by a few parts in ten thousand: never above the gross section
+  const g = grossProperties(s);
+  return { Ie: Math.min(Ie, g.Ix), Se: Math.min(Ie / (D / 2 - yna), g.Sx), shift };
 }
 
 // ---------------------------------------------------------------------------------------------------
