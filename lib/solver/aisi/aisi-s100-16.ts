@@ -436,7 +436,12 @@ export function effectiveAreaUniform(s: CfsDimensions, f: number): number {
 }
 
 // ---------------------------------------------------------------------------------------------------
-// Chapter H: combined bending and web crippling
+// Chapter H: combined bending and shear, combined bending and web crippling
+
+/** §H2 Eq. H2-1 (unreinforced webs): √((M/Maℓo)² + (V/Va)²) ≤ 1.0, M and V at the same place, Maℓo and Va the available strengths. */
+export function bendingShearRatio(M: number, Malo: number, V: number, Va: number): number {
+  return Math.sqrt((M / Malo) ** 2 + (V / Va) ** 2); // Eq. H2-1
+}
 
 /**
  * §H3 Eq. H3-1 (shapes with single unreinforced webs): 0.91 (P/Pn) + (M/Mnℓo) ≤ 1.33/Ω (ASD) or 1.33 φ
@@ -446,4 +451,11 @@ export function effectiveAreaUniform(s: CfsDimensions, f: number): number {
 export function bendingCripplingRatio(P: number, Pn: number, M: number, Mnlo: number, lrfd: boolean): number {
   const lhs = 0.91 * (P / Pn) + M / Mnlo; // Eq. H3-1
   return lhs / (lrfd ? 1.33 * PHI_H3 : 1.33 / OMEGA_H3);
+}
+
+/** Moment gradient factor Cb, §F2.1.1: 12.5 Mmax / (2.5 Mmax + 3 MA + 4 MB + 3 MC) (absolute values). */
+export function momentGradientCb(Mmax: number, MA: number, MB: number, MC: number): number {
+  const m = Math.abs(Mmax);
+  if (m === 0) return 1;
+  return (12.5 * m) / (2.5 * m + 3 * Math.abs(MA) + 4 * Math.abs(MB) + 3 * Math.abs(MC));
 }
