@@ -215,6 +215,14 @@ const FACTOR_NAMES: Record<string, string> = {
   Lp: "Lp, ft",
   Lr: "Lr, ft",
   Lb: "Lb, ft",
+  EKsi: "E, ksi",
+  CbLtb: "Cb, moment gradient",
+  Fn: "Fn, ksi",
+  Se: "Se, in³",
+  Ieff: "I effective at service, in⁴",
+  bearingStiffeners: "Bearing stiffeners at supports",
+  pieces: "C-sections",
+  standard: "Standard",
 };
 
 function factorName(key: string): string {

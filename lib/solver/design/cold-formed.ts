@@ -70,14 +70,14 @@ export interface CfsFactors {
   method: "asd" | "lrfd";
   standard: "AISI S100-16";
   Fy: number;
-  /** ksi */
-  E: number;
+  /** modulus of elasticity, ksi */
+  EKsi: number;
   /** Ω or φ of flexure */
   omegaB: number | null;
   phiB: number | null;
   /** governing segment: unbraced length ft, Cb, Fn ksi, effective section modulus of the member at Fn in³, Mnℓ kip-ft */
   Lb: number;
-  Cb: number;
+  CbLtb: number;
   Fn: number;
   Se: number;
   Mn: number;
@@ -85,8 +85,8 @@ export interface CfsFactors {
   Vn: number;
   /** effective moment of inertia at the service moment, in⁴ (gross Ix when the whole section works) */
   Ieff: number;
-  /** supports (numbered from 1) that need a bearing stiffener */
-  bearingStiffeners: number[];
+  /** the supports (numbered from 1) that need a bearing stiffener, in words: "1, 2" or "none" */
+  bearingStiffeners: string;
   pieces: number;
 }
 
@@ -415,17 +415,23 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
       method: ctx.method,
       standard: "AISI S100-16",
       Fy: d.Fy,
-      E: E_CFS_KSI,
+      EKsi: E_CFS_KSI,
       omegaB: lrfd ? null : OMEGA_FLEXURE,
       phiB: lrfd ? PHI_FLEXURE : null,
       Lb: round(gov.Lb, 3),
-      Cb: round(gov.Cb, 3),
+      CbLtb: round(gov.Cb, 3),
       Fn: round(gov.Fn, 3),
       Se: round(gov.Se, 4),
       Mn: round(gov.Mn / 12, 3),
       Vn: round(shearN.Vn * n, 3),
       Ieff: round(Ieff, 4),
-      bearingStiffeners: [...needs].sort((a, b) => a - b).map((j) => j + 1),
+      bearingStiffeners:
+        needs.size === 0
+          ? "none"
+          : [...needs]
+              .sort((a, b) => a - b)
+              .map((j) => j + 1)
+              .join(", "),
       pieces: n,
     },
   };

@@ -356,3 +356,16 @@ describe("Prescriptive Method (1997) Table 5.4, two continuous spans, 33 ksi", (
     expect(ratio).toBeLessThan(1.25);
   });
 });
+
+describe("what is not checked for steel joists is said with every cold-formed answer", () => {
+  test("a C-joist's check and a search that returns C-joists carry the cold-formed items; a sawn joist's does not", () => {
+    const cfs = checkMember(floor("800S162-54", 14), T);
+    expect(cfs.notChecked.join(" ")).toMatch(/web holes beyond the standard punchouts/);
+    expect(cfs.notChecked.join(" ")).toMatch(/screws, clips/);
+    expect(cfs.notChecked.join(" ")).toMatch(/bottom flange/);
+    const sawn = checkMember(floor("x", 14, { member: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10" } }), T);
+    expect(sawn.notChecked.join(" ")).not.toMatch(/Cold-formed/);
+    const search = sizeMember({ ...floor("x", 14), member: { material: "cfs" }, limit: 3 }, T);
+    expect(search.notChecked.join(" ")).toMatch(/Cold-formed steel: web holes/);
+  });
+});
