@@ -141,7 +141,7 @@ export function resolveMemberUnchecked(spec: MemberSpec, tables: MaterialTables)
       d: section.depth,
       I: section.Ix * pieces,
       weightPlf: section.weightPlf * pieces,
-      sources: [section.source, "AISI S100-16"],
+      sources: [section.source, AISI_SOURCE],
       costPerFoot: unit === undefined ? undefined : unit * pieces,
     };
   }
@@ -248,6 +248,10 @@ export function withPlies(m: WoodMember, plies: number): WoodMember {
     costPerFoot: m.costPerFoot === undefined ? undefined : m.costPerFoot * k,
   };
 }
+
+/** The checks' standard, as the sheet's sources list it. */
+export const AISI_SOURCE =
+  "AISI S100-16 (North American Specification for the Design of Cold-Formed Steel Structural Members, 2016); web crippling Table G5-2 checked against a published copy (runtosolve/AISIS100.jl); bearing stiffener Pn = 0.7(Pwc + Ae Fy) from memory — verify";
 
 /** "800S162-54", "2-800S162-54 back-to-back header", "2-800S162-54 box header". */
 export function cfsLabel(section: string, assembly: "single" | "back-to-back" | "box"): string {
