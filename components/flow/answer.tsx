@@ -3,6 +3,7 @@
 import dynamic from "next/dynamic";
 import { useEffect, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
+import { NOT_CHECKED_COLD_FORMED } from "@/lib/caution";
 import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
 import { Skeleton, Spinner } from "@/components/ui/spinner";
 import { StatusBadge } from "@/components/ui/status-badge";
@@ -219,7 +220,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
             </div>
           )}
         </div>
-        <Caution />
+        <Caution also={chosenCandidate?.member.material === "cfs" ? NOT_CHECKED_COLD_FORMED : undefined} />
       </section>
 
       {variant === "full" ? (

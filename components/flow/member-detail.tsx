@@ -51,6 +51,16 @@ const FACTOR_WORDS: Record<string, string> = {
   Lb: "Lb, unbraced length (ft)",
   Mn: "Mn (kip-ft)",
   omegaB: "Ωb",
+  phiB: "φb",
+  standard: "Standard",
+  EKsi: "E (ksi)",
+  CbLtb: "Cb, moment gradient",
+  Fn: "Fn, flexural stress (ksi)",
+  Se: "Se, effective section modulus (in³)",
+  Vn: "Vn, shear strength (kip)",
+  Ieff: "I, effective at service (in⁴)",
+  bearingStiffeners: "Bearing stiffeners at supports",
+  pieces: "C-sections",
 };
 
 function fmt(v: number): string {

@@ -1,4 +1,5 @@
 import "server-only";
+import { notCheckedFor } from "@/lib/caution";
 import { Op } from "sequelize";
 import { getSequelize } from "@/lib/db";
 import { env } from "@/lib/env";
@@ -176,6 +177,8 @@ export interface CrewJobView {
   job: { name: string; siteAddress: string; notes: string };
   rows: ScheduleRow[];
   expiresAt: string | null;
+  /** what Spanlark does not check, for the members on this job (cold-formed steel adds its items) */
+  notChecked: readonly string[];
 }
 
 /**
@@ -204,5 +207,6 @@ export async function openCrewLink(token: string, now: Date = new Date()): Promi
     job: { name: job.name, siteAddress: job.siteAddress, notes: job.notes },
     rows: members.map((m) => scheduleRow({ id: m.id, label: m.label, kind: m.kind, resultSummary: m.resultSummary })),
     expiresAt: link.expiresAt?.toISOString() ?? null,
+    notChecked: notCheckedFor(members.map((m) => m.resultSummary?.spec.material)),
   };
 }

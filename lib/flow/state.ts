@@ -51,7 +51,7 @@ export type FlowLineLoad = FlowState["lineLoads"][number];
 export type FlowMaterial = FlowState["material"];
 export type FlowLimits = FlowState["limits"];
 
-export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "ijoist", "steel"] as const;
+export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "ijoist", "steel", "cfs"] as const;
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
 
 /** The wall a member of this state must fit, or null. */

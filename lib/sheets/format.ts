@@ -15,6 +15,8 @@ const CHECK_WORDS: Record<string, string> = {
   "web-yielding": "web yielding",
   "web-crippling": "web crippling",
   "web-compactness": "web compactness",
+  "bending-crippling": "bending with web crippling",
+  "bending-shear": "bending with shear",
 };
 
 export function checkWords(name: string | null): string {

@@ -3,7 +3,7 @@
  * Reprinting (the page, the PDF) reads only this: no solver, no tables, no member rows. So a sheet prints
  * the same numbers after the tables are edited or the member is changed. Pure: no database, no React.
  */
-import { CAUTION, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
+import { CAUTION, CAUTION_TITLE, notCheckedFor } from "@/lib/caution";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, SUPPORT_WORDS, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
@@ -146,6 +146,8 @@ function materialWords(state: FlowState): string {
       return m.product ? `Wood I-joists, ${m.product}` : "Wood I-joists (any series)";
     case "steel":
       return "Steel W-shape, A992";
+    case "cfs":
+      return Number(m.product) > 0 ? `Cold-formed steel C-sections, ${m.product} in flanges` : "Cold-formed steel C-sections (any flange)";
   }
 }
 
@@ -214,6 +216,14 @@ const FACTOR_NAMES: Record<string, string> = {
   Lp: "Lp, ft",
   Lr: "Lr, ft",
   Lb: "Lb, ft",
+  EKsi: "E, ksi",
+  CbLtb: "Cb, moment gradient",
+  Fn: "Fn, ksi",
+  Se: "Se, in³",
+  Ieff: "I effective at service, in⁴",
+  bearingStiffeners: "Bearing stiffeners at supports",
+  pieces: "C-sections",
+  standard: "Standard",
 };
 
 function factorName(key: string): string {
@@ -332,6 +342,6 @@ export function buildSheetSnapshot(source: SheetSource): SheetSnapshot {
     method: "asd",
     members,
     skipped,
-    caution: { title: CAUTION_TITLE, text: CAUTION, notChecked: [...NOT_CHECKED] },
+    caution: { title: CAUTION_TITLE, text: CAUTION, notChecked: [...notCheckedFor(source.members.map((m) => m.chosenMember?.material))] },
   };
 }

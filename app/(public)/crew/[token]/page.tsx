@@ -62,7 +62,7 @@ export default async function CrewPage({ params }: CrewPageProps) {
         <CrewSchedule rows={view.rows} />
       </section>
       <div id="caution" className="scroll-mt-20">
-        <Caution variant="full" />
+        <Caution variant="full" notChecked={view.notChecked} />
       </div>
       <p className="text-ink-soft">
         Loads are the largest at each support under the service load combinations. Jack studs are 1-1/2 in studs under each end of a header. Ask the builder
