@@ -13,6 +13,7 @@ const TITLES: Record<string, string> = {
   "web-compactness": "Web compactness",
   "bending-crippling": "Bending with web crippling",
   "bending-shear": "Bending with shear",
+  "thickness-scope": "Steel thickness outside the checked range",
 };
 
 /** The check's plain name. */

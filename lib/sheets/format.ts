@@ -17,6 +17,7 @@ const CHECK_WORDS: Record<string, string> = {
   "web-compactness": "web compactness",
   "bending-crippling": "bending with web crippling",
   "bending-shear": "bending with shear",
+  "thickness-scope": "steel thickness outside the checked range",
 };
 
 export function checkWords(name: string | null): string {

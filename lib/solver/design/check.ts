@@ -111,6 +111,7 @@ const CHECK_WORDS: Record<CheckName, string> = {
   "web-compactness": "web slenderness",
   "bending-crippling": "bending with web crippling",
   "bending-shear": "bending with shear",
+  "thickness-scope": "steel thickness outside the checked range",
 };
 
 /** A ratio as a percentage (lib/solver/design/ratio-percent.ts): a pass never reads 100 % unless it is exactly at it, a failure never 100 % or less. */

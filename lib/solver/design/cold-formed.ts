@@ -48,6 +48,9 @@ import { peakAbs } from "./load-model";
 import type { CfsAssembly, MemberSpec } from "./schema";
 import type { NamedCheck, SupportReaction } from "./types";
 
+/** The thinnest C-section Spanlark passes as a bending member, mils (see the scope check in evaluateCfs). */
+export const MIN_CHECKED_MILS = 43;
+
 export interface CfsMember {
   kind: "cfs";
   spec: MemberSpec;
@@ -186,6 +189,22 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
   const xs = model.xs;
   const checks: NamedCheck[] = [];
   const avail = (Rn: number, omega: number, phi: number) => (lrfd ? phi * Rn : Rn / omega);
+
+  // Scope: the published prescriptive span tables (tests/solver/design/cold-formed.test.ts) give shorter
+  // spans for 33 mil joists than these checks do, and the difference is not explained. Rather than pass a
+  // member a published table would not, sections thinner than 43 mil are outside what Spanlark checks.
+  if (s.mils < MIN_CHECKED_MILS) {
+    checks.push({
+      name: "thickness-scope",
+      demand: MIN_CHECKED_MILS,
+      capacity: s.mils,
+      unit: "mil",
+      ratio: MIN_CHECKED_MILS / s.mils,
+      combination: null,
+      x: null,
+      note: `${s.mils} mil is thinner than Spanlark checks (${MIN_CHECKED_MILS} mil and heavier): published prescriptive span tables give shorter spans for ${s.mils} mil joists than AISI S100-16 computes here — choose ${MIN_CHECKED_MILS} mil or heavier, or have an engineer check it`,
+    });
+  }
 
   // Flexure, each unbraced segment and strength combination (lb-ft demand against kip-in strength).
   let bend: NamedCheck | null = null;

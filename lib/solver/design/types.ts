@@ -18,7 +18,8 @@ export type CheckName =
   | "web-crippling"
   | "web-compactness"
   | "bending-crippling"
-  | "bending-shear";
+  | "bending-shear"
+  | "thickness-scope";
 
 export interface DesignCheck {
   name: CheckName;

@@ -93,12 +93,14 @@ describe("800S162-54 floor joist at 16 in o.c. over 14 ft, 10 psf dead + 40 psf 
 });
 
 describe("bearing stiffeners (AISI S100-16 §G5 and the bearing stiffener provision)", () => {
-  test("a web past h/t = 200 (800S162-33) needs a stiffener at each support; the answer says so", () => {
-    const r = checkMember(floor("800S162-33", 10), T);
+  test("a web past h/t = 200 (1000S162-43) needs a stiffener at each support; the answer says so", () => {
+    const s = findCfsSection(T, "1000S162-43")!;
+    expect((s.depth - 2 * (s.t + s.R)) / s.t).toBeGreaterThan(200);
+    const r = checkMember(floor("1000S162-43", 12), T);
     expect(r.pass).toBe(true);
     expect(r.reactions.every((x) => x.bearingStiffener)).toBe(true);
-    expect(r.answer).toMatch(/^800S162-33 at 16 in o\.c\., bearing stiffeners at the supports — /);
-    const none = checkMember(floor("800S162-33", 10, { member: { material: "cfs", section: "800S162-33", stiffeners: false } }), T);
+    expect(r.answer).toMatch(/^1000S162-43 at 16 in o\.c\., bearing stiffeners at the supports — /);
+    const none = checkMember(floor("1000S162-43", 12, { member: { material: "cfs", section: "1000S162-43", stiffeners: false } }), T);
     expect(none.pass).toBe(false);
     expect(none.governing).toBe("web-crippling");
     expect(none.checks.find((c) => c.name === "web-crippling")!.note).toMatch(/add a bearing stiffener/);
@@ -350,10 +352,18 @@ describe("Prescriptive Method (1997) Table 5.4, two continuous spans, 33 ksi", (
     expect(ratio).toBeLessThan(1.05);
   });
 
-  test("33 mil rows: AISI S100-16 gives longer spans than the 1997 table (a known difference, flagged; the table's basis is not reproduced)", () => {
-    const ratio = spanOf("800S162-33", 40, 24, 2, T33) / ftIn(5, 8);
-    expect(ratio).toBeGreaterThan(1);
-    expect(ratio).toBeLessThan(1.25);
+  // Measured when this table was first reproduced: 800S162-33, 40 psf, 24 in o.c. came out about 18 % longer
+  // than the table's 5' 8" on AISI S100-16's checks alone. That basis is not explained, so Spanlark does not
+  // pass 33 mil sections at all (MIN_CHECKED_MILS in lib/solver/design/cold-formed.ts): never the longer reading.
+  test("33 mil rows, which the table gives shorter than AISI S100-16 does: no 33 mil C-joist is passed or offered", () => {
+    const r = checkMember(floor("800S162-33", 5), T);
+    expect(r.pass).toBe(false);
+    expect(r.governing).toBe("thickness-scope");
+    expect(r.checks.find((c) => c.name === "thickness-scope")!.note).toMatch(/43 mil or heavier/);
+    expect(spanOf("800S162-33", 40, 24, 2, T33)).toBe(0);
+    const offered = sizeMember({ ...floor("x", 5), member: { material: "cfs" }, limit: 500 }, T);
+    expect(offered.passing.length).toBeGreaterThan(0);
+    expect(offered.passing.every((p) => p.member.material === "cfs" && !p.member.section.endsWith("-33"))).toBe(true);
   });
 });
 
