@@ -69,10 +69,11 @@ function fmt(v: number): string {
 }
 
 /** Every factor of the check as rows of words and figures (nested factors such as CM by property spelt out). */
-function factorRows(factors: CheckOutput["factors"]): { name: string; value: string }[] {
+export function factorRows(factors: CheckOutput["factors"]): { name: string; value: string }[] {
   const rows: { name: string; value: string }[] = [];
   for (const [key, value] of Object.entries(factors as unknown as Record<string, unknown>)) {
-    const name = FACTOR_WORDS[key] ?? key;
+    // Cb is the bearing area factor in wood (NDS §3.10.4) but the moment-gradient factor in steel (AISC 360-16 §F1).
+    const name = key === "Cb" && "Mp" in (factors as object) ? FACTOR_WORDS.CbLtb : (FACTOR_WORDS[key] ?? key);
     if (typeof value === "number") rows.push({ name, value: fmt(value) });
     else if (typeof value === "string") rows.push({ name, value });
     else if (typeof value === "boolean") rows.push({ name, value: value ? "yes" : "no" });
