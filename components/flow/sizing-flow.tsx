@@ -11,6 +11,7 @@ import { spanWords } from "@/lib/flow/summary";
 import { flowSearch, resolveFlowStart, STORAGE_KEY, storeLocation, type FlowStart } from "@/lib/flow/url";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { PhoneAnswer } from "@/lib/offline/answers";
 import { Answer } from "./answer";
 import { SaveToJob, type SaveTarget } from "./save-to-job";
 import { StepKind } from "./step-kind";
@@ -32,6 +33,8 @@ export type SizingFlowProps = {
   initialChosen?: MemberSpec | null;
   /** the job to offer first when saving (the flow was opened from a job's page) */
   preferredJobId?: string | null;
+  /** the signed-in account's id (a save queued with no signal is sent only for it) */
+  accountId?: string | null;
 };
 
 function readStorage(): string | null {
@@ -90,11 +93,23 @@ function StepNav({ step, onGo }: { step: FlowStepId; onGo: (step: FlowStepId) =>
 }
 
 /** The sizing flow: one step per screen on a phone, the inputs beside a live answer on a wide screen. */
-export function SizingFlow({ initial, from, params, signedIn, jobs, editing, openSave, initialChosen = null, preferredJobId = null }: SizingFlowProps) {
+export function SizingFlow({
+  initial,
+  from,
+  params,
+  signedIn,
+  jobs,
+  editing,
+  openSave,
+  initialChosen = null,
+  preferredJobId = null,
+  accountId = null,
+}: SizingFlowProps) {
   const [location, setLocation] = useState<FlowLocation>(initial);
   const [resumed, setResumed] = useState(false);
   const [chosen, setChosen] = useState<MemberSpec | null>(initialChosen);
   const [chosenCheck, setChosenCheck] = useState<CheckOutput | null>(null);
+  const [phoneAnswer, setPhoneAnswer] = useState<PhoneAnswer | null>(null);
   const [saveOpen, setSaveOpen] = useState(openSave && signedIn);
   const headingRef = useRef<HTMLHeadingElement>(null);
   const lastStep = useRef<FlowStepId>(initial.step);
@@ -116,8 +131,19 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
     if (storedAtArrival.current === undefined) storedAtArrival.current = readStorage();
     if (editing || (from !== "new" && from !== "kind")) return;
     const frame = requestAnimationFrame(() => {
-      const start = resolveFlowStart(params, storedAtArrival.current ?? null);
-      if (start.from !== "storage" || resumedOnce.current) return;
+      if (resumedOnce.current) return;
+      // With no signal the phone shows its kept copy of the bare /size: the state is then in the live address.
+      const here = new URLSearchParams(window.location.search);
+      const live = { s: here.get("s") ?? undefined, step: here.get("step") ?? undefined, kind: here.get("kind") ?? undefined };
+      const keptCopy = live.s !== params.s || live.step !== params.step || live.kind !== params.kind;
+      const start = resolveFlowStart(keptCopy ? live : params, storedAtArrival.current ?? null);
+      if (keptCopy && (start.from === "url" || start.from === "kind")) {
+        resumedOnce.current = true;
+        lastStep.current = start.location.step;
+        setLocation(start.location);
+        return;
+      }
+      if (start.from !== "storage") return;
       resumedOnce.current = true;
       lastStep.current = start.location.step;
       setLocation(start.location);
@@ -195,7 +221,15 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
       {step === "loads" ? <StepLoads state={state} update={update} /> : null}
       {step === "material" ? <StepMaterial state={state} update={update} /> : null}
       {step === "answer" ? (
-        <Answer state={state} chosen={chosen} onChoose={setChosen} onChosenCheck={setChosenCheck} onGoTo={goTo} action={saveAction} />
+        <Answer
+          state={state}
+          chosen={chosen}
+          onChoose={setChosen}
+          onChosenCheck={setChosenCheck}
+          onGoTo={goTo}
+          action={saveAction}
+          onPhoneAnswer={setPhoneAnswer}
+        />
       ) : null}
     </>
   );
@@ -272,6 +306,8 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
           jobs={jobs}
           editing={editing}
           preferredJobId={preferredJobId}
+          accountId={accountId}
+          phoneAnswer={phoneAnswer}
         />
       ) : null}
     </div>

@@ -176,6 +176,10 @@ export interface CrewJobView {
   job: { name: string; siteAddress: string; notes: string };
   rows: ScheduleRow[];
   expiresAt: string | null;
+  /** when the job or one of its members last changed, ISO 8601 */
+  changedAt: string;
+  /** when this view was read from the database, ISO 8601 (a phone that kept the page shows how old its copy is) */
+  readAt: string;
 }
 
 /**
@@ -204,5 +208,7 @@ export async function openCrewLink(token: string, now: Date = new Date()): Promi
     job: { name: job.name, siteAddress: job.siteAddress, notes: job.notes },
     rows: members.map((m) => scheduleRow({ id: m.id, label: m.label, kind: m.kind, resultSummary: m.resultSummary })),
     expiresAt: link.expiresAt?.toISOString() ?? null,
+    changedAt: new Date(Math.max(job.updatedAt.getTime(), ...members.map((m) => m.updatedAt.getTime()))).toISOString(),
+    readAt: now.toISOString(),
   };
 }
