@@ -88,12 +88,12 @@ const percent = (ratio: number): number => Math.round(ratio * 100);
 export function recheck(phone: PhoneAnswer, server: { answer: AnswerLine | null; tables: TablesStamp }): Recheck {
   const a = phone.answer;
   const b = server.answer;
-  const same = a === null ? b === null : b !== null && a.headline === b.headline && sameSpec(a.spec, b.spec) && percent(a.ratio) === percent(b.ratio);
+  const same = a === null ? b === null : b !== null && a.headline === b.headline && a.memberLabel === b.memberLabel && percent(a.ratio) === percent(b.ratio);
   if (same) return { same: true, phone: a, server: b };
   let why: string;
   if (phone.tables.id !== server.tables.id) {
     why = `The material tables were updated: this phone used ${tablesWords(phone.tables)}, the server used ${tablesWords(server.tables)}.`;
-  } else if (a && b && !sameSpec(a.spec, b.spec)) {
+  } else if (a && b && a.memberLabel !== b.memberLabel) {
     why = `With the same tables (${tablesWords(server.tables)}) the server picked another member; this phone's copy of Spanlark is older than the server's.`;
   } else {
     why = `The tables are the same (${tablesWords(server.tables)}); this phone's copy of Spanlark is older than the server's and worked it out differently.`;

@@ -205,7 +205,7 @@ describe("no signal at 390x844", () => {
       /No signal: this is the copy kept on this phone, last updated [A-Z][a-z]{2}, [A-Z][a-z]{2} \d{1,2}, \d{1,2}:\d{2}/,
     );
     expect(await again.getByTestId("crew-headline").allTextContents()).toEqual(headlinesOnline);
-    expect(await again.getByRole("complementary", { name: "Safety caution" }).count()).toBe(1);
+    expect(await again.getByRole("main").getByRole("complementary", { name: "Safety caution" }).count()).toBe(1);
     await again.screenshot({ path: "tests/artifacts/offline-4-crew-link-no-signal.png" });
     await goOnline(crew.context);
   });
