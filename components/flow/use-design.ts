@@ -62,15 +62,15 @@ export function isNoConnection(err: unknown): boolean {
 /**
  * Sizes on the server; with no connection, on this phone: the same sizeMember the server runs (loaded only
  * then), with the tables kept here. An answer from the server also keeps the phone's tables current.
- * `phoneAnswers` holds the phone's answers by request, until the server answers the same request.
  */
-async function sizeAnywhere(url: string, body: string, phoneAnswers: Map<string, SizeAnswer>): Promise<SizeAnswer> {
+async function sizeAnywhere(url: string, body: string): Promise<SizeAnswer> {
   try {
     const out = await postJson<SizeOutput>(url, body);
     // the version the server sized with, named in full (fetched once when it is new to this phone)
     const kept = await refreshPhoneTables(out.tables).catch(() => null);
     const replaced = phoneAnswers.get(body) ?? null;
-    phoneAnswers.clear();
+    // kept for this request (a second server answer, on reconnect, still shows the recheck); others are done
+    for (const key of phoneAnswers.keys()) if (key !== body) phoneAnswers.delete(key);
     return { ...out, onPhone: null, stamp: kept?.stamp.id === out.tables ? kept.stamp : null, replaced };
   } catch (err) {
     if (!isNoConnection(err)) throw err;
@@ -94,6 +94,12 @@ async function sizeAnywhere(url: string, body: string, phoneAnswers: Map<string,
   }
 }
 
+/**
+ * The phone's answers by request, until the server has answered another one. Shared by every useSize on the
+ * page: requests are shared too (the answer beside the inputs and the answer step ask the same one).
+ */
+const phoneAnswers = new Map<string, SizeAnswer>();
+
 const SWR_OPTIONS = {
   keepPreviousData: true,
   revalidateOnFocus: false,
@@ -111,8 +117,7 @@ const SWR_OPTIONS = {
  */
 export function useSize(state: FlowState) {
   const body = useDebounced(JSON.stringify(sizeRequest(state)), 250);
-  const [phoneAnswers] = useState(() => new Map<string, SizeAnswer>());
-  const swr = useSWR<SizeAnswer, DesignRequestError>(["/api/size", body], ([url, b]: [string, string]) => sizeAnywhere(url, b, phoneAnswers), SWR_OPTIONS);
+  const swr = useSWR<SizeAnswer, DesignRequestError>(["/api/size", body], ([url, b]: [string, string]) => sizeAnywhere(url, b), SWR_OPTIONS);
   const online = useOnline();
   const { mutate, data } = swr;
 

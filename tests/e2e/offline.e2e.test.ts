@@ -137,7 +137,7 @@ describe("no signal at 390x844", () => {
     expect(errors).toEqual([]);
 
     expect(await membersNamed(page, jobName, label)).toBe(1);
-  });
+  }, 180_000);
 
   test("a save sent twice with one Idempotency-Key (the first answer lost) makes one member and answers the same", async () => {
     const opened = await session.open(null, { viewport: "phone" });
@@ -208,5 +208,5 @@ describe("no signal at 390x844", () => {
     expect(await again.getByRole("main").getByRole("complementary", { name: "Safety caution" }).count()).toBe(1);
     await again.screenshot({ path: "tests/artifacts/offline-4-crew-link-no-signal.png" });
     await goOnline(crew.context);
-  });
+  }, 120_000);
 });
