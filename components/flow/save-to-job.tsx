@@ -86,7 +86,7 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               await queueSave({ key, body: input, label: values.label, jobName, phoneAnswer, queuedAt: new Date().toISOString() });
               saveKey.current = null;
               onClose();
-              toast.show({ message: `No signal: ${values.label} is saved on this phone and goes to ${jobName} when the signal is back.`, durationMs: 12_000 });
+              toast.show({ message: `No signal: ${values.label} is saved on this phone and goes to ${jobName} when the signal is back.` });
             };
             if (!editing && !navigator.onLine) {
               await keepOnPhone();

@@ -1,9 +1,10 @@
 "use client";
 
 import { Serwist } from "@serwist/window";
-import { useRouter } from "next/navigation";
+import { usePathname, useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
 import { useOnline } from "@/components/flow/use-design";
+import { isCrewPage } from "@/components/shell/nav-items";
 import { Button } from "@/components/ui/button";
 import { CheckIcon, InfoIcon, WarningIcon } from "@/components/ui/icons";
 import { answerWords } from "@/lib/offline/answers";
@@ -21,6 +22,8 @@ const RETRY_MS = 30_000;
 export function OfflineShell() {
   const online = useOnline();
   const router = useRouter();
+  // the crew's page says for itself how old its copy is; the crew has no saves or sizing
+  const crew = isCrewPage(usePathname() ?? "/");
   const [update, setUpdate] = useState<Serwist | null>(null);
   const [waiting, setWaiting] = useState<QueuedSave[]>([]);
   const [sent, setSent] = useState<SentSave[]>([]);
@@ -85,7 +88,7 @@ export function OfflineShell() {
           </Button>
         </div>
       ) : null}
-      {!online ? (
+      {crew ? null : !online ? (
         <p role="status" className="flex items-start gap-2 rounded-lg border-2 border-ink bg-paper-raised p-2 text-ink" data-testid="offline-bar">
           <InfoIcon className="mt-0.5 h-5 w-5 shrink-0" />
           <span>
