@@ -89,7 +89,10 @@ async function sizeAnywhere(url: string, body: string): Promise<SizeAnswer> {
       if (designErr instanceof DesignInputError) throw new DesignRequestError(400, "invalid input", designErr.issues);
       throw designErr;
     }
+    phoneAnswers.delete(body);
     phoneAnswers.set(body, answer);
+    // a long spell with no signal: keep the latest few requests' answers
+    for (const key of phoneAnswers.keys()) if (phoneAnswers.size > 24) phoneAnswers.delete(key);
     return answer;
   }
 }

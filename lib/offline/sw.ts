@@ -26,7 +26,9 @@ const pageKeys: SerwistPlugin = {
   cacheWillUpdate: async ({ request, response }) => (response.status === 200 && shouldCachePage(request.url) ? response : null),
 };
 
-const pages = new NetworkFirst({ cacheName: PAGES_CACHE, networkTimeoutSeconds: 8, plugins: [pageKeys] });
+// No network timeout: a slow server must not be answered with an older copy (a page drawn before signing in, a
+// job before its last save); the kept copy is for when the network fails.
+const pages = new NetworkFirst({ cacheName: PAGES_CACHE, plugins: [pageKeys] });
 
 async function warmPages(extra: string[] = []): Promise<void> {
   const cache = await caches.open(PAGES_CACHE);

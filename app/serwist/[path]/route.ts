@@ -2,8 +2,8 @@ import { randomUUID } from "node:crypto";
 import { createSerwistRoute } from "@serwist/turbopack";
 import { OFFLINE_PAGE } from "@/lib/offline/pages";
 
-// A new revision per build: the offline page is fetched again by each new service worker.
-const revision = process.env.SPANLARK_BUILD_ID ?? randomUUID();
+// A new revision per build (this route is built once, ahead of time): each new service worker fetches the offline page again.
+const revision = randomUUID();
 
 // GET /serwist/sw.js (and its source map) — the service worker, built from lib/offline/sw.ts at build time, no sign-in
 export const { dynamic, dynamicParams, revalidate, generateStaticParams, GET } = createSerwistRoute({
