@@ -6,6 +6,7 @@ import { RatioBar } from "@/components/ui/ratio-bar";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { CheckOutput } from "@/lib/solver/design/check";
+import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 import { citationOf } from "@/lib/tables/citations";
 import { checkDetail, checkTitle } from "./words";
 
@@ -98,7 +99,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
           <p className="flex flex-wrap items-center gap-2">
             <StatusBadge
               status={check.pass ? "pass" : "fail"}
-              label={check.pass ? `Works — ${Math.round(check.ratio * 100)}% used` : `Does not work — ${Math.round(check.ratio * 100)}%`}
+              label={check.pass ? `Works — ${ratioPercent(check.ratio, true)}% used` : `Does not work — ${ratioPercent(check.ratio, false)}%`}
             />
             {chosen ? <span className="font-bold text-ink">Chosen</span> : null}
           </p>

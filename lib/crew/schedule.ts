@@ -6,6 +6,7 @@ import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
 import { basisWords, type MemberResultSummary } from "@/lib/flow/summary";
 import { checkWords, formatLb, supportName } from "@/lib/sheets/format";
+import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 
 export interface ScheduleSupport {
   name: string;
@@ -53,7 +54,7 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
         : `${formatInches(r.bearing)} bearing (needs ${formatInches(Math.max(r.requiredBearing, 0))})`;
     return { name: supportName(i, s.reactions.length, r.x), reaction, bearing };
   });
-  const pct = `${Math.round(s.ratio * 100)}%`;
+  const pct = `${ratioPercent(s.ratio, s.pass)}%`;
   return {
     id: m.id,
     label: m.label,

@@ -12,6 +12,7 @@ import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
 import { LOAD_STANDARD_WORDS } from "@/lib/solver/asce7/standard";
 import type { Segment } from "@/lib/solver/beam";
+import { ratioPercent } from "@/lib/sheets/format";
 import type { SupportType } from "@/lib/solver/types";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -276,7 +277,7 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
   const saved = source.savedAnswer;
   const changed = saved && (saved.headline !== headline || Math.abs(saved.ratio - check.ratio) > 0.005);
   const note = changed
-    ? `Worked out again for this sheet with the current tables; when the member was saved${source.savedTables ? ` (tables ${source.savedTables})` : ""} it read "${saved.headline}" at ${Math.round(saved.ratio * 100)}%.`
+    ? `Worked out again for this sheet with the current tables; when the member was saved${source.savedTables ? ` (tables ${source.savedTables})` : ""} it read "${saved.headline}" at ${ratioPercent(saved.ratio)}.`
     : null;
   return {
     id: source.id,

@@ -3,6 +3,7 @@
  * Pure: the caller passes the material tables (starter data in the CLI, the published version in the app).
  */
 import type { MaterialTables } from "@/lib/tables/types";
+import { ratioPercent } from "./ratio-percent";
 import { CAUTION, NOT_CHECKED } from "@/lib/caution";
 import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
@@ -109,12 +110,9 @@ const CHECK_WORDS: Record<CheckName, string> = {
   "web-compactness": "web slenderness",
 };
 
-/** A ratio as a percentage; a failing ratio never shows as 100 % (one decimal where rounding would hide it). */
+/** A ratio as a percentage (lib/solver/design/ratio-percent.ts): a pass never reads 100 % unless it is exactly at it, a failure never 100 % or less. */
 export function percent(ratio: number, pass: boolean): string {
-  const whole = Math.round(ratio * 100);
-  if (!pass && whole <= 100) return (Math.ceil(ratio * 1000) / 10).toFixed(1);
-  if (pass && whole > 100) return "100";
-  return String(whole);
+  return ratioPercent(ratio, pass);
 }
 
 /** "OK 77% (bending)" or "Over 113% (shear)": the verdict with the largest ratio and the check it is in. */
