@@ -8,6 +8,8 @@ const securityHeaders = [
   { key: "Cross-Origin-Opener-Policy", value: "same-origin" },
 ];
 
+import { withSerwist } from "@serwist/turbopack";
+
 /** @type {import("next").NextConfig} */
 const nextConfig = {
   poweredByHeader: false,
@@ -24,4 +26,5 @@ const nextConfig = {
   },
 };
 
-export default nextConfig;
+// withSerwist: esbuild (which builds the service worker, app/serwist/[path]/route.ts) stays outside the server bundle.
+export default withSerwist(nextConfig);

@@ -2,6 +2,7 @@ import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import { connection } from "next/server";
 import { Suspense, type ReactNode } from "react";
+import { OfflineShell } from "@/components/offline/offline-shell";
 import { AdminNavLink } from "@/components/shell/admin-nav-link";
 import { BottomNav } from "@/components/shell/bottom-nav";
 import { SiteFooter } from "@/components/shell/site-footer";
@@ -31,6 +32,8 @@ const plexMono = localFont({
 });
 
 export const metadata: Metadata = {
+  appleWebApp: { capable: true, title: "Spanlark", statusBarStyle: "default" },
+  icons: { apple: "/icons/apple-touch-icon.png" },
   title: { default: "Spanlark — size joists, headers and beams on site", template: "%s · Spanlark" },
   description: "Spanlark sizes floor joists, headers, beams, deck framing and rafters in timber and steel, on your phone.",
   applicationName: "Spanlark",
@@ -66,6 +69,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
               </Suspense>
             }
           />
+          <OfflineShell />
           <main id="main" tabIndex={-1} className="mx-auto w-full max-w-5xl flex-1 px-4 pt-6 focus:outline-none">
             {children}
           </main>

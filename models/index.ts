@@ -8,6 +8,7 @@ import { initStripeEvent } from "./stripe-event";
 import { initSubscription, Subscription } from "./subscription";
 import { initJob, Job } from "./job";
 import { initMember, Member } from "./member";
+import { initMemberSave } from "./member-save";
 import { initCrewLink } from "./crew-link";
 import { initJobSheet } from "./job-sheet";
 
@@ -20,6 +21,7 @@ export { StripeEvent } from "./stripe-event";
 export { StripeCustomer } from "./stripe-customer";
 export { Job } from "./job";
 export { Member, MEMBER_KIND_VALUES } from "./member";
+export { MemberSave } from "./member-save";
 export { CrewLink } from "./crew-link";
 export { JobSheet } from "./job-sheet";
 
@@ -37,6 +39,7 @@ export function initModels(sequelize: Sequelize): void {
   initStripeCustomer(sequelize);
   initJob(sequelize);
   initMember(sequelize);
+  initMemberSave(sequelize);
   initCrewLink(sequelize);
   initJobSheet(sequelize);
   associate();

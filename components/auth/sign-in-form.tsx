@@ -1,6 +1,7 @@
 "use client";
 
 import { useFormik } from "formik";
+import { rewarmPhonePages } from "@/components/offline/phone-pages";
 import Link from "next/link";
 import { signIn } from "next-auth/react";
 import { useState } from "react";
@@ -41,6 +42,8 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
       const result = await signIn("credentials", { email, password: values.password, redirect: false, callbackUrl: target }).catch(() => undefined);
       if (!result) return setProblem({ kind: "offline" });
       if (result.ok && !result.error) {
+        // the pages kept for no signal were drawn signed out: fetch them again as this account
+        rewarmPhonePages();
         window.location.assign(target);
         return;
       }

@@ -1,13 +1,13 @@
 "use client";
 
 import dynamic from "next/dynamic";
-import { useEffect, useState, type ReactNode } from "react";
+import { useEffect, useMemo, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
 import { NOT_CHECKED_COLD_FORMED } from "@/lib/caution";
 import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
 import { Skeleton, Spinner } from "@/components/ui/spinner";
 import { StatusBadge } from "@/components/ui/status-badge";
-import { WarningIcon } from "@/components/ui/icons";
+import { CheckIcon, InfoIcon, WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { answerFacts, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
@@ -16,7 +16,8 @@ import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
-import { useSize } from "./use-design";
+import { isNoConnection, useSize } from "./use-design";
+import { answerLineOf, answerWords, recheck, shownCandidate, tablesWords, type PhoneAnswer, type Recheck } from "@/lib/offline/answers";
 import { checkDetail, checkTitle } from "./words";
 
 // the diagrams (d3) and the full check load with the answer, not with the flow's first screen
@@ -38,6 +39,8 @@ export type AnswerProps = {
   variant?: "full" | "live";
   /** an action beside the answer on wide screens (on a phone it sits in the bottom bar) */
   action?: ReactNode;
+  /** the shown answer when this phone worked it out with no signal (null: the server's), for saving */
+  onPhoneAnswer?: (answer: PhoneAnswer | null) => void;
 };
 
 const SHOWN = 5;
@@ -83,12 +86,36 @@ function Problem({ title, issues, onGoTo }: { title: string; issues: { path: str
               {i.path ? <span className="font-bold">{fieldWords(i.path)}: </span> : null}
               {i.message}
             </span>{" "}
-            <button type="button" className="min-h-touch font-bold text-spruce underline underline-offset-4" onClick={() => onGoTo(stepOfPath(i.path))}>
-              Fix it
-            </button>
+            {i.path ? (
+              <button type="button" className="min-h-touch font-bold text-spruce underline underline-offset-4" onClick={() => onGoTo(stepOfPath(i.path))}>
+                Fix {fieldWords(i.path).toLowerCase()}
+              </button>
+            ) : null}
           </li>
         ))}
       </ul>
+    </div>
+  );
+}
+
+/** What the server said of an answer this phone worked out with no signal. */
+function RecheckNote({ recheck: r }: { recheck: Recheck }) {
+  if (r.same) {
+    return (
+      <p className="mb-3 flex items-start gap-2 rounded-lg bg-spruce-light p-2 text-ink" role="status" data-testid="answer-rechecked">
+        <CheckIcon className="mt-0.5 h-5 w-5 shrink-0 text-sound" />
+        <span>Rechecked by the server now the signal is back: the same answer as this phone worked out.</span>
+      </p>
+    );
+  }
+  return (
+    <div className="mb-3 rounded-lg border-2 border-over bg-over-bg p-2 text-ink" role="alert" data-testid="answer-rechecked">
+      <p className="flex items-start gap-2 font-bold text-over-ink">
+        <WarningIcon className="mt-0.5 h-5 w-5 shrink-0" /> Rechecked by the server: the answer changed.
+      </p>
+      <p>This phone worked out: {answerWords(r.phone)}.</p>
+      <p>The server says: {answerWords(r.server)}. Build what the server says.</p>
+      <p>Why: {r.why}</p>
     </div>
   );
 }
@@ -143,7 +170,7 @@ function CandidateCard({
 }
 
 /** Step 5: the answer first, then the members that work, the supports and the diagrams. */
-export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant = "full", action }: AnswerProps) {
+export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant = "full", action, onPhoneAnswer }: AnswerProps) {
   const size = useSize(state);
   const passing = size.data?.passing ?? [];
   const shown = passing.slice(0, variant === "full" ? SHOWN : 1);
@@ -157,6 +184,22 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
   useEffect(() => {
     onChosenCheck?.(chosenCheck ?? null);
   }, [chosenCheck, onChosenCheck]);
+
+  const onPhone = size.data?.onPhone ?? null;
+  const phoneAnswer = useMemo<PhoneAnswer | null>(
+    () => (size.data && onPhone ? { answer: answerLineOf(shownCandidate(size.data, chosen)), tables: onPhone } : null),
+    [size.data, onPhone, chosen],
+  );
+  useEffect(() => {
+    onPhoneAnswer?.(phoneAnswer);
+  }, [phoneAnswer, onPhoneAnswer]);
+  const serverCheck = useMemo(() => {
+    const replaced = size.data?.replaced;
+    if (!size.data || !replaced?.onPhone) return null;
+    const phone = { answer: answerLineOf(shownCandidate(replaced, chosen)), tables: replaced.onPhone };
+    const tables = size.data.stamp ?? (size.data.tables === phone.tables.id ? phone.tables : { id: size.data.tables, number: null, publishedAt: null });
+    return recheck(phone, { answer: answerLineOf(shownCandidate(size.data, chosen)), tables });
+  }, [size.data, chosen]);
 
   const busy = size.isLoading || size.isValidating;
   const headline = chosenCandidate?.answer ?? null;
@@ -173,7 +216,11 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
           <span className="ml-2 inline-flex h-5 w-5 align-middle">{busy ? <Spinner size="sm" label="Working out the answer" /> : null}</span>
         </p>
         <div className="min-h-[7.5rem] rounded-card border-2 border-ink bg-paper-raised p-4" aria-live="polite">
-          {size.error ? (
+          {size.error && isNoConnection(size.error) ? (
+            <p role="status" className="flex items-start gap-2 text-lg text-ink" data-testid="answer-no-signal">
+              <InfoIcon className="mt-1 h-6 w-6 shrink-0 text-spruce" /> {size.error.message}
+            </p>
+          ) : size.error ? (
             <Problem
               title="Spanlark cannot size this yet"
               issues={size.error.issues.length > 0 ? size.error.issues : [{ path: "", message: size.error.message }]}
@@ -181,6 +228,14 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
             />
           ) : headline && chosenCandidate ? (
             <>
+              {onPhone ? (
+                <p className="mb-3 flex items-start gap-2 rounded-lg bg-caution-bg p-2 text-caution-ink" role="status" data-testid="answer-on-phone">
+                  <InfoIcon className="mt-0.5 h-5 w-5 shrink-0" />
+                  <span>No signal: worked out on this phone with {tablesWords(onPhone)}; the server rechecks it when the signal is back.</span>
+                </p>
+              ) : serverCheck ? (
+                <RecheckNote recheck={serverCheck} />
+              ) : null}
               <p className="text-sm font-bold tracking-wide text-graphite uppercase">Build</p>
               <p className="text-3xl leading-tight font-bold text-ink" data-testid="answer-headline">
                 {headline}

@@ -2,7 +2,7 @@
 
 import { Form, Formik } from "formik";
 import { useRouter } from "next/navigation";
-import { useState } from "react";
+import { useRef, useState } from "react";
 import { saveMember, updateMember } from "@/components/jobs/actions";
 import { JobActionAlert, type JobActionProblem } from "@/components/jobs/job-action-alert";
 import { Button } from "@/components/ui/button";
@@ -10,6 +10,8 @@ import { Dialog } from "@/components/ui/dialog";
 import { SelectField, TextField } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
 import { saveMemberSchema, type SaveMemberForm } from "@/lib/flow/forms";
+import { queueSave } from "@/components/offline/save-queue";
+import type { PhoneAnswer } from "@/lib/offline/answers";
 import { KIND_LABELS, type FlowState } from "@/lib/flow/state";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 
@@ -26,13 +28,25 @@ export type SaveToJobProps = {
   editing: SaveTarget | null;
   /** the job to offer first */
   preferredJobId?: string | null;
+  /** the signed-in account (a save queued with no signal is sent only by it) */
+  accountId?: string | null;
+  /** the answer as this phone worked it out with no signal, kept with a queued save for the server's recheck */
+  phoneAnswer?: PhoneAnswer | null;
 };
 
+/** A save that never reached the server (no signal, or the answer was lost): true when fetch itself failed. */
+function isUnsent(err: unknown): boolean {
+  return err instanceof TypeError || (err instanceof DOMException && (err.name === "AbortError" || err.name === "TimeoutError"));
+}
+
 /** Save the answer to a job (an existing one or a new one), or save the changes of the member being edited. */
-export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferredJobId = null }: SaveToJobProps) {
+export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferredJobId = null, accountId = null, phoneAnswer = null }: SaveToJobProps) {
   const toast = useToast();
   const router = useRouter();
   const [serverError, setServerError] = useState<JobActionProblem | null>(null);
+  // one key per save, kept until the server has it: pressing Save again after a lost answer, or the queue
+  // sending it later, saves it once
+  const saveKey = useRef<string | null>(null);
   const defaultLabel = `${KIND_LABELS[state.kind]}`;
 
   return (
@@ -53,14 +67,46 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
           validationSchema={saveMemberSchema}
           onSubmit={async (values, helpers) => {
             setServerError(null);
-            const result = editing
-              ? await updateMember({ memberId: editing.memberId, label: values.label, flowState: state, chosenMember: chosen })
-              : await saveMember({
-                  ...(values.jobId === "new" ? { newJob: { name: values.newJobName, siteAddress: values.newJobAddress, notes: "" } } : { jobId: values.jobId }),
-                  label: values.label,
-                  flowState: state,
-                  chosenMember: chosen,
-                });
+            const jobName = editing
+              ? editing.jobName
+              : values.jobId === "new"
+                ? values.newJobName
+                : (jobs.find((j) => j.id === values.jobId)?.name ?? "the job");
+            saveKey.current ??= crypto.randomUUID();
+            const key = saveKey.current;
+            const input = {
+              ...(values.jobId === "new" ? { newJob: { name: values.newJobName, siteAddress: values.newJobAddress, notes: "" } } : { jobId: values.jobId }),
+              label: values.label,
+              flowState: state,
+              chosenMember: chosen,
+              saveKey: key,
+              ...(accountId ? { accountId } : {}),
+            };
+            const keepOnPhone = async () => {
+              await queueSave({ key, body: input, label: values.label, jobName, phoneAnswer, queuedAt: new Date().toISOString() });
+              saveKey.current = null;
+              onClose();
+              toast.show({ message: `No signal: ${values.label} is saved on this phone and goes to ${jobName} when the signal is back.` });
+            };
+            if (!editing && !navigator.onLine) {
+              await keepOnPhone();
+              return;
+            }
+            let result: Awaited<ReturnType<typeof saveMember>>;
+            try {
+              result = editing
+                ? await updateMember({ memberId: editing.memberId, label: values.label, flowState: state, chosenMember: chosen })
+                : await saveMember(input);
+            } catch (err) {
+              if (!isUnsent(err)) throw err;
+              if (!editing) {
+                await keepOnPhone();
+                return;
+              }
+              setServerError({ message: "No signal: changes to a saved member need a signal. Your inputs are kept; try again when you have one." });
+              helpers.setSubmitting(false);
+              return;
+            }
             if (!result.ok) {
               const issues = "issues" in result ? result.issues : undefined;
               const upgrade = "upgrade" in result ? result.upgrade : undefined;
@@ -68,12 +114,8 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               helpers.setSubmitting(false);
               return;
             }
+            saveKey.current = null;
             onClose();
-            const jobName = editing
-              ? editing.jobName
-              : values.jobId === "new"
-                ? values.newJobName
-                : (jobs.find((j) => j.id === values.jobId)?.name ?? "the job");
             toast.show({ message: `${values.label} saved to ${jobName}` });
             router.refresh();
           }}

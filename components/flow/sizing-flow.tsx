@@ -13,6 +13,7 @@ import { flowSearch, STORAGE_KEY, storeLocation } from "@/lib/flow/address";
 import type { FlowStart } from "@/lib/flow/url";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { PhoneAnswer } from "@/lib/offline/answers";
 import { FieldProblemsContext, type ReportFieldProblem } from "./field-problems";
 import type { SaveTarget } from "./save-to-job";
 import { StepKind } from "./step-kind";
@@ -56,6 +57,8 @@ export type SizingFlowProps = {
   initialChosen?: MemberSpec | null;
   /** the job to offer first when saving (the flow was opened from a job's page) */
   preferredJobId?: string | null;
+  /** the signed-in account's id (a save queued with no signal is sent only for it) */
+  accountId?: string | null;
 };
 
 function readStorage(): string | null {
@@ -114,11 +117,23 @@ function StepNav({ step, onGo }: { step: FlowStepId; onGo: (step: FlowStepId) =>
 }
 
 /** The sizing flow: one step per screen on a phone, the inputs beside a live answer on a wide screen. */
-export function SizingFlow({ initial, from, params, signedIn, jobs, editing, openSave, initialChosen = null, preferredJobId = null }: SizingFlowProps) {
+export function SizingFlow({
+  initial,
+  from,
+  params,
+  signedIn,
+  jobs,
+  editing,
+  openSave,
+  initialChosen = null,
+  preferredJobId = null,
+  accountId = null,
+}: SizingFlowProps) {
   const [location, setLocation] = useState<FlowLocation>(initial);
   const [resumed, setResumed] = useState(false);
   const [chosen, setChosen] = useState<MemberSpec | null>(initialChosen);
   const [chosenCheck, setChosenCheck] = useState<CheckOutput | null>(null);
+  const [phoneAnswer, setPhoneAnswer] = useState<PhoneAnswer | null>(null);
   const [saveOpen, setSaveOpen] = useState(openSave && signedIn);
   const [saveAsked, setSaveAsked] = useState(saveOpen);
   const headingRef = useRef<HTMLHeadingElement>(null);
@@ -155,13 +170,24 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   useEffect(() => {
     if (storedAtArrival.current === undefined) storedAtArrival.current = readStorage();
     if (editing || (from !== "new" && from !== "kind")) return;
-    const stored = storedAtArrival.current;
-    if (!stored) return;
+    const stored = storedAtArrival.current ?? null;
+    // With no signal the phone shows its kept copy of the bare /size: the state is then in the live address.
+    const here = new URLSearchParams(window.location.search);
+    const live = { s: here.get("s") ?? undefined, step: here.get("step") ?? undefined, kind: here.get("kind") ?? undefined };
+    const keptCopy = live.s !== params.s || live.step !== params.step || live.kind !== params.kind;
+    if (!stored && !keptCopy) return;
     let stale = false;
-    // reading a stored state back checks it with the flow's schema, fetched only when there is one to read
+    // reading a state back checks it with the flow's schema, fetched only when there is one to read
     void import("@/lib/flow/url").then(({ resolveFlowStart }) => {
-      const start = resolveFlowStart(params, stored);
-      if (stale || start.from !== "storage" || resumedOnce.current) return;
+      if (stale || resumedOnce.current) return;
+      const start = resolveFlowStart(keptCopy ? live : params, stored);
+      if (keptCopy && (start.from === "url" || start.from === "kind")) {
+        resumedOnce.current = true;
+        lastStep.current = start.location.step;
+        setLocation(start.location);
+        return;
+      }
+      if (start.from !== "storage") return;
       resumedOnce.current = true;
       lastStep.current = start.location.step;
       setLocation(start.location);
@@ -264,7 +290,15 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
       {step === "loads" ? <StepLoads state={state} update={update} /> : null}
       {step === "material" ? <StepMaterial state={state} update={update} /> : null}
       {step === "answer" ? (
-        <Answer state={state} chosen={chosen} onChoose={setChosen} onChosenCheck={setChosenCheck} onGoTo={goTo} action={saveAction} />
+        <Answer
+          state={state}
+          chosen={chosen}
+          onChoose={setChosen}
+          onChosenCheck={setChosenCheck}
+          onGoTo={goTo}
+          action={saveAction}
+          onPhoneAnswer={setPhoneAnswer}
+        />
       ) : null}
     </>
   );
@@ -355,6 +389,8 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
           jobs={jobs}
           editing={editing}
           preferredJobId={preferredJobId}
+          accountId={accountId}
+          phoneAnswer={phoneAnswer}
         />
       ) : null}
     </div>

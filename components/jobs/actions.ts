@@ -2,6 +2,7 @@
 
 import { runAction, type ActionDenied, type ActionFailure, type ActionResult } from "@/lib/auth/action";
 import { jobIdSchema, jobInputSchema, memberIdSchema, saveMemberSchema, updateJobSchema, updateMemberSchema } from "@/lib/jobs/schemas";
+import { saveMemberOnce } from "@/lib/jobs/save-once";
 import * as jobs from "@/lib/jobs/service";
 import { getPlanLimits } from "@/lib/payments/subscriptions";
 
@@ -89,6 +90,11 @@ export async function saveMember(input: unknown): Promise<MemberResult> {
     refresh: jobListAndPage,
     run: async (user, data) => {
       const limits = await getPlanLimits(user);
+      if (data.saveKey) {
+        // with a key the save is made once however often it is sent (see lib/jobs/save-once.ts)
+        const { response } = await saveMemberOnce(user.id, data.saveKey, data, limits.savedJobs);
+        return { jobId: response.jobId, memberId: response.memberId };
+      }
       const { job, member } = await jobs.saveMember(user.id, data, limits.savedJobs);
       return { jobId: job.id, memberId: member.id };
     },

@@ -179,6 +179,10 @@ export interface CrewJobView {
   expiresAt: string | null;
   /** what Spanlark does not check, for the members on this job (cold-formed steel adds its items) */
   notChecked: readonly string[];
+  /** when the job or one of its members last changed, ISO 8601 */
+  changedAt: string;
+  /** when this view was read from the database, ISO 8601 (a phone that kept the page shows how old its copy is) */
+  readAt: string;
 }
 
 /**
@@ -208,5 +212,7 @@ export async function openCrewLink(token: string, now: Date = new Date()): Promi
     rows: members.map((m) => scheduleRow({ id: m.id, label: m.label, kind: m.kind, resultSummary: m.resultSummary })),
     expiresAt: link.expiresAt?.toISOString() ?? null,
     notChecked: notCheckedFor(members.map((m) => m.resultSummary?.spec.material)),
+    changedAt: new Date(Math.max(job.updatedAt.getTime(), ...members.map((m) => m.updatedAt.getTime()))).toISOString(),
+    readAt: now.toISOString(),
   };
 }

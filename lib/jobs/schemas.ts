@@ -31,6 +31,10 @@ export const saveMemberSchema = z
     flowState: flowStateSchema,
     /** the member chosen on the answer screen; without one the best that passes is saved */
     chosenMember: memberSchema.nullable().default(null),
+    /** makes the save idempotent: sent again with the same key, it answers as the first time and makes no second member */
+    saveKey: uuid("Save key").optional(),
+    /** the account the save was made in (a save queued on a phone is refused when another account sends it) */
+    accountId: uuid("Account").optional(),
   })
   .superRefine((v, ctx) => {
     if ((v.jobId === undefined) === (v.newJob === undefined)) {

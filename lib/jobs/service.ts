@@ -163,8 +163,16 @@ async function nextSortOrder(jobId: string, transaction?: Transaction): Promise<
   return (max ?? -1) + 1;
 }
 
+/** Runs inside a save's transaction once the member is made (the idempotent save records its answer there). */
+export type AfterSave = (saved: { job: Job; member: Member; summary: MemberResultSummary | null }, transaction: Transaction) => Promise<void>;
+
 /** Saves the flow's answer as a member of one of the owner's jobs, or of a new job made now. */
-export async function saveMember(ownerId: string, input: SaveMemberInput, limit: SavedJobsLimit): Promise<{ job: Job; member: Member }> {
+export async function saveMember(
+  ownerId: string,
+  input: SaveMemberInput,
+  limit: SavedJobsLimit,
+  afterSave?: AfterSave,
+): Promise<{ job: Job; member: Member; summary: MemberResultSummary | null }> {
   const { summary, chosen } = await computeSummary(input.flowState as FlowState, input.chosenMember);
   const sequelize = getSequelize();
   return sequelize.transaction(async (transaction) => {
@@ -192,7 +200,8 @@ export async function saveMember(ownerId: string, input: SaveMemberInput, limit:
     );
     job.changed("updatedAt", true);
     await job.save({ transaction });
-    return { job, member };
+    if (afterSave) await afterSave({ job, member, summary }, transaction);
+    return { job, member, summary };
   });
 }
 

@@ -63,6 +63,7 @@ export const ACCESS_TABLE: AccessRow[] = [
   { method: "POST", path: "/api/solve", allowed: ["public"] },
   { method: "POST", path: "/api/check", allowed: ["public"] },
   { method: "POST", path: "/api/size", allowed: ["public"] },
+  { method: "GET", path: "/api/tables", allowed: ["public"], note: "the published tables a phone sizes with offline" },
 
   // Accounts (lib/auth): the public flows answer the same whatever the address; rate limits guard them.
   { method: "GET", path: "/api/auth/[...nextauth]", allowed: ["public"], note: "next-auth: csrf, session, providers" },
@@ -207,6 +208,13 @@ export const ACCESS_TABLE: AccessRow[] = [
     allowed: SIGNED_IN,
     note: "to a new job of the caller's own here; another's job is 404 (tests/jobs)",
     setup: jobsFixture("save"),
+  },
+  {
+    method: "POST",
+    path: "/api/members",
+    allowed: SIGNED_IN,
+    note: "a queued save, once per Idempotency-Key, to the caller's own job (tests/jobs/save-once)",
+    setup: async () => ({ body: (await jobsFixture("save")()).args?.[0] }),
   },
   {
     method: "ACTION",

@@ -56,6 +56,7 @@ export default async function SizePage({ searchParams }: SizePageProps) {
       editing={null}
       openSave={one(query.save) === "1"}
       preferredJobId={preferred && jobs.some((j) => j.id === preferred) ? preferred : null}
+      accountId={user?.id ?? null}
     />
   );
 }

@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CrewSchedule } from "@/components/crew/crew-schedule";
+import { CopyAge } from "@/components/offline/copy-age";
 import { buttonClasses } from "@/components/ui/button";
 import { Caution } from "@/components/ui/caution";
 import { WarningIcon } from "@/components/ui/icons";
@@ -32,6 +33,7 @@ export default async function CrewPage({ params }: CrewPageProps) {
         </h1>
         {view.job.siteAddress ? <p className="text-lg text-ink-soft">{view.job.siteAddress}</p> : null}
         {view.expiresAt ? <p className="text-ink-soft">This link works until {formatSheetDate(view.expiresAt)}.</p> : null}
+        <CopyAge readAt={view.readAt} changedAt={view.changedAt} />
       </header>
       <a
         href={`/api/crew/${token}/pdf`}

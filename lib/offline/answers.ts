@@ -1,0 +1,107 @@
+/**
+ * Answers worked out on the phone with no signal, and the server's recheck of them. Pure: the answer
+ * screen, the save queue, the save route and their tests share it.
+ */
+import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { SizeCandidateResult, SizeOutput } from "@/lib/solver/design/size";
+
+/** Which published version of the material tables an answer used: its id, number and date. */
+export interface TablesStamp {
+  /** the version id (MaterialTables.version) */
+  id: string;
+  /** 1, 2, 3… as published; null for the starter tables that ship with the app */
+  number: number | null;
+  /** ISO 8601; null for the starter tables */
+  publishedAt: string | null;
+}
+
+/** "tables v6 of 2 Dec" (UTC), or "the starter tables" for the tables that ship with the app. */
+export function tablesWords(stamp: TablesStamp): string {
+  if (stamp.number === null || stamp.publishedAt === null) return "the starter tables";
+  const date = new Date(stamp.publishedAt).toLocaleDateString("en-US", { day: "numeric", month: "short", timeZone: "UTC" });
+  // "Dec 2" → "2 Dec": the date as a builder writes it on a plan
+  const [month, day] = date.split(" ");
+  return `tables v${stamp.number} of ${day} ${month}`;
+}
+
+/** What an answer says to build: enough to tell two answers apart and to say so. */
+export interface AnswerLine {
+  /** "3-ply 2x12 No.2 — 2 jack studs each end" */
+  headline: string;
+  /** "3-ply 2x12 No.2 Douglas Fir-Larch" */
+  memberLabel: string;
+  spec: MemberSpec;
+  /** the governing check's demand over capacity */
+  ratio: number;
+  governing: string | null;
+}
+
+/** What the server answers to a saved member (the same answer to a save sent again with its key). */
+export interface SavedMemberResponse {
+  jobId: string;
+  jobName: string;
+  memberId: string;
+  label: string;
+  /** the answer the server worked out with its current tables; null when nothing in them works */
+  answer: AnswerLine | null;
+  tables: TablesStamp;
+  /** ISO 8601 */
+  savedAt: string;
+}
+
+/** The answer of a member worked out on the phone, kept with a save that waits for a signal. */
+export interface PhoneAnswer {
+  answer: AnswerLine | null;
+  tables: TablesStamp;
+}
+
+const sameSpec = (a: MemberSpec, b: MemberSpec): boolean => JSON.stringify(a) === JSON.stringify(b);
+
+/** The candidate the answer screen shows: the chosen member while it still passes, else the best that passes. */
+export function shownCandidate(output: SizeOutput, chosen: MemberSpec | null): SizeCandidateResult | null {
+  return (chosen ? output.passing.find((p) => sameSpec(p.member, chosen)) : undefined) ?? output.passing[0] ?? null;
+}
+
+export function answerLineOf(candidate: SizeCandidateResult | null): AnswerLine | null {
+  if (!candidate) return null;
+  return { headline: candidate.answer, memberLabel: candidate.label, spec: candidate.member, ratio: candidate.ratio, governing: candidate.governing };
+}
+
+/** The server's recheck of an answer worked out on the phone. */
+export type Recheck =
+  | { same: true; phone: AnswerLine | null; server: AnswerLine | null }
+  | {
+      same: false;
+      phone: AnswerLine | null;
+      server: AnswerLine | null;
+      /** why they differ, in plain words */
+      why: string;
+    };
+
+const percent = (ratio: number): number => Math.round(ratio * 100);
+
+/**
+ * Compares the answer worked out on the phone with the server's. The same member to build at the same
+ * percentage of its capacity is the same answer; anything else is a change, with the reason: the tables
+ * changed, or the member no longer passes, or (same tables, same inputs) the app itself was updated.
+ */
+export function recheck(phone: PhoneAnswer, server: { answer: AnswerLine | null; tables: TablesStamp }): Recheck {
+  const a = phone.answer;
+  const b = server.answer;
+  const same = a === null ? b === null : b !== null && a.headline === b.headline && a.memberLabel === b.memberLabel && percent(a.ratio) === percent(b.ratio);
+  if (same) return { same: true, phone: a, server: b };
+  let why: string;
+  if (phone.tables.id !== server.tables.id) {
+    why = `The material tables were updated: this phone used ${tablesWords(phone.tables)}, the server used ${tablesWords(server.tables)}.`;
+  } else if (a && b && a.memberLabel !== b.memberLabel) {
+    why = `With the same tables (${tablesWords(server.tables)}) the server picked another member; this phone's copy of Spanlark is older than the server's.`;
+  } else {
+    why = `The tables are the same (${tablesWords(server.tables)}); this phone's copy of Spanlark is older than the server's and worked it out differently.`;
+  }
+  return { same: false, phone: a, server: b, why };
+}
+
+/** "3-ply 2x12 No.2 — 2 jack studs each end (OK 82%)", or that nothing works. */
+export function answerWords(line: AnswerLine | null): string {
+  return line ? `${line.headline} (${percent(line.ratio)}% of capacity)` : "nothing in the tables works";
+}
