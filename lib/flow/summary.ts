@@ -181,3 +181,9 @@ export function spanWords(state: FlowState): string {
   if (hasLeft || hasRight) return `${main} with ${formatFeetInches(hasLeft ? left : right)} overhang`;
   return main;
 }
+
+/** "Changed since you last looked: now 3-ply 2x12 No.2 …, was … — J1 deck joists changed", as the job page and the crew link say it; null when nothing changed. */
+export function changeWords(s: Pick<MemberResultSummary, "change" | "memberLabel" | "pass">): string | null {
+  if (!s.change) return null;
+  return `Changed since you last looked: now ${s.memberLabel}${s.pass ? "" : " (does NOT pass)"}, was ${s.change.was} — ${s.change.reason}`;
+}

@@ -74,9 +74,37 @@ export interface PathMember {
   resultSummary: MemberResultSummary | null;
 }
 
+/** A saved member (a model row or its view) as the load path reads it. */
+export function pathMemberOf(m: {
+  id: string;
+  label: string;
+  kind: JobMemberKind;
+  flowState: FlowState | null;
+  chosenMember: MemberSpec | null;
+  carriedByMemberId?: string | null;
+  bearing?: Bearing | null;
+  supportDesign?: SupportDesign | null;
+  resultSummary: MemberResultSummary | null;
+}): PathMember {
+  return {
+    id: m.id,
+    label: m.label,
+    kind: m.kind,
+    flowState: m.flowState,
+    chosenMember: m.chosenMember,
+    carriedByMemberId: m.carriedByMemberId ?? null,
+    bearing: m.bearing ?? null,
+    supportDesign: m.supportDesign ?? null,
+    resultSummary: m.resultSummary,
+  };
+}
+
 export interface WorkedOut {
   summary: MemberResultSummary | null;
   chosen: MemberSpec | null;
+  /** framing members: the inputs as worked out (psf loads dropped where joists deliver them) and the loads carried onto it */
+  state?: FlowState;
+  carried?: DesignLoad[];
 }
 
 /** Load cases with their reactions, lb. */
@@ -416,7 +444,7 @@ export function workOutJob(members: readonly PathMember[], tables: MaterialTable
         // joists at a spacing deliver the floor or deck itself: the carrier's own psf loads over a typed tributary width would count it twice
         const fromJoists = bearers.some((b) => b.flowState?.width.mode === "spacing");
         const state = fromJoists ? { ...m.flowState, areaLoads: [], snow: { ...m.flowState.snow, on: false } } : m.flowState;
-        out = workOutFraming(state, m.chosenMember, loads, tables);
+        out = { ...workOutFraming(state, m.chosenMember, loads, tables), state, carried: loads };
         if (out.summary && words.length > 0) {
           out.summary.carried = words;
           if (fromJoists)

@@ -41,3 +41,13 @@ export type SupportKind = (typeof SUPPORT_KINDS)[number];
 export const JOB_MEMBER_KINDS = [...MEMBER_KINDS, ...SUPPORT_KINDS] as const;
 export type JobMemberKind = (typeof JOB_MEMBER_KINDS)[number];
 export const SUPPORT_KIND_LABELS: Readonly<Record<SupportKind, string>> = { post: "Posts", footing: "Footings" };
+
+/** "Deck beam", "Posts", "Footings": the label of any kind of a job's member. */
+export function jobKindLabel(kind: JobMemberKind): string {
+  return kind === "post" || kind === "footing" ? SUPPORT_KIND_LABELS[kind] : KIND_LABELS[kind];
+}
+
+/** A kind the sizing flow works out (not a post or footing). */
+export function isFramingKind(kind: JobMemberKind): kind is MemberKind {
+  return (MEMBER_KINDS as readonly string[]).includes(kind);
+}
