@@ -471,8 +471,10 @@ export function workOutJob(members: readonly PathMember[], tables: MaterialTable
     if (out.summary) {
       const reason = reasonFor(m);
       const changed = before !== null && (before.memberLabel !== out.summary.memberLabel || before.pass !== out.summary.pass);
-      out.summary.change =
+      const change =
         changed && reason ? { was: before.headline, wasPass: before.pass, reason, at: new Date().toISOString() } : changed ? null : (before?.change ?? null);
+      if (change) out.summary.change = change;
+      else delete out.summary.change;
     }
     solved.set(id, out);
   }

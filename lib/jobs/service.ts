@@ -350,7 +350,7 @@ export async function recheckJob(jobId: string, opts: { editedId?: string | null
     for (const m of members) {
       const out = solved.get(m.id);
       if (!out) continue;
-      const same = (a: unknown, b: unknown) => JSON.stringify(a) === JSON.stringify(b);
+      const same = (a: unknown, b: unknown) => canonical(a) === canonical(b);
       const strip = (v: MemberResultSummary | null) => (v ? { ...v, computedAt: "" } : null);
       if (same(strip(out.summary), strip(m.resultSummary)) && same(out.chosen, m.chosenMember)) continue;
       m.resultSummary = out.summary;
@@ -360,6 +360,18 @@ export async function recheckJob(jobId: string, opts: { editedId?: string | null
     }
     return saved;
   });
+}
+
+/** JSON with keys in one order (PostgreSQL's JSONB keeps its own), undefined fields left out: to compare answers. */
+function canonical(v: unknown): string {
+  if (Array.isArray(v)) return `[${v.map(canonical).join(",")}]`;
+  if (v !== null && typeof v === "object") {
+    const entries = Object.entries(v as Record<string, unknown>)
+      .filter(([, x]) => x !== undefined)
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+    return `{${entries.map(([k, x]) => `${JSON.stringify(k)}:${canonical(x)}`).join(",")}}`;
+  }
+  return JSON.stringify(v) ?? "null";
 }
 
 /** A job whose members were worked out with other tables than the current ones is worked out again (the admin published new tables). */
