@@ -169,6 +169,12 @@ function kindWords(kind: JobMemberKind): string {
   return kind === "post" ? "posts" : kind === "footing" ? "footings" : `${KIND_LABELS[kind as MemberKind].toLowerCase()}s`;
 }
 
+/** "J1 deck joists" for J1, "J1 deck joists" (not "… deck joists deck joists") where the name says the kind already. */
+function nameWithKind(m: Pick<PathMember, "label" | "kind">, singular = false): string {
+  const words = singular ? kindWords(m.kind).replace(/s$/, "") : kindWords(m.kind);
+  return m.label.toLowerCase().includes(kindWords(m.kind).replace(/s$/, "")) ? m.label : `${m.label} ${words}`;
+}
+
 /** The supports of a member that rest on its carrier: as given, else the last (joists onto a beam) or every one (onto posts). */
 export function bearingSupports(member: PathMember, carrierKind: JobMemberKind): number[] {
   const n = member.resultSummary?.reactions.length ?? member.flowState?.supports.length ?? 0;
@@ -204,7 +210,7 @@ export function carriedLoads(
         for (const c of LOAD_CASES) if (w[c]) loads.push({ type: "udl", case: c, from, to, w: w[c] as number });
         words.push({
           fromMemberId: b.id,
-          words: `from ${b.label} ${kindWords(b.kind)} @ ${b.flowState.width.spacingIn} in, ${formatFeetInches(from)} to ${formatFeetInches(to)}`,
+          words: `from ${nameWithKind(b)} @ ${b.flowState.width.spacingIn} in, ${formatFeetInches(from)} to ${formatFeetInches(to)}`,
           type: "udl",
           from,
           to,
@@ -215,7 +221,7 @@ export function carriedLoads(
         for (const c of LOAD_CASES) if (r.byCase[c]) loads.push({ type: "point", case: c, x, P: r.byCase[c] as number });
         words.push({
           fromMemberId: b.id,
-          words: `from ${b.label} ${kindWords(b.kind).replace(/s$/, "")} at ${formatFeetInches(x)}`,
+          words: `from ${nameWithKind(b, true)} at ${formatFeetInches(x)}`,
           type: "point",
           from: x,
           to: x,
