@@ -14,7 +14,8 @@ import { ratioVerdict } from "@/components/ui/ratio-bar";
 import { PlusIcon } from "@/components/ui/icons";
 import { formatFeetInches } from "@/lib/flow/length";
 import { isFramingKind, jobKindLabel, type JobMemberKind } from "@/lib/solver/design/kinds";
-import type { SupportDesign } from "@/lib/jobs/load-path";
+import type { Bearing, SupportDesign } from "@/lib/jobs/load-path";
+import { BearingForm } from "./bearing-form";
 import { deleteJob, deleteMember, duplicateJob, duplicateMember, markChangesSeen, restoreJob, restoreMember, updateMember } from "./actions";
 import { JobForm } from "./job-form";
 import { LoadPathPicture } from "./load-path-picture";
@@ -46,6 +47,11 @@ export type JobPageMember = {
   problems?: string[];
   /** a post's or footing's inputs */
   supportDesign?: SupportDesign | null;
+  /** framing members: whole length and supports (ft), whether at a spacing, and where it sits on its carrier */
+  lengthFt?: number | null;
+  supportsFt?: number[];
+  atSpacing?: boolean;
+  bearing?: Bearing | null;
 };
 
 export type JobPageProps = {
@@ -240,6 +246,21 @@ export function JobPage({ job, children }: JobPageProps) {
                       }}
                     />
                   ) : null}
+                  {(() => {
+                    const carrier = m.carriedById ? job.members.find((c) => c.id === m.carriedById) : undefined;
+                    if (!carrier || !isFramingKind(carrier.kind) || !isFramingKind(m.kind) || !m.supportsFt || carrier.lengthFt == null) return null;
+                    return (
+                      <BearingForm
+                        key={`${m.id}-${carrier.id}`}
+                        memberId={m.id}
+                        carrierLabel={carrier.label}
+                        carrierLengthFt={carrier.lengthFt}
+                        supportsFt={m.supportsFt}
+                        atSpacing={m.atSpacing ?? false}
+                        bearing={m.bearing ?? null}
+                      />
+                    );
+                  })()}
                   {m.orderDetails && isFramingKind(m.kind) ? <OrderDetailsForm memberId={m.id} label={m.label} kind={m.kind} details={m.orderDetails} /> : null}
                   <div className="flex flex-wrap gap-2">
                     {isFramingKind(m.kind) ? (

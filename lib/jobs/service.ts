@@ -227,6 +227,18 @@ export async function updateMember(ownerId: string, input: UpdateMemberInput): P
     }
     member.carriedByMemberId = input.carriedByMemberId;
   }
+  if (input.bearing !== undefined && input.bearing !== null) {
+    const carrierId = member.carriedByMemberId;
+    const carrier = carrierId ? await Member.findOne({ where: { id: carrierId, deletedAt: { [Op.is]: null } } }) : null;
+    const length = carrier?.flowState?.lengthFt;
+    const count = member.flowState?.supports.length ?? 0;
+    const bad = (path: string, message: string) => new HttpError(400, "invalid input", { issues: [{ path: `bearing.${path}`, message }] });
+    if (input.bearing.supports?.some((i) => i >= count)) throw bad("supports", `Its support on it: this member has ${count} supports`);
+    for (const key of ["fromFt", "toFt", "xFt"] as const) {
+      const v = input.bearing[key];
+      if (v !== undefined && length !== undefined && v > length + 1e-9) throw bad(key, `must be on ${carrier?.label ?? "the carrier"}, 0 to ${length} ft`);
+    }
+  }
   if (input.bearing !== undefined) member.bearing = input.bearing;
   if (input.supportDesign !== undefined) {
     if (member.kind !== input.supportDesign.type)

@@ -85,6 +85,17 @@ describe.skipIf(!TEST_DB)("a live job's load path (PostgreSQL)", () => {
     expect(b1?.resultSummary?.facts).toContain("Loads: from the joists bearing on it (its own psf loads and tributary width are not used)");
   });
 
+  test("where it sits must be on the carrier: a 400 naming the field, nothing changes", async () => {
+    who.current = owner;
+    const r = await actions.updateMember({ memberId: ids.j1, bearing: { supports: [1], fromFt: 0, toFt: 30 } });
+    expect(r.ok).toBe(false);
+    if (!r.ok) {
+      expect(r.status).toBe(400);
+      expect("issues" in r ? r.issues?.[0] : null).toEqual({ path: "bearing.toFt", message: "must be on B1, 0 to 24 ft" });
+    }
+    expect((await member(ids.j1))?.bearing).toEqual({ supports: [1], fromFt: 0, toFt: 24 });
+  });
+
   test("posts under the beam and footings under the posts are members of the job, each checked", async () => {
     who.current = owner;
     const p1 = ok(

@@ -50,6 +50,10 @@ export default async function JobRoute({ params, searchParams }: JobRouteProps) 
           change: m.resultSummary ? changeWords(m.resultSummary) : null,
           problems: m.resultSummary?.problems ?? [],
           supportDesign: m.supportDesign,
+          lengthFt: m.flowState?.lengthFt ?? null,
+          supportsFt: m.flowState ? [...m.flowState.supports].map((x) => x.x).sort((a, b) => a - b) : undefined,
+          atSpacing: m.flowState?.width.mode === "spacing",
+          bearing: m.bearing,
         })),
       }}
     >
