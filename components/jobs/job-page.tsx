@@ -227,7 +227,7 @@ export function JobPage({ job, children }: JobPageProps) {
                       </div>
                     </div>
                   ) : null}
-                  {job.members.length > 1 ? (
+                  {job.members.length > 1 && m.kind !== "footing" ? (
                     <SelectField
                       label="Bears on"
                       options={[

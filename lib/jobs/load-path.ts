@@ -239,6 +239,12 @@ function roundCases(v: ByCase): ByCase {
   return out;
 }
 
+/** "D 470 lb + L 1,800 lb": a load by case, as the carrier lists it. */
+function caseWords(v: ByCase): string {
+  const parts = LOAD_CASES.filter((c) => (v[c] ?? 0) !== 0).map((c) => `${c} ${Math.round(v[c] ?? 0).toLocaleString("en-US")} lb`);
+  return parts.length > 0 ? parts.join(" + ") : "0 lb";
+}
+
 function sumCases(v: ByCase): number {
   return LOAD_CASES.reduce((n, c) => n + (v[c] ?? 0), 0);
 }
@@ -353,7 +359,7 @@ function postSummary(post: PathMember, design: PostDesign, loads: PostLoad[], ta
     ],
     carried: loads.map((l, i) => ({
       fromMemberId: post.id,
-      words: `post ${i + 1} from ${l.from}`,
+      words: `post ${i + 1}: ${caseWords(l.byCase)} from ${l.from}`,
       type: "point",
       from: i,
       to: i,
@@ -420,7 +426,7 @@ function footingSummary(
     ],
     carried: loads.map((l, i) => ({
       fromMemberId: footing.id,
-      words: `footing ${i + 1} from ${l.from}`,
+      words: `footing ${i + 1}: ${caseWords(l.byCase)} from ${l.from}`,
       type: "point",
       from: i,
       to: i,
@@ -462,7 +468,7 @@ export function workOutJob(members: readonly PathMember[], tables: MaterialTable
         const loads = bearers.flatMap((p) => {
           const s = solved.get(p.id)?.summary;
           const width = p.supportDesign?.type === "post" ? POST_WIDTH_IN[p.supportDesign.size] * (p.supportDesign.plies > 1 ? 1 : 1) : 5.5;
-          return (s?.reactions ?? []).map((r, i) => ({ byCase: r.byCase ?? {}, from: `${p.label} post ${i + 1}`, postWidthIn: width }));
+          return (s?.reactions ?? []).map((r, i) => ({ byCase: r.byCase ?? {}, from: `post ${i + 1} of ${p.label}`, postWidthIn: width }));
         });
         out = { summary: footingSummary(m, m.supportDesign, loads, tables), chosen: null };
       } else {

@@ -314,7 +314,7 @@ export async function restoreMember(ownerId: string, memberId: string): Promise<
 /** A copy of the member in the same job, right after it, named "… (copy)". */
 export async function duplicateMember(ownerId: string, memberId: string): Promise<Member> {
   const sequelize = getSequelize();
-  return sequelize.transaction(async (transaction) => {
+  const copy = await sequelize.transaction(async (transaction) => {
     const m = await ownedMember(ownerId, memberId, transaction);
     await Member.increment("sortOrder", { by: 1, where: { jobId: m.jobId, sortOrder: { [Op.gt]: m.sortOrder } }, transaction });
     return Member.create(
@@ -338,6 +338,9 @@ export async function duplicateMember(ownerId: string, memberId: string): Promis
       { transaction },
     );
   });
+  // a copy that bears on a carrier adds its loads there
+  if (copy.carriedByMemberId) await recheckJob(copy.jobId, { editedId: copy.id, reason: `${copy.label} added` });
+  return copy;
 }
 
 /**

@@ -92,10 +92,11 @@ describe("the load path of a deck at 390x844", () => {
     await crew.page.getByRole("heading", { level: 1, name: jobName }).waitFor();
     const members = crew.page.getByTestId("crew-member");
     expect(await members.count()).toBe(4);
-    const beamCard = members.filter({ hasText: "B1 deck beam" });
+    const named = (label: string) => members.filter({ has: crew.page.getByRole("heading", { level: 2, name: label, exact: true }) });
+    const beamCard = named("B1 deck beam");
     expect(await beamCard.getByTestId("crew-carried").textContent()).toContain("from J1 deck joists @ 16 in");
-    expect(await members.filter({ hasText: "P1 deck posts" }).textContent()).toMatch(/Posts.*6x6 posts.*Post 1.*Post 2/s);
-    expect(await members.filter({ hasText: "F1 footings" }).getByTestId("crew-headline").textContent()).toMatch(/in round × 10 in thick/);
+    expect(await named("P1 deck posts").textContent()).toMatch(/Posts.*6x6 posts.*Post 1.*Post 2/s);
+    expect(await named("F1 footings").getByTestId("crew-headline").textContent()).toMatch(/in round × 10 in thick/);
     await crew.screenshot("load-path-4-crew-link-phone-full", { fullPage: true });
     expect(crew.consoleErrors).toEqual([]);
     expect(owner.consoleErrors).toEqual([]);
