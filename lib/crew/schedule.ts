@@ -72,7 +72,7 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
           ? `${formatFeetInches(s.spanFt)} (member ${formatFeetInches(s.lengthFt)} long)`
           : formatFeetInches(s.spanFt);
   const supports = s.reactions.map((r, i) => {
-    if (m.kind === "post") return { name: `Post ${i + 1}`, reaction: `${formatLb(r.maxDown)} down onto its footing`, bearing: "" };
+    if (m.kind === "post") return { name: `Post ${i + 1}`, reaction: `${formatLb(r.maxDown)} down`, bearing: "onto its footing" };
     const reaction = r.uplift > 0 ? `${formatLb(r.maxDown)} down, ${formatLb(r.uplift)} uplift` : `${formatLb(r.maxDown)} down`;
     const bearing =
       r.jackStuds !== null

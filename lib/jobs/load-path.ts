@@ -355,7 +355,10 @@ function postSummary(post: PathMember, design: PostDesign, loads: PostLoad[], ta
     facts: [
       `Column stability NDS 2018 §3.7: le/d ${worst.factors.leOverD.toFixed(1)}, Cp ${worst.factors.Cp.toFixed(3)} (worst post)`,
       ...worst.assumptions,
-      ...loads.map((l, i) => `Post ${i + 1} under ${l.from}: ${Math.round(sumCases(l.byCase))} lb (all cases), ${Math.round(results[i].ratio * 100)}%`),
+      ...loads.map(
+        (l, i) =>
+          `Post ${i + 1} under ${l.from}: ${Math.round(sumCases(l.byCase)).toLocaleString("en-US")} lb (all cases), ${Math.round(results[i].ratio * 100)}%`,
+      ),
     ],
     carried: loads.map((l, i) => ({
       fromMemberId: post.id,
@@ -399,7 +402,7 @@ function footingSummary(
   const pass = final.every((r) => r.pass);
   const count = loads.length;
   return {
-    memberLabel: `${worst.answer}, on ${design.soilPsf} psf soil`,
+    memberLabel: `${worst.answer}, on ${design.soilPsf.toLocaleString("en-US")} psf soil`,
     headline: `${count} × ${worst.answer} — ${pass ? "OK" : "Over"} ${Math.round(worst.ratio * 100)}%`,
     spec: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "footing", plies: 1 },
     pass,
@@ -419,10 +422,10 @@ function footingSummary(
     tables: tables.version,
     computedAt: new Date().toISOString(),
     facts: [
-      `Soil: ${design.soilPsf} psf allowable (${worst.source})`,
-      `Area needed ${worst.requiredAreaFt2.toFixed(2)} ft² for the worst footing (${worst.loadLb} lb + ${worst.selfWeightLb} lb concrete at 150 pcf); given ${worst.areaFt2.toFixed(2)} ft²`,
+      `Soil: ${design.soilPsf.toLocaleString("en-US")} psf allowable (${worst.source})`,
+      `Area needed ${worst.requiredAreaFt2.toFixed(2)} ft² for the worst footing (${worst.loadLb.toLocaleString("en-US")} lb + ${worst.selfWeightLb} lb concrete at 150 pcf); given ${worst.areaFt2.toFixed(2)} ft²`,
       `Frost depth ${design.frostDepthIn} in as entered; IRC 2021 R403.1.1 and R403.1.4`,
-      ...loads.map((l, i) => `Footing ${i + 1} under ${l.from}: ${final[i].loadLb} lb, ${Math.round(final[i].ratio * 100)}%`),
+      ...loads.map((l, i) => `Footing ${i + 1} under ${l.from}: ${final[i].loadLb.toLocaleString("en-US")} lb, ${Math.round(final[i].ratio * 100)}%`),
     ],
     carried: loads.map((l, i) => ({
       fromMemberId: footing.id,
