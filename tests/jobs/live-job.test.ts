@@ -157,6 +157,23 @@ describe.skipIf(!TEST_DB)("a live job's load path (PostgreSQL)", () => {
     expect((await member(ids.f1))?.resultSummary?.change ?? null).toBeNull();
   });
 
+  test("new tables since the members were worked out: opening the job works the whole path out again", async () => {
+    who.current = owner;
+    const { Member } = await import("@/models/member");
+    const { recheckIfTablesChanged } = await import("@/lib/jobs/service");
+    const { getCurrentTables } = await import("@/lib/tables/current");
+    const current = (await getCurrentTables()).version;
+    const row = await Member.findByPk(ids.f1);
+    if (!row?.resultSummary) throw new Error("F1 has no answer");
+    // as if F1 had been worked out with an older published version
+    row.resultSummary = { ...row.resultSummary, tables: "an-older-version" };
+    row.changed("resultSummary", true);
+    await row.save();
+    expect(await recheckIfTablesChanged(jobId)).toBe(true);
+    expect((await member(ids.f1))?.resultSummary?.tables).toBe(current);
+    expect(await recheckIfTablesChanged(jobId)).toBe(false);
+  });
+
   test("deleting a carrier asks first (409 naming what sits on it); keeping them leaves them on nothing", async () => {
     who.current = owner;
     const asked = await actions.deleteMember({ memberId: ids.p1 });
