@@ -94,10 +94,10 @@ export function BearingForm({ memberId, carrierLabel, carrierLengthFt, supportsF
           {problem}
         </p>
       ) : null}
-      {saved ? <p role="status">Saved; the members below were worked out again.</p> : null}
+      {saved ? <p role="status">Done: the members below were worked out again.</p> : null}
       <div>
         <Button type="submit" variant="secondary" loading={pending}>
-          Save where it sits
+          Set where it sits
         </Button>
       </div>
     </form>
