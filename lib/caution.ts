@@ -25,6 +25,18 @@ export const NOT_CHECKED: readonly string[] = [
   "Fire resistance, decay and insect protection",
 ];
 
+/** What the cold-formed steel checks leave to others: added wherever a cold-formed steel member is shown. */
+export const NOT_CHECKED_COLD_FORMED: readonly string[] = [
+  "Cold-formed steel: web holes beyond the standard punchouts, and punchouts near a support or point load",
+  "Cold-formed steel: screws, clips, hangers and connections, and the fastening of bearing stiffeners",
+  "Cold-formed steel: bracing of the flange not sheathed (bridging, blocking, bottom flange over interior supports) and distortional buckling",
+];
+
+/** The not-checked list for the materials shown: the common list, and the cold-formed steel items when one is cold-formed steel. */
+export function notCheckedFor(materials: readonly (string | null | undefined)[]): readonly string[] {
+  return materials.some((m) => m === "cfs") ? [...NOT_CHECKED, ...NOT_CHECKED_COLD_FORMED] : NOT_CHECKED;
+}
+
 /** What a beam analysis on its own (POST /api/solve, `npm run solve`) does not check. */
 export const ANALYSIS_NOT_CHECKED =
   "This is the analysis of a straight beam with constant EI (shear deformation, axial load and the member's strength are not included); it does not check the member, bearing, connections, fasteners, posts, footings or lateral loads.";

@@ -149,6 +149,8 @@ export function route<C>(handler: Handler<C>): Handler<C> {
     } catch (err) {
       if (err instanceof HttpError) {
         res = NextResponse.json({ error: err.message, ...err.details }, { status: err.status });
+        const retryAfter = err.details?.retryAfterSeconds;
+        if (typeof retryAfter === "number" && (err.status === 429 || err.status === 503)) res.headers.set("retry-after", String(retryAfter));
       } else if (err instanceof ZodError) {
         res = NextResponse.json({ error: "invalid input", issues: zodIssues(err) }, { status: 400 });
       } else if (isDatabaseUnavailable(err)) {

@@ -1,4 +1,5 @@
 import type { Sequelize } from "sequelize";
+import { CfsSectionRow, initCfsSection } from "./cfs-section";
 import { CostRowModel, initCost } from "./cost";
 import { EngineeredProductRow, initEngineeredProduct } from "./engineered-product";
 import { IJoistRow, initIJoist } from "./i-joist";
@@ -11,6 +12,7 @@ import { initStockLength, StockLengthModel } from "./stock-length";
 import { initTableVersion, TableVersion, TABLE_VERSION_SOURCES, type TableVersionSource } from "./table-version";
 
 export {
+  CfsSectionRow,
   CostRowModel,
   EngineeredProductRow,
   IJoistRow,
@@ -36,4 +38,5 @@ export function initMaterialTableModels(sequelize: Sequelize): void {
   initSteelGrade(sequelize);
   initCost(sequelize);
   initStockLength(sequelize);
+  initCfsSection(sequelize);
 }

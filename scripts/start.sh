@@ -42,5 +42,5 @@ else
   node_modules/.bin/next build
   log "serving on http://127.0.0.1:$PORT"
   # scripts/serve.mjs: Next.js behind a server that tells the app each request's socket address (rate limits).
-  NODE_ENV=production node scripts/serve.mjs -H 127.0.0.1 -p "$PORT"
+  NODE_ENV=production node scripts/serve.mjs -H 127.0.0.1 -p "$PORT"  # SPANLARK_WORKERS processes (default: one per core)
 fi

@@ -25,6 +25,7 @@ if [ -z "${EXTERNAL_DATABASE:-}" ]; then
   bash scripts/pg.sh recreate-db spanlark_test >/dev/null
   bash scripts/pg.sh recreate-db spanlark_e2e >/dev/null
   E2E_DATABASE_URL="$(bash scripts/pg.sh url spanlark_e2e)"
+  export E2E_OWNS_PG=1   # browser tests may add databases to this cluster, or stop and start it (database-down, instances)
 else
   E2E_DATABASE_URL="${E2E_DATABASE_URL:-$DATABASE_URL}"
 fi
@@ -60,7 +61,7 @@ if [ "$QUICK" = 0 ]; then
       node_modules/.bin/tsx scripts/db.ts migrate && node_modules/.bin/tsx scripts/db.ts seed &&
         { [ ! -f scripts/stripe-setup.ts ] || node_modules/.bin/tsx scripts/stripe-setup.ts; }
     ) > .data/logs/e2e-db.log 2>&1 || { record e2e-db 1; cat .data/logs/e2e-db.log >&2; }
-    DATABASE_URL="$E2E_DATABASE_URL" NODE_ENV=production LOG_LEVEL=warn \
+    DATABASE_URL="$E2E_DATABASE_URL" NODE_ENV=production LOG_LEVEL=warn SPANLARK_WORKERS="${SPANLARK_WORKERS:-1}" \
       node scripts/serve.mjs -H 127.0.0.1 -p "$E2E_PORT" > .data/logs/e2e-app.log 2>&1 &
     SERVICE_PIDS+=($!)
     if wait_for_url "$E2E_BASE_URL/api/health" "the app"; then

@@ -46,7 +46,7 @@ const JOBS = [
     key: "marsh" as const,
     name: "Marsh Lane addition",
     siteAddress: "14 Marsh Lane, Larkfield",
-    notes: "Single-storey kitchen and family room addition on the north side.",
+    notes: "One-story kitchen and family room addition on the north side.",
   },
   {
     key: "orchard" as const,

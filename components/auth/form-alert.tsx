@@ -8,7 +8,7 @@ export type FormAlertProps = {
   className?: string;
 };
 
-/** A message about the whole form (not one field): a word and an icon as well as a colour. */
+/** A message about the whole form (not one field): a word and an icon as well as a color. */
 export function FormAlert({ tone, children, className }: FormAlertProps) {
   const looks = {
     error: "border-over bg-over-bg text-over-ink",

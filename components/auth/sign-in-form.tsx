@@ -23,7 +23,8 @@ export type SignInFormProps = {
   notice?: string;
 };
 
-type Problem = { kind: "invalid" } | { kind: "unverified"; email: string } | { kind: "limited" } | { kind: "offline" } | { kind: "unavailable" };
+type Problem =
+  { kind: "invalid" } | { kind: "unverified"; email: string } | { kind: "limited" } | { kind: "offline" } | { kind: "unavailable" } | { kind: "busy" };
 
 export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
   const [problem, setProblem] = useState<Problem | null>(null);
@@ -46,6 +47,7 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
       if (result.error === "EmailNotVerified") return setProblem({ kind: "unverified", email });
       if (result.error === "TooManyTries") return setProblem({ kind: "limited" });
       if (result.error === "DatabaseUnavailable") return setProblem({ kind: "unavailable" });
+      if (result.error === "TooBusy") return setProblem({ kind: "busy" });
       setProblem({ kind: "invalid" });
     },
   });
@@ -63,6 +65,9 @@ export function SignInForm({ callbackUrl, notice }: SignInFormProps) {
       {notice && !problem ? <FormAlert tone="done">{notice}</FormAlert> : null}
       {problem?.kind === "invalid" ? <FormAlert tone="error">That e-mail and password do not match an account. Check both and try again.</FormAlert> : null}
       {problem?.kind === "limited" ? <FormAlert tone="error">Too many tries. Wait 15 minutes and try again, or choose a new password below.</FormAlert> : null}
+      {problem?.kind === "busy" ? (
+        <FormAlert tone="error">Spanlark is checking a lot of sign-ins at this moment. Wait a few seconds and press Sign in again.</FormAlert>
+      ) : null}
       {problem?.kind === "offline" ? <FormAlert tone="error">No connection. Check your signal and try again.</FormAlert> : null}
       {problem?.kind === "unavailable" ? (
         <FormAlert tone="error">Spanlark cannot reach its saved records right now. Try again in a minute; sizing still works without signing in.</FormAlert>

@@ -28,7 +28,8 @@ export function SignUpForm({ callbackUrl }: SignUpFormProps = {}) {
     validationSchema: schema,
     onSubmit: async (values, helpers) => {
       setFormError(null);
-      const body = { ...values, email: values.email.trim(), company: values.company.trim() || null };
+      // the page that sent the builder here goes into the confirmation link, so confirming leads back to it
+      const body = { ...values, email: values.email.trim(), company: values.company.trim() || null, returnTo: callbackUrl ?? null };
       const result = await postJson<{ message: string }>("/api/auth/sign-up", body);
       if (result.ok) {
         setSentTo(body.email);
@@ -54,7 +55,7 @@ export function SignUpForm({ callbackUrl }: SignUpFormProps = {}) {
           disabled={resent === "sent"}
           onClick={async () => {
             setResent("sending");
-            await postJson("/api/auth/verify/resend", { email: sentTo });
+            await postJson("/api/auth/verify/resend", { email: sentTo, returnTo: callbackUrl ?? null });
             setResent("sent");
           }}
         >

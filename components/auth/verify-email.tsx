@@ -1,19 +1,39 @@
 "use client";
 
-import { useState } from "react";
+import { useEffect, useState } from "react";
 import { Button, ButtonLink } from "@/components/ui/button";
 import { FormAlert } from "./form-alert";
 import { postJson, signInWithTicket } from "./form-support";
 
-export type VerifyEmailProps = { token: string };
+export type VerifyEmailProps = {
+  token: string;
+  /** the page the builder signed up from (a checked same-origin path): confirming leads back there */
+  returnTo?: string;
+};
 
 /**
  * One tap confirms the address. The link alone does not: mail scanners open links before people do, and a
  * single-use link spent by a scanner would leave the person with a dead one.
  */
-export function VerifyEmail({ token }: VerifyEmailProps) {
+export function VerifyEmail({ token, returnTo }: VerifyEmailProps) {
   const [state, setState] = useState<"idle" | "working" | "done" | "signed-in" | "failed">("idle");
   const [message, setMessage] = useState("");
+
+  // Signed in and sent here from a page (a job's "Save job sheet", the plans): straight back to it.
+  useEffect(() => {
+    if (state === "signed-in" && returnTo) window.location.assign(returnTo);
+  }, [state, returnTo]);
+
+  if (state === "signed-in" && returnTo) {
+    return (
+      <div className="flex flex-col gap-4" data-testid="verify-done">
+        <FormAlert tone="done">Your e-mail is confirmed and you are signed in. Taking you back to where you were…</FormAlert>
+        <ButtonLink href={returnTo} size="lg" fullWidth data-testid="verify-carry-on">
+          Back to where you were
+        </ButtonLink>
+      </div>
+    );
+  }
 
   if (state === "signed-in") {
     return (
@@ -33,7 +53,7 @@ export function VerifyEmail({ token }: VerifyEmailProps) {
     return (
       <div className="flex flex-col gap-4" data-testid="verify-done">
         <FormAlert tone="done">Your e-mail is confirmed.</FormAlert>
-        <ButtonLink href="/sign-in?from=verified" size="lg" fullWidth>
+        <ButtonLink href={returnTo ? `/sign-in?from=verified&callbackUrl=${encodeURIComponent(returnTo)}` : "/sign-in?from=verified"} size="lg" fullWidth>
           Sign in
         </ButtonLink>
       </div>

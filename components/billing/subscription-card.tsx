@@ -10,7 +10,7 @@ export function formatDay(date: Date): string {
 
 const ROLE_WORDS: Record<Role, string> = { builder: "Free account", subscriber: "Subscriber", admin: "Administrator" };
 
-/** The account's standing as a word and an icon, never colour alone. */
+/** The account's standing as a word and an icon, never color alone. */
 export function RoleBadge({ role }: { role: Role }) {
   return (
     <span data-testid="billing-role" data-role={role} className="w-fit">
@@ -34,7 +34,7 @@ export function subscriptionSentence(s: SubscriptionSummary): string {
   if (s.status === "past_due" || s.status === "unpaid") {
     return "The last payment did not go through. Update your card in the subscription settings to keep saving job sheets.";
   }
-  if (s.cancelAtPeriodEnd) return `Cancelled. You keep every paid feature until ${end ?? "the end of the period"}, then the account goes back to free.`;
+  if (s.cancelAtPeriodEnd) return `Canceled. You keep every paid feature until ${end ?? "the end of the period"}, then the account goes back to free.`;
   if (s.active) return `Active. Renews on ${end ?? "the next billing date"}.`;
   return "Waiting for the payment to be confirmed.";
 }

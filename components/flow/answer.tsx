@@ -1,7 +1,9 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useEffect, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
+import { NOT_CHECKED_COLD_FORMED } from "@/lib/caution";
 import { RatioBar, ratioVerdict } from "@/components/ui/ratio-bar";
 import { Skeleton, Spinner } from "@/components/ui/spinner";
 import { StatusBadge } from "@/components/ui/status-badge";
@@ -14,10 +16,15 @@ import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
-import { AnswerDiagrams } from "./answer-diagrams";
-import { MemberDetail } from "./member-detail";
 import { useSize } from "./use-design";
 import { checkDetail, checkTitle } from "./words";
+
+// the diagrams (d3) and the full check load with the answer, not with the flow's first screen
+const AnswerDiagrams = dynamic(() => import("./answer-diagrams").then((m) => m.AnswerDiagrams), {
+  ssr: false,
+  loading: () => <Skeleton width="100%" height="40rem" />,
+});
+const MemberDetail = dynamic(() => import("./member-detail").then((m) => m.MemberDetail), { ssr: false });
 
 export type AnswerProps = {
   state: FlowState;
@@ -100,32 +107,37 @@ function CandidateCard({
   const verdict = ratioVerdict(candidate.ratio);
   return (
     <li>
-      <button
-        type="button"
-        onClick={onOpen}
+      {/* The card reads as text; its one control is "Full check, every factor", named by those very words (and the
+          member, for a screen reader), stretched over the whole card so a tap anywhere on it opens the check. */}
+      <div
         className={cx(
-          "flex w-full flex-col gap-3 rounded-card border-2 bg-paper-raised p-4 text-left hover:border-spruce",
+          "relative flex w-full flex-col gap-3 rounded-card border-2 bg-paper-raised p-4 text-left hover:border-spruce",
           chosen ? "border-amber border-l-8" : "border-rule",
         )}
-        aria-label={`${candidate.label}: ${verdict.text}, ${checkTitle(candidate.governing)} governs.${chosen ? " Chosen." : ""} Open the full check.`}
       >
-        <span className="flex flex-wrap items-center justify-between gap-2">
-          <span className="text-xl font-bold text-ink">{shortLabel(candidate.member, candidate.label)}</span>
+        <div className="flex flex-wrap items-center justify-between gap-2">
+          <h3 className="text-xl font-bold text-ink">{shortLabel(candidate.member, candidate.label)}</h3>
           <StatusBadge status={verdict.pass ? "pass" : "fail"} label={verdict.text} />
-        </span>
-        <span className="text-ink-soft">
+        </div>
+        <p className="text-ink-soft">
           {candidate.label} · {checkTitle(candidate.governing)} governs · {Math.round(candidate.weightPlf * 10) / 10} plf
           {chosen ? <span className="ml-2 rounded bg-amber-light px-1.5 font-bold text-ink">chosen</span> : null}
-        </span>
-        <span className="flex min-h-[13.5rem] flex-col gap-2">
+        </p>
+        <div className="flex min-h-[13.5rem] flex-col gap-2">
           {check
             ? check.checks.map((c) => (
                 <RatioBar key={c.name} ratio={c.ratio} label={checkTitle(c.name)} governing={c.name === check.governing} detail={checkDetail(c)} />
               ))
             : Array.from({ length: 4 }, (_, i) => <Skeleton key={i} width="100%" height="2.75rem" />)}
-        </span>
-        <span className="font-bold text-spruce underline underline-offset-4">Full check, every factor</span>
-      </button>
+        </div>
+        <button
+          type="button"
+          onClick={onOpen}
+          className="min-h-touch self-start text-left font-bold text-spruce underline underline-offset-4 after:absolute after:inset-0 after:rounded-card after:content-['']"
+        >
+          Full check, every factor<span className="sr-only"> of {candidate.label}</span>
+        </button>
+      </div>
     </li>
   );
 }
@@ -208,7 +220,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
             </div>
           )}
         </div>
-        <Caution />
+        <Caution also={chosenCandidate?.member.material === "cfs" ? NOT_CHECKED_COLD_FORMED : undefined} />
       </section>
 
       {variant === "full" ? (

@@ -3,7 +3,7 @@
 import { useRef, type KeyboardEvent, type PointerEvent } from "react";
 import { INK } from "@/lib/diagrams/palette";
 import { formatFeetInches } from "@/lib/flow/length";
-import { clamp, overhangs, snapFt, sortedSupports, type FlowState, type FlowSupport } from "@/lib/flow/state";
+import { clamp, overhangs, snapFt, sortedSupports, SUPPORT_WORDS, type FlowState, type FlowSupport } from "@/lib/flow/state";
 import { spanWords } from "@/lib/flow/summary";
 
 export type BeamEditorProps = {
@@ -137,7 +137,7 @@ export function BeamEditor({ state, selected, onSelect, onAdd, onMove, onSetType
             role="button"
             tabIndex={0}
             aria-pressed={isSelected}
-            aria-label={`Support ${sorted.indexOf(s) + 1}: ${s.type} at ${formatFeetInches(s.x)}. Arrow keys move it, Delete removes it.`}
+            aria-label={`Support ${sorted.indexOf(s) + 1}: ${SUPPORT_WORDS[s.type].short} at ${formatFeetInches(s.x)}. Arrow keys move it, Delete removes it.`}
             onKeyDown={onKey(index)}
             onFocus={() => onSelect(index)}
             onPointerDown={(event) => {

@@ -18,7 +18,7 @@ export type ChoiceGroupProps<T extends string> = {
   className?: string;
 };
 
-/** Radio buttons drawn as big targets; the chosen one carries a check mark as well as a colour. */
+/** Radio buttons drawn as big targets; the chosen one carries a check mark as well as a color. */
 export function ChoiceGroup<T extends string>({ legend, name, value, choices, onChange, look = "cards", hint, className }: ChoiceGroupProps<T>) {
   const hintId = useId();
   return (

@@ -1,6 +1,6 @@
 "use client";
 
-import { useId, useState } from "react";
+import { useId, useLayoutEffect, useRef, useState, type MouseEvent } from "react";
 import { TextField } from "@/components/ui/field";
 import { formatFeetInches, parseLength } from "@/lib/flow/length";
 import { useTypedDraft } from "./use-typed-draft";
@@ -37,38 +37,71 @@ export function lengthProblem(
   return { feet: parsed.feet };
 }
 
+export const LENGTH_HINT = `As you measured it: 12' 6", 12 6, 12-1/2, 150" or 3.8 m`;
+
 /**
- * A length typed the way it was measured (12' 6", 12-6, 12.5, 150", 3.8 m), echoed back in feet and
- * inches to 1/16 in. Every value that parses is used at once; a bad one keeps the last good value and says why.
+ * The marks a length needs that no phone keypad shows beside the digits: the decimal pad (inputmode="decimal")
+ * has digits and a point only, "numeric" digits only, "tel" adds * # +, and a text keyboard hides both the
+ * digits and the marks behind a layer key. So the field opens the decimal pad and this row adds the rest.
  */
-export const LENGTH_HINT = `As you measured it: 12' 6", 12-6, 12.5, 150" or 3.8 m`;
+const KEYS = [
+  { insert: "'", shown: "′ ft", say: "Type a foot mark" },
+  { insert: '"', shown: "″ in", say: "Type an inch mark" },
+  { insert: " ", shown: "space", say: "Type a space" },
+  { insert: "/", shown: "/", say: "Type a slash, for a fraction" },
+] as const;
 
+/**
+ * A length typed the way it was measured (12' 6", 12 6, 12-1/2, 150", 3.8 m), echoed back in feet and
+ * inches to 1/16 in. Every value that parses is used at once; a bad one stays in the field, says why, and
+ * holds the step until it is fixed.
+ */
 export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, exclusiveMin, id, containerClassName }: LengthFieldProps) {
-  const [error, setError] = useState<string | null>(null);
   const [echo, setEcho] = useState<string | null>(null);
-  const echoId = useId();
+  // the phone's full keyboard, for metric units or words ("3.8 m", "12 ft 6 in")
+  const [letters, setLetters] = useState(false);
+  const generated = useId();
+  const inputId = id ?? `length-${generated}`;
 
-  const check = (value: string, showError: boolean) => {
+  const check = (value: string): string | null => {
     const result = lengthProblem(label, value, { minFt, maxFt, exclusiveMin });
     if ("feet" in result) {
-      setError(null);
       setEcho(formatFeetInches(result.feet));
       if (Math.abs(result.feet - valueFt) > 1e-12) onCommit(result.feet);
-    } else {
-      setEcho(null);
-      if (showError) setError(result.message);
+      return null;
     }
+    setEcho(null);
+    return result.message;
   };
-  // away from the field it shows the value in feet and inches
-  const { text, editing: focused, inputProps } = useTypedDraft(formatFeetInches(valueFt), check);
+  const { text, editing: focused, error, setText, checkNow, inputProps } = useTypedDraft(inputId, formatFeetInches(valueFt), check);
+
+  // where the caret goes once a key's mark is in the field (set as the field renders, before anything else is typed)
+  const caret = useRef<number | null>(null);
+  useLayoutEffect(() => {
+    if (caret.current === null) return;
+    const input = document.getElementById(inputId);
+    if (input instanceof HTMLInputElement) input.setSelectionRange(caret.current, caret.current);
+    caret.current = null;
+  });
+  const type = (insert: string) => {
+    const input = document.getElementById(inputId);
+    if (!(input instanceof HTMLInputElement)) return;
+    const start = input.selectionStart ?? text.length;
+    const end = input.selectionEnd ?? text.length;
+    caret.current = start + insert.length;
+    setText(text.slice(0, start) + insert + text.slice(end));
+  };
+  // the keys keep the focus (and the phone's keypad) in the field
+  const keepFocus = (event: MouseEvent) => event.preventDefault();
 
   return (
     <div className={containerClassName}>
       <TextField
-        id={id}
+        id={inputId}
         label={label}
         hint={hint}
         error={error}
+        inputMode={letters ? "text" : "decimal"}
         autoComplete="off"
         autoCapitalize="off"
         autoCorrect="off"
@@ -79,11 +112,39 @@ export function LengthField({ label, valueFt, onCommit, hint, minFt, maxFt, excl
         onKeyDown={(event) => {
           if (event.key === "Enter") {
             event.preventDefault();
-            check(text, true);
+            checkNow();
           }
         }}
       />
-      <p id={echoId} className="figures mt-1 min-h-6 text-sm text-ink-soft" aria-live="polite">
+      {focused ? (
+        <div role="group" aria-label="Length marks" className="mt-2 flex gap-1.5" data-testid="length-keys">
+          {KEYS.map((key) => (
+            <button
+              key={key.shown}
+              type="button"
+              tabIndex={-1}
+              aria-label={key.say}
+              onMouseDown={keepFocus}
+              onClick={() => type(key.insert)}
+              className="figures min-h-touch min-w-touch flex-1 rounded-lg border-2 border-rule-strong bg-paper-sunk px-2 text-lg font-bold text-ink active:bg-rule"
+            >
+              {key.shown}
+            </button>
+          ))}
+          <button
+            type="button"
+            tabIndex={-1}
+            aria-pressed={letters}
+            aria-label="Letters keyboard, for m, cm or ft"
+            onMouseDown={keepFocus}
+            onClick={() => setLetters((l) => !l)}
+            className="min-h-touch min-w-touch rounded-lg border-2 border-rule-strong bg-paper-sunk px-2 font-bold text-ink aria-pressed:border-spruce aria-pressed:bg-spruce-light"
+          >
+            abc
+          </button>
+        </div>
+      ) : null}
+      <p className="figures mt-1 min-h-6 text-sm text-ink-soft" aria-live="polite">
         {focused && echo && !error ? `Reads as ${echo}` : "\u00a0"}
       </p>
     </div>

@@ -6,6 +6,7 @@ import { RatioBar } from "@/components/ui/ratio-bar";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { CheckOutput } from "@/lib/solver/design/check";
+import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 import { citationOf } from "@/lib/tables/citations";
 import { checkDetail, checkTitle } from "./words";
 
@@ -50,6 +51,16 @@ const FACTOR_WORDS: Record<string, string> = {
   Lb: "Lb, unbraced length (ft)",
   Mn: "Mn (kip-ft)",
   omegaB: "Ωb",
+  phiB: "φb",
+  standard: "Standard",
+  EKsi: "E (ksi)",
+  CbLtb: "Cb, moment gradient",
+  Fn: "Fn, flexural stress (ksi)",
+  Se: "Se, effective section modulus (in³)",
+  Vn: "Vn, shear strength (kip)",
+  Ieff: "I, effective at service (in⁴)",
+  bearingStiffeners: "Bearing stiffeners at supports",
+  pieces: "C-sections",
 };
 
 function fmt(v: number): string {
@@ -98,7 +109,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
           <p className="flex flex-wrap items-center gap-2">
             <StatusBadge
               status={check.pass ? "pass" : "fail"}
-              label={check.pass ? `Works — ${Math.round(check.ratio * 100)}% used` : `Does not work — ${Math.round(check.ratio * 100)}%`}
+              label={check.pass ? `Works — ${ratioPercent(check.ratio, true)}% used` : `Does not work — ${ratioPercent(check.ratio, false)}%`}
             />
             {chosen ? <span className="font-bold text-ink">Chosen</span> : null}
           </p>

@@ -1,6 +1,6 @@
 "use client";
 
-import { useState } from "react";
+import { useId } from "react";
 import { NumberWithUnitField } from "@/components/ui/field";
 import { useTypedDraft } from "./use-typed-draft";
 
@@ -19,7 +19,7 @@ export type FlowNumberFieldProps = {
   containerClassName?: string;
 };
 
-/** A number with its unit; each good value is used as it is typed, a bad one says why and is not used. */
+/** A number with its unit; each good value is used as it is typed, a bad one stays, says why and holds the step. */
 export function FlowNumberField({
   label,
   value,
@@ -33,7 +33,7 @@ export function FlowNumberField({
   integer = false,
   containerClassName,
 }: FlowNumberFieldProps) {
-  const [error, setError] = useState<string | null>(null);
+  const fieldId = `number-${useId()}`;
 
   const problem = (raw: string): string | null => {
     const t = raw.trim().replace(/,/g, "");
@@ -46,20 +46,19 @@ export function FlowNumberField({
     return null;
   };
 
-  const check = (raw: string, show: boolean) => {
+  const check = (raw: string): string | null => {
     const p = problem(raw);
     if (p === null) {
-      setError(null);
       const n = Number(raw.trim().replace(/,/g, ""));
       if (n !== value) onCommit(n);
-    } else if (show) {
-      setError(p);
     }
+    return p;
   };
-  const { inputProps } = useTypedDraft(String(value), check);
+  const { error, inputProps, checkNow } = useTypedDraft(fieldId, String(value), check);
 
   return (
     <NumberWithUnitField
+      id={fieldId}
       label={label}
       unit={unit}
       unitSpoken={unitSpoken}
@@ -69,6 +68,9 @@ export function FlowNumberField({
       inputMode={integer ? "numeric" : "decimal"}
       enterKeyHint="done"
       {...inputProps}
+      onKeyDown={(event) => {
+        if (event.key === "Enter") checkNow();
+      }}
     />
   );
 }

@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useCallback, useEffect, useMemo, useRef, useState } from "react";
 import { BottomActionBar } from "@/components/ui/bottom-action-bar";
 import { Button, ButtonLink } from "@/components/ui/button";
@@ -8,15 +9,38 @@ import { cx } from "@/components/ui/cx";
 import { defaultFlowState } from "@/lib/flow/defaults";
 import { FLOW_STEPS, KIND_LABELS, STEP_TITLES, type FlowLocation, type FlowState, type FlowStepId, type MemberKind } from "@/lib/flow/state";
 import { spanWords } from "@/lib/flow/summary";
-import { flowSearch, resolveFlowStart, STORAGE_KEY, storeLocation, type FlowStart } from "@/lib/flow/url";
+import { flowSearch, STORAGE_KEY, storeLocation } from "@/lib/flow/address";
+import type { FlowStart } from "@/lib/flow/url";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
-import { Answer } from "./answer";
-import { SaveToJob, type SaveTarget } from "./save-to-job";
+import { FieldProblemsContext, type ReportFieldProblem } from "./field-problems";
+import type { SaveTarget } from "./save-to-job";
 import { StepKind } from "./step-kind";
-import { StepLoads } from "./step-loads";
-import { StepMaterial } from "./step-material";
-import { StepSpan } from "./step-span";
+import { Skeleton } from "@/components/ui/spinner";
+
+// Each step's code loads with its step (the server still renders the step a link opens at): the first screen
+// carries the choice of member only, not the drawing, the loads, the materials or the answer and its diagrams.
+const stepLoading = () => <Skeleton width="100%" height="24rem" />;
+const StepSpan = dynamic(() => import("./step-span").then((m) => m.StepSpan), { loading: stepLoading });
+const StepLoads = dynamic(() => import("./step-loads").then((m) => m.StepLoads), { loading: stepLoading });
+const StepMaterial = dynamic(() => import("./step-material").then((m) => m.StepMaterial), { loading: stepLoading });
+const Answer = dynamic(() => import("./answer").then((m) => m.Answer), { loading: stepLoading });
+
+/** True on a screen wide enough for the live answer beside the inputs (Tailwind's lg); false until known. */
+function useWideScreen(): boolean {
+  const [wide, setWide] = useState(false);
+  useEffect(() => {
+    const query = window.matchMedia("(min-width: 1024px)");
+    const update = () => setWide(query.matches);
+    update();
+    query.addEventListener("change", update);
+    return () => query.removeEventListener("change", update);
+  }, []);
+  return wide;
+}
+
+// saving (a form library and the job actions) loads when the builder first asks to save
+const SaveToJob = dynamic(() => import("./save-to-job").then((m) => m.SaveToJob), { ssr: false });
 
 export type SizingFlowProps = {
   initial: FlowLocation;
@@ -96,12 +120,28 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   const [chosen, setChosen] = useState<MemberSpec | null>(initialChosen);
   const [chosenCheck, setChosenCheck] = useState<CheckOutput | null>(null);
   const [saveOpen, setSaveOpen] = useState(openSave && signedIn);
+  const [saveAsked, setSaveAsked] = useState(saveOpen);
   const headingRef = useRef<HTMLHeadingElement>(null);
   const lastStep = useRef<FlowStepId>(initial.step);
   const fromPop = useRef(false);
   const storedAtArrival = useRef<string | null | undefined>(undefined);
   const resumedOnce = useRef(false);
   const { state, step } = location;
+  // the live answer beside the inputs is only drawn (and only asked of the server) where there is room for it
+  const wide = useWideScreen();
+  // the fields of this step that hold an entry that cannot be used (input id → message), and whether the
+  // builder tried to go on with one (the step then says so and stays)
+  const problems = useRef(new Map<string, string>());
+  const [problemCount, setProblemCount] = useState(0);
+  const [held, setHeld] = useState(false);
+  const reportProblem = useCallback<ReportFieldProblem>((fieldId, message) => {
+    const had = problems.current.get(fieldId) ?? null;
+    if (had === message) return;
+    if (message === null) problems.current.delete(fieldId);
+    else problems.current.set(fieldId, message);
+    setProblemCount(problems.current.size);
+    if (problems.current.size === 0) setHeld(false);
+  }, []);
   const editJob = editing?.jobId;
   const editMember = editing?.memberId;
   const extra = useMemo(
@@ -115,15 +155,21 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   useEffect(() => {
     if (storedAtArrival.current === undefined) storedAtArrival.current = readStorage();
     if (editing || (from !== "new" && from !== "kind")) return;
-    const frame = requestAnimationFrame(() => {
-      const start = resolveFlowStart(params, storedAtArrival.current ?? null);
-      if (start.from !== "storage" || resumedOnce.current) return;
+    const stored = storedAtArrival.current;
+    if (!stored) return;
+    let stale = false;
+    // reading a stored state back checks it with the flow's schema, fetched only when there is one to read
+    void import("@/lib/flow/url").then(({ resolveFlowStart }) => {
+      const start = resolveFlowStart(params, stored);
+      if (stale || start.from !== "storage" || resumedOnce.current) return;
       resumedOnce.current = true;
       lastStep.current = start.location.step;
       setLocation(start.location);
       setResumed(true);
     });
-    return () => cancelAnimationFrame(frame);
+    return () => {
+      stale = true;
+    };
   }, [editing, from, params]);
 
   // Keep the address bar and local storage in step with every change; a new step is a new history entry.
@@ -143,12 +189,14 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   useEffect(() => {
     const onPop = () => {
       const search = new URLSearchParams(window.location.search);
-      const start = resolveFlowStart({ s: search.get("s"), step: search.get("step"), kind: search.get("kind") }, null);
-      if (start.from === "url") {
-        fromPop.current = true;
-        lastStep.current = start.location.step;
-        setLocation(start.location);
-      }
+      void import("@/lib/flow/url").then(({ resolveFlowStart }) => {
+        const start = resolveFlowStart({ s: search.get("s"), step: search.get("step"), kind: search.get("kind") }, null);
+        if (start.from === "url") {
+          fromPop.current = true;
+          lastStep.current = start.location.step;
+          setLocation(start.location);
+        }
+      });
     };
     window.addEventListener("popstate", onPop);
     return () => window.removeEventListener("popstate", onPop);
@@ -157,6 +205,16 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   const update = useCallback((fn: (s: FlowState) => FlowState) => setLocation((loc) => ({ ...loc, state: fn(loc.state) })), []);
 
   const goTo = useCallback((next: FlowStepId) => {
+    const [fieldId] = problems.current.keys();
+    if (fieldId) {
+      // a bad entry holds the step: going on would carry the value from before as if it were the one typed
+      setHeld(true);
+      const field = document.getElementById(fieldId);
+      field?.scrollIntoView({ block: "center" });
+      field?.focus();
+      return;
+    }
+    setHeld(false);
     setLocation((loc) => ({ ...loc, step: next }));
     window.scrollTo({ top: 0 });
     requestAnimationFrame(() => headingRef.current?.focus());
@@ -172,14 +230,25 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
   };
 
   const returnTo = `/size${flowSearch({ state, step: "answer" }, extra)}&save=1`;
-  const summaryLine = (
-    <span className="font-bold tabular-nums">
-      {KIND_LABELS[state.kind]} · {spanWords(state)}
-    </span>
-  );
+  const summaryLine =
+    problemCount > 0 ? (
+      <span className="font-bold text-over-ink">Fix the field marked in red</span>
+    ) : (
+      <span className="font-bold tabular-nums">
+        {KIND_LABELS[state.kind]} · {spanWords(state)}
+      </span>
+    );
 
   const saveAction = signedIn ? (
-    <Button size="lg" className="px-3" onClick={() => setSaveOpen(true)} disabled={!chosenCheck}>
+    <Button
+      size="lg"
+      className="px-3"
+      onClick={() => {
+        setSaveAsked(true);
+        setSaveOpen(true);
+      }}
+      disabled={!chosenCheck}
+    >
       {editing ? "Save the changes" : "Save to a job"}
     </Button>
   ) : (
@@ -233,13 +302,27 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
             </span>
             {step === "answer" ? "What to build" : STEP_TITLES[step]}
           </h2>
-          {stepBody}
+          {held && problemCount > 0 ? (
+            <p role="alert" className="rounded-card border-2 border-over bg-over-bg p-3 font-bold text-over-ink" data-testid="step-held">
+              Not yet: fix the field marked in red, then go on.
+            </p>
+          ) : null}
+          <FieldProblemsContext.Provider value={reportProblem}>{stepBody}</FieldProblemsContext.Provider>
         </section>
         {step !== "answer" ? (
           <aside aria-label="Answer so far" className="hidden lg:block">
             <div className="sticky top-4 flex flex-col gap-3">
               <h2 className="text-xl font-bold">Answer so far</h2>
-              <Answer state={state} chosen={chosen} onChoose={setChosen} onGoTo={goTo} variant="live" />
+              {wide ? (
+                <>
+                  {problemCount > 0 ? (
+                    <p className="font-bold text-over-ink">Fix the field marked in red: the answer below is for the value before it.</p>
+                  ) : null}
+                  <Answer state={state} chosen={chosen} onChoose={setChosen} onGoTo={goTo} variant="live" />
+                </>
+              ) : (
+                <Skeleton width="100%" height="12rem" />
+              )}
               <Button variant="secondary" onClick={() => goTo("answer")}>
                 See the whole answer
               </Button>
@@ -263,7 +346,7 @@ export function SizingFlow({ initial, from, params, signedIn, jobs, editing, ope
         )}
       </BottomActionBar>
 
-      {signedIn ? (
+      {signedIn && saveAsked ? (
         <SaveToJob
           open={saveOpen}
           onClose={() => setSaveOpen(false)}

@@ -1,5 +1,6 @@
 "use client";
 
+import dynamic from "next/dynamic";
 import { useState } from "react";
 import { Button } from "@/components/ui/button";
 import { SelectField } from "@/components/ui/field";
@@ -13,9 +14,12 @@ import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import { LOAD_CASES, type LoadCase } from "@/lib/solver/types";
 import { ChoiceGroup } from "./choice-group";
 import { LengthField } from "./length-field";
-import { LineLoadDialog, PointLoadDialog } from "./load-dialog";
 import { FlowNumberField } from "./number-field";
 import { TributarySketch } from "./tributary-sketch";
+
+// the load dialogs (and the form library in them) load with this step, not with the flow's first screen
+const PointLoadDialog = dynamic(() => import("./load-dialog").then((m) => m.PointLoadDialog), { ssr: false });
+const LineLoadDialog = dynamic(() => import("./load-dialog").then((m) => m.LineLoadDialog), { ssr: false });
 
 export type StepLoadsProps = { state: FlowState; update: (fn: (s: FlowState) => FlowState) => void };
 
@@ -108,7 +112,7 @@ export function StepLoads({ state, update }: StepLoadsProps) {
         {state.width.mode === "spacing" ? (
           <div className="flex flex-col gap-3">
             <ChoiceGroup
-              legend="Spacing, centre to centre"
+              legend="Spacing, center to center"
               name="spacing"
               look="segments"
               value={SPACINGS.includes(state.width.spacingIn) ? String(state.width.spacingIn) : ""}

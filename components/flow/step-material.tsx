@@ -20,6 +20,15 @@ const FAMILIES: { value: MaterialFamily; label: string; detail: string }[] = [
   { value: "engineered", label: "Engineered wood", detail: "LVL, PSL or glulam" },
   { value: "ijoist", label: "Wood I-joists", detail: "PRI-20 to PRI-90, 9-1/2 to 16 in deep; floors and flat roofs" },
   { value: "steel", label: "Steel", detail: "W-shapes, A992" },
+  { value: "cfs", label: "Cold-formed steel", detail: "C-joists like 800S162-54; headers of two C-sections" },
+];
+
+/** Cold-formed steel flange widths in the tables, in (the designation's 162, 200, 250). */
+const CFS_FLANGES = [
+  { value: "", label: "Any flange width" },
+  { value: "1.62", label: "1-5/8 in (S162)" },
+  { value: "2", label: "2 in (S200)" },
+  { value: "2.5", label: "2-1/2 in (S250)" },
 ];
 
 function Checkbox({ label, hint, checked, onChange }: { label: string; hint?: string; checked: boolean; onChange: (v: boolean) => void }) {
@@ -135,6 +144,16 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
           label="I-joist series"
           hint="APA PRI-400 generic values. A maker's own joists carry their own values; use those where they differ."
           options={[{ value: "", label: "Any series" }, ...[...new Set(I_JOISTS.map((j) => j.series))].map((series) => ({ value: series, label: series }))]}
+          value={m.product}
+          onChange={(e) => update((s) => ({ ...s, material: { ...s.material, product: e.target.value } }))}
+        />
+      ) : null}
+
+      {m.family === "cfs" ? (
+        <SelectField
+          label="Flange width"
+          hint="AISI S100-16 checks; Fy 33 ksi below 54 mil and 50 ksi from 54 mil up (order 50 ksi steel where the answer uses it). Bearing stiffeners are added where the web needs them."
+          options={CFS_FLANGES}
           value={m.product}
           onChange={(e) => update((s) => ({ ...s, material: { ...s.material, product: e.target.value } }))}
         />

@@ -3,18 +3,19 @@
 import { useId, useState, type MouseEvent } from "react";
 import { Button } from "@/components/ui/button";
 import { formatFeetInches } from "@/lib/flow/length";
-import { MAX_LENGTH_FT } from "@/lib/flow/schema";
 import {
   addOverhang,
   DEFAULT_OVERHANG_FT,
   mainSpanFt,
   maxOverhangFt,
+  MAX_LENGTH_FT,
   moveSupport,
   overhangs,
   removeOverhang,
   snapFt,
   sortedSupports,
   spanFromRoughOpeningFt,
+  SUPPORT_WORDS,
   supportRange,
   withMainSpan,
   withOverhang,
@@ -29,11 +30,7 @@ import { FlowNumberField } from "./number-field";
 
 export type StepSpanProps = { state: FlowState; update: (fn: (s: FlowState) => FlowState) => void };
 
-const SUPPORT_TYPES: { value: FlowSupport["type"]; label: string; detail: string }[] = [
-  { value: "pin", label: "Pin", detail: "sits on a post or wall, held in place" },
-  { value: "roller", label: "Roller", detail: "sits on it, free to slide" },
-  { value: "fixed", label: "Fixed", detail: "built in, cannot turn" },
-];
+const SUPPORT_TYPES: readonly FlowSupport["type"][] = ["pin", "roller", "fixed"];
 
 const ENDS: readonly MemberEnd[] = ["left", "right"];
 
@@ -207,7 +204,7 @@ export function StepSpan({ state, update }: StepSpanProps) {
               <li key={i}>
                 <Button variant={i === sel ? "primary" : "secondary"} aria-pressed={i === sel} onClick={() => setSelected(i === sel ? null : i)}>
                   <span className="tabular-nums">
-                    {n + 1}: {s.type} at {formatFeetInches(s.x)}
+                    {n + 1}: {SUPPORT_WORDS[s.type].short} at {formatFeetInches(s.x)}
                   </span>
                 </Button>
               </li>
@@ -268,11 +265,9 @@ export function StepSpan({ state, update }: StepSpanProps) {
           <ChoiceGroup
             legend="How it is held"
             name="support-type"
-            look="segments"
             value={state.supports[sel].type}
             onChange={(type) => update((s) => ({ ...s, supports: s.supports.map((sup, i) => (i === sel ? { ...sup, type } : sup)) }))}
-            choices={SUPPORT_TYPES.map((t) => ({ value: t.value, label: t.label }))}
-            hint={SUPPORT_TYPES.map((t) => `${t.label}: ${t.detail}`).join(". ")}
+            choices={SUPPORT_TYPES.map((t) => ({ value: t, label: SUPPORT_WORDS[t].name, detail: SUPPORT_WORDS[t].site }))}
           />
           <div className="flex gap-2">
             <Button

@@ -5,7 +5,7 @@ export type TributarySketchProps = { mode: "spacing" | "tributary" };
 /**
  * A small plan view: what the width means. For a beam, the shaded band reaches halfway to the next
  * support on each side; for joists, each joist carries the strip of floor from halfway to its
- * neighbours, i.e. its spacing.
+ * neighbors, i.e. its spacing.
  */
 export function TributarySketch({ mode }: TributarySketchProps) {
   const W = 300;
@@ -69,7 +69,7 @@ export function TributarySketch({ mode }: TributarySketchProps) {
         </text>
       </svg>
       <figcaption className="text-sm text-ink-soft">
-        Joist spacing: centre to centre. Each joist holds the strip of floor from halfway to its neighbours.
+        Joist spacing: center to center. Each joist holds the strip of floor from halfway to its neighbors.
       </figcaption>
     </figure>
   );

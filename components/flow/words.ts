@@ -11,6 +11,8 @@ const TITLES: Record<string, string> = {
   "web-yielding": "Web yielding",
   "web-crippling": "Web crippling",
   "web-compactness": "Web compactness",
+  "bending-crippling": "Bending with web crippling",
+  "bending-shear": "Bending with shear",
 };
 
 /** The check's plain name. */

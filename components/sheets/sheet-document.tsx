@@ -20,7 +20,9 @@ function fmtDiagram(unit: string) {
 
 function TableShell({ caption, head, children }: { caption: string; head: string[]; children: ReactNode }) {
   return (
-    <div className="overflow-x-auto">
+    // a wide table scrolls sideways on a phone: the scrolling box takes the keyboard's focus and is named by the
+    // table's caption, so the columns past the edge can be reached without a pointer
+    <div className="overflow-x-auto" tabIndex={0} role="region" aria-label={caption}>
       <table className="sheet-table w-full border-collapse text-left text-sm">
         <caption className="sr-only">{caption}</caption>
         <thead>

@@ -6,10 +6,14 @@ export type CautionProps = {
   /** "short" on screens (the caution in one paragraph); "full" on sheets and the crew link (with the list). */
   variant?: "short" | "full";
   className?: string;
+  /** the not-checked list for what is shown (default the common list; notCheckedFor adds material items) */
+  notChecked?: readonly string[];
+  /** items to say even in the short variant (e.g. what is not checked for a cold-formed steel answer) */
+  also?: readonly string[];
 };
 
 /** The safety caution with its warning triangle, on every answer, crew link and job sheet. */
-export function Caution({ variant = "short", className }: CautionProps) {
+export function Caution({ variant = "short", className, notChecked = NOT_CHECKED, also }: CautionProps) {
   return (
     <aside aria-label="Safety caution" className={cx("rounded-card border-2 border-caution border-l-8 bg-caution-bg p-4 text-ink", className)}>
       <p className="flex items-center gap-2 font-bold text-caution-ink">
@@ -21,7 +25,16 @@ export function Caution({ variant = "short", className }: CautionProps) {
         <>
           <p className="mt-3 font-bold">Spanlark does not check:</p>
           <ul className="mt-1 list-disc space-y-0.5 pl-6">
-            {NOT_CHECKED.map((item) => (
+            {notChecked.map((item) => (
+              <li key={item}>{item}</li>
+            ))}
+          </ul>
+        </>
+      ) : also && also.length > 0 ? (
+        <>
+          <p className="mt-3 font-bold">Not checked here:</p>
+          <ul className="mt-1 list-disc space-y-0.5 pl-6">
+            {also.map((item) => (
               <li key={item}>{item}</li>
             ))}
           </ul>

@@ -18,7 +18,7 @@ export type DialogProps = {
 
 /**
  * A modal on the browser's own <dialog>: focus moves in and is kept inside, Escape closes it, focus returns
- * to where it was. A sheet rising from the bottom on phones, a centred panel on wider screens.
+ * to where it was. A sheet rising from the bottom on phones, a centered panel on wider screens.
  */
 export function Dialog({ open, onClose, title, description, children, actions, className }: DialogProps) {
   const ref = useRef<HTMLDialogElement>(null);

@@ -173,7 +173,7 @@ export function NumberWithUnitField({
           type="text"
           inputMode={inputMode ?? "decimal"}
           autoComplete="off"
-          className={cx("figures min-w-0 flex-1 bg-transparent px-3 py-2 text-base text-ink outline-none", className)}
+          className={cx("figures min-h-touch min-w-0 flex-1 bg-transparent px-3 py-2 text-base text-ink outline-none", className)}
           aria-invalid={error ? true : undefined}
           aria-describedby={ids.describedBy}
           required={required}

@@ -1,3 +1,4 @@
+import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 import { CheckIcon, CrossIcon } from "./icons";
 import { cx } from "./cx";
 
@@ -7,17 +8,17 @@ export const RATIO_BAR_MAX = 1.5;
 export type RatioVerdict = { pass: boolean; percent: number; text: string };
 
 /**
- * The words for a demand-to-capacity ratio. Passing ratios round to the nearest percent but never read
- * more than 100%; failing ones never read 100% or less, so "Over" never sits beside a passing number.
+ * The words for a demand-to-capacity ratio (lib/solver/design/ratio-percent.ts): whole percents, with a tenth
+ * where rounding would cross the 100% line, so a pass just under it reads "OK 99.6%", never "OK 100%", and
+ * "Over" never sits beside a number of 100% or less.
  */
 export function ratioVerdict(ratio: number): RatioVerdict {
   if (!Number.isFinite(ratio) || ratio < 0) {
     return { pass: false, percent: Number.NaN, text: "Not checked" };
   }
   const pass = ratio <= 1;
-  const rounded = Math.round(ratio * 100);
-  const percent = pass ? Math.min(100, rounded) : Math.max(101, rounded);
-  return { pass, percent, text: `${pass ? "OK" : "Over"} ${percent}%` };
+  const shown = ratioPercent(ratio, pass);
+  return { pass, percent: Number(shown), text: `${pass ? "OK" : "Over"} ${shown}%` };
 }
 
 export type RatioBarProps = {

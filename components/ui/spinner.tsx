@@ -31,7 +31,7 @@ export type SkeletonProps = {
   rounded?: boolean;
 };
 
-/** A grey block holding the place of content still on its way (no layout shift when it arrives). */
+/** A gray block holding the place of content still on its way (no layout shift when it arrives). */
 export function Skeleton({ width, height, className, rounded = true }: SkeletonProps) {
   return <span aria-hidden="true" className={cx("block animate-pulse bg-rule", rounded && "rounded-md", className)} style={{ width, height }} />;
 }

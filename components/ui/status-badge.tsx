@@ -17,7 +17,7 @@ const looks: Record<Status, { classes: string; word: string; Icon: typeof CheckI
   caution: { classes: "bg-caution-bg text-caution-ink border-caution", word: "Check", Icon: WarningIcon },
 };
 
-/** Pass or fail as a word and an icon as well as a colour, so it reads in sunlight and in greyscale print. */
+/** Pass or fail as a word and an icon as well as a color, so it reads in sunlight and in grayscale print. */
 export function StatusBadge({ status, label, size = "md", className }: StatusBadgeProps) {
   const { classes, word, Icon } = looks[status];
   return (

@@ -11,6 +11,7 @@ import { User, type Role } from "@/models/user";
 import { atLeast, runInBackground } from "./background";
 import { normalizeEmail, sha256Hex } from "./crypto";
 import { hashPassword, verifyPassword } from "./password";
+import { PASSWORD_BUSY_RETRY_SECONDS, PasswordChecksBusyError } from "./password-gate";
 import { hit, hitAll, refund, type Limit, type LimitResult } from "./rate-limit";
 import type { SessionUser } from "./roles";
 import type { ProfileInput, SignUpInput } from "./schemas";
@@ -84,17 +85,19 @@ async function findByEmail(email: string): Promise<User | null> {
   return User.findOne({ where: { email: normalizeEmail(email) } });
 }
 
-async function mailVerification(user: User): Promise<void> {
+/** The confirmation link; `returnTo` (a safe path, lib/auth/schemas.ts) is where the confirmed builder carries on. */
+async function mailVerification(user: User, returnTo: string | null = null): Promise<void> {
   const token = await issueToken(user.id, "verify-email");
   const hours = TOKEN_LIFETIME_MS["verify-email"] / HOUR;
-  await sendMail({ to: user.email, ...verifyEmailMail({ name: user.name, link: link("/verify", { token }), validHours: hours }) });
+  const params: Record<string, string> = returnTo ? { token, next: returnTo } : { token };
+  await sendMail({ to: user.email, ...verifyEmailMail({ name: user.name, link: link("/verify", params), validHours: hours }) });
 }
 
 /**
  * Opens a builder account and mails a confirmation link. An address that already has an account gets a
  * mail saying so instead; the caller answers the same way in both cases.
  */
-export async function signUp(input: SignUpInput, ip: string): Promise<void> {
+export async function signUp(input: Omit<SignUpInput, "returnTo"> & { returnTo?: string | null }, ip: string): Promise<void> {
   await atLeast(PUBLIC_FLOW_MIN_MS, async () => {
     throwIfBlocked(await hitAll(limitsFor("sign-up", input.email, ip)));
     const passwordHash = await hashPassword(input.password);
@@ -117,7 +120,7 @@ export async function signUp(input: SignUpInput, ip: string): Promise<void> {
         role: "builder",
         emailVerifiedAt: null,
       });
-      runInBackground("mail verify-email", () => mailVerification(user));
+      runInBackground("mail verify-email", () => mailVerification(user, input.returnTo ?? null));
     } catch (err) {
       // Two sign-ups with one address at the same moment: the second is an existing account.
       if (!(err instanceof UniqueConstraintError)) throw err;
@@ -126,11 +129,11 @@ export async function signUp(input: SignUpInput, ip: string): Promise<void> {
 }
 
 /** Mails a fresh confirmation link to an unconfirmed account; answers the same for any address. */
-export async function resendVerification(email: string, ip: string): Promise<void> {
+export async function resendVerification(email: string, ip: string, returnTo: string | null = null): Promise<void> {
   await atLeast(PUBLIC_FLOW_MIN_MS, async () => {
     throwIfBlocked(await hitAll(limitsFor("sign-up", email, ip)));
     const user = await findByEmail(email);
-    if (user && !user.emailVerifiedAt) runInBackground("mail verify-email", () => mailVerification(user));
+    if (user && !user.emailVerifiedAt) runInBackground("mail verify-email", () => mailVerification(user, returnTo));
   });
 }
 
@@ -200,7 +203,7 @@ export async function accountForTicket(userId: string): Promise<SessionUser | nu
 }
 
 export type SignInResult =
-  { ok: true; user: SessionUser } | { ok: false; reason: "invalid" | "unverified" } | { ok: false; reason: "rate-limited"; retryAfterSeconds: number };
+  { ok: true; user: SessionUser } | { ok: false; reason: "invalid" | "unverified" } | { ok: false; reason: "rate-limited" | "busy"; retryAfterSeconds: number };
 
 /**
  * Checks an address and password. Unknown address and wrong password give the same answer in about the
@@ -212,15 +215,26 @@ export async function authenticate(email: string, password: string, ip: string):
   // The client's own limit always holds. The address's limit does not lock its owner out: past it, each client
   // gets one slow check (LIMITS.signInLocked*), so the right password still gets in.
   if (!perIp!.allowed) return { ok: false, reason: "rate-limited", retryAfterSeconds: perIp!.retryAfterSeconds };
+  const slowLimits: Limit[] = [];
   if (!perEmail!.allowed) {
-    const slow = await hitAll([
+    slowLimits.push(
       { key: `${emailKey("sign-in-locked", email)}:ip:${ip}`, ...LIMITS.signInLockedPerClient },
       { key: emailKey("sign-in-locked", email), ...LIMITS.signInLockedPerEmail },
-    ]);
+    );
+    const slow = await hitAll(slowLimits);
     if (!slow.allowed) return { ok: false, reason: "rate-limited", retryAfterSeconds: slow.retryAfterSeconds };
   }
   const user = await findByEmail(email);
-  const match = await verifyPassword(password, user?.passwordHash ?? null);
+  let match: boolean;
+  try {
+    match = await verifyPassword(password, user?.passwordHash ?? null);
+  } catch (err) {
+    // The process is at its bound of password checks (lib/auth/password-gate.ts): nothing was checked, so the
+    // try is given back on every counter, and the owner's next try, seconds later, is as good as this one.
+    if (!(err instanceof PasswordChecksBusyError)) throw err;
+    await refund([...limits, ...slowLimits]);
+    return { ok: false, reason: "busy", retryAfterSeconds: PASSWORD_BUSY_RETRY_SECONDS };
+  }
   if (!user || !match) return { ok: false, reason: "invalid" };
   // Counted first (atomically, so a burst cannot slip past), given back when the password was right.
   await refund(limits);
@@ -238,6 +252,7 @@ export async function changePassword(userId: string, currentPassword: string, ne
   if (!user) throw new HttpError(404, "account not found");
   const result = await authenticate(user.email, currentPassword, ip);
   if (!result.ok && result.reason === "rate-limited") throw new RateLimitedError(result.retryAfterSeconds);
+  if (!result.ok && result.reason === "busy") throw new PasswordChecksBusyError();
   if (!result.ok && result.reason === "invalid") return "wrong-password";
   await user.update({ passwordHash: await hashPassword(newPassword), passwordChangedAt: new Date() });
   return "changed";

@@ -37,6 +37,7 @@ export const SIGN_IN_ERRORS = {
   invalid: "CredentialsSignin",
   unverified: "EmailNotVerified",
   rateLimited: "TooManyTries",
+  busy: "TooBusy",
   unavailable: "DatabaseUnavailable",
 } as const;
 
@@ -67,6 +68,7 @@ export function authOptions(): NextAuthOptions {
           if (result.ok) return { id: result.user.id, email: result.user.email, name: result.user.name };
           if (result.reason === "unverified") throw new Error(SIGN_IN_ERRORS.unverified);
           if (result.reason === "rate-limited") throw new Error(SIGN_IN_ERRORS.rateLimited);
+          if (result.reason === "busy") throw new Error(SIGN_IN_ERRORS.busy);
           return null;
         },
       }),

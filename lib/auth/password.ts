@@ -1,4 +1,5 @@
 import bcrypt from "bcryptjs";
+import { passwordGate } from "./password-gate";
 
 /** bcrypt cost: 2^12 rounds, about a quarter of a second per hash on a small server. */
 export const BCRYPT_COST = 12;
@@ -6,8 +7,9 @@ export const BCRYPT_COST = 12;
 export const PASSWORD_MIN = 10;
 export const PASSWORD_MAX = 72; // bcrypt reads only the first 72 bytes
 
+/** Every bcrypt hash and comparison takes a turn at the process's gate (lib/auth/password-gate.ts); may throw PasswordChecksBusyError. */
 export function hashPassword(password: string): Promise<string> {
-  return bcrypt.hash(password, BCRYPT_COST);
+  return passwordGate().run(() => bcrypt.hash(password, BCRYPT_COST));
 }
 
 let dummyHash: Promise<string> | undefined;
@@ -17,9 +19,10 @@ let dummyHash: Promise<string> | undefined;
  * throwaway hash of the same cost, so an unknown address takes as long as a wrong password.
  */
 export async function verifyPassword(password: string, hash: string | null): Promise<boolean> {
-  if (hash) return bcrypt.compare(password, hash);
+  if (hash) return passwordGate().run(() => bcrypt.compare(password, hash));
   dummyHash ??= bcrypt.hash("spanlark-no-such-account", BCRYPT_COST);
-  await bcrypt.compare(password, await dummyHash);
+  const dummy = await dummyHash;
+  await passwordGate().run(() => bcrypt.compare(password, dummy));
   return false;
 }
 

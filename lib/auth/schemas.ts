@@ -1,5 +1,6 @@
 import { z } from "zod";
 import { PASSWORD_MAX, PASSWORD_MIN } from "./password";
+import { DEFAULT_RETURN_PATH, safeReturnPath } from "./return-path";
 
 // The server's rules for every auth body; the forms in components/auth mirror them with yup.
 
@@ -28,7 +29,22 @@ const company = z
   .nullable()
   .transform((v) => (v ? v : null));
 
-export const SignUpSchema = z.object({ email, password: newPassword, name, company });
+/**
+ * The page that sent someone to sign up (the sign-up page's ?callbackUrl=), carried through the confirmation
+ * e-mail so they come back to it. Only a path on our own origin is kept (lib/auth/return-path.ts); anything
+ * else, or nothing, is null: the mailed link then leads to the usual page.
+ */
+const returnTo = z
+  .string()
+  .max(2000, "the return page address is too long")
+  .optional()
+  .nullable()
+  .transform((v) => {
+    const path = safeReturnPath(v);
+    return v && path !== DEFAULT_RETURN_PATH ? path : null;
+  });
+
+export const SignUpSchema = z.object({ email, password: newPassword, name, company, returnTo });
 export type SignUpInput = z.infer<typeof SignUpSchema>;
 
 export const SignInSchema = z.object({
@@ -37,6 +53,8 @@ export const SignInSchema = z.object({
 });
 
 export const EmailOnlySchema = z.object({ email });
+
+export const ResendVerificationSchema = z.object({ email, returnTo });
 
 export const VerifySchema = z.object({ token });
 

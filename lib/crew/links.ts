@@ -1,5 +1,6 @@
 import "server-only";
 import { recheckIfTablesChanged } from "@/lib/jobs/service";
+import { notCheckedFor } from "@/lib/caution";
 import { Op } from "sequelize";
 import { getSequelize } from "@/lib/db";
 import { env } from "@/lib/env";
@@ -177,6 +178,8 @@ export interface CrewJobView {
   job: { name: string; siteAddress: string; notes: string };
   rows: ScheduleRow[];
   expiresAt: string | null;
+  /** what Spanlark does not check, for the members on this job (cold-formed steel adds its items) */
+  notChecked: readonly string[];
 }
 
 /**
@@ -207,5 +210,6 @@ export async function openCrewLink(token: string, now: Date = new Date()): Promi
     job: { name: job.name, siteAddress: job.siteAddress, notes: job.notes },
     rows: members.map((m) => scheduleRow({ id: m.id, label: m.label, kind: m.kind, resultSummary: m.resultSummary })),
     expiresAt: link.expiresAt?.toISOString() ?? null,
+    notChecked: notCheckedFor(members.map((m) => m.resultSummary?.spec.material)),
   };
 }

@@ -1,5 +1,5 @@
 import "server-only";
-import { CAUTION as CAUTION_TEXT, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
+import { CAUTION as CAUTION_TEXT, CAUTION_TITLE } from "@/lib/caution";
 import { renderPdf } from "@/lib/orders/pdf";
 import { formatSheetDate } from "@/lib/sheets/format";
 import { PDF_COLORS, type Paper } from "@/lib/sheets/pdf";
@@ -47,7 +47,7 @@ export function renderCrewPdf(view: CrewJobView, link: { url: string; qrPng: Buf
       [false, false, false, false],
       9.5,
     );
-    w.caution({ caution: { title: CAUTION_TITLE, text: CAUTION_TEXT, notChecked: [...NOT_CHECKED] } });
+    w.caution({ caution: { title: CAUTION_TITLE, text: CAUTION_TEXT, notChecked: [...view.notChecked] } });
     w.text("Jack studs are 1-1/2 in studs under each end of a header. Ask the builder before changing any size.", { size: 9, color: PDF_COLORS.graphite });
   });
 }

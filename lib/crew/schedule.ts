@@ -6,6 +6,7 @@ import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { jobKindLabel, type JobMemberKind } from "@/lib/solver/design/kinds";
 import { basisWords, changeWords, type MemberResultSummary } from "@/lib/flow/summary";
 import { checkWords, formatLb, supportName } from "@/lib/sheets/format";
+import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 
 export interface ScheduleSupport {
   name: string;
@@ -80,7 +81,7 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
         : `${formatInches(r.bearing)} bearing (needs ${formatInches(Math.max(r.requiredBearing, 0))})`;
     return { name: supportName(i, s.reactions.length, r.x), reaction, bearing };
   });
-  const pct = `${Math.round(s.ratio * 100)}%`;
+  const pct = `${ratioPercent(s.ratio, s.pass)}%`;
   return {
     id: m.id,
     label: m.label,

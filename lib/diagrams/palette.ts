@@ -1,4 +1,4 @@
-// Drawing colours from DESIGN.md, as literal values so the SVG draws the same on screen, in print and in a PDF.
+// Drawing colors from DESIGN.md, as literal values so the SVG draws the same on screen, in print and in a PDF.
 export const INK = {
   paper: "#FFFFFF",
   grid: "#E6E2D6",

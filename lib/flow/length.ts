@@ -4,8 +4,9 @@
  *
  * Accepted forms (spaces optional, ' ′ ’ for feet, " ″ ” '' for inches):
  *   12' 6"   12'6"   12' 6-1/2"   12' 6 1/2"   12'   6"   6-1/2"   150"   150 in   12 ft 6 in
- *   12-6     12-6-1/2   (feet-inches, the tape's shorthand)
+ *   12-6     12-6-1/2   12 6   12 6 1/2   (feet then inches, the tape's shorthand: a dash or a space)
  *   12.5     12         (a bare number is feet)
+ *   12 1/2   12-1/2     (a whole number and a fraction: so many feet and a fraction of a foot, 12' 6")
  *   3.8 m    380 cm    3800 mm
  */
 
@@ -26,10 +27,12 @@ const INCHES = String.raw`(?:(\d+)(?:\s*-\s*|\s+)(${FRACTION})|(${FRACTION})|(${
 const FEET_INCHES = new RegExp(String.raw`^(${NUM})\s*(?:${FOOT_MARK}|ft|feet|foot)\s*(?:-?\s*${INCHES}\s*(?:${INCH_MARK}|in|inches|inch)?)?$`, "i");
 const INCHES_ONLY = new RegExp(String.raw`^${INCHES}\s*(?:${INCH_MARK}|in|inches|inch)$`, "i");
 const DASHED = new RegExp(String.raw`^(\d+)\s*-\s*${INCHES}$`);
+// the same with a space, as typed on a phone's number pad: "12 6", "12 6 1/2", "12 6.5", "12 1/2" (the text is trimmed, one space)
+const SPACED = new RegExp(String.raw`^(\d+) ${INCHES}$`);
 const METRIC = new RegExp(String.raw`^(${NUM})\s*(m|cm|mm)$`, "i");
 const BARE = new RegExp(String.raw`^(${NUM})$`);
 
-const EXAMPLES = `12' 6", 12-6, 12.5, 150" or 3.8 m`;
+const EXAMPLES = `12' 6", 12 6, 12-1/2, 150" or 3.8 m`;
 
 /** Parses "a/b" to a number; null when the denominator is 0 or the fraction is not proper. */
 function fraction(text: string): number | null {
@@ -81,12 +84,19 @@ export function parseLength(raw: string): LengthParse {
     return finite(Number(m[1]) + inches.inches / 12);
   }
 
-  m = DASHED.exec(text);
+  m = DASHED.exec(text) ?? SPACED.exec(text);
   if (m) {
+    // a fraction right after the whole number is a fraction of a foot: 12-1/2 and 12 1/2 are twelve and a half feet
+    if (m[4] !== undefined) {
+      const f = fraction(m[4]);
+      if (f === null) return { ok: false, message: `"${m[4]}" is not a fraction (the bottom number cannot be 0)` };
+      if (f >= 1) return { ok: false, message: `"${m[4]}" must be less than one, e.g. 12 1/2 for twelve and a half feet` };
+      return finite(Number(m[1]) + f);
+    }
     const inches = inchesFrom(m[2], m[3], m[4], m[5]);
     if (!inches.ok) return inches;
     if (inches.inches >= 12)
-      return { ok: false, message: `"${text}" reads as feet-inches, and inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})` };
+      return { ok: false, message: `"${text}" reads as feet then inches, and inches must be under 12 (write ${feetInchesHint(Number(m[1]), inches.inches)})` };
     return finite(Number(m[1]) + inches.inches / 12);
   }
 

@@ -29,6 +29,9 @@ export function sizeFamily(material: FlowMaterial): SizeFamilyRequest {
       return material.product ? { material: "ijoist", series: material.product, stiffeners: false } : { material: "ijoist", stiffeners: false };
     case "steel":
       return { material: "steel", grade: "A992" };
+    case "cfs":
+      // the product field holds the flange width asked for ("" = every width)
+      return Number(material.product) > 0 ? { material: "cfs", flanges: [Number(material.product)] } : { material: "cfs" };
   }
 }
 

@@ -6,11 +6,22 @@
  */
 import type { FlowState } from "./schema";
 import type { WallFraming } from "@/lib/solver/design/kinds";
+import type { SupportType } from "@/lib/solver/types";
 
 /** The longest member the flow takes, ft (the solver's limit). */
 export const MAX_LENGTH_FT = 200;
 
 export { KIND_LABELS, MEMBER_KINDS, type MemberKind } from "@/lib/solver/design/kinds";
+
+/**
+ * The support types in words: the textbook name (pinned, on rollers, fixed) with what it means on site, in our
+ * own words. `short` goes in lists and sheets ("pinned at 0' 0\""), `site` beside it where there is room.
+ */
+export const SUPPORT_WORDS: Readonly<Record<SupportType, { name: string; short: string; site: string }>> = {
+  pin: { name: "Pinned", short: "pinned", site: "bears on a post or wall and cannot slide off it" },
+  roller: { name: "On rollers", short: "on rollers", site: "rests on its bearing, free to slide along it" },
+  fixed: { name: "Fixed", short: "fixed", site: "built in at the end, so it cannot turn" },
+};
 
 export const FLOW_STEPS = ["kind", "span", "loads", "material", "answer"] as const;
 export type FlowStepId = (typeof FLOW_STEPS)[number];
@@ -40,7 +51,7 @@ export type FlowLineLoad = FlowState["lineLoads"][number];
 export type FlowMaterial = FlowState["material"];
 export type FlowLimits = FlowState["limits"];
 
-export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "ijoist", "steel"] as const;
+export const MATERIAL_FAMILIES = ["any", "sawn", "built-up", "engineered", "ijoist", "steel", "cfs"] as const;
 export type MaterialFamily = (typeof MATERIAL_FAMILIES)[number];
 
 /** The wall a member of this state must fit, or null. */

@@ -4,15 +4,10 @@
  */
 import { defaultFlowState } from "./defaults";
 import { parseFlowState } from "./schema";
-import { FLOW_STEPS, MEMBER_KINDS, type FlowLocation, type FlowState, type FlowStepId, type MemberKind } from "./state";
+import { isMemberKind, isStep } from "./address";
+import type { FlowLocation, FlowState } from "./state";
 
-export const STORAGE_KEY = "spanlark.flow.v1";
-
-function toBase64Url(bytes: Uint8Array): string {
-  let binary = "";
-  for (const b of bytes) binary += String.fromCharCode(b);
-  return btoa(binary).replace(/\+/g, "-").replace(/\//g, "_").replace(/=+$/, "");
-}
+export { encodeFlowState, flowSearch, isMemberKind, isStep, STORAGE_KEY, storeLocation } from "./address";
 
 function fromBase64Url(text: string): Uint8Array | null {
   if (!/^[A-Za-z0-9_-]*$/.test(text)) return null;
@@ -27,10 +22,6 @@ function fromBase64Url(text: string): Uint8Array | null {
   }
 }
 
-export function encodeFlowState(state: FlowState): string {
-  return toBase64Url(new TextEncoder().encode(JSON.stringify(state)));
-}
-
 /** The state in an `s=` parameter; null when it is missing, garbled or does not fit the schema. */
 export function decodeFlowState(text: string | null | undefined): FlowState | null {
   if (!text) return null;
@@ -41,25 +32,6 @@ export function decodeFlowState(text: string | null | undefined): FlowState | nu
   } catch {
     return null;
   }
-}
-
-export function isMemberKind(value: string | null | undefined): value is MemberKind {
-  return typeof value === "string" && (MEMBER_KINDS as readonly string[]).includes(value);
-}
-
-export function isStep(value: string | null | undefined): value is FlowStepId {
-  return typeof value === "string" && (FLOW_STEPS as readonly string[]).includes(value);
-}
-
-/** The flow's query string for a location, plus any job/member being edited. */
-export function flowSearch(location: FlowLocation, extra: { job?: string; member?: string; for?: string } = {}): string {
-  const params = new URLSearchParams();
-  if (extra.job) params.set("job", extra.job);
-  if (extra.member) params.set("member", extra.member);
-  if (extra.for) params.set("for", extra.for);
-  params.set("step", location.step);
-  params.set("s", encodeFlowState(location.state));
-  return `?${params.toString()}`;
 }
 
 export interface FlowStart {
@@ -86,10 +58,6 @@ export function resolveFlowStart(params: { s?: string | null; step?: string | nu
   }
   if (storedLocation) return { location: { ...storedLocation, step: step ?? storedLocation.step }, from: "storage" };
   return { location: { state: defaultFlowState("floor-joist"), step: "kind" }, from: "new" };
-}
-
-export function storeLocation(location: FlowLocation): string {
-  return JSON.stringify({ step: location.step, state: location.state });
 }
 
 export function readStoredLocation(stored: string | null): FlowLocation | null {

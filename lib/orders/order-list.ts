@@ -176,7 +176,7 @@ function memberPieces(m: OrderMember, tables: MaterialTables, missing: string[],
     }
   }
   const what = repeated ? (m.kind === "rafter" ? "rafters" : "joists") : "";
-  const plies = spec.material === "steel" || spec.material === "ijoist" ? 1 : spec.plies;
+  const plies = spec.material === "steel" || spec.material === "ijoist" ? 1 : spec.material === "cfs" ? (spec.assembly === "single" ? 1 : 2) : spec.plies;
 
   if (spec.material === "sawn") {
     const stock = stockLengthFor(cut, stockLengthsOf(tables, "sawn"));
@@ -256,6 +256,22 @@ function memberPieces(m: OrderMember, tables: MaterialTables, missing: string[],
         sortKey: depthIn + 0.5,
       });
     }
+    return pieces;
+  }
+
+  if (spec.material === "cfs") {
+    // cold-formed steel is ordered cut to length; bearing stiffeners and screws as the answer and the maker's details say
+    pieces.push({
+      group: "Cold-formed steel",
+      item: spec.section,
+      lengthFt: Math.ceil(cut),
+      quantity: count * plies,
+      unit: "pcs",
+      use: m.label,
+      note: "cut to length",
+      ref: { material: "cfs", section: spec.section },
+      sortKey: 0,
+    });
     return pieces;
   }
 

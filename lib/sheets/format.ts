@@ -3,6 +3,7 @@
  * same way. Pure.
  */
 import { formatFeetInches } from "@/lib/flow/length";
+import { ratioPercent as percentOf } from "@/lib/solver/design/ratio-percent";
 
 const CHECK_WORDS: Record<string, string> = {
   bending: "bending",
@@ -14,6 +15,8 @@ const CHECK_WORDS: Record<string, string> = {
   "web-yielding": "web yielding",
   "web-crippling": "web crippling",
   "web-compactness": "web compactness",
+  "bending-crippling": "bending with web crippling",
+  "bending-shear": "bending with shear",
 };
 
 export function checkWords(name: string | null): string {
@@ -21,9 +24,9 @@ export function checkWords(name: string | null): string {
   return CHECK_WORDS[name] ?? name.replace(/-/g, " ");
 }
 
-/** 0.6373 → "64%" */
-export function ratioPercent(ratio: number): string {
-  return `${Math.round(ratio * 100)}%`;
+/** 0.6373 → "64%", 0.996 → "99.6%", 1.004 → "100.4%" (lib/solver/design/ratio-percent.ts: never 100% for a near pass, never 100% or less for a failure) */
+export function ratioPercent(ratio: number, pass: boolean = ratio <= 1): string {
+  return `${percentOf(ratio, pass)}%`;
 }
 
 /** 2671.4 → "2,671 lb" */

@@ -28,7 +28,7 @@ export const MARGIN = 48;
 
 export const PDF_COLORS = {
   ink: "#15191E",
-  graphite: "#5A6270",
+  graphite: "#434A56",
   rule: "#D8D4C8",
   spruce: "#1E5B4F",
   sound: "#1F7A3A",
@@ -170,7 +170,7 @@ export class SheetWriter {
     doc.moveDown(0.3);
   }
 
-  /** A ratio bar with a marked 100% line, a word and a percentage: never colour alone. */
+  /** A ratio bar with a marked 100% line, a word and a percentage: never color alone. */
   ratioBar(x: number, y: number, w: number, ratio: number): void {
     const { doc } = this;
     const full = w / 1.5;

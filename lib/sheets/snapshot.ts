@@ -3,15 +3,16 @@
  * Reprinting (the page, the PDF) reads only this: no solver, no tables, no member rows. So a sheet prints
  * the same numbers after the tables are edited or the member is changed. Pure: no database, no React.
  */
-import { CAUTION, CAUTION_TITLE, NOT_CHECKED } from "@/lib/caution";
+import { CAUTION, CAUTION_TITLE, notCheckedFor } from "@/lib/caution";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { checkRequest } from "@/lib/flow/request";
-import { KIND_LABELS, mainSpanFt, sortedSupports, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
+import { KIND_LABELS, mainSpanFt, sortedSupports, SUPPORT_WORDS, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
 import { answerFacts, spacingOf } from "@/lib/flow/summary";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
 import { LOAD_STANDARD_WORDS } from "@/lib/solver/asce7/standard";
 import type { Segment } from "@/lib/solver/beam";
+import { ratioPercent } from "@/lib/sheets/format";
 import type { SupportType } from "@/lib/solver/types";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
 import type { DesignLoad, MemberSpec } from "@/lib/solver/design/schema";
@@ -146,7 +147,7 @@ function fmtNumber(v: number): string {
 }
 
 function widthWords(state: FlowState): string {
-  return state.width.mode === "spacing" ? `${fmtNumber(state.width.spacingIn)} in on centre` : `${fmtNumber(state.width.tributaryFt)} ft tributary width`;
+  return state.width.mode === "spacing" ? `${fmtNumber(state.width.spacingIn)} in on center` : `${fmtNumber(state.width.tributaryFt)} ft tributary width`;
 }
 
 function materialWords(state: FlowState): string {
@@ -164,12 +165,14 @@ function materialWords(state: FlowState): string {
       return m.product ? `Wood I-joists, ${m.product}` : "Wood I-joists (any series)";
     case "steel":
       return "Steel W-shape, A992";
+    case "cfs":
+      return Number(m.product) > 0 ? `Cold-formed steel C-sections, ${m.product} in flanges` : "Cold-formed steel C-sections (any flange)";
   }
 }
 
 function inputRows(state: FlowState): [string, string][] {
   const supports = sortedSupports(state.supports)
-    .map((s) => `${s.type} at ${formatFeetInches(s.x)}`)
+    .map((s) => `${SUPPORT_WORDS[s.type].short} at ${formatFeetInches(s.x)}`)
     .join(", ");
   const rows: [string, string][] = [
     ["Member", KIND_LABELS[state.kind]],
@@ -232,6 +235,14 @@ const FACTOR_NAMES: Record<string, string> = {
   Lp: "Lp, ft",
   Lr: "Lr, ft",
   Lb: "Lb, ft",
+  EKsi: "E, ksi",
+  CbLtb: "Cb, moment gradient",
+  Fn: "Fn, ksi",
+  Se: "Se, in³",
+  Ieff: "I effective at service, in⁴",
+  bearingStiffeners: "Bearing stiffeners at supports",
+  pieces: "C-sections",
+  standard: "Standard",
 };
 
 function factorName(key: string): string {
@@ -295,7 +306,7 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
   const saved = source.savedAnswer;
   const changed = saved && (saved.headline !== headline || Math.abs(saved.ratio - check.ratio) > 0.005);
   const note = changed
-    ? `Worked out again for this sheet with the current tables; when the member was saved${source.savedTables ? ` (tables ${source.savedTables})` : ""} it read "${saved.headline}" at ${Math.round(saved.ratio * 100)}%.`
+    ? `Worked out again for this sheet with the current tables; when the member was saved${source.savedTables ? ` (tables ${source.savedTables})` : ""} it read "${saved.headline}" at ${ratioPercent(saved.ratio)}.`
     : null;
   return {
     id: source.id,
@@ -351,6 +362,6 @@ export function buildSheetSnapshot(source: SheetSource): SheetSnapshot {
     members,
     skipped,
     ...(source.loadPath && source.loadPath.length > 0 ? { loadPath: source.loadPath } : {}),
-    caution: { title: CAUTION_TITLE, text: CAUTION, notChecked: [...NOT_CHECKED] },
+    caution: { title: CAUTION_TITLE, text: CAUTION, notChecked: [...notCheckedFor(source.members.map((m) => m.chosenMember?.material))] },
   };
 }

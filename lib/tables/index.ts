@@ -1,9 +1,11 @@
+import { COLD_FORMED } from "./cold-formed";
 import { ENGINEERED } from "./engineered";
 import { I_JOISTS } from "./i-joists";
 import { SAWN_SIZES } from "./sawn-sizes";
 import { beamsStringersCF, SAWN_VALUES, SIZE_FACTORS } from "./sawn-values";
 import { STEEL_GRADES, W_SHAPES } from "./steel";
 import type {
+  CfsSection,
   CostTable,
   EngineeredProduct,
   IJoist,
@@ -25,6 +27,7 @@ export { beamsStringersCF, SAWN_VALUES, SIZE_FACTORS } from "./sawn-values";
 export { depthSizeFactor, eminFromE, ENGINEERED, glulamVolumeFactorCV, SUPPLIER_NOTE } from "./engineered";
 export { STEEL_GRADES, W_SHAPES } from "./steel";
 export { depthWords, I_JOISTS } from "./i-joists";
+export { CFS_SOURCE, cfsDimensions, COLD_FORMED, parseDesignation } from "./cold-formed";
 
 export { SAWN_GRADES, SPECIES } from "./types";
 export const SAWN_SIZE_CLASSES: readonly SawnSizeClass[] = ["dimension", "beams-stringers"];
@@ -34,7 +37,8 @@ export type ItemRef =
   | { material: "sawn"; species: Species; grade: SawnGrade; size: string }
   | { material: "engineered"; product: string; width: number; depth: number }
   | { material: "steel"; shape: string }
-  | { material: "ijoist"; joist: string };
+  | { material: "ijoist"; joist: string }
+  | { material: "cfs"; section: string };
 
 /**
  * Key of one stock item in the cost table (cost per foot of one piece or ply).
@@ -50,6 +54,8 @@ export function itemKey(item: ItemRef): string {
       return `steel|${normalizeShape(item.shape)}`;
     case "ijoist":
       return `ijoist|${item.joist}`;
+    case "cfs":
+      return `cfs|${item.section.trim().toUpperCase()}`;
   }
 }
 
@@ -214,6 +220,20 @@ export function findIJoist(tables: MaterialTables, name: string): IJoist {
   return joist;
 }
 
+/** "800s162-54", " 800S162-54 " → the cold-formed section row; an unknown name lists what the tables hold. */
+export function findCfsSection(tables: MaterialTables, name: string, field = "member.section"): CfsSection {
+  const wanted = name.trim().toUpperCase();
+  const rows = tables.coldFormed ?? [];
+  const section = rows.find((s) => s.name.toUpperCase() === wanted);
+  if (!section)
+    throw new TableLookupError(
+      field,
+      `unknown cold-formed section "${name}"`,
+      rows.filter((s) => s.style === "S").map((s) => s.name),
+    );
+  return section;
+}
+
 /** Throws unless the product is made in this width (one ply) and depth, in inches. */
 export function checkEngineeredSize(product: EngineeredProduct, widthIn: number, depthIn: number): void {
   const near = (a: number, b: number) => Math.abs(a - b) < 1e-6;
@@ -273,6 +293,8 @@ const DEMO_STEEL_PER_LB = 1.35;
 const DEMO_ENGINEERED_PER_SQ_IN: Record<EngineeredProduct["kind"], number> = { LVL: 0.3, PSL: 0.32, glulam: 0.28 };
 /** invented demo price of an I-joist per foot and inch of depth (stiffer series cost more) */
 const DEMO_IJOIST_PER_FT_PER_IN = 0.22;
+/** invented demo price of cold-formed steel framing per pound (light gauge costs more per pound than W-shapes) */
+const DEMO_CFS_PER_LB = 1.6;
 
 const cents = (x: number) => Math.round(x * 100) / 100;
 
@@ -299,6 +321,9 @@ function demoCosts(): CostTable {
   for (const j of I_JOISTS) {
     costs[itemKey({ material: "ijoist", joist: j.name })] = cents(DEMO_IJOIST_PER_FT_PER_IN * j.d * (1 + j.EI / 2e9));
   }
+  for (const s of COLD_FORMED) {
+    costs[itemKey({ material: "cfs", section: s.name })] = cents(s.weightPlf * DEMO_CFS_PER_LB);
+  }
   return costs;
 }
 
@@ -313,7 +338,7 @@ function demoCosts(): CostTable {
 export const STARTER_STOCK_LENGTHS: StockLengthRow[] = [{ material: "sawn", lengthsFt: [8, 10, 12, 14, 16, 18, 20, 22, 24] }];
 
 export const STARTER_TABLES: MaterialTables = {
-  version: "starter-2026.2",
+  version: "starter-2026.3",
   sawnSizes: SAWN_SIZES,
   sawnValues: SAWN_VALUES,
   sizeFactors: SIZE_FACTORS,
@@ -323,4 +348,5 @@ export const STARTER_TABLES: MaterialTables = {
   iJoists: I_JOISTS,
   costs: demoCosts(),
   stockLengths: STARTER_STOCK_LENGTHS,
+  coldFormed: COLD_FORMED,
 };

@@ -1,6 +1,7 @@
 import { z } from "zod";
 import { SAWN_GRADES, SPECIES } from "./types";
 import type {
+  CfsSection,
   EngineeredKind,
   EngineeredProduct,
   IJoist,
@@ -33,6 +34,7 @@ export const TABLE_KEYS = [
   "steel-grades",
   "costs",
   "stock-lengths",
+  "cold-formed",
 ] as const;
 export type TableKey = (typeof TABLE_KEYS)[number];
 
@@ -58,6 +60,7 @@ export interface TableRowMap {
   "steel-grades": SteelGrade;
   costs: CostRow;
   "stock-lengths": StockLengthRow;
+  "cold-formed": CfsSection;
 }
 
 export type TableRows = { [K in TableKey]: TableRowMap[K][] };
@@ -512,6 +515,83 @@ export const iJoistSchema: z.ZodType<IJoist> = z
   });
 
 // ---------------------------------------------------------------------------------------------------
+// Cold-formed steel C-sections and tracks (designation, dimensions, Fy and the properties computed from them)
+
+export const CFS_STYLES = ["S", "T"] as const;
+
+const CFS_FIELDS: FieldSpec[] = [
+  { name: "name", path: "name", label: "Designation", kind: "text", maxLength: 40, hint: "depth, S or T, flange, mils, e.g. 800S162-54" },
+  { name: "style", path: "style", label: "Style", kind: "choice", choices: CFS_STYLES, hint: "S = lipped C-section (joist or stud), T = track" },
+  { name: "depth_in", path: "depth", label: "Depth", unit: "in", kind: "number", min: 1.5, max: 16, hint: "S: out to out; T: inside to inside" },
+  { name: "flange_in", path: "flange", label: "Flange width", unit: "in", kind: "number", min: 1, max: 4 },
+  { name: "lip_in", path: "lip", label: "Lip", unit: "in", kind: "number", min: 0, max: 1.5, hint: "0 for a track" },
+  { name: "mils", path: "mils", label: "Thickness", unit: "mil", kind: "number", min: 18, max: 150, hint: "minimum base steel thickness" },
+  { name: "t_in", path: "t", label: "Design thickness t", unit: "in", kind: "number", min: 0.015, max: 0.2, hint: "minimum thickness / 0.95" },
+  { name: "R_in", path: "R", label: "Inside corner radius", unit: "in", kind: "number", min: 0.02, max: 0.4 },
+  { name: "Fy_ksi", path: "Fy", label: "Fy, yield", unit: "ksi", kind: "number", min: 33, max: 80 },
+  { name: "A_in2", path: "A", label: "Area A", unit: "in²", kind: "number", min: 0.05, max: 5 },
+  { name: "Ix_in4", path: "Ix", label: "Ix, gross", unit: "in⁴", kind: "number", min: 0.05, max: 200 },
+  { name: "Sx_in3", path: "Sx", label: "Sx, gross", unit: "in³", kind: "number", min: 0.02, max: 40 },
+  { name: "Iy_in4", path: "Iy", label: "Iy, gross", unit: "in⁴", kind: "number", min: 0.001, max: 20 },
+  { name: "Sxe_in3", path: "Sxe", label: "Sxe, effective at Fy", unit: "in³", kind: "number", min: 0.01, max: 40 },
+  { name: "Ixe_in4", path: "Ixe", label: "Ixe, effective at Fy", unit: "in⁴", kind: "number", min: 0.05, max: 200 },
+  { name: "J_in4", path: "J", label: "Torsion constant J", unit: "in⁴", kind: "number", min: 0, max: 1 },
+  { name: "Cw_in6", path: "Cw", label: "Warping constant Cw", unit: "in⁶", kind: "number", min: 0, max: 500 },
+  { name: "weight_plf", path: "weightPlf", label: "Weight", unit: "lb/ft", kind: "number", min: 0.2, max: 20 },
+  { name: "source", path: "source", label: "Source", kind: "text", maxLength: 300, hint: "table and edition; where it was checked" },
+];
+const CF = spec(CFS_FIELDS);
+
+export const cfsSectionSchema: z.ZodType<CfsSection> = z
+  .object({
+    name: text(CF.name),
+    style: choice(CF.style, CFS_STYLES),
+    depth: num(CF.depth),
+    flange: num(CF.flange),
+    lip: num(CF.lip),
+    mils: num(CF.mils).int("Thickness must be a whole number of mils"),
+    t: num(CF.t),
+    R: num(CF.R),
+    Fy: num(CF.Fy),
+    A: num(CF.A),
+    Ix: num(CF.Ix),
+    Sx: num(CF.Sx),
+    Iy: num(CF.Iy),
+    Sxe: num(CF.Sxe),
+    Ixe: num(CF.Ixe),
+    J: num(CF.J),
+    Cw: num(CF.Cw),
+    weightPlf: num(CF.weightPlf),
+    source: text(CF.source),
+  })
+  .superRefine((r, ctx) => {
+    const m = /^(\d{3,4})([ST])(\d{3})-(\d{2,3})$/.exec(r.name.toUpperCase());
+    if (!m) ctx.addIssue({ code: "custom", path: ["name"], message: "Designation must read depth, S or T, flange, dash, mils, e.g. 800S162-54" });
+    else {
+      if (m[2] !== r.style) ctx.addIssue({ code: "custom", path: ["style"], message: `The designation says ${m[2]}, the style ${r.style}` });
+      if (Math.abs(Number(m[1]) / 100 - r.depth) > 0.005)
+        ctx.addIssue({ code: "custom", path: ["depth"], message: `The designation says ${Number(m[1]) / 100} in deep` });
+      if (Math.abs(Number(m[3]) / 100 - r.flange) > 0.005)
+        ctx.addIssue({ code: "custom", path: ["flange"], message: `The designation says a ${Number(m[3]) / 100} in flange` });
+      if (Number(m[4]) !== r.mils) ctx.addIssue({ code: "custom", path: ["mils"], message: `The designation says ${m[4]} mil` });
+    }
+    if (r.style === "S" && r.lip <= 0) ctx.addIssue({ code: "custom", path: ["lip"], message: "A C-section (S) has a lip" });
+    if (r.style === "T" && r.lip !== 0) ctx.addIssue({ code: "custom", path: ["lip"], message: "A track (T) has no lip: 0" });
+    // design thickness = minimum thickness / 0.95 (AISI S100-16 §A3.4 as the SSMA tables apply it)
+    if (!near(r.t, r.mils / 1000 / 0.95, 0.01))
+      ctx.addIssue({
+        code: "custom",
+        path: ["t"],
+        message: `Design thickness of ${r.mils} mil is about ${formatBound(r.mils / 1000 / 0.95)} in (minimum / 0.95)`,
+      });
+    if (r.Sxe > r.Sx * 1.001) ctx.addIssue({ code: "custom", path: ["Sxe"], message: "The effective Sx must not exceed the gross Sx" });
+    if (r.Ixe > r.Ix * 1.001) ctx.addIssue({ code: "custom", path: ["Ixe"], message: "The effective Ix must not exceed the gross Ix" });
+    const D = r.style === "T" ? r.depth + 2 * r.t : r.depth;
+    if (!near(r.Sx, r.Ix / (D / 2), 0.02)) ctx.addIssue({ code: "custom", path: ["Sx"], message: "Sx must be Ix over half the depth (out to out)" });
+    if (!near(r.weightPlf, (r.A * 490) / 144, 0.03)) ctx.addIssue({ code: "custom", path: ["weightPlf"], message: "Weight must be A × 490 lb/ft³ (steel)" });
+  });
+
+// ---------------------------------------------------------------------------------------------------
 // Steel grades
 
 const STEEL_GRADE_FIELDS: FieldSpec[] = [
@@ -535,14 +615,14 @@ const COST_FIELDS: FieldSpec[] = [
     label: "Item",
     kind: "text",
     maxLength: 200,
-    hint: "sawn|species|grade|size, engineered|product|widthxdepth, ijoist|name or steel|shape",
+    hint: "sawn|species|grade|size, engineered|product|widthxdepth, ijoist|name, cfs|designation or steel|shape",
   },
   { name: "cost_per_ft_usd", path: "costPerFt", label: "Cost per foot", unit: "$/ft", kind: "number", min: 0, max: 10_000 },
 ];
 const CO = spec(COST_FIELDS);
 
 export const costSchema: z.ZodType<CostRow> = z.object({
-  itemKey: text(CO.itemKey).regex(/^(sawn|engineered|steel|ijoist)\|\S.*$/, "Item must start with sawn|, engineered|, ijoist| or steel|"),
+  itemKey: text(CO.itemKey).regex(/^(sawn|engineered|steel|ijoist|cfs)\|\S.*$/, "Item must start with sawn|, engineered|, ijoist|, cfs| or steel|"),
   costPerFt: num(CO.costPerFt),
 });
 
@@ -673,6 +753,15 @@ export const TABLE_SPECS: { [K in TableKey]: TableSpec<K> } = {
     schema: stockLengthSchema,
     summary: ["lengths_ft"],
     keyOf: (r) => r.material,
+  },
+  "cold-formed": {
+    key: "cold-formed",
+    title: "Cold-formed steel",
+    description: "C-sections (S) and tracks (T) by designation: dimensions, Fy and AISI S100-16 section properties",
+    fields: CFS_FIELDS,
+    schema: cfsSectionSchema,
+    summary: ["Fy_ksi", "Sxe_in3", "Ixe_in4", "weight_plf"],
+    keyOf: (r) => r.name,
   },
 };
 

@@ -139,6 +139,46 @@ export interface IJoist {
   source: string;
 }
 
+/**
+ * A cold-formed steel section by the industry's standard designation, e.g. "800S162-54": depth in
+ * 1/100 in (out to out for S, inside for T), S = lipped C-section (joist or stud), T = track, flange
+ * width in 1/100 in, minimum base steel thickness in mils. The dimensions are what the AISI S100-16
+ * checks read; the properties are computed from them (gross by the linear method with corner arcs,
+ * effective at Fy by Appendix 1) and kept here for the admin screens and the sheet.
+ */
+export interface CfsSection {
+  name: string;
+  style: "S" | "T";
+  /** designation depth, in (S: out to out; T: inside to inside) */
+  depth: number;
+  /** flange width, in */
+  flange: number;
+  /** lip length out to out, in (0 for a track) */
+  lip: number;
+  /** minimum base steel thickness, mils */
+  mils: number;
+  /** design thickness, in */
+  t: number;
+  /** inside corner radius, in */
+  R: number;
+  /** yield strength, ksi */
+  Fy: number;
+  /** gross area in², Ix in⁴, Sx in³, Iy in⁴ */
+  A: number;
+  Ix: number;
+  Sx: number;
+  Iy: number;
+  /** effective section modulus and moment of inertia at Fy in the compression flange */
+  Sxe: number;
+  Ixe: number;
+  /** torsion constant J in⁴, warping constant Cw in⁶ */
+  J: number;
+  Cw: number;
+  /** weight, lb/ft (steel at 490 lb/ft³) */
+  weightPlf: number;
+  source: string;
+}
+
 /** A hot-rolled W-shape with the properties the AISC 360 checks need. */
 export interface WShape {
   name: string;
@@ -201,6 +241,8 @@ export interface MaterialTables {
   steel: WShape[];
   steelGrades: SteelGrade[];
   iJoists: IJoist[];
+  /** cold-formed steel C-sections and tracks; absent in versions published before the table existed */
+  coldFormed?: CfsSection[];
   costs: CostTable;
   /** stock lengths by material family, edited with the cost table; absent or empty = the defaults in lib/orders */
   stockLengths?: StockLengthRow[];

@@ -126,7 +126,7 @@ export function portalPage({ session, email, subscriptions, products, notice, er
       if (sub.status === "canceled") {
         state = `Ended on ${dateText(sub.ended_at ?? item.current_period_end)}.`;
       } else if (sub.cancel_at_period_end) {
-        state = `Cancelled — stays active until ${end}, then ends.`;
+        state = `Canceled — stays active until ${end}, then ends.`;
         actions = form("resume", "Keep my subscription");
       } else {
         state = sub.status === "past_due" ? `Payment overdue. Renews ${end}.` : `Active. Renews ${end}.`;

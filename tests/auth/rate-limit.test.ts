@@ -72,7 +72,7 @@ describe.skipIf(!TEST_DB)("rate limits kept in PostgreSQL", () => {
     }
     const spent = await authenticate(user.email, "a-wrong-password", uniqueIp());
     expect(spent.ok === false && spent.reason).toBe("rate-limited");
-  });
+  }, 90_000); // 40 bcrypt checks in a row: slow on a busy 2-core machine
 
   test("sign-in: right passwords give their attempt back; only failures use up the allowance", async () => {
     const user = await makeUser({ password: "the-right-password" });

@@ -48,7 +48,7 @@ describe("sizing flow at 390x844", () => {
 
     // Tap a member for its full check: every check with its ratio, the factors, the loads
     await page
-      .getByRole("button", { name: /Open the full check/ })
+      .getByRole("button", { name: /Full check, every factor/ })
       .first()
       .click();
     const detail = page.getByRole("dialog");
@@ -171,10 +171,10 @@ describe("sizing flow at 390x844", () => {
     expect(await overhang.inputValue()).toBe(`1' 10-1/2"`);
 
     // a support moved from its small editor by taps, then by the keyboard on the drawing
-    await page.getByRole("button", { name: /^2: roller at 12' 0"/ }).tap();
+    await page.getByRole("button", { name: /^2: on rollers at 12' 0"/ }).tap();
     await page.getByRole("button", { name: "Move 1 in left" }).tap();
     expect(await page.getByLabel("Position from the left end").inputValue()).toBe(`11' 11"`);
-    await page.getByRole("button", { name: /^Support 2: roller at 11' 11"/ }).focus();
+    await page.getByRole("button", { name: /^Support 2: on rollers at 11' 11"/ }).focus();
     await page.keyboard.press("ArrowRight");
     expect(await page.getByLabel("Position from the left end").inputValue()).toBe(`12' 0"`);
     await page.getByRole("button", { name: "Done", exact: true }).tap();

@@ -97,7 +97,7 @@ describe("subscriptions", () => {
     await shoot(page, "payments-checkout-declined-phone");
 
     await Promise.all([page.waitForURL(/\/pricing\?checkout=cancelled/), page.getByRole("link", { name: "Cancel and return" }).click()]);
-    expect(await page.getByText("Checkout cancelled. Nothing was charged.").isVisible()).toBe(true);
+    expect(await page.getByText("Checkout canceled. Nothing was charged.").isVisible()).toBe(true);
 
     await goto("/billing");
     expect(await roleShown(opened)).toBe("builder");
@@ -126,7 +126,7 @@ describe("subscriptions", () => {
 
     await Promise.all([page.waitForURL(/\/billing$/), page.getByRole("link", { name: "Return to the site" }).click()]);
     expect(await roleShown(opened)).toBe("subscriber");
-    expect(await page.getByTestId("billing-status").textContent()).toMatch(/^Cancelled\. You keep every paid feature until [A-Z][a-z]+ \d{1,2}, \d{4}/);
+    expect(await page.getByTestId("billing-status").textContent()).toMatch(/^Canceled\. You keep every paid feature until [A-Z][a-z]+ \d{1,2}, \d{4}/);
     await shoot(page, "payments-billing-cancelling-desktop");
 
     expect(await endBillingPeriod(subscriptionId ?? "")).toEqual(["customer.subscription.deleted"]);

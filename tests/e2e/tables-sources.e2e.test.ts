@@ -64,7 +64,7 @@ describe("a floor framed with I-joists", () => {
     expect(answer).toMatch(/^(9-1\/2|11-7\/8|14|16) in PRI-\d0 at 16 in o\.c\./);
     await screenshot("flow-ijoist-5-answer", { fullPage: false });
     await page
-      .getByRole("button", { name: /Open the full check/ })
+      .getByRole("button", { name: /Full check, every factor/ })
       .first()
       .click();
     const detail = page.getByRole("dialog");

@@ -13,11 +13,14 @@ const rowSources: [string, string][] = [
   ...T.engineered.map((e) => [e.name, e.source] as [string, string]),
   ...T.steel.map((s) => [s.name, s.source] as [string, string]),
   ...T.iJoists.map((j) => [j.name, j.source] as [string, string]),
+  ...(T.coldFormed ?? []).map((s) => [s.name, s.source] as [string, string]),
 ];
 
 describe("every starter row cites its source", () => {
   test.each(rowSources)("%s: names a table and edition and says whether and where it was checked", (_, source) => {
-    expect(source).toMatch(/NDS Supplement 2018, Table (4A|4B|4D|5A)|AISC Shapes Database v15\.0|typical values for this E grade|APA PRI-400/);
+    expect(source).toMatch(
+      /NDS Supplement 2018, Table (4A|4B|4D|5A)|AISC Shapes Database v15\.0|typical values for this E grade|APA PRI-400|SSMA product catalog steel thickness and lip tables/,
+    );
     expect(source).toMatch(/checked against|from memory — verify/);
     expect(source.length).toBeLessThanOrEqual(300);
   });

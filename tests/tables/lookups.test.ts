@@ -112,7 +112,8 @@ describe("cost keys", () => {
   });
 
   test("the starter version has a demo cost for every item it holds", () => {
-    expect(T.version).toBe("starter-2026.2");
+    expect(T.version).toBe("starter-2026.3");
+    for (const s of T.coldFormed ?? []) expect(costPerFoot(T, { material: "cfs", section: s.name })).toBeGreaterThan(0);
     for (const s of T.steel) expect(costPerFoot(T, { material: "steel", shape: s.name })).toBeGreaterThan(0);
     for (const p of T.engineered) {
       for (const width of p.widths) {

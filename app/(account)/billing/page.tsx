@@ -58,7 +58,7 @@ export default async function BillingPage({ searchParams }: BillingPageProps) {
           </h2>
           <p className="text-ink-soft">
             {live
-              ? "Opens the subscription settings of our payment service. Cancelling keeps every paid feature until the end of the period you paid for."
+              ? "Opens the subscription settings of our payment service. Canceling keeps every paid feature until the end of the period you paid for."
               : "Opens the subscription settings of our payment service, with your receipts."}
           </p>
           <BillingActionForm action={openPortalAction} label="Manage subscription" variant="secondary" testId="manage-subscription" />

@@ -30,7 +30,7 @@ export default async function PricingPage({ searchParams }: PricingPageProps) {
       />
       {params.checkout === "cancelled" ? (
         <p role="status" className="rounded-card border-2 border-rule bg-paper-raised p-3 font-bold">
-          Checkout cancelled. Nothing was charged.
+          Checkout canceled. Nothing was charged.
         </p>
       ) : null}
       {subscribed ? (

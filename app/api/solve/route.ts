@@ -5,7 +5,7 @@ import { zodIssues } from "@/lib/zod-issues";
 
 export const runtime = "nodejs";
 
-// POST /api/solve — analyse one beam, no sign-in
+// POST /api/solve — analyze one beam, no sign-in
 // Bad input: 400 { error: "invalid input", issues: [{ path, message }] }.
 // A layout that cannot carry load: 422 { error: "unstable", message } (the input is well formed).
 export const POST = route(async (req) => {

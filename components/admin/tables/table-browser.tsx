@@ -213,7 +213,12 @@ export function TableBrowser({ table }: TableBrowserProps) {
           </ul>
 
           {/* Wider screens: the whole table, sortable by its headers, scrolling sideways. */}
-          <div className="hidden overflow-x-auto rounded-card border-2 border-rule bg-paper-raised md:block">
+          <div
+            className="hidden overflow-x-auto rounded-card border-2 border-rule bg-paper-raised md:block"
+            tabIndex={0}
+            role="region"
+            aria-label={`${data.table.title}, scrolls sideways`}
+          >
             <table className="figures w-full border-collapse text-sm" data-testid="table-grid">
               <caption className="sr-only">
                 {data.table.title}, version {version?.number ?? "starter"}

@@ -29,6 +29,7 @@ export function itemWords(itemKey: string): string {
   }
   if (material === "steel" && rest.length === 1) return `${rest[0]} steel`;
   if (material === "ijoist" && rest.length === 1) return `${rest[0]} I-joist`;
+  if (material === "cfs" && rest.length === 1) return `${rest[0]} cold-formed steel`;
   return itemKey.replaceAll("|", " ");
 }
 

@@ -51,9 +51,9 @@ export function renderMail(subject: string, blocks: readonly MailBlock[]): Rende
         case "link":
           return (
             `<p style="margin:0 0 16px"><a href="${escapeHtml(b.href)}" style="display:inline-block;padding:12px 20px;` +
-            `background:#1E5B4F;color:#FFFFFF;font-weight:bold;font-size:17px;text-decoration:none;border-radius:8px">` +
+            `background:#1A5247;color:#FFFFFF;font-weight:bold;font-size:17px;text-decoration:none;border-radius:8px">` +
             `${escapeHtml(b.label)}</a></p>` +
-            `<p style="margin:0 0 16px;font-size:15px;color:#5A6270">Or paste this address into your browser: ` +
+            `<p style="margin:0 0 16px;font-size:15px;color:#434A56">Or paste this address into your browser: ` +
             `<span style="word-break:break-all">${escapeHtml(b.href)}</span></p>`
           );
         case "caution":
@@ -68,7 +68,7 @@ export function renderMail(subject: string, blocks: readonly MailBlock[]): Rende
             b.rows
               .map(
                 ([k, v]) =>
-                  `<tr><td style="padding:4px 16px 4px 0;color:#5A6270">${escapeHtml(k)}</td>` +
+                  `<tr><td style="padding:4px 16px 4px 0;color:#434A56">${escapeHtml(k)}</td>` +
                   `<td style="padding:4px 0;font-weight:bold">${escapeHtml(v)}</td></tr>`,
               )
               .join("") +
@@ -82,8 +82,8 @@ export function renderMail(subject: string, blocks: readonly MailBlock[]): Rende
     `<!doctype html><html lang="en"><head><meta charset="utf-8"><title>${escapeHtml(subject)}</title></head>` +
     `<body style="margin:0;padding:0;background:#F7F5EF;font-family:Arial,Helvetica,sans-serif">` +
     `<div style="max-width:560px;margin:0 auto;padding:24px 16px">` +
-    `<p style="margin:0 0 24px;font-size:20px;font-weight:bold;color:#1E5B4F">Spanlark</p>\n${body}\n` +
-    `<p style="margin:24px 0 0;padding-top:12px;border-top:1px solid #D8D4C8;font-size:14px;color:#5A6270">${escapeHtml(FOOTER)}</p>` +
+    `<p style="margin:0 0 24px;font-size:20px;font-weight:bold;color:#1A5247">Spanlark</p>\n${body}\n` +
+    `<p style="margin:24px 0 0;padding-top:12px;border-top:1px solid #D8D4C8;font-size:14px;color:#434A56">${escapeHtml(FOOTER)}</p>` +
     `</div></body></html>`;
 
   return { subject, text, html };

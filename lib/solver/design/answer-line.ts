@@ -30,6 +30,8 @@ export interface SupportNeed {
   requiredBearing: number;
   /** bearing length the check used here, in */
   bearing?: number;
+  /** cold-formed steel: this support needs a bearing stiffener */
+  bearingStiffener?: boolean;
 }
 
 export interface AnswerLineInput {
@@ -49,6 +51,7 @@ export interface AnswerLineInput {
 export function shortLabel(spec: MemberSpec, fullLabel: string): string {
   if (spec.material === "sawn") return `${spec.plies > 1 ? `${spec.plies}-ply ` : ""}${spec.size} ${spec.grade}`;
   if (spec.material === "steel") return spec.shape;
+  if (spec.material === "cfs") return spec.assembly === "single" ? spec.section : `2-${spec.section} ${spec.assembly === "box" ? "box" : "back-to-back"}`;
   if (spec.material === "ijoist") {
     // "PRI-40 11-7/8" → "11-7/8 in PRI-40", as a framer orders it
     const [series, ...depth] = spec.joist.split(" ");
@@ -105,6 +108,18 @@ export function supportWords(supports: readonly SupportNeed[], rule: Bearing = "
   return `${need} bearing ${where}`;
 }
 
+/**
+ * Cold-formed steel: where bearing stiffeners go, as the trade writes it: ", bearing stiffeners at the
+ * supports" (every support), ", bearing stiffener at support 2", ", bearing stiffeners at supports 1 and 3".
+ */
+export function stiffenerWords(supports: readonly SupportNeed[]): string {
+  const at = supports.map((s, i) => (s.bearingStiffener ? i + 1 : 0)).filter((i) => i > 0);
+  if (at.length === 0) return "";
+  if (at.length === supports.length) return at.length === 1 ? ", bearing stiffener at the support" : ", bearing stiffeners at the supports";
+  if (at.length === 1) return `, bearing stiffener at support ${at[0]}`;
+  return `, bearing stiffeners at supports ${at.slice(0, -1).join(", ")} and ${at[at.length - 1]}`;
+}
+
 /** The answer line: "2x10 No.2 at 16 in o.c. — 1-1/2" bearing each end on the plate, beam or hanger". */
 export function answerLine(a: AnswerLineInput): string {
   const spacing = a.spacingIn !== undefined ? ` at ${Math.round(a.spacingIn * 100) / 100} in o.c.` : "";
@@ -113,7 +128,7 @@ export function answerLine(a: AnswerLineInput): string {
     a.assembly && a.assembly.plies > 1 && a.assembly.spacerIn > 0 && n > 0
       ? ` with ${n === 1 ? "" : `${SPACER_COUNT[n] ?? n} `}${formatInches(a.assembly.spacerIn)} spacer${n === 1 ? "" : "s"}`
       : "";
-  const name = `${shortLabel(a.spec, a.label)}${spacer}${spacing}`;
+  const name = `${shortLabel(a.spec, a.label)}${spacer}${spacing}${stiffenerWords(a.supports)}`;
   const words = supportWords(a.supports, bearingRule(a.kind, a.spacingIn, a.inStudWall));
   return words ? `${name} — ${words}` : name;
 }

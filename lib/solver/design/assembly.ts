@@ -47,6 +47,19 @@ export function assemblyFor(m: DesignMember, wall: WallFraming | null): Assembly
     // an I-joist is a joist, not a header: it never fills a wall (its web cannot take the studs' load)
     return { plies: 1, spacers: 0, spacerIn: SPACER_IN, widthIn: m.joist.flangeWidth, wallFraming: wall, fits: wall === null ? null : false, words: m.label };
   }
+  if (m.kind === "cfs") {
+    // two C-sections side by side (back to back, or toe to toe as a box) are two flange widths wide
+    const widthIn = m.section.flange * m.pieces;
+    return {
+      plies: m.pieces,
+      spacers: 0,
+      spacerIn: SPACER_IN,
+      widthIn,
+      wallFraming: wall,
+      fits: wall === null ? null : widthIn <= WALL_DEPTH_IN[wall] + 1e-9,
+      words: m.label,
+    };
+  }
   const solid = m.plies * m.plyWidth;
   let spacers = 0;
   if (wall !== null && m.material === "sawn" && m.plies > 1) {

@@ -3,7 +3,8 @@
  * Pure: the caller passes the material tables (starter data in the CLI, the published version in the app).
  */
 import type { MaterialTables } from "@/lib/tables/types";
-import { CAUTION, NOT_CHECKED } from "@/lib/caution";
+import { ratioPercent } from "./ratio-percent";
+import { CAUTION, NOT_CHECKED, notCheckedFor } from "@/lib/caution";
 import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
 import type { LoadStandard } from "../asce7/standard";
@@ -15,6 +16,7 @@ import { DesignInputError } from "./errors";
 import { resolveMember, type DesignMember } from "./member";
 import { checkInputSchema, type CheckInput, type MemberSpec } from "./schema";
 import { evaluateIJoist, type IJoistFactors } from "./i-joist";
+import { evaluateCfs, type CfsFactors } from "./cold-formed";
 import { evaluateSteel, type SteelFactors } from "./steel";
 import { E_STEEL_KSI } from "../aisc360/aisc360-16";
 import { answerLine, shortLabel } from "./answer-line";
@@ -48,7 +50,7 @@ export interface CheckOutput {
   member: MemberSummary;
   checks: DesignCheck[];
   reactions: SupportReaction[];
-  factors: WoodFactors | SteelFactors | IJoistFactors;
+  factors: WoodFactors | SteelFactors | IJoistFactors | CfsFactors;
   /** the line loads the member carries, by case, and how each was derived */
   loads: { case: string; type: string; w: number | null; note: string }[];
   limits: { live: number | null; total: number | null; source: string };
@@ -91,7 +93,7 @@ export interface RoughOpening {
 export interface Evaluation {
   checks: DesignCheck[];
   reactions: SupportReaction[];
-  factors: WoodFactors | SteelFactors | IJoistFactors;
+  factors: WoodFactors | SteelFactors | IJoistFactors | CfsFactors;
   governing: CheckName | null;
   ratio: number;
   pass: boolean;
@@ -107,14 +109,13 @@ const CHECK_WORDS: Record<CheckName, string> = {
   "web-yielding": "web yielding at a support",
   "web-crippling": "web crippling at a support",
   "web-compactness": "web slenderness",
+  "bending-crippling": "bending with web crippling",
+  "bending-shear": "bending with shear",
 };
 
-/** A ratio as a percentage; a failing ratio never shows as 100 % (one decimal where rounding would hide it). */
+/** A ratio as a percentage (lib/solver/design/ratio-percent.ts): a pass never reads 100 % unless it is exactly at it, a failure never 100 % or less. */
 export function percent(ratio: number, pass: boolean): string {
-  const whole = Math.round(ratio * 100);
-  if (!pass && whole <= 100) return (Math.ceil(ratio * 1000) / 10).toFixed(1);
-  if (pass && whole > 100) return "100";
-  return String(whole);
+  return ratioPercent(ratio, pass);
 }
 
 /** "OK 77% (bending)" or "Over 113% (shear)": the verdict with the largest ratio and the check it is in. */
@@ -146,7 +147,14 @@ export function answerFor(
 
 /** Runs every check of one resolved member in a shared context. */
 export function evaluateMember(member: DesignMember, ctx: DesignContext): Evaluation {
-  const r = member.kind === "steel" ? evaluateSteel(member, ctx) : member.kind === "ijoist" ? evaluateIJoist(member, ctx) : evaluateWood(member, ctx);
+  const r =
+    member.kind === "steel"
+      ? evaluateSteel(member, ctx)
+      : member.kind === "ijoist"
+        ? evaluateIJoist(member, ctx)
+        : member.kind === "cfs"
+          ? evaluateCfs(member, ctx)
+          : evaluateWood(member, ctx);
   let governing: CheckName | null = null;
   let ratio = 0;
   for (const c of r.checks) {
@@ -192,6 +200,17 @@ export function summarizeMember(m: DesignMember): MemberSummary {
       section: { b: m.shape.bf, d: m.shape.d, A: m.shape.A, S: m.shape.Sx, I: m.shape.Ix },
       sources: m.sources,
       note: null,
+    };
+  }
+  if (m.kind === "cfs") {
+    // the deflection drawn with E = 29,500 ksi and the gross I (the check reads the effective I at the service moment)
+    return {
+      spec: m.spec,
+      label: m.label,
+      weightPlf: Math.round(m.weightPlf * 1000) / 1000,
+      section: { b: m.section.flange * m.pieces, d: m.section.depth, A: m.section.A * m.pieces, S: m.section.Sxe * m.pieces, I: m.I, EI: 29_500_000 * m.I },
+      sources: m.sources,
+      note: `${m.section.name}: ${m.section.mils} mil (design thickness ${m.section.t} in), Fy ${m.section.Fy} ksi — order ${m.section.Fy} ksi steel; S is the effective section modulus at Fy`,
     };
   }
   if (m.kind === "ijoist") {
@@ -274,7 +293,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
       a.push(inc.basis);
       a.push(resolveCr(member, c.repetitive, input.kind, input.spacingIn).basis);
     }
-    a.push("span taken centre to centre of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
+    a.push("span taken center to center of the supports as given (NDS 2018 §3.2.1 permits face to face plus half the required bearing)");
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
     a.push(
@@ -283,6 +302,20 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
   if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
+  if (member.kind === "cfs") {
+    a.push(
+      `cold-formed steel ${member.section.name}${member.pieces > 1 ? ` (${member.assembly === "box" ? "two C-sections boxed, flanges toe to toe" : "two C-sections back to back"}, each taken as a single web sharing the load equally)` : ""}: AISI S100-16 ${input.method === "lrfd" ? "LRFD" : "ASD"}, Fy ${member.section.Fy} ksi (33 ksi below 54 mil, 50 ksi at 54 mil and above: common practice; order it so), E = 29,500 ksi`,
+    );
+    a.push(
+      c.unbracedLengthFt > 0
+        ? `compression flange braced at the supports and every ${c.unbracedLengthFt} ft: lateral-torsional buckling by AISI S100-16 §F2.1${member.assembly === "box" ? " (a box header is taken as stable between braces)" : ""}`
+        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting); distortional buckling (§F4) not checked separately",
+    );
+    a.push(
+      `web crippling at each support and point load by AISI S100-16 §G5 (flanges screwed to the support, bearing ${input.bearingIn} in); bearing stiffeners: ${member.stiffeners === true ? "at every support, as given" : member.stiffeners === false ? "none, as given" : "added only where the web needs one"} (33 mil C-shape or track, IRC 2021 R505.3.4)`,
+    );
+    a.push("standard web punchouts only, away from the supports; deflection with the effective moment of inertia at the service moment");
+  }
   if (member.kind === "ijoist") {
     a.push(
       "wood I-joist checked against its published capacities (moment, shear, end and intermediate reactions) and its EI and K; dry service, normal temperature; compression flange braced by the sheathing",
@@ -327,13 +360,16 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     loads: ctx.loads.map((l) => l.load),
     selfWeightPlf: sw,
     // an I-joist gives its EI, not a section: its bending deflection drawn from EI (shear deflection is in the check)
+    // cold-formed steel: drawn with the effective I the deflection check used
     EPsi:
-      summary.section.EI !== undefined && summary.section.EI > 0
-        ? summary.section.EI
-        : member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0
-          ? factors.EPrime
-          : E_STEEL_KSI * 1000,
-    IIn4: summary.section.EI !== undefined && summary.section.EI > 0 ? 1 : summary.section.I,
+      member.kind === "cfs"
+        ? 29_500_000
+        : summary.section.EI !== undefined && summary.section.EI > 0
+          ? summary.section.EI
+          : member.kind === "wood" && typeof factors.EPrime === "number" && factors.EPrime > 0
+            ? factors.EPrime
+            : E_STEEL_KSI * 1000,
+    IIn4: member.kind === "cfs" ? (ev.factors as CfsFactors).Ieff : summary.section.EI !== undefined && summary.section.EI > 0 ? 1 : summary.section.I,
     checks: ev.checks,
     reactions: ev.reactions,
     combinations: ctx.combinations,
@@ -355,7 +391,7 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     ],
     limits: ctx.limits,
     assumptions,
-    notChecked: NOT_CHECKED,
+    notChecked: notCheckedFor([member.spec.material]),
     caution: CAUTION,
     tables: tables.version,
     loadStandard: input.loadStandard,

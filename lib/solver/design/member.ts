@@ -7,6 +7,7 @@ import {
   costPerFoot,
   depthSizeFactor,
   findEngineered,
+  findCfsSection,
   findIJoist,
   findSawnSize,
   findSawnValues,
@@ -19,6 +20,7 @@ import {
 import type { MaterialTables, SawnGrade, Species, SteelGrade, WShape } from "@/lib/tables/types";
 import { woodDensity, type WetServiceTable } from "../nds/nds-2018";
 import { DesignInputError } from "./errors";
+import type { CfsMember } from "./cold-formed";
 import type { IJoistMember } from "./i-joist";
 import type { MemberSpec } from "./schema";
 
@@ -73,7 +75,7 @@ export interface SteelMember {
   costPerFoot?: number;
 }
 
-export type DesignMember = WoodMember | SteelMember | IJoistMember;
+export type DesignMember = WoodMember | SteelMember | IJoistMember | CfsMember;
 
 function lookup<T>(fn: () => T, pathPrefix = ""): T {
   try {
@@ -120,6 +122,27 @@ export function resolveMemberUnchecked(spec: MemberSpec, tables: MaterialTables)
       weightPlf: joist.weightPlf,
       sources: [joist.source],
       costPerFoot: costPerFoot(tables, { material: "ijoist", joist: joist.name }),
+    };
+  }
+  if (spec.material === "cfs") {
+    const section = findCfsSection(tables, spec.section);
+    if (section.style !== "S")
+      throw new DesignInputError([{ path: "member.section", message: `${section.name} is a track: joists, rafters and headers are C-sections (S)` }]);
+    const pieces = spec.assembly === "single" ? 1 : 2;
+    const unit = costPerFoot(tables, { material: "cfs", section: section.name });
+    return {
+      kind: "cfs",
+      spec: { material: "cfs", section: section.name, assembly: spec.assembly, ...(spec.stiffeners === undefined ? {} : { stiffeners: spec.stiffeners }) },
+      label: cfsLabel(section.name, spec.assembly),
+      section,
+      assembly: spec.assembly,
+      stiffeners: spec.stiffeners,
+      pieces,
+      d: section.depth,
+      I: section.Ix * pieces,
+      weightPlf: section.weightPlf * pieces,
+      sources: [section.source, AISI_SOURCE],
+      costPerFoot: unit === undefined ? undefined : unit * pieces,
     };
   }
   if (spec.material === "sawn") {
@@ -224,6 +247,15 @@ export function withPlies(m: WoodMember, plies: number): WoodMember {
     weightPlf: m.weightPlf * k,
     costPerFoot: m.costPerFoot === undefined ? undefined : m.costPerFoot * k,
   };
+}
+
+/** The checks' standard, as the sheet's sources list it. */
+export const AISI_SOURCE =
+  "AISI S100-16 (North American Specification for the Design of Cold-Formed Steel Structural Members, 2016); web crippling Table G5-2 checked against a published copy (runtosolve/AISIS100.jl); bearing stiffener Pn = 0.7(Pwc + Ae Fy) from memory — verify";
+
+/** "800S162-54", "2-800S162-54 back-to-back header", "2-800S162-54 box header". */
+export function cfsLabel(section: string, assembly: "single" | "back-to-back" | "box"): string {
+  return assembly === "single" ? section : `2-${section} ${assembly === "box" ? "box" : "back-to-back"} header`;
 }
 
 function fmtIn(v: number): string {

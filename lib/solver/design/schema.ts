@@ -71,9 +71,31 @@ export const engineeredMemberSchema = z
 /** a wood I-joist by its table name, e.g. "PRI-40 11-7/8"; stiffeners = web stiffeners at the end bearings */
 export const iJoistMemberSchema = z.object({ material: z.literal("ijoist"), joist: z.string().min(1), stiffeners: z.boolean().default(false) }).strict();
 
-export const memberSchema = z.discriminatedUnion("material", [sawnMemberSchema, steelMemberSchema, engineeredMemberSchema, iJoistMemberSchema], {
-  error: 'must name a material: "sawn", "steel", "engineered" or "ijoist"',
-});
+/** How two cold-formed C-sections make a header: back to back (webs together) or box (flanges toe to toe). */
+export const CFS_ASSEMBLIES = ["single", "back-to-back", "box"] as const;
+export type CfsAssembly = (typeof CFS_ASSEMBLIES)[number];
+
+/**
+ * A cold-formed steel C-section by its designation, e.g. "800S162-54", alone (joists, rafters) or two
+ * of them as a header; stiffeners: true = bearing stiffeners at every support, false = none, not given =
+ * added where the web needs them (the answer says where).
+ */
+export const cfsMemberSchema = z
+  .object({
+    material: z.literal("cfs"),
+    section: z.string().min(1),
+    assembly: z.enum(CFS_ASSEMBLIES, { error: oneOfMessage(CFS_ASSEMBLIES) }).default("single"),
+    stiffeners: z.boolean().optional(),
+  })
+  .strict();
+
+export const memberSchema = z.discriminatedUnion(
+  "material",
+  [sawnMemberSchema, steelMemberSchema, engineeredMemberSchema, iJoistMemberSchema, cfsMemberSchema],
+  {
+    error: 'must name a material: "sawn", "steel", "engineered", "ijoist" or "cfs"',
+  },
+);
 
 export const DEFLECTION_PRESET_IDS = ["floor", "floor-tile", "roof-no-ceiling", "ceiling-flexible", "ceiling-brittle", "other"] as const;
 
@@ -265,9 +287,23 @@ export const sizeFamilySchema = z.discriminatedUnion(
     z.object({ material: z.literal("engineered"), product: z.string().min(1).optional(), plies: z.array(plies).min(1).optional() }).strict(),
     /** wood I-joists, one series or every one */
     z.object({ material: z.literal("ijoist"), series: z.string().min(1).optional(), stiffeners: z.boolean().default(false) }).strict(),
+    /** cold-formed steel C-sections: joists and rafters one at a spacing, headers two back to back or boxed */
+    z
+      .object({
+        material: z.literal("cfs"),
+        /** flange widths to try, in (1.62, 2, 2.5); default every one */
+        flanges: z.array(positive("in")).min(1).optional(),
+        /** header assemblies to try; default both back-to-back and box for a beam or header, single for joists */
+        assemblies: z
+          .array(z.enum(CFS_ASSEMBLIES, { error: oneOfMessage(CFS_ASSEMBLIES) }))
+          .min(1)
+          .optional(),
+        stiffeners: z.boolean().optional(),
+      })
+      .strict(),
     z.object({ material: z.literal("any") }).strict(),
   ],
-  { error: 'must name a family: material "sawn", "engineered", "ijoist", "steel" or "any"' },
+  { error: 'must name a family: material "sawn", "engineered", "ijoist", "cfs", "steel" or "any"' },
 );
 
 /** The size input's fields as sent (the request type the flow builds); sizeInputSchema adds the rough opening and cross-field rules. */

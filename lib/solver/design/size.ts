@@ -5,7 +5,7 @@
  */
 import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
-import { CAUTION } from "@/lib/caution";
+import { CAUTION, notCheckedFor } from "@/lib/caution";
 import type { LoadStandard } from "../asce7/standard";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
 import {
@@ -17,7 +17,6 @@ import {
   contextFor,
   evaluateMember,
   fullCheck,
-  NOT_CHECKED,
   parseWith,
   roughOpeningOf,
   summarizeMember,
@@ -47,7 +46,7 @@ export interface SizeCandidateResult {
   /** from the table's cost column, per foot of the whole member; null where the table has none */
   costPerFoot: number | null;
   /** jack studs per support (wood) and bearing needed, for the answer line */
-  supports: { x: number; maxDown: number; uplift: number; requiredBearing: number; jackStuds: number | null }[];
+  supports: { x: number; maxDown: number; uplift: number; requiredBearing: number; jackStuds: number | null; bearingStiffener?: boolean }[];
   /** plies, spacers and the wall it fills */
   assembly: Assembly;
   /** the whole check, for the first `fullChecks` passing members */
@@ -163,6 +162,18 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
     }
     for (const j of rows) out.push({ material: "ijoist", joist: j.name, stiffeners: f?.stiffeners ?? false });
   }
+  if (mat === "cfs" || mat === "any") {
+    // cold-formed steel C-sections: one at a spacing for joists and rafters; two (back to back or boxed) for a header or beam
+    const f = family.material === "cfs" ? family : undefined;
+    const flanges = f?.flanges;
+    const assemblies = joists ? (["single"] as const) : (f?.assemblies ?? (["back-to-back", "box"] as const));
+    for (const s of tables.coldFormed ?? []) {
+      if (s.style !== "S") continue;
+      if (flanges && !flanges.some((w) => Math.abs(w - s.flange) < 0.02)) continue;
+      for (const assembly of assemblies)
+        out.push({ material: "cfs", section: s.name, assembly, ...(f?.stiffeners === undefined ? {} : { stiffeners: f.stiffeners }) });
+    }
+  }
   if (mat === "steel" || mat === "any") {
     const grade = family.material === "steel" ? family.grade : "A992";
     for (const s of tables.steel) out.push({ material: "steel", shape: s.name, grade });
@@ -181,7 +192,14 @@ function describe(input: SizeInput, member: DesignMember, ev: ReturnType<typeof 
     weightPlf: Math.round(member.weightPlf * 100) / 100,
     depth: member.d,
     costPerFoot: member.costPerFoot === undefined ? null : Math.round(member.costPerFoot * 100) / 100,
-    supports: ev.reactions.map((r) => ({ x: r.x, maxDown: r.maxDown, uplift: r.uplift, requiredBearing: r.requiredBearing, jackStuds: r.jackStuds })),
+    supports: ev.reactions.map((r) => ({
+      x: r.x,
+      maxDown: r.maxDown,
+      uplift: r.uplift,
+      requiredBearing: r.requiredBearing,
+      jackStuds: r.jackStuds,
+      ...(r.bearingStiffener === undefined ? {} : { bearingStiffener: r.bearingStiffener }),
+    })),
     assembly,
   };
 }
@@ -213,7 +231,7 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   // one table lookup per size; other ply counts derive from it
   const onePly = new Map<string, DesignMember | null>();
   for (const spec of specs) {
-    const plies = spec.material === "steel" || spec.material === "ijoist" ? 1 : spec.plies;
+    const plies = spec.material === "steel" || spec.material === "ijoist" || spec.material === "cfs" ? 1 : spec.plies;
     const key =
       spec.material === "sawn"
         ? `s|${spec.species}|${spec.grade}|${spec.size}`
@@ -223,7 +241,10 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
     let base = key ? onePly.get(key) : undefined;
     if (base === undefined) {
       try {
-        base = resolveMemberUnchecked(spec.material === "steel" || spec.material === "ijoist" ? spec : { ...spec, plies: 1 }, tables);
+        base = resolveMemberUnchecked(
+          spec.material === "steel" || spec.material === "ijoist" || spec.material === "cfs" ? spec : { ...spec, plies: 1 },
+          tables,
+        );
       } catch (err) {
         if (!(err instanceof TableLookupError || err instanceof DesignInputError)) throw err;
         base = null;
@@ -272,7 +293,7 @@ export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
       ...familyWoodWords(input),
       ...(input.conditions.selfWeight ? ["each member's own weight counted as dead load"] : []),
     ],
-    notChecked: NOT_CHECKED,
+    notChecked: notCheckedFor([...passing.slice(0, input.limit), ...failing.slice(0, input.failures)].map((r) => r.member.material)),
     caution: CAUTION,
     tables: tables.version,
     loadStandard: input.loadStandard,
@@ -294,7 +315,7 @@ function perMemberWords(input: SizeInput, m: DesignMember): string[] {
 
 /** Incised and Cr as the search applied them to sawn lumber. */
 function familyWoodWords(input: SizeInput): string[] {
-  if (input.member.material === "steel" || input.member.material === "engineered") return [];
+  if (input.member.material === "steel" || input.member.material === "engineered" || input.member.material === "cfs") return [];
   const c = input.conditions;
   const treated = c.wet || input.kind === "deck-joist" || input.kind === "deck-beam";
   const incised =
@@ -325,8 +346,10 @@ function describeFamily(input: SizeInput): string {
       return `every W-shape in the tables, ${m.grade}`;
     case "ijoist":
       return `${m.series ?? "every"} wood I-joist${m.series ? "" : " series"} in the tables, every depth${m.stiffeners ? ", web stiffeners at the ends" : ""}`;
+    case "cfs":
+      return `every cold-formed steel C-section in the tables${m.flanges ? ` with ${m.flanges.join(" or ")} in flanges` : ""}, ${joists ? "one at the spacing" : (m.assemblies ?? ["back-to-back", "box"]).join(" and ") + " pairs"}, AISI S100-16${m.stiffeners === true ? ", bearing stiffeners at every support" : m.stiffeners === false ? ", no bearing stiffeners" : ", bearing stiffeners where the web needs them"}`;
     case "any":
-      return `every sawn size, engineered product${joists ? ", wood I-joist" : ""} and W-shape in the tables, plies ${plies(undefined)} for dimension lumber and LVL`;
+      return `every sawn size, engineered product${joists ? ", wood I-joist" : ""}, cold-formed steel C-section${joists ? "" : " pair"} and W-shape in the tables, plies ${plies(undefined)} for dimension lumber and LVL`;
   }
 }
 
@@ -439,7 +462,7 @@ export function largestSpan(json: unknown, tables: MaterialTables): SpanOutput {
     governing: failGov,
     atMaxLength: false,
     check: best,
-    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.lengthFt) ? "centre to centre of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
+    note: `${Math.floor(inches / 12)} ft ${Math.round((inches % 12) * 16) / 16} in ${input.supports.length === 2 && input.supports.every((sp) => sp.x === 0 || sp.x === input.lengthFt) ? "center to center of supports" : "member length, supports and loads scaled with it"}; ${failGov ?? "a check"} governs just beyond`,
   };
 }
 

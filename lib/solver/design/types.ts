@@ -8,7 +8,17 @@ export interface CombinationRef {
 }
 
 export type CheckName =
-  "bending" | "shear" | "deflection-live" | "deflection-total" | "bearing" | "stability" | "web-yielding" | "web-crippling" | "web-compactness";
+  | "bending"
+  | "shear"
+  | "deflection-live"
+  | "deflection-total"
+  | "bearing"
+  | "stability"
+  | "web-yielding"
+  | "web-crippling"
+  | "web-compactness"
+  | "bending-crippling"
+  | "bending-shear";
 
 export interface DesignCheck {
   name: CheckName;
@@ -48,6 +58,8 @@ export interface SupportReaction {
   requiredBearing: number;
   /** wood members, supports at the member's ends: 1-1/2 in jack studs needed under this end of a header (bearing on the member only); null otherwise */
   jackStuds: number | null;
+  /** cold-formed steel: a bearing stiffener is needed at this support (the answer says so) */
+  bearingStiffener?: boolean;
 }
 
 /** A check as the material modules write it: the combination by name, resolved to its factors once per member. */

@@ -1,5 +1,6 @@
 import type { ModelStatic, Transaction } from "sequelize";
 import {
+  CfsSectionRow,
   CostRowModel,
   EngineeredProductRow,
   IJoistRow,
@@ -101,6 +102,20 @@ async function readIJoists(versionId: string, transaction?: Transaction) {
   return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, ...joist }) => joist);
 }
 
+async function readColdFormed(versionId: string, transaction?: Transaction) {
+  const rows = await CfsSectionRow.findAll({
+    where: { versionId },
+    order: [
+      ["style", "ASC"],
+      ["depth", "ASC"],
+      ["flange", "ASC"],
+      ["mils", "ASC"],
+    ],
+    transaction,
+  });
+  return rows.map((r) => r.get({ plain: true })).map(({ id: _id, versionId: _v, ...section }) => section);
+}
+
 async function readSteelShapes(versionId: string, transaction?: Transaction) {
   const rows = await SteelShapeRow.findAll({
     where: { versionId },
@@ -142,6 +157,7 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
     rows["steel-grades"] = await readSteelGrades(versionId, transaction);
     rows.costs = await readCosts(versionId, transaction);
     rows["stock-lengths"] = await readStockLengths(versionId, transaction);
+    rows["cold-formed"] = await readColdFormed(versionId, transaction);
     return rows;
   }
   [
@@ -154,6 +170,7 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
     rows["steel-grades"],
     rows.costs,
     rows["stock-lengths"],
+    rows["cold-formed"],
   ] = await Promise.all([
     readSawnSizes(versionId),
     readSawnValues(versionId),
@@ -164,12 +181,22 @@ export async function readVersionRows(versionId: string, transaction?: Transacti
     readSteelGrades(versionId),
     readCosts(versionId),
     readStockLengths(versionId),
+    readColdFormed(versionId),
   ]);
   return rows;
 }
 
 type RowModel = ModelStatic<
-  SawnSizeRow | SawnValueRow | SizeFactorRow | EngineeredProductRow | IJoistRow | SteelShapeRow | SteelGradeRow | CostRowModel | StockLengthModel
+  | SawnSizeRow
+  | SawnValueRow
+  | SizeFactorRow
+  | EngineeredProductRow
+  | IJoistRow
+  | SteelShapeRow
+  | SteelGradeRow
+  | CostRowModel
+  | StockLengthModel
+  | CfsSectionRow
 >;
 
 export const ROW_MODELS: Record<TableKey, RowModel> = {
@@ -182,6 +209,7 @@ export const ROW_MODELS: Record<TableKey, RowModel> = {
   "steel-grades": SteelGradeRow,
   costs: CostRowModel,
   "stock-lengths": StockLengthModel,
+  "cold-formed": CfsSectionRow,
 };
 
 /** Writes one table's rows for a new version. */
@@ -209,6 +237,12 @@ export async function writeTableRows<K extends TableKey>(key: K, versionId: stri
     case "engineered":
       await EngineeredProductRow.bulkCreate(
         (rows as TableRowMap["engineered"][]).map((r) => ({ ...r, FbNeg: r.FbNeg ?? null, versionId })),
+        { transaction },
+      );
+      return;
+    case "cold-formed":
+      await CfsSectionRow.bulkCreate(
+        (rows as TableRowMap["cold-formed"][]).map((r) => ({ ...r, versionId })),
         { transaction },
       );
       return;

@@ -20,6 +20,7 @@ export function tablesToRows(tables: MaterialTables): TableRows {
     "steel-grades": tables.steelGrades,
     costs,
     "stock-lengths": tables.stockLengths ?? [],
+    "cold-formed": tables.coldFormed ?? [],
   };
 }
 
@@ -35,6 +36,7 @@ export function rowsToTables(version: string, rows: TableRows): MaterialTables {
     steelGrades: rows["steel-grades"],
     costs: Object.fromEntries(rows.costs.map((c) => [c.itemKey, c.costPerFt])),
     stockLengths: rows["stock-lengths"],
+    coldFormed: rows["cold-formed"],
   };
 }
 
@@ -49,5 +51,6 @@ export function emptyRows(): TableRows {
     "steel-grades": [],
     costs: [],
     "stock-lengths": [],
+    "cold-formed": [],
   };
 }

@@ -10,8 +10,11 @@ describe("ratioVerdict", () => {
   test.each([
     { ratio: 0.82, pass: true, text: "OK 82%" },
     { ratio: 1, pass: true, text: "OK 100%" },
-    { ratio: 0.9996, pass: true, text: "OK 100%" },
-    { ratio: 1.004, pass: false, text: "Over 101%" },
+    { ratio: 0.996, pass: true, text: "OK 99.6%" },
+    { ratio: 0.9996, pass: true, text: "OK 99.9%" },
+    { ratio: 0.994, pass: true, text: "OK 99%" },
+    { ratio: 1.004, pass: false, text: "Over 100.4%" },
+    { ratio: 1.0001, pass: false, text: "Over 100.1%" },
     { ratio: 1.13, pass: false, text: "Over 113%" },
     { ratio: 0, pass: true, text: "OK 0%" },
   ])("$ratio reads $text", ({ ratio, pass, text }) => {
@@ -26,6 +29,12 @@ describe("ratioVerdict", () => {
 });
 
 describe("RatioBar", () => {
+  test("a pass just under the line reads under 100% on the bar, in words and not only in colour", () => {
+    render(<RatioBar ratio={0.996} label="Bending" />);
+    expect(screen.getByText("OK 99.6%")).toBeTruthy();
+    expect(screen.queryByText("OK 100%")).toBeNull();
+  });
+
   test("a passing check says OK with its percent in words, not only in colour", () => {
     const { container } = render(<RatioBar ratio={0.82} label="Bending" />);
     expect(screen.getByText("OK 82%")).toBeTruthy();

@@ -43,7 +43,7 @@ export default async function CrewPage({ params }: CrewPageProps) {
       </a>
       <p className="flex items-center gap-2 rounded-card border-2 border-caution bg-caution-bg px-3 py-2 font-bold text-caution-ink">
         <WarningIcon className="h-5 w-5 shrink-0" />
-        <a href="#caution" className="text-caution-ink">
+        <a href="#caution" className="inline-flex min-h-touch items-center text-caution-ink">
           Check before you build: read the caution below the schedule.
         </a>
       </p>
@@ -62,7 +62,7 @@ export default async function CrewPage({ params }: CrewPageProps) {
         <CrewSchedule rows={view.rows} />
       </section>
       <div id="caution" className="scroll-mt-20">
-        <Caution variant="full" />
+        <Caution variant="full" notChecked={view.notChecked} />
       </div>
       <p className="text-ink-soft">
         Loads are the largest at each support under the service load combinations. Jack studs are 1-1/2 in studs under each end of a header. Ask the builder
