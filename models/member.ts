@@ -8,12 +8,14 @@ import {
   type NonAttribute,
   type Sequelize,
 } from "sequelize";
-import type { FlowState, MemberKind } from "@/lib/flow/state";
+import type { FlowState } from "@/lib/flow/state";
+import type { Bearing, SupportDesign } from "@/lib/jobs/load-path";
+import { JOB_MEMBER_KINDS, type JobMemberKind } from "@/lib/solver/design/kinds";
 import type { MemberResultSummary } from "@/lib/flow/summary";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { Job } from "./job";
 
-export const MEMBER_KIND_VALUES: readonly MemberKind[] = ["floor-joist", "header", "beam", "deck-joist", "deck-beam", "rafter"];
+export const MEMBER_KIND_VALUES: readonly JobMemberKind[] = JOB_MEMBER_KINDS;
 
 /**
  * One sized member of a job ("H1 kitchen header"): the flow's inputs, the answer as it was when
@@ -24,8 +26,9 @@ export class Member extends Model<InferAttributes<Member>, InferCreationAttribut
   declare id: CreationOptional<string>;
   declare jobId: ForeignKey<string>;
   declare label: string;
-  declare kind: MemberKind;
-  declare flowState: FlowState;
+  declare kind: JobMemberKind;
+  /** the sizing flow's inputs; null for posts and footings (their inputs are in supportDesign) */
+  declare flowState: FlowState | null;
   declare resultSummary: MemberResultSummary | null;
   declare chosenMember: MemberSpec | null;
   declare carriedByMemberId: CreationOptional<string | null>;
@@ -37,6 +40,10 @@ export class Member extends Model<InferAttributes<Member>, InferCreationAttribut
   declare postSize: CreationOptional<string | null>;
   declare footingDiameterIn: CreationOptional<number | null>;
   declare footingDepthIn: CreationOptional<number | null>;
+  /** where this member sits on the member carrying it (lib/jobs/load-path.ts) */
+  declare bearing: CreationOptional<Bearing | null>;
+  /** a post's or footing's inputs */
+  declare supportDesign: CreationOptional<SupportDesign | null>;
   declare deletedAt: CreationOptional<Date | null>;
   declare createdAt: CreationOptional<Date>;
   declare updatedAt: CreationOptional<Date>;
@@ -50,7 +57,7 @@ export function initMember(sequelize: Sequelize): void {
       jobId: { type: DataTypes.UUID, allowNull: false },
       label: { type: DataTypes.STRING(120), allowNull: false },
       kind: { type: DataTypes.ENUM(...MEMBER_KIND_VALUES), allowNull: false },
-      flowState: { type: DataTypes.JSONB, allowNull: false },
+      flowState: { type: DataTypes.JSONB, allowNull: true },
       resultSummary: { type: DataTypes.JSONB, allowNull: true },
       chosenMember: { type: DataTypes.JSONB, allowNull: true },
       carriedByMemberId: { type: DataTypes.UUID, allowNull: true },
@@ -60,6 +67,8 @@ export function initMember(sequelize: Sequelize): void {
       postSize: { type: DataTypes.STRING(20), allowNull: true },
       footingDiameterIn: { type: DataTypes.DOUBLE, allowNull: true },
       footingDepthIn: { type: DataTypes.DOUBLE, allowNull: true },
+      bearing: { type: DataTypes.JSONB, allowNull: true },
+      supportDesign: { type: DataTypes.JSONB, allowNull: true },
       deletedAt: { type: DataTypes.DATE, allowNull: true },
       createdAt: DataTypes.DATE,
       updatedAt: DataTypes.DATE,

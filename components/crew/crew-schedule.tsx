@@ -27,6 +27,28 @@ export function CrewSchedule({ rows }: CrewScheduleProps) {
             <p className="mt-2 text-lg font-bold text-caution-ink">Not sized yet: do not cut this one.</p>
           )}
           {row.memberLabel ? <p className="text-ink-soft">{row.memberLabel}</p> : null}
+          {row.change ? (
+            <p className="mt-2 rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-2 font-bold text-ink" data-testid="crew-change">
+              ⚠ {row.change}
+            </p>
+          ) : null}
+          {row.problems.length > 0 ? (
+            <ul className="mt-2 list-disc rounded-lg border-2 border-over bg-over-bg p-2 pl-6 font-bold text-over-ink" data-testid="crew-problems">
+              {row.problems.map((p) => (
+                <li key={p}>✕ {p}</li>
+              ))}
+            </ul>
+          ) : null}
+          {row.carried.length > 0 ? (
+            <div className="mt-2 text-ink" data-testid="crew-carried">
+              <p className="font-bold">Loads on it:</p>
+              <ul className="list-disc pl-6">
+                {row.carried.map((c) => (
+                  <li key={c}>{c}</li>
+                ))}
+              </ul>
+            </div>
+          ) : null}
           {row.verdict ? (
             <p className="mt-2">
               <StatusBadge status={row.verdict.pass ? "pass" : "fail"} label={row.verdict.words} />
@@ -41,7 +63,7 @@ export function CrewSchedule({ rows }: CrewScheduleProps) {
           ) : null}
           {row.headline ? (
             <dl className="mt-3 grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-lg">
-              <dt className="font-bold">Span</dt>
+              <dt className="font-bold">{row.kindLabel === "Posts" ? "Height" : "Span"}</dt>
               <dd className="font-mono tabular-nums">{row.span}</dd>
             </dl>
           ) : null}

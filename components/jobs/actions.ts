@@ -1,7 +1,16 @@
 "use server";
 
 import { runAction, type ActionDenied, type ActionFailure, type ActionResult } from "@/lib/auth/action";
-import { jobIdSchema, jobInputSchema, memberIdSchema, saveMemberSchema, updateJobSchema, updateMemberSchema } from "@/lib/jobs/schemas";
+import {
+  addSupportSchema,
+  deleteMemberSchema,
+  jobIdSchema,
+  jobInputSchema,
+  memberIdSchema,
+  saveMemberSchema,
+  updateJobSchema,
+  updateMemberSchema,
+} from "@/lib/jobs/schemas";
 import { saveMemberOnce } from "@/lib/jobs/save-once";
 import * as jobs from "@/lib/jobs/service";
 import { getPlanLimits } from "@/lib/payments/subscriptions";
@@ -114,14 +123,14 @@ export async function updateMember(input: unknown): Promise<MemberResult> {
   });
 }
 
-// deleteMember — delete a member (Undo with restoreMember), owner of its job
+// deleteMember — delete a member (Undo with restoreMember); one that carries others says what becomes of them (409 until it does), owner of its job
 export async function deleteMember(input: unknown): Promise<MemberResult> {
   return runAction(input, {
-    schema: memberIdSchema,
+    schema: deleteMemberSchema,
     failed: "The member could not be deleted.",
     refresh: jobPage,
     run: async (user, data) => {
-      const member = await jobs.deleteMember(user.id, data.memberId);
+      const member = await jobs.deleteMember(user.id, data.memberId, data.carried);
       return { jobId: member.jobId, memberId: member.id };
     },
   });
@@ -149,6 +158,32 @@ export async function duplicateMember(input: unknown): Promise<MemberResult> {
     run: async (user, data) => {
       const copy = await jobs.duplicateMember(user.id, data.memberId);
       return { jobId: copy.jobId, memberId: copy.id };
+    },
+  });
+}
+
+// addSupport — posts under a member (one under each support) or footings under posts, on the job's load path, owner of the job
+export async function addSupport(input: unknown): Promise<MemberResult> {
+  return runAction(input, {
+    schema: addSupportSchema,
+    failed: "The posts or footings could not be added.",
+    refresh: jobPage,
+    run: async (user, data) => {
+      const member = await jobs.addSupport(user.id, data);
+      return { jobId: member.jobId, memberId: member.id };
+    },
+  });
+}
+
+// markChangesSeen — clear the job's "changed since you last looked" flags, owner of the job
+export async function markChangesSeen(input: unknown): Promise<JobResult> {
+  return runAction(input, {
+    schema: jobIdSchema,
+    failed: "The changes could not be marked seen.",
+    refresh: jobPage,
+    run: async (user, data) => {
+      await jobs.markChangesSeen(user.id, data.jobId);
+      return { jobId: data.jobId };
     },
   });
 }

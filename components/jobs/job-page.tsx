@@ -13,16 +13,20 @@ import { useToast } from "@/components/ui/toast";
 import { ratioVerdict } from "@/components/ui/ratio-bar";
 import { PlusIcon } from "@/components/ui/icons";
 import { formatFeetInches } from "@/lib/flow/length";
-import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
-import { deleteJob, deleteMember, duplicateJob, duplicateMember, restoreJob, restoreMember, updateMember } from "./actions";
+import { isFramingKind, jobKindLabel, type JobMemberKind } from "@/lib/solver/design/kinds";
+import type { Bearing, SupportDesign } from "@/lib/jobs/load-path";
+import { BearingForm } from "./bearing-form";
+import { deleteJob, deleteMember, duplicateJob, duplicateMember, markChangesSeen, restoreJob, restoreMember, updateMember } from "./actions";
 import { JobForm } from "./job-form";
+import { LoadPathPicture } from "./load-path-picture";
 import { OrderDetailsForm } from "./order-details-form";
+import { SupportForm } from "./support-form";
 import type { OrderDetails } from "@/lib/orders/order-list";
 
 export type JobPageMember = {
   id: string;
   label: string;
-  kind: MemberKind;
+  kind: JobMemberKind;
   headline: string | null;
   pass: boolean | null;
   ratio: number | null;
@@ -35,6 +39,19 @@ export type JobPageMember = {
   loadStandard?: "ASCE 7-16" | "ASCE 7-22";
   carriesSnow?: boolean;
   orderDetails?: OrderDetails;
+  /** the loads other members put on it, each saying where it comes from */
+  carried?: string[];
+  /** "Changed since you last looked: …" when a recheck changed its answer */
+  change?: string | null;
+  /** why it fails, in words */
+  problems?: string[];
+  /** a post's or footing's inputs */
+  supportDesign?: SupportDesign | null;
+  /** framing members: whole length and supports (ft), whether at a spacing, and where it sits on its carrier */
+  lengthFt?: number | null;
+  supportsFt?: number[];
+  atSpacing?: boolean;
+  bearing?: Bearing | null;
 };
 
 export type JobPageProps = {
@@ -54,11 +71,16 @@ export function JobPage({ job, children }: JobPageProps) {
 
   const run = (work: () => Promise<void>) => startTransition(work);
 
-  const removeMember = (m: JobPageMember) =>
+  const [askCarried, setAskCarried] = useState<{ member: JobPageMember; message: string } | null>(null);
+  const [supportDialog, setSupportDialog] = useState<{ type: SupportDesign["type"]; under?: JobPageMember; editing?: JobPageMember } | null>(null);
+
+  const removeMember = (m: JobPageMember, carried?: "keep" | "delete") =>
     run(async () => {
-      const result = await deleteMember({ memberId: m.id });
+      const result = await deleteMember(carried ? { memberId: m.id, carried } : { memberId: m.id });
+      setAskCarried(null);
       if (!result.ok) {
-        setProblem(result.error);
+        if (result.status === 409) setAskCarried({ member: m, message: result.error });
+        else setProblem(result.error);
         return;
       }
       router.refresh();
@@ -103,6 +125,29 @@ export function JobPage({ job, children }: JobPageProps) {
         <h2 id="members-title" className="text-2xl font-bold">
           Members
         </h2>
+        {job.members.some((m) => m.change) ? (
+          <div className="flex flex-col gap-2 rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-3 text-ink" data-testid="changes">
+            <p className="font-bold">⚠ Some answers changed since you last looked (marked below).</p>
+            <div>
+              <Button
+                variant="secondary"
+                disabled={pending}
+                onClick={() =>
+                  run(async () => {
+                    const result = await markChangesSeen({ jobId: job.id });
+                    if (!result.ok) setProblem(result.error);
+                    router.refresh();
+                  })
+                }
+              >
+                I have seen the changes
+              </Button>
+            </div>
+          </div>
+        ) : null}
+        <LoadPathPicture
+          members={job.members.map((m) => ({ id: m.id, label: m.label, kindLabel: jobKindLabel(m.kind), carriedById: m.carriedById ?? null, pass: m.pass }))}
+        />
         {job.members.length === 0 ? (
           <EmptyState
             title="No members yet"
@@ -119,8 +164,8 @@ export function JobPage({ job, children }: JobPageProps) {
                     <div className="min-w-0">
                       <h3 className="text-lg font-bold">{m.label}</h3>
                       <p className="text-sm text-graphite tabular-nums">
-                        {KIND_LABELS[m.kind]}
-                        {m.spanFt !== null ? ` · ${formatFeetInches(m.spanFt)} span` : ""}
+                        {jobKindLabel(m.kind)}
+                        {m.spanFt !== null && isFramingKind(m.kind) ? ` · ${formatFeetInches(m.spanFt)} span` : ""}
                         {m.carriedBy ? ` · bears on ${m.carriedBy}` : ""}
                       </p>
                     </div>
@@ -130,7 +175,31 @@ export function JobPage({ job, children }: JobPageProps) {
                       <StatusBadge status="caution" label="Not sized" />
                     )}
                   </div>
-                  <p className="text-xl font-bold text-ink">{m.headline ?? "Nothing in the tables worked for these inputs."}</p>
+                  <p className={`text-xl font-bold ${m.pass === false ? "text-over-ink" : "text-ink"}`}>
+                    {m.headline ?? (isFramingKind(m.kind) ? "Nothing in the tables worked for these inputs." : "Nothing bears on it yet.")}
+                  </p>
+                  {m.change ? (
+                    <p className="rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-2 font-bold text-ink" data-testid="member-change">
+                      ⚠ {m.change}
+                    </p>
+                  ) : null}
+                  {m.problems && m.problems.length > 0 ? (
+                    <ul className="list-disc rounded-lg border-2 border-over bg-over-bg p-2 pl-6 text-over-ink" data-testid="member-problems">
+                      {m.problems.map((p) => (
+                        <li key={p}>✕ {p}</li>
+                      ))}
+                    </ul>
+                  ) : null}
+                  {m.carried && m.carried.length > 0 ? (
+                    <div className="text-sm text-ink" data-testid="member-carried">
+                      <p className="font-bold">Loads on it:</p>
+                      <ul className="list-disc pl-6">
+                        {m.carried.map((c) => (
+                          <li key={c}>{c}</li>
+                        ))}
+                      </ul>
+                    </div>
+                  ) : null}
                   {m.loadStandard === "ASCE 7-22" && m.carriesSnow ? (
                     <div className="flex flex-col gap-2 rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-3 text-ink" data-testid="recheck-basis">
                       <p>
@@ -158,7 +227,7 @@ export function JobPage({ job, children }: JobPageProps) {
                       </div>
                     </div>
                   ) : null}
-                  {job.members.length > 1 ? (
+                  {job.members.length > 1 && m.kind !== "footing" ? (
                     <SelectField
                       label="Bears on"
                       options={[
@@ -177,11 +246,42 @@ export function JobPage({ job, children }: JobPageProps) {
                       }}
                     />
                   ) : null}
-                  {m.orderDetails ? <OrderDetailsForm memberId={m.id} label={m.label} kind={m.kind} details={m.orderDetails} /> : null}
+                  {(() => {
+                    const carrier = m.carriedById ? job.members.find((c) => c.id === m.carriedById) : undefined;
+                    if (!carrier || !isFramingKind(carrier.kind) || !isFramingKind(m.kind) || !m.supportsFt || carrier.lengthFt == null) return null;
+                    return (
+                      <BearingForm
+                        key={`${m.id}-${carrier.id}`}
+                        memberId={m.id}
+                        carrierLabel={carrier.label}
+                        carrierLengthFt={carrier.lengthFt}
+                        supportsFt={m.supportsFt}
+                        atSpacing={m.atSpacing ?? false}
+                        bearing={m.bearing ?? null}
+                      />
+                    );
+                  })()}
+                  {m.orderDetails && isFramingKind(m.kind) ? <OrderDetailsForm memberId={m.id} label={m.label} kind={m.kind} details={m.orderDetails} /> : null}
                   <div className="flex flex-wrap gap-2">
-                    <ButtonLink href={`/size?job=${job.id}&member=${m.id}`} variant="secondary">
-                      Edit
-                    </ButtonLink>
+                    {isFramingKind(m.kind) ? (
+                      <ButtonLink href={`/size?job=${job.id}&member=${m.id}`} variant="secondary">
+                        Edit
+                      </ButtonLink>
+                    ) : (
+                      <Button variant="secondary" onClick={() => setSupportDialog({ type: m.kind === "post" ? "post" : "footing", editing: m })}>
+                        Change
+                      </Button>
+                    )}
+                    {isFramingKind(m.kind) && m.kind !== "floor-joist" && m.kind !== "deck-joist" && m.kind !== "rafter" ? (
+                      <Button variant="secondary" onClick={() => setSupportDialog({ type: "post", under: m })}>
+                        Add posts under
+                      </Button>
+                    ) : null}
+                    {m.kind === "post" ? (
+                      <Button variant="secondary" onClick={() => setSupportDialog({ type: "footing", under: m })}>
+                        Add footings under
+                      </Button>
+                    ) : null}
                     <Button variant="ghost" disabled={pending} onClick={() => copyMember(m)} aria-label={`Duplicate ${m.label}`}>
                       Duplicate
                     </Button>
@@ -248,6 +348,50 @@ export function JobPage({ job, children }: JobPageProps) {
         </p>
       </section>
 
+      <Dialog
+        open={supportDialog !== null}
+        onClose={() => setSupportDialog(null)}
+        title={
+          supportDialog?.editing
+            ? `Change ${supportDialog.editing.label}`
+            : supportDialog?.type === "post"
+              ? `Posts under ${supportDialog.under?.label ?? ""}`
+              : `Footings under ${supportDialog?.under?.label ?? ""}`
+        }
+        description={
+          supportDialog?.editing ? undefined : supportDialog?.type === "post" ? "One post under each of its supports." : "One footing under each post."
+        }
+      >
+        {supportDialog ? (
+          <SupportForm
+            jobId={job.id}
+            type={supportDialog.type}
+            under={supportDialog.under ? { id: supportDialog.under.id, label: supportDialog.under.label } : undefined}
+            editing={
+              supportDialog.editing?.supportDesign
+                ? { id: supportDialog.editing.id, label: supportDialog.editing.label, design: supportDialog.editing.supportDesign }
+                : undefined
+            }
+            onDone={() => setSupportDialog(null)}
+          />
+        ) : null}
+      </Dialog>
+      <Dialog
+        open={askCarried !== null}
+        onClose={() => setAskCarried(null)}
+        title={`Delete ${askCarried?.member.label ?? ""}?`}
+        description={askCarried?.message}
+        actions={
+          <>
+            <Button variant="secondary" disabled={pending} onClick={() => askCarried && removeMember(askCarried.member, "keep")}>
+              Keep them, on nothing
+            </Button>
+            <Button variant="danger" disabled={pending} onClick={() => askCarried && removeMember(askCarried.member, "delete")}>
+              Delete them too
+            </Button>
+          </>
+        }
+      />
       <Dialog open={editing} onClose={() => setEditing(false)} title="Change the job">
         {editing ? <JobForm job={job} onDone={() => setEditing(false)} /> : null}
       </Dialog>

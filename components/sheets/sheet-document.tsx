@@ -299,6 +299,25 @@ export function SheetDocument({ snapshot: s, crewQr }: SheetDocumentProps) {
             ))}
           </TableShell>
         </div>
+        {s.loadPath && s.loadPath.length > 0 ? (
+          <div className="mt-3" data-testid="sheet-load-path">
+            <h3 className="font-bold">Posts and footings</h3>
+            <ul className="flex flex-col gap-2">
+              {s.loadPath.map((r) => (
+                <li key={r.id}>
+                  <p className="font-bold">
+                    {r.label} ({r.kindLabel}): {r.headline}
+                  </p>
+                  <ul className="list-disc pl-6 text-sm">
+                    {[...r.problems.map((p) => `✕ ${p}`), ...r.facts].map((f) => (
+                      <li key={f}>{f}</li>
+                    ))}
+                  </ul>
+                </li>
+              ))}
+            </ul>
+          </div>
+        ) : null}
         {s.skipped.length > 0 ? (
           <div className="mt-2 text-sm">
             <p className="font-bold">Not on this sheet:</p>

@@ -35,9 +35,13 @@ export function renderCrewPdf(view: CrewJobView, link: { url: string; qrPng: Buf
       ["Member", "Build", "Span", "At each support"],
       view.rows.map((r) => [
         `${r.label}\n${r.kindLabel}`,
-        r.headline ? `${r.headline}${r.verdict && !r.verdict.pass ? `\n${r.verdict.words}` : ""}` : "No size chosen yet: ask the builder",
+        r.headline
+          ? [r.headline, r.verdict && !r.verdict.pass ? r.verdict.words : "", ...r.problems, r.change ?? "", ...r.carried.map((c) => `Loads on it: ${c}`)]
+              .filter(Boolean)
+              .join("\n")
+          : "No size chosen yet: ask the builder",
         r.span,
-        r.supports.map((s) => `${s.name}: ${s.bearing}; ${s.reaction}`).join("\n"),
+        r.supports.map((s) => (s.bearing ? `${s.name}: ${s.bearing}; ${s.reaction}` : `${s.name}: ${s.reaction}`)).join("\n"),
       ]),
       [0.2, 0.34, 0.14, 0.32],
       [false, false, false, false],

@@ -3,8 +3,8 @@
  * each member (Member.resultSummary), so the crew sees the numbers the builder saw. Pure.
  */
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
-import { basisWords, type MemberResultSummary } from "@/lib/flow/summary";
+import { jobKindLabel, type JobMemberKind } from "@/lib/solver/design/kinds";
+import { basisWords, changeWords, type MemberResultSummary } from "@/lib/flow/summary";
 import { checkWords, formatLb, supportName } from "@/lib/sheets/format";
 import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 
@@ -30,23 +30,50 @@ export interface ScheduleRow {
   verdict: { pass: boolean; words: string } | null;
   /** the load basis and assumptions the crew must know, as the answer screen said them */
   facts: string[];
+  /** the loads other members put on this one, each saying where it comes from */
+  carried: string[];
+  /** "Changed since you last looked: now 3-ply 2x12 No.2 (was 2-ply 2x12 No.2) — J1 deck joists changed" */
+  change: string | null;
+  /** why it fails, in words */
+  problems: string[];
 }
 
 export interface ScheduleMemberSource {
   id: string;
   label: string;
-  kind: MemberKind;
+  kind: JobMemberKind;
   resultSummary: MemberResultSummary | null;
 }
 
 export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
   const s = m.resultSummary;
   if (!s) {
-    return { id: m.id, label: m.label, kindLabel: KIND_LABELS[m.kind], headline: null, memberLabel: null, span: "—", supports: [], verdict: null, facts: [] };
+    return {
+      id: m.id,
+      label: m.label,
+      kindLabel: jobKindLabel(m.kind),
+      headline: null,
+      memberLabel: null,
+      span: "—",
+      supports: [],
+      verdict: null,
+      facts: [],
+      carried: [],
+      change: null,
+      problems: [],
+    };
   }
   const overhang = Math.abs(s.lengthFt - s.spanFt) > 1 / 192;
-  const span = overhang ? `${formatFeetInches(s.spanFt)} (member ${formatFeetInches(s.lengthFt)} long)` : formatFeetInches(s.spanFt);
+  const span =
+    m.kind === "post"
+      ? `${formatFeetInches(s.spanFt)} tall`
+      : m.kind === "footing"
+        ? "—"
+        : overhang
+          ? `${formatFeetInches(s.spanFt)} (member ${formatFeetInches(s.lengthFt)} long)`
+          : formatFeetInches(s.spanFt);
   const supports = s.reactions.map((r, i) => {
+    if (m.kind === "post") return { name: `Post ${i + 1}`, reaction: `${formatLb(r.maxDown)} down`, bearing: "onto its footing" };
     const reaction = r.uplift > 0 ? `${formatLb(r.maxDown)} down, ${formatLb(r.uplift)} uplift` : `${formatLb(r.maxDown)} down`;
     const bearing =
       r.jackStuds !== null
@@ -58,7 +85,7 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
   return {
     id: m.id,
     label: m.label,
-    kindLabel: KIND_LABELS[m.kind],
+    kindLabel: jobKindLabel(m.kind),
     headline: s.headline,
     memberLabel: s.memberLabel,
     span,
@@ -66,5 +93,8 @@ export function scheduleRow(m: ScheduleMemberSource): ScheduleRow {
     verdict: { pass: s.pass, words: s.pass ? `OK ${pct}${s.governing ? `, ${checkWords(s.governing)} governs` : ""}` : `Over ${pct}: do not build this` },
     // answers saved before the basis was recorded were worked on ASCE 7-22
     facts: s.facts ?? [basisWords(s.loadStandard ?? "ASCE 7-22", true)],
+    carried: (s.carried ?? []).map((c) => c.words),
+    change: changeWords(s),
+    problems: s.problems ?? [],
   };
 }

@@ -67,7 +67,11 @@ export function roughOpeningToSend(state: FlowState): number | undefined {
   return ro;
 }
 
-export function designBase(state: FlowState): DesignRequestBase {
+/**
+ * The design input of a state. `carried` are loads other members put on this one (their reactions,
+ * by case, as line or point loads: see lib/jobs/load-path.ts); they are added to the state's own.
+ */
+export function designBase(state: FlowState, carried: readonly DesignLoad[] = []): DesignRequestBase {
   const width = state.width.mode === "spacing" ? { spacingIn: state.width.spacingIn } : { tributaryFt: state.width.tributaryFt };
   const ro = roughOpeningToSend(state);
   const wall = wallOf(state);
@@ -86,7 +90,7 @@ export function designBase(state: FlowState): DesignRequestBase {
         }
       : { lengthFt: state.lengthFt, supports: sortedSupports(state.supports) }),
     ...width,
-    loads: designLoads(state),
+    loads: [...designLoads(state), ...carried],
     bearingIn: state.bearingIn,
     conditions: {
       wet: state.wet,
@@ -108,10 +112,10 @@ export function designBase(state: FlowState): DesignRequestBase {
 /** How many passing members the flow asks for, each with its whole check (any of them may be chosen). */
 const SIZE_LIMIT = 12;
 
-export function sizeRequest(state: FlowState): SizeRequest {
-  return { ...designBase(state), member: sizeFamily(state.material), limit: SIZE_LIMIT, failures: 3, fullChecks: SIZE_LIMIT };
+export function sizeRequest(state: FlowState, carried: readonly DesignLoad[] = []): SizeRequest {
+  return { ...designBase(state, carried), member: sizeFamily(state.material), limit: SIZE_LIMIT, failures: 3, fullChecks: SIZE_LIMIT };
 }
 
-export function checkRequest(state: FlowState, member: MemberSpec): CheckRequest {
-  return { ...designBase(state), member };
+export function checkRequest(state: FlowState, member: MemberSpec, carried: readonly DesignLoad[] = []): CheckRequest {
+  return { ...designBase(state, carried), member };
 }

@@ -6,7 +6,7 @@
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import type { MemberSpec } from "@/lib/solver/design/schema";
-import type { SupportType } from "@/lib/solver/types";
+import type { LoadCase, SupportType } from "@/lib/solver/types";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { formatFeetInches } from "./length";
 import { mainSpanFt, overhangs, spansFt, type FlowState } from "./state";
@@ -25,6 +25,31 @@ export interface SummaryReaction {
   requiredBearing: number;
   /** 1-1/2 in jack studs under this end (headers, beams in a stud wall), null where they do not apply */
   jackStuds: number | null;
+  /** unfactored reaction by load case, lb (what this support hands down the load path; absent in answers saved before it was recorded) */
+  byCase?: Partial<Record<LoadCase, number>>;
+}
+
+/** A load another member of the job puts on this one, as the carrier shows it ("from J1 floor joists @ 16 in, 0 to 14 ft"). */
+export interface CarriedLoadSummary {
+  fromMemberId: string;
+  /** "from J1 deck joists @ 16 in, 0' 0" to 24' 0"" */
+  words: string;
+  type: "udl" | "point";
+  /** ft on this member: from..to for a line load, x for a point load */
+  from: number;
+  to: number;
+  /** plf (line) or lb (point), by case */
+  byCase: Partial<Record<LoadCase, number>>;
+}
+
+/** How an answer changed when the job was worked out again (a member it carries, or the tables, changed). */
+export interface AnswerChange {
+  /** the headline before */
+  was: string;
+  wasPass: boolean;
+  /** why it was worked out again, e.g. "J1 deck joists changed" or "new material tables" */
+  reason: string;
+  at: string;
 }
 
 export interface MemberResultSummary {
@@ -49,6 +74,12 @@ export interface MemberResultSummary {
   loadStandard?: LoadStandard;
   /** the basis and assumptions the crew must know, in words (see answerFacts) */
   facts?: string[];
+  /** loads other members of the job put on this one (the load path), each naming where it comes from */
+  carried?: CarriedLoadSummary[];
+  /** set when the answer changed on a recheck the builder did not make here; cleared when they mark it seen */
+  change?: AnswerChange | null;
+  /** why a member fails, in words, where a check's name does not say it (posts, footings, nothing passes) */
+  problems?: string[];
 }
 
 /** The load basis in words, as the answer, crew link and sheet say it. */
@@ -98,6 +129,8 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     bearing: r.bearing,
     requiredBearing: r.requiredBearing,
     jackStuds: jackStudsApply(state.kind, spacingOf(state)) ? r.jackStuds : null,
+    // handed down the load path: live load at its largest here with span-by-span placement (never the smaller full-span value)
+    byCase: r.liveMax !== undefined ? { ...r.byCase, L: r.liveMax } : r.byCase,
   }));
   return {
     memberLabel: check.member.label,
@@ -147,4 +180,10 @@ export function spanWords(state: FlowState): string {
   }
   if (hasLeft || hasRight) return `${main} with ${formatFeetInches(hasLeft ? left : right)} overhang`;
   return main;
+}
+
+/** "Changed since you last looked: now 3-ply 2x12 No.2 …, was … — J1 deck joists changed", as the job page and the crew link say it; null when nothing changed. */
+export function changeWords(s: Pick<MemberResultSummary, "change" | "memberLabel" | "pass">): string | null {
+  if (!s.change) return null;
+  return `Changed since you last looked: now ${s.memberLabel}${s.pass ? "" : " (does NOT pass)"}, was ${s.change.was} — ${s.change.reason}`;
 }

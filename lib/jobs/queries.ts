@@ -3,7 +3,9 @@ import { Op, fn, col, where as sqlWhere, type WhereOptions } from "sequelize";
 import { getSequelize } from "@/lib/db";
 import { Job } from "@/models/job";
 import { Member } from "@/models/member";
-import type { FlowState, MemberKind } from "@/lib/flow/state";
+import type { FlowState } from "@/lib/flow/state";
+import type { JobMemberKind } from "@/lib/solver/design/kinds";
+import type { Bearing, SupportDesign } from "./load-path";
 import type { MemberResultSummary } from "@/lib/flow/summary";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { OrderDetails } from "@/lib/orders/order-list";
@@ -25,11 +27,14 @@ export interface MemberView {
   id: string;
   jobId: string;
   label: string;
-  kind: MemberKind;
-  flowState: FlowState;
+  kind: JobMemberKind;
+  /** the sizing flow's inputs; null for posts and footings */
+  flowState: FlowState | null;
   resultSummary: MemberResultSummary | null;
   chosenMember: MemberSpec | null;
   carriedByMemberId: string | null;
+  bearing: Bearing | null;
+  supportDesign: SupportDesign | null;
   sortOrder: number;
   updatedAt: Date;
   /** what the order list needs beyond the sizing (widths, posts, footings) */
@@ -61,6 +66,8 @@ export function memberView(m: Member): MemberView {
     resultSummary: m.resultSummary,
     chosenMember: m.chosenMember,
     carriedByMemberId: m.carriedByMemberId ?? null,
+    bearing: m.bearing ?? null,
+    supportDesign: m.supportDesign ?? null,
     sortOrder: m.sortOrder,
     updatedAt: m.updatedAt,
     orderDetails: {

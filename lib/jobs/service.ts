@@ -10,7 +10,8 @@ import type { MemberSpec } from "@/lib/solver/design/schema";
 import { getCurrentTables } from "@/lib/tables/current";
 import { Job } from "@/models/job";
 import { Member } from "@/models/member";
-import type { JobInput, SaveMemberInput, UpdateMemberInput } from "./schemas";
+import { cycleIssue, pathMemberOf, workOutJob } from "./load-path";
+import type { AddSupportInput, JobInput, SaveMemberInput, UpdateMemberInput } from "./schemas";
 
 /**
  * Changes to jobs and members. Every function takes the owner's id first and touches only that
@@ -121,6 +122,8 @@ export async function duplicateJob(ownerId: string, jobId: string, limit: SavedJ
           postSize: m.postSize,
           footingDiameterIn: m.footingDiameterIn,
           footingDepthIn: m.footingDepthIn,
+          bearing: m.bearing,
+          supportDesign: m.supportDesign,
         },
         { transaction },
       );
@@ -217,15 +220,53 @@ export async function updateMember(ownerId: string, input: UpdateMemberInput): P
       const carrier = await Member.findOne({ where: { id: input.carriedByMemberId, jobId: member.jobId, deletedAt: { [Op.is]: null } } });
       if (!carrier)
         throw new HttpError(400, "invalid input", { issues: [{ path: "carriedByMemberId", message: "Carried by: pick a member of the same job" }] });
+      if (carrier.kind === "footing" && member.kind !== "post")
+        throw new HttpError(400, "invalid input", { issues: [{ path: "carriedByMemberId", message: "Carried by: only posts stand on footings" }] });
+      if (member.kind === "footing")
+        throw new HttpError(400, "invalid input", {
+          issues: [{ path: "carriedByMemberId", message: "Carried by: a footing sits on the soil, not on a member" }],
+        });
+      const links = await Member.findAll({ where: { jobId: member.jobId, deletedAt: { [Op.is]: null } }, attributes: ["id", "carriedByMemberId"] });
+      const cycle = cycleIssue(
+        links.map((l) => ({ id: l.id, carriedByMemberId: l.carriedByMemberId ?? null })),
+        member.id,
+        input.carriedByMemberId,
+      );
+      if (cycle) throw new HttpError(400, "invalid input", { issues: [{ path: "carriedByMemberId", message: `Carried by: ${cycle}` }] });
     }
     member.carriedByMemberId = input.carriedByMemberId;
+  }
+  if (input.bearing !== undefined && input.bearing !== null) {
+    const carrierId = member.carriedByMemberId;
+    const carrier = carrierId ? await Member.findOne({ where: { id: carrierId, deletedAt: { [Op.is]: null } } }) : null;
+    const length = carrier?.flowState?.lengthFt;
+    const count = member.flowState?.supports.length ?? 0;
+    const bad = (path: string, message: string) => new HttpError(400, "invalid input", { issues: [{ path: `bearing.${path}`, message }] });
+    if (input.bearing.supports?.some((i) => i >= count)) throw bad("supports", `Its support on it: this member has ${count} supports`);
+    for (const key of ["fromFt", "toFt", "xFt"] as const) {
+      const v = input.bearing[key];
+      if (v !== undefined && length !== undefined && v > length + 1e-9) throw bad(key, `must be on ${carrier?.label ?? "the carrier"}, 0 to ${length} ft`);
+    }
+  }
+  if (input.bearing !== undefined) member.bearing = input.bearing;
+  if (input.supportDesign !== undefined) {
+    if (member.kind !== input.supportDesign.type)
+      throw new HttpError(400, "invalid input", {
+        issues: [{ path: "supportDesign.type", message: `Kind: this member is not a ${input.supportDesign.type}` }],
+      });
+    member.supportDesign = input.supportDesign;
   }
   if (input.runWidthFt !== undefined) member.runWidthFt = input.runWidthFt;
   if (input.postHeightFt !== undefined) member.postHeightFt = input.postHeightFt;
   if (input.postSize !== undefined) member.postSize = input.postSize;
   if (input.footingDiameterIn !== undefined) member.footingDiameterIn = input.footingDiameterIn;
   if (input.footingDepthIn !== undefined) member.footingDepthIn = input.footingDepthIn;
-  if (input.flowState !== undefined || input.chosenMember !== undefined || input.loadStandard !== undefined) {
+  if (member.flowState === null && (input.flowState !== undefined || input.chosenMember !== undefined || input.loadStandard !== undefined)) {
+    throw new HttpError(400, "invalid input", {
+      issues: [{ path: "flowState", message: "Inputs: posts and footings take their own inputs, not the sizing flow's" }],
+    });
+  }
+  if (member.flowState !== null && (input.flowState !== undefined || input.chosenMember !== undefined || input.loadStandard !== undefined)) {
     const given = (input.flowState ?? member.flowState) as FlowState;
     const state: FlowState = input.loadStandard !== undefined ? { ...given, loadStandard: input.loadStandard } : given;
     const { summary, chosen } = await computeSummary(state, input.chosenMember !== undefined ? input.chosenMember : member.chosenMember);
@@ -235,14 +276,37 @@ export async function updateMember(ownerId: string, input: UpdateMemberInput): P
     member.chosenMember = chosen;
   }
   await member.save();
-  return member;
+  await recheckJob(member.jobId, { editedId: member.id, reason: `${member.label} changed` });
+  return (await Member.findByPk(member.id)) ?? member;
 }
 
-export async function deleteMember(ownerId: string, memberId: string): Promise<Member> {
-  getSequelize();
+/**
+ * Marks a member deleted. One that carries others needs to be told what becomes of them: "keep" leaves
+ * them in the job on nothing (their loads go nowhere until they are put on another member), "delete"
+ * deletes them too (each comes back with its own Undo). Without the choice the answer is a 409 naming them.
+ */
+export async function deleteMember(ownerId: string, memberId: string, carried?: "keep" | "delete"): Promise<Member> {
+  const sequelize = getSequelize();
   const member = await ownedMember(ownerId, memberId);
-  member.deletedAt = new Date();
-  await member.save();
+  const onIt = await Member.findAll({ where: { carriedByMemberId: member.id, deletedAt: { [Op.is]: null } }, attributes: ["id", "label"] });
+  if (onIt.length > 0 && carried === undefined) {
+    throw new HttpError(
+      409,
+      `${onIt.map((m) => m.label).join(", ")} ${onIt.length === 1 ? "bears" : "bear"} on ${member.label}: keep ${onIt.length === 1 ? "it" : "them"} (on nothing) or delete ${onIt.length === 1 ? "it" : "them"} too`,
+      {
+        carried: onIt.map((m) => ({ id: m.id, label: m.label })),
+      },
+    );
+  }
+  await sequelize.transaction(async (transaction) => {
+    const now = new Date();
+    if (onIt.length > 0 && carried === "delete") await Member.update({ deletedAt: now }, { where: { id: onIt.map((m) => m.id) }, transaction });
+    if (onIt.length > 0 && carried === "keep")
+      await Member.update({ carriedByMemberId: null, bearing: null }, { where: { id: onIt.map((m) => m.id) }, transaction });
+    member.deletedAt = now;
+    await member.save({ transaction });
+  });
+  await recheckJob(member.jobId, { editedId: member.id, reason: `${member.label} was deleted` });
   return member;
 }
 
@@ -252,13 +316,14 @@ export async function restoreMember(ownerId: string, memberId: string): Promise<
   const member = await ownedMember(ownerId, memberId, undefined, { deleted: true });
   member.deletedAt = null;
   await member.save();
+  await recheckJob(member.jobId, { editedId: member.id, reason: `${member.label} came back` });
   return member;
 }
 
 /** A copy of the member in the same job, right after it, named "… (copy)". */
 export async function duplicateMember(ownerId: string, memberId: string): Promise<Member> {
   const sequelize = getSequelize();
-  return sequelize.transaction(async (transaction) => {
+  const copy = await sequelize.transaction(async (transaction) => {
     const m = await ownedMember(ownerId, memberId, transaction);
     await Member.increment("sortOrder", { by: 1, where: { jobId: m.jobId, sortOrder: { [Op.gt]: m.sortOrder } }, transaction });
     return Member.create(
@@ -276,8 +341,117 @@ export async function duplicateMember(ownerId: string, memberId: string): Promis
         postSize: m.postSize,
         footingDiameterIn: m.footingDiameterIn,
         footingDepthIn: m.footingDepthIn,
+        bearing: m.bearing,
+        supportDesign: m.supportDesign,
       },
       { transaction },
     );
   });
+  // a copy that bears on a carrier adds its loads there
+  if (copy.carriedByMemberId) await recheckJob(copy.jobId, { editedId: copy.id, reason: `${copy.label} added` });
+  return copy;
+}
+
+/**
+ * Works a job's load path out again (lib/jobs/load-path.ts) with the current tables and saves every
+ * member whose answer changed. A member other than the one just edited whose size or verdict changed
+ * is flagged with the reason, on the job page and the crew link, until the builder marks it seen.
+ */
+export async function recheckJob(jobId: string, opts: { editedId?: string | null; reason: string }): Promise<number> {
+  const sequelize = getSequelize();
+  const tables = await getCurrentTables();
+  return sequelize.transaction(async (transaction) => {
+    await sequelize.query("SELECT pg_advisory_xact_lock(hashtext(:key))", { replacements: { key: `job-path:${jobId}` }, transaction });
+    const members = await Member.findAll({ where: { jobId, deletedAt: { [Op.is]: null } }, transaction });
+    let solved;
+    try {
+      solved = workOutJob(members.map(pathMemberOf), tables, (m) => (m.id === opts.editedId ? null : opts.reason));
+    } catch (err) {
+      if (err instanceof DesignInputError) throw new HttpError(400, "The inputs cannot be sized", { issues: err.issues });
+      throw err;
+    }
+    let saved = 0;
+    for (const m of members) {
+      const out = solved.get(m.id);
+      if (!out) continue;
+      const same = (a: unknown, b: unknown) => canonical(a) === canonical(b);
+      const strip = (v: MemberResultSummary | null) => (v ? { ...v, computedAt: "" } : null);
+      if (same(strip(out.summary), strip(m.resultSummary)) && same(out.chosen, m.chosenMember)) continue;
+      m.resultSummary = out.summary;
+      if (m.flowState !== null) m.chosenMember = out.chosen;
+      await m.save({ transaction });
+      saved += 1;
+    }
+    return saved;
+  });
+}
+
+/** JSON with keys in one order (PostgreSQL's JSONB keeps its own), undefined fields left out: to compare answers. */
+function canonical(v: unknown): string {
+  if (Array.isArray(v)) return `[${v.map(canonical).join(",")}]`;
+  if (v !== null && typeof v === "object") {
+    const entries = Object.entries(v as Record<string, unknown>)
+      .filter(([, x]) => x !== undefined)
+      .sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
+    return `{${entries.map(([k, x]) => `${JSON.stringify(k)}:${canonical(x)}`).join(",")}}`;
+  }
+  return JSON.stringify(v) ?? "null";
+}
+
+/** A job whose members were worked out with other tables than the current ones is worked out again (the admin published new tables). */
+export async function recheckIfTablesChanged(jobId: string): Promise<boolean> {
+  getSequelize();
+  const tables = await getCurrentTables();
+  const members = await Member.findAll({ where: { jobId, deletedAt: { [Op.is]: null } }, attributes: ["id", "resultSummary"] });
+  if (members.some((m) => m.resultSummary !== null && m.resultSummary.tables !== tables.version)) {
+    await recheckJob(jobId, { editedId: null, reason: "new material tables were published" });
+    return true;
+  }
+  return false;
+}
+
+/** Posts under a member (one under each of its supports), or footings under posts; the member above is put on them. */
+export async function addSupport(ownerId: string, input: AddSupportInput): Promise<Member> {
+  const sequelize = getSequelize();
+  const job = await ownedJob(ownerId, input.jobId);
+  const under = await Member.findOne({ where: { id: input.underMemberId, jobId: job.id, deletedAt: { [Op.is]: null } } });
+  if (!under) throw new HttpError(400, "invalid input", { issues: [{ path: "underMemberId", message: "Under: pick a member of this job" }] });
+  if (input.design.type === "post" && under.flowState === null)
+    throw new HttpError(400, "invalid input", { issues: [{ path: "underMemberId", message: "Under: posts go under a beam, header or joist" }] });
+  if (input.design.type === "footing" && under.kind !== "post")
+    throw new HttpError(400, "invalid input", { issues: [{ path: "underMemberId", message: "Under: footings go under posts" }] });
+  const created = await sequelize.transaction(async (transaction) => {
+    const m = await Member.create(
+      {
+        jobId: job.id,
+        label: input.label,
+        kind: input.design.type,
+        flowState: null,
+        resultSummary: null,
+        chosenMember: null,
+        supportDesign: input.design,
+        sortOrder: await nextSortOrder(job.id, transaction),
+      },
+      { transaction },
+    );
+    under.carriedByMemberId = m.id;
+    under.bearing = null;
+    await under.save({ transaction });
+    return m;
+  });
+  await recheckJob(job.id, { editedId: created.id, reason: `${input.label} added` });
+  return (await Member.findByPk(created.id)) ?? created;
+}
+
+/** Clears the "changed since you last looked" flags of a job's members (the builder has seen them). */
+export async function markChangesSeen(ownerId: string, jobId: string): Promise<void> {
+  getSequelize();
+  const job = await ownedJob(ownerId, jobId);
+  const members = await Member.findAll({ where: { jobId: job.id, deletedAt: { [Op.is]: null } } });
+  for (const m of members) {
+    if (m.resultSummary?.change) {
+      m.resultSummary = { ...m.resultSummary, change: null };
+      await m.save();
+    }
+  }
 }

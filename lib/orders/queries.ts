@@ -16,14 +16,17 @@ export async function getJobOrder(ownerId: string, jobId: string, now: Date = ne
   if (!job) return null;
   const tables = await getCurrentTables();
   const list = buildOrderList(
-    job.members.map((m) => ({
-      label: m.label,
-      kind: m.kind,
-      flowState: m.flowState,
-      spec: m.chosenMember ?? m.resultSummary?.spec ?? null,
-      summary: m.resultSummary,
-      details: m.orderDetails,
-    })),
+    // posts and footings added on the load path are listed with their own inputs on the job page, not counted here yet
+    job.members
+      .flatMap((m) => (m.flowState === null || m.kind === "post" || m.kind === "footing" ? [] : [{ ...m, flowState: m.flowState, kind: m.kind }]))
+      .map((m) => ({
+        label: m.label,
+        kind: m.kind,
+        flowState: m.flowState,
+        spec: m.chosenMember ?? m.resultSummary?.spec ?? null,
+        summary: m.resultSummary,
+        details: m.orderDetails,
+      })),
     tables,
   );
   return { job: { id: job.id, name: job.name, siteAddress: job.siteAddress }, list, computedAt: now.toISOString() };

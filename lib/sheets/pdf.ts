@@ -368,6 +368,18 @@ function drawSchedule(w: SheetWriter, s: SheetSnapshot): void {
     ]),
     [0.24, 0.44, 0.12, 0.2],
   );
+  if (s.loadPath && s.loadPath.length > 0) {
+    w.heading("Posts and footings", 11);
+    w.table(
+      ["Member", "Build", "Result"],
+      s.loadPath.map((r) => [
+        `${r.label}\n${r.kindLabel}`,
+        [r.headline, ...r.facts].join("\n"),
+        `${r.pass ? "OK" : "Over"} ${ratioPercent(r.ratio)}${r.problems.length ? `\n${r.problems.join("\n")}` : ""}`,
+      ]),
+      [0.2, 0.56, 0.24],
+    );
+  }
   if (s.skipped.length > 0) {
     w.text("Not on this sheet:", { size: 9.5, bold: true });
     for (const k of s.skipped) w.text(`• ${k.label}: ${k.reason}`, { size: 9.5 });

@@ -11,6 +11,8 @@ import type { SessionUser } from "@/lib/auth/session";
 import { SHEET_CREATE_DENIED, sheetAccess } from "./access";
 import { formatSheetDate } from "./format";
 import { buildSheetSnapshot, type SheetSnapshot } from "./snapshot";
+import { pathMemberOf, workOutJob } from "@/lib/jobs/load-path";
+import { isFramingKind, jobKindLabel } from "@/lib/solver/design/kinds";
 
 export interface SheetListItem {
   id: string;
@@ -62,18 +64,53 @@ export async function saveJobSheet(user: SessionUser, jobId: string, now: Date =
   const tables = await getCurrentTables();
   const info = isVersionId(tables.version) ? await getVersionInfo(tables.version) : null;
   const tablesLabel = info ? `version ${info.number}, published ${formatSheetDate(info.createdAt)}` : tables.version;
+  // the job's load path with these tables: the loads each member carries, and its posts and footings
+  const path = workOutJob(members.map(pathMemberOf), tables, () => null);
   const snapshot = buildSheetSnapshot({
     job: { id: job.id, name: job.name, siteAddress: job.siteAddress, notes: job.notes },
     preparedBy: { name: user.name, company: user.company },
-    members: members.map((m) => ({
-      id: m.id,
-      label: m.label,
-      kind: m.kind,
-      flowState: m.flowState,
-      chosenMember: m.chosenMember ?? m.resultSummary?.spec ?? null,
-      savedTables: m.resultSummary?.tables ?? null,
-      savedAnswer: m.resultSummary ? { headline: m.resultSummary.headline, ratio: m.resultSummary.ratio } : null,
-    })),
+    loadPath: members.flatMap((m) => {
+      const s = path.get(m.id)?.summary;
+      if (m.flowState !== null || !s) return [];
+      return [
+        {
+          id: m.id,
+          label: m.label,
+          kindLabel: jobKindLabel(m.kind),
+          headline: s.headline,
+          pass: s.pass,
+          ratio: s.ratio,
+          facts: s.facts ?? [],
+          problems: s.problems ?? [],
+        },
+      ];
+    }),
+    members: members
+      .flatMap((m) => {
+        const kind = m.kind;
+        if (m.flowState === null || !isFramingKind(kind)) return [];
+        const worked = path.get(m.id);
+        return [
+          {
+            ...m.get({ plain: true }),
+            kind,
+            flowState: worked?.state ?? m.flowState,
+            carried: worked?.carried ?? [],
+            carriedWords: (worked?.summary?.carried ?? []).map((c) => c.words),
+          },
+        ];
+      })
+      .map((m) => ({
+        id: m.id,
+        label: m.label,
+        kind: m.kind,
+        carried: m.carried,
+        carriedWords: m.carriedWords,
+        flowState: m.flowState,
+        chosenMember: m.chosenMember ?? m.resultSummary?.spec ?? null,
+        savedTables: m.resultSummary?.tables ?? null,
+        savedAnswer: m.resultSummary ? { headline: m.resultSummary.headline, ratio: m.resultSummary.ratio } : null,
+      })),
     tables,
     tablesLabel,
     now,
@@ -105,4 +142,27 @@ export async function getJobSheet(ownerId: string, sheetId: string): Promise<She
   const sheet = await JobSheet.findOne({ where: { id: sheetId, ownerId } });
   if (!sheet) throw new HttpError(404, "job sheet not found");
   return { ...listItem(sheet), snapshot: sheet.snapshot };
+}
+
+/**
+ * The job's members whose answer now differs from this frozen sheet's (a member changed, a carried load
+ * changed, or new tables were published since it was saved): the sheet stays as it was and says so.
+ */
+export async function newerNumbers(ownerId: string, sheet: SheetRecord): Promise<string[]> {
+  getSequelize();
+  if (!sheet.jobId) return [];
+  const job = await Job.findOne({ where: { id: sheet.jobId, ownerId, deletedAt: { [Op.is]: null } } });
+  if (!job) return [];
+  const members = await Member.findAll({ where: { jobId: job.id, deletedAt: { [Op.is]: null } }, attributes: ["id", "label", "resultSummary"] });
+  const onSheet = new Map<string, string>([
+    ...sheet.snapshot.members.map((m) => [m.id, m.headline] as const),
+    ...(sheet.snapshot.loadPath ?? []).map((r) => [r.id, r.headline] as const),
+  ]);
+  return members.flatMap((m) => {
+    const now = m.resultSummary?.headline;
+    if (!now) return [];
+    const then = onSheet.get(m.id);
+    if (then === undefined) return [`${m.label} (added since)`];
+    return then === now ? [] : [`${m.label}: now ${now}`];
+  });
 }

@@ -15,7 +15,7 @@ import type { Segment } from "@/lib/solver/beam";
 import { ratioPercent } from "@/lib/sheets/format";
 import type { SupportType } from "@/lib/solver/types";
 import { checkMember, type CheckOutput } from "@/lib/solver/design/check";
-import type { MemberSpec } from "@/lib/solver/design/schema";
+import type { DesignLoad, MemberSpec } from "@/lib/solver/design/schema";
 import type { DesignCheck, SupportReaction } from "@/lib/solver/design/types";
 import { distinctSources } from "@/lib/tables/citations";
 import type { MaterialTables } from "@/lib/tables/types";
@@ -75,6 +75,18 @@ export interface SheetMember {
   sources?: string[];
 }
 
+/** A post or footing group on the job's load path, as the sheet lists it (absent on sheets saved before). */
+export interface SheetLoadPathRow {
+  id: string;
+  label: string;
+  kindLabel: string;
+  headline: string;
+  pass: boolean;
+  ratio: number;
+  facts: string[];
+  problems: string[];
+}
+
 export interface SheetSkipped {
   id: string;
   label: string;
@@ -94,6 +106,8 @@ export interface SheetSnapshot {
   method: "asd";
   members: SheetMember[];
   skipped: SheetSkipped[];
+  /** posts and footings, worked out on the job's load path */
+  loadPath?: SheetLoadPathRow[];
   caution: { title: string; text: string; notChecked: string[] };
 }
 
@@ -108,12 +122,17 @@ export interface SheetMemberSource {
   savedTables: string | null;
   /** the answer saved with the member (Member.resultSummary), to say on the sheet when it has changed since */
   savedAnswer?: { headline: string; ratio: number } | null;
+  /** loads other members of the job put on this one (lib/jobs/load-path.ts), and their words */
+  carried?: DesignLoad[];
+  carriedWords?: string[];
 }
 
 export interface SheetSource {
   job: { id: string; name: string; siteAddress: string; notes: string };
   preparedBy: { name: string; company: string | null };
   members: SheetMemberSource[];
+  /** posts and footings as the job's load path worked them out */
+  loadPath?: SheetLoadPathRow[];
   tables: MaterialTables;
   /** how the tables version reads on the sheet; its id when not given */
   tablesLabel?: string;
@@ -280,7 +299,7 @@ export function sheetSources(snapshot: Pick<SheetSnapshot, "members">): { source
 /** Works one member out for the sheet; throws the design's input error when its inputs no longer check. */
 export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables: MaterialTables): SheetMember {
   const state = source.flowState;
-  const check = checkMember(checkRequest(state, spec), tables);
+  const check = checkMember(checkRequest(state, spec, source.carried ?? []), tables);
   const studs = jackStudsApply(state.kind, spacingOf(state));
   const reactions = check.reactions.map((r) => ({ ...r, jackStuds: studs ? r.jackStuds : null }));
   const headline = check.answer;
@@ -310,7 +329,7 @@ export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables:
     factors: factorRows(check.factors),
     limits: check.limits,
     assumptions: check.assumptions,
-    facts: answerFacts(check),
+    facts: [...answerFacts(check), ...(source.carriedWords ?? []).map((w) => `Carries: ${w}`)],
     diagrams: diagramsFor(check),
     note,
     sources: check.member.sources,
@@ -342,6 +361,7 @@ export function buildSheetSnapshot(source: SheetSource): SheetSnapshot {
     method: "asd",
     members,
     skipped,
+    ...(source.loadPath && source.loadPath.length > 0 ? { loadPath: source.loadPath } : {}),
     caution: { title: CAUTION_TITLE, text: CAUTION, notChecked: [...notCheckedFor(source.members.map((m) => m.chosenMember?.material))] },
   };
 }

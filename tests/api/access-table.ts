@@ -260,6 +260,20 @@ export const ACCESS_TABLE: AccessRow[] = [
     note: "404 for a member of someone else's job",
     setup: jobsFixture("member"),
   },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#addSupport",
+    allowed: ["owner"],
+    note: "404 for a job of someone else",
+    setup: jobsFixture("add-support"),
+  },
+  {
+    method: "ACTION",
+    path: "components/jobs/actions.ts#markChangesSeen",
+    allowed: ["owner"],
+    note: "404 for a job of someone else",
+    setup: jobsFixture("job"),
+  },
 ];
 
 /** A job owned by an account none of the personas is, and valid arguments for its order list. */
@@ -275,7 +289,9 @@ function orderFixture(kind: "mail" | "route"): () => Promise<AccessFixture> {
 }
 
 /** A job with a member, owned by an account none of the personas is, and valid arguments naming them. */
-function jobsFixture(kind: "save" | "job" | "update-job" | "deleted-job" | "member" | "update-member" | "deleted-member"): () => Promise<AccessFixture> {
+function jobsFixture(
+  kind: "save" | "job" | "update-job" | "deleted-job" | "member" | "update-member" | "deleted-member" | "add-support",
+): () => Promise<AccessFixture> {
   return async () => {
     const { defaultFlowState } = await import("@/lib/flow/defaults");
     const flowState = defaultFlowState("floor-joist");
@@ -289,6 +305,10 @@ function jobsFixture(kind: "save" | "job" | "update-job" | "deleted-job" | "memb
     if (kind === "job" || kind === "deleted-job") return { args: [{ jobId: job.id }] };
     if (kind === "update-job") return { args: [{ jobId: job.id, name: "Taken over", siteAddress: "", notes: "" }] };
     if (kind === "update-member") return { args: [{ memberId: header.id, label: "Taken over" }] };
+    if (kind === "add-support") {
+      const post = { type: "post", size: "4x4", plies: 1, species: "Douglas Fir-Larch", grade: "No.2", heightFt: 8, wet: false };
+      return { args: [{ jobId: job.id, underMemberId: header.id, label: "P1 posts", design: post }] };
+    }
     return { args: [{ memberId: header.id }] };
   };
 }

@@ -153,7 +153,7 @@ describe.skipIf(!TEST_DB)("jobs and members (PostgreSQL)", () => {
     expect(result.ok).toBe(true);
     const member = await queries.getMember(owner.id, memberId);
     expect(member?.resultSummary?.spanFt).toBe(11);
-    expect(member?.flowState.lengthFt).toBe(11);
+    expect(member?.flowState?.lengthFt).toBe(11);
     await as(owner, () => actions.updateMember({ memberId, flowState: header10, chosenMember: null }));
   });
 
@@ -166,7 +166,7 @@ describe.skipIf(!TEST_DB)("jobs and members (PostgreSQL)", () => {
     const result = await as(owner, () => actions.updateMember({ memberId, loadStandard: "ASCE 7-16" }));
     expect(result.ok).toBe(true);
     const after = await queries.getMember(owner.id, memberId);
-    expect(after?.flowState.loadStandard).toBe("ASCE 7-16");
+    expect(after?.flowState?.loadStandard).toBe("ASCE 7-16");
     expect(after?.resultSummary?.loadStandard).toBe("ASCE 7-16");
     expect(after?.chosenMember).toEqual(chosen);
     // the same member under the full snow load works harder

@@ -26,10 +26,11 @@ export default async function SizePage({ searchParams }: SizePageProps) {
   if (jobId && memberId) {
     if (!user) redirect(`/sign-in?callbackUrl=${encodeURIComponent(`/size?job=${jobId}&member=${memberId}`)}`);
     const member = await getMember(user.id, memberId);
-    if (!member || member.jobId !== jobId) notFound();
+    if (!member || member.jobId !== jobId || member.flowState === null) notFound();
+    const savedState = member.flowState;
     const fromUrl = resolveFlowStart(params, null);
     const location =
-      fromUrl.from === "url" ? fromUrl.location : { state: member.flowState, step: params.step === "answer" ? ("answer" as const) : ("span" as const) };
+      fromUrl.from === "url" ? fromUrl.location : { state: savedState, step: params.step === "answer" ? ("answer" as const) : ("span" as const) };
     return (
       <SizingFlow
         initial={location}

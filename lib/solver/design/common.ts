@@ -88,9 +88,13 @@ export function reactionsFor(ctx: DesignContext, swPlf: number): Omit<SupportRea
       if (!a) continue;
       byCase[c] = Math.round(a.R[j] + (c === "D" ? swPlf * model.selfWeight.R[j] : 0));
     }
+    // live load placed span by span (ASCE 7 §4.3.3): the largest live reaction here, from the D+L envelope less the dead part
+    const dl = model.patterned ? ctx.service.find((e) => e.factors.L === 1 && e.factors.D === 1 && Object.keys(e.factors).length === 2) : undefined;
+    const liveMax = dl ? Math.round(dl.Rmax[j] + dl.fD * swPlf * model.selfWeight.R[j] - (byCase.D ?? 0)) : undefined;
     return {
       x: s.x,
       type: s.type,
+      ...(liveMax !== undefined && liveMax > (byCase.L ?? 0) ? { liveMax } : {}),
       maxDown: Math.round(Math.max(maxDown, 0)),
       maxDownCombination,
       uplift: minUp < 0 ? Math.round(-minUp) : 0,

@@ -30,3 +30,24 @@ export const KIND_LABELS: Readonly<Record<MemberKind, string>> = {
 
 /** Members that carry a roof: their deflection limits are the roof and ceiling rows. */
 export const ROOF_KINDS: readonly MemberKind[] = ["rafter"];
+
+/**
+ * What else a job holds on its load path: posts (or stud columns) under a beam and the footings under
+ * them. They are checked in axial compression and for the soil (lib/solver/design/post.ts, footing.ts),
+ * not by the member flow, so they are kinds of a job's member but not of the design input.
+ */
+export const SUPPORT_KINDS = ["post", "footing"] as const;
+export type SupportKind = (typeof SUPPORT_KINDS)[number];
+export const JOB_MEMBER_KINDS = [...MEMBER_KINDS, ...SUPPORT_KINDS] as const;
+export type JobMemberKind = (typeof JOB_MEMBER_KINDS)[number];
+export const SUPPORT_KIND_LABELS: Readonly<Record<SupportKind, string>> = { post: "Posts", footing: "Footings" };
+
+/** "Deck beam", "Posts", "Footings": the label of any kind of a job's member. */
+export function jobKindLabel(kind: JobMemberKind): string {
+  return kind === "post" || kind === "footing" ? SUPPORT_KIND_LABELS[kind] : KIND_LABELS[kind];
+}
+
+/** A kind the sizing flow works out (not a post or footing). */
+export function isFramingKind(kind: JobMemberKind): kind is MemberKind {
+  return (MEMBER_KINDS as readonly string[]).includes(kind);
+}

@@ -51,6 +51,8 @@ export interface SupportReaction {
   upliftCombination: string | null;
   /** unfactored reaction by load case, lb (D includes the member's own weight when counted) */
   byCase: Partial<Record<"D" | "L" | "Lr" | "S" | "W", number>>;
+  /** with live load placed span by span: the largest live reaction here, lb, where it is more than byCase.L (what a carrier below must take) */
+  liveMax?: number;
   /** bearing length given, in */
   bearing: number;
   /** bearing length the member needs here, in (steel: for web local yielding and web crippling; 48 means more than 48 in) */

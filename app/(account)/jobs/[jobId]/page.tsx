@@ -5,6 +5,8 @@ import { JobPage } from "@/components/jobs/job-page";
 import { SheetPanel } from "@/components/sheets/sheet-panel";
 import { userForPage } from "@/lib/auth/guard";
 import { getJob } from "@/lib/jobs/queries";
+import { recheckIfTablesChanged } from "@/lib/jobs/service";
+import { changeWords } from "@/lib/flow/summary";
 
 export const metadata: Metadata = { title: "Job" };
 export const dynamic = "force-dynamic";
@@ -16,7 +18,10 @@ export default async function JobRoute({ params, searchParams }: JobRouteProps) 
   const { jobId } = await params;
   const query = await searchParams;
   const user = await userForPage(`/jobs/${jobId}`);
-  const job = await getJob(user.id, jobId);
+  const found = await getJob(user.id, jobId);
+  if (!found) notFound();
+  // new tables published since the members were worked out: the whole load path is worked out again first
+  const job = (await recheckIfTablesChanged(found.id)) ? await getJob(user.id, jobId) : found;
   if (!job) notFound();
   return (
     <JobPage
@@ -36,9 +41,19 @@ export default async function JobRoute({ params, searchParams }: JobRouteProps) 
           spanFt: m.resultSummary?.spanFt ?? null,
           carriedBy: m.carriedByMemberId ? (job.members.find((c) => c.id === m.carriedByMemberId)?.label ?? null) : null,
           carriedById: m.carriedByMemberId,
-          loadStandard: m.flowState.loadStandard ?? "ASCE 7-16",
-          carriesSnow: m.flowState.snow.on || [...m.flowState.areaLoads, ...m.flowState.pointLoads, ...m.flowState.lineLoads].some((l) => l.case === "S"),
+          loadStandard: m.flowState?.loadStandard ?? "ASCE 7-16",
+          carriesSnow: m.flowState
+            ? m.flowState.snow.on || [...m.flowState.areaLoads, ...m.flowState.pointLoads, ...m.flowState.lineLoads].some((l) => l.case === "S")
+            : false,
           orderDetails: m.orderDetails,
+          carried: (m.resultSummary?.carried ?? []).map((c) => c.words),
+          change: m.resultSummary ? changeWords(m.resultSummary) : null,
+          problems: m.resultSummary?.problems ?? [],
+          supportDesign: m.supportDesign,
+          lengthFt: m.flowState?.lengthFt ?? null,
+          supportsFt: m.flowState ? [...m.flowState.supports].map((x) => x.x).sort((a, b) => a - b) : undefined,
+          atSpacing: m.flowState?.width.mode === "spacing",
+          bearing: m.bearing,
         })),
       }}
     >

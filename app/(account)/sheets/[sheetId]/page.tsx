@@ -7,7 +7,7 @@ import { SheetToolbar } from "@/components/sheets/sheet-toolbar";
 import { getSessionUser } from "@/lib/auth/session";
 import { HttpError } from "@/lib/http";
 import { SHEET_LAPSED_WORDS, sheetAccess } from "@/lib/sheets/access";
-import { getJobSheet, type SheetRecord } from "@/lib/sheets/sheets";
+import { getJobSheet, newerNumbers, type SheetRecord } from "@/lib/sheets/sheets";
 import { liveCrewLinkUrl } from "@/lib/crew/links";
 import { crewQrSvg } from "@/lib/crew/qr";
 
@@ -29,6 +29,7 @@ export default async function SheetPage({ params }: SheetPageProps) {
     throw err;
   }
   const access = await sheetAccess(user);
+  const newer = await newerNumbers(user.id, sheet);
   const crewUrl = await liveCrewLinkUrl(user.id, sheet.jobId);
   const crewQr = crewUrl ? { url: crewUrl, svg: await crewQrSvg(crewUrl) } : null;
   return (
@@ -42,6 +43,16 @@ export default async function SheetPage({ params }: SheetPageProps) {
         />
         <SheetToolbar sheetId={sheet.id} canReprint={access.canReprint} lapsedWords={SHEET_LAPSED_WORDS} />
       </div>
+      {newer.length > 0 ? (
+        <div className="rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-3 text-ink" data-testid="sheet-newer" role="status">
+          <p className="font-bold">⚠ Newer numbers exist for this job. This sheet stays as it was saved; save a new sheet for the current answers.</p>
+          <ul className="list-disc pl-6">
+            {newer.map((n) => (
+              <li key={n}>{n}</li>
+            ))}
+          </ul>
+        </div>
+      ) : null}
       {access.canReprint ? null : (
         <p className="sheet-print-blocked hidden text-lg">
           Printing a job sheet needs a subscription. This sheet can be read on screen at Spanlark; subscribe to print or download it.
