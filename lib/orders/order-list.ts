@@ -406,7 +406,7 @@ function postPieces(m: OrderMember, tables: MaterialTables, missing: string[]): 
       quantity: posts * stock.pieces,
       unit: "pcs",
       use: `${m.label}: ${plural(posts, "post")}, ${formatFeetInches(d.postHeightFt)} tall`,
-      note: "post size is the builder's choice: Spanlark does not check posts",
+      note: "post size is the builder's choice here and not checked: add the posts on the job page to have them checked",
       ref: species ? { material: "sawn", species: species as Species, grade: "No.2", size } : null,
       sortKey: depth * 100 + t,
     });
@@ -478,7 +478,9 @@ export function buildOrderList(members: readonly OrderMember[], tables: Material
       quantity: concreteToOrder(concrete),
       unit: "cu yd",
       uses: footingUses,
-      notes: [`${concrete.toFixed(3)} cu yd of holes plus 10% (common practice); footings are not checked by Spanlark`],
+      notes: [
+        `${concrete.toFixed(3)} cu yd of holes plus 10% (common practice); these footings are not checked: add them on the job page to have them checked`,
+      ],
       costPerFt: null,
       price: null,
       sortKey: 0,
@@ -507,6 +509,20 @@ export function buildOrderList(members: readonly OrderMember[], tables: Material
     missing,
     tablesVersion: tables.version,
   };
+}
+
+/**
+ * What the list leaves out of a job's load path: posts and footings added as members are checked on the job page
+ * but not yet counted here, so the list says so for each rather than quietly ordering too little.
+ */
+export function notCountedNotes(members: readonly { label: string; kind: string }[]): string[] {
+  return members.flatMap((m) =>
+    m.kind === "post" || m.kind === "footing"
+      ? [
+          `${m.label}: ${m.kind === "post" ? "posts" : "footings"} from the load path are not counted in this list yet — add them to the order from the job page.`,
+        ]
+      : [],
+  );
 }
 
 /** "$1,234.50" */

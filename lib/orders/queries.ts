@@ -1,7 +1,7 @@
 import "server-only";
 import { getJob, type JobView } from "@/lib/jobs/queries";
 import { getCurrentTables } from "@/lib/tables/current";
-import { buildOrderList, type OrderList } from "./order-list";
+import { buildOrderList, notCountedNotes, type OrderList } from "./order-list";
 
 export interface JobOrder {
   job: Pick<JobView, "id" | "name" | "siteAddress">;
@@ -16,7 +16,7 @@ export async function getJobOrder(ownerId: string, jobId: string, now: Date = ne
   if (!job) return null;
   const tables = await getCurrentTables();
   const list = buildOrderList(
-    // posts and footings added on the load path are listed with their own inputs on the job page, not counted here yet
+    // posts and footings added on the load path are checked on the job page but not counted here yet: the list says so
     job.members
       .flatMap((m) => (m.flowState === null || m.kind === "post" || m.kind === "footing" ? [] : [{ ...m, flowState: m.flowState, kind: m.kind }]))
       .map((m) => ({
@@ -29,5 +29,6 @@ export async function getJobOrder(ownerId: string, jobId: string, now: Date = ne
       })),
     tables,
   );
+  list.missing.push(...notCountedNotes(job.members));
   return { job: { id: job.id, name: job.name, siteAddress: job.siteAddress }, list, computedAt: now.toISOString() };
 }

@@ -1,7 +1,7 @@
 /**
  * The counting rules of an order list, one small pure function each, so each can be checked by hand.
  * Rules of the trade are marked "common practice"; none of them is an engineering check (the caution
- * says Spanlark does not check posts, footings or fasteners). Lengths in ft unless the name says in.
+ * says which posts and footings are not checked, and fasteners never are). Lengths in ft unless the name says in.
  */
 
 /** Sawn lumber stock lengths when the tables hold none: 8 to 24 ft in 2 ft steps (common practice at lumber yards). */
