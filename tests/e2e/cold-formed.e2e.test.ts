@@ -37,7 +37,7 @@ describe("a steel floor framed with C-joists", () => {
         await expect.poll(() => page.getByText(/Cold-formed steel: web holes beyond the standard punchouts/).count()).toBeGreaterThan(0);
         await screenshot(`flow-cfs-5-answer-${viewport}`, { fullPage: false });
         await page
-          .getByRole("button", { name: /Open the full check/ })
+          .getByRole("button", { name: /Full check, every factor/ })
           .first()
           .click();
         const detail = page.getByRole("dialog");

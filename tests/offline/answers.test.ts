@@ -14,9 +14,9 @@ import type { MaterialTables } from "@/lib/tables/types";
 const V6: TablesStamp = { id: "6b0c7f9e-0000-4000-8000-000000000006", number: 6, publishedAt: "2026-12-02T15:04:00.000Z" };
 const V7: TablesStamp = { id: "6b0c7f9e-0000-4000-8000-000000000007", number: 7, publishedAt: "2026-12-03T08:30:00.000Z" };
 
-// an 8 ft header in a 2x6 wall, any material: a dozen members pass in the starter tables
+// an 8 ft header in a 2x6 wall, built up of sawn lumber (the header's default): several members pass in the starter tables
 const headerState = defaultFlowState("header");
-const header8 = sizeRequest(withMainSpan({ ...headerState, wallFraming: "2x6", material: { ...headerState.material, family: "any" } }, 8));
+const header8 = sizeRequest(withMainSpan({ ...headerState, wallFraming: "2x6" }, 8));
 
 describe("tablesWords", () => {
   test.each([
