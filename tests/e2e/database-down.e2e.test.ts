@@ -6,27 +6,12 @@
 import { randomBytes } from "node:crypto";
 import { afterAll, describe, expect, test } from "vitest";
 import { baseUrl, setupBrowser } from "./support/browser";
-import { Client, ownsTestCluster, startTestCluster, stopTestCluster, until } from "./support/instances";
+import { Client, ownsTestCluster, startTestCluster, stopTestCluster, until, JOIST_REQUEST as joist } from "./support/instances";
 
 const session = setupBrowser();
 /** A crew link token of the right shape (43 URL-safe base64 characters) that names no link: only the database can say so. */
 const UNKNOWN_CREW_TOKEN = randomBytes(32).toString("base64url");
 const BUILDER = { email: "dee@hollisrowe.test", password: "builder-demo-pass" }; // seeders/ demo account (invented)
-
-const joist = {
-  kind: "floor-joist",
-  member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10" },
-  lengthFt: 13,
-  supports: [
-    { x: 0, type: "pin" },
-    { x: 13, type: "roller" },
-  ],
-  spacingIn: 16,
-  loads: [
-    { type: "area", case: "L", psf: 40 },
-    { type: "area", case: "D", psf: 10 },
-  ],
-};
 
 const postJson = (path: string, body: unknown) =>
   fetch(`${baseUrl()}${path}`, { method: "POST", headers: { "content-type": "application/json" }, body: JSON.stringify(body) });

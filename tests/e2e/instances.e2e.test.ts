@@ -6,7 +6,7 @@
 import { randomUUID } from "node:crypto";
 import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { mailApiUrl, waitForMail } from "./support/payments";
-import { Client, extraPort, freshSeededDatabase, ownsTestCluster, startApp, until, type AppProcess } from "./support/instances";
+import { Client, extraPort, freshSeededDatabase, ownsTestCluster, startApp, until, type AppProcess, JOIST_REQUEST as joist } from "./support/instances";
 import { signatureHeader } from "@/scripts/stripe-standin/webhooks";
 
 const WEBHOOK_SECRET = `whsec_instances_${randomUUID().slice(0, 8)}`;
@@ -14,22 +14,6 @@ const ADMIN = { email: "admin@spanlark.test", password: "admin-demo-pass" }; // 
 
 let a: AppProcess;
 let b: AppProcess;
-
-/** A Hem-Fir No.2 2x10 floor joist, 13 ft at 16 in, 40 psf live and 10 psf dead (our own example). */
-const joist = {
-  kind: "floor-joist",
-  member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10" },
-  lengthFt: 13,
-  supports: [
-    { x: 0, type: "pin" },
-    { x: 13, type: "roller" },
-  ],
-  spacingIn: 16,
-  loads: [
-    { type: "area", case: "L", psf: 40 },
-    { type: "area", case: "D", psf: 10 },
-  ],
-};
 
 type CheckAnswer = { tables: string; checks: Array<{ name: string; capacity: number }> };
 

@@ -165,3 +165,19 @@ export async function until<T>(what: () => Promise<T>, ok: (value: T) => boolean
   }
   return { value, ms: Date.now() - start };
 }
+
+/** A Hem-Fir No.2 2x10 floor joist, 13 ft at 16 in, 40 psf live and 10 psf dead (our own example): a check request both processes answer. */
+export const JOIST_REQUEST = {
+  kind: "floor-joist",
+  member: { material: "sawn", species: "Hem-Fir", grade: "No.2", size: "2x10" },
+  lengthFt: 13,
+  supports: [
+    { x: 0, type: "pin" },
+    { x: 13, type: "roller" },
+  ],
+  spacingIn: 16,
+  loads: [
+    { type: "area", case: "L", psf: 40 },
+    { type: "area", case: "D", psf: 10 },
+  ],
+};
