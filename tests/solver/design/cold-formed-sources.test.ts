@@ -146,10 +146,11 @@ function at33(thicknessFromMils: boolean): MaterialTables {
   };
 }
 
-/** Longest equal two-span length passing every check but the thickness scope (bisection, 1/1000 ft). */
-function twoSpan(section: string, live: number, spacing: number, tables: MaterialTables): number {
+/** Longest equal two-span length passing every check but the thickness scope (bisection, 1/1000 ft), and the check that stops it. */
+function twoSpanWith(section: string, live: number, spacing: number, tables: MaterialTables): { span: number; governing: string } {
   let lo = 2;
-  let hi = 30;
+  let hi = 50;
+  let governing = "";
   while (hi - lo > 0.001) {
     const span = (lo + hi) / 2;
     const r = checkMember(
@@ -168,11 +169,17 @@ function twoSpan(section: string, live: number, spacing: number, tables: Materia
       },
       tables,
     );
-    if (r.checks.filter((c) => c.name !== "thickness-scope").every((c) => c.ratio <= 1)) lo = span;
-    else hi = span;
+    const checks = r.checks.filter((c) => c.name !== "thickness-scope");
+    if (checks.every((c) => c.ratio <= 1)) lo = span;
+    else {
+      hi = span;
+      governing = checks.reduce((a, b) => (b.ratio > a.ratio ? b : a)).name;
+    }
   }
-  return lo;
+  return { span: lo, governing };
 }
+
+const twoSpan = (section: string, live: number, spacing: number, tables: MaterialTables) => twoSpanWith(section, live, spacing, tables).span;
 
 // Table 5.4 33 mil rows ("2 x 6 x 33" and "2 x 8 x 33", read as 550S162-33 and 800S162-33): [section, live psf, spacing in, span]
 const ROWS_33: [string, number, number, number][] = [
@@ -196,4 +203,51 @@ describe("Prescriptive Method (1997) Table 5.4, 33 mil rows: the difference expl
     expect(Math.max(...byMils)).toBeLessThan(1.07);
     expect(Math.min(...byMils)).toBeGreaterThan(0.92);
   }, 120_000);
+});
+
+// ---------------------------------------------------------------------------------------------------
+// Every 43 to 97 mil row of the same Table 5.4 that the published copy shows and the starter tables hold
+// (its "2 x 12 x 43" is outside them, h/t > 260; its "2 x 12 x 97" row is cut off in the copy), through the
+// product's checks with bearing stiffeners at every support, design thickness, 33 ksi. Measured over the
+// 84 rows: 0.78 to 1.02 of the table; 0.88 and up where bending, shear or deflection governs (the table
+// appears to use the minimum thickness and an older specification; 1000S162-43 at 40 psf, 24 in o.c. is
+// 2 % longer, within what the thickness explains), lower where the interior bearing stiffener governs.
+const TABLE_5_4: [string, number[]][] = [
+  ["550S162-43", [ftIn(15, 8), ftIn(13, 6), 11, 14, ftIn(12, 1), ftIn(9, 10)]],
+  ["550S162-54", [ftIn(17, 7), ftIn(15, 3), ftIn(12, 5), ftIn(15, 9), ftIn(13, 8), ftIn(11, 2)]],
+  ["550S162-68", [ftIn(19, 6), ftIn(17, 2), 14, ftIn(17, 8), ftIn(15, 4), ftIn(12, 6)]],
+  ["550S162-97", [ftIn(21, 7), ftIn(19, 7), ftIn(16, 8), ftIn(19, 7), ftIn(17, 10), ftIn(14, 11)]],
+  ["800S162-43", [ftIn(19, 5), ftIn(16, 8), ftIn(12, 6), ftIn(17, 5), ftIn(14, 3), ftIn(10, 8)]],
+  ["800S162-54", [23, ftIn(19, 11), ftIn(16, 3), ftIn(20, 6), ftIn(17, 9), ftIn(14, 6)]],
+  ["800S162-68", [ftIn(25, 10), ftIn(22, 5), ftIn(18, 3), ftIn(23, 2), 20, ftIn(16, 4)]],
+  ["800S162-97", [ftIn(29, 4), ftIn(26, 7), ftIn(21, 11), ftIn(26, 7), 24, ftIn(19, 7)]],
+  ["1000S162-43", [ftIn(20, 3), ftIn(16, 5), ftIn(12, 1), ftIn(17, 3), ftIn(13, 11), ftIn(10, 2)]],
+  ["1000S162-54", [ftIn(25, 6), ftIn(22, 1), 18, ftIn(22, 10), ftIn(19, 9), ftIn(15, 6)]],
+  ["1000S162-68", [ftIn(30, 6), ftIn(26, 5), ftIn(21, 7), ftIn(27, 4), ftIn(23, 8), ftIn(19, 3)]],
+  ["1000S162-97", [ftIn(35, 4), ftIn(31, 9), ftIn(25, 11), ftIn(32, 1), ftIn(28, 5), ftIn(23, 2)]],
+  ["1200S162-54", [ftIn(27, 8), ftIn(23, 9), ftIn(17, 10), ftIn(24, 9), ftIn(20, 4), ftIn(15, 2)]],
+  ["1200S162-68", [ftIn(32, 7), ftIn(28, 3), 23, ftIn(29, 2), ftIn(25, 3), ftIn(20, 7)]],
+];
+const COLUMNS: [number, number][] = [
+  [30, 12],
+  [30, 16],
+  [30, 24],
+  [40, 12],
+  [40, 16],
+  [40, 24],
+];
+const ROWS_5_4 = TABLE_5_4.flatMap(([s, spans]) => spans.map((pub, i) => [s, COLUMNS[i][0], COLUMNS[i][1], pub] as [string, number, number, number]));
+
+describe("Prescriptive Method (1997) Table 5.4, two continuous spans, every 43-97 mil row in the copy: −15 % / +5 %", () => {
+  const design = at33(false);
+  test.each(ROWS_5_4)("%s, %s psf live, %s in o.c.: %s ft", (section, live, spacing, published) => {
+    const { span, governing } = twoSpanWith(section, live, spacing, design);
+    const ratio = span / published;
+    expect(ratio).toBeLessThan(1.05);
+    // where the bearing stiffener over the interior support governs (a web past h/t = 200, so Pwc = 0 and
+    // the 33 mil track stiffener carries 0.7 Ae Fy alone), Spanlark is shorter still: 1200S162-54 at 24 in
+    // o.c. down to 0.78 of the table
+    if (governing === "web-crippling") expect(ratio).toBeLessThan(1);
+    else expect(ratio).toBeGreaterThan(0.85);
+  });
 });
