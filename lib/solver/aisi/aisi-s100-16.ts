@@ -411,16 +411,25 @@ export function webCripplingPn(s: CfsDimensions, Fy: number, N: number, c: Cripp
 }
 
 /**
- * Bearing stiffener in a C-section flexural member: Pn = 0.7(Pwc + Ae Fys) ≥ Ae Fys, Ω = 1.70, φ = 0.90
- * (the bearing stiffener provision of AISI S100; clause number and values from memory — verify).
- * Pwc = the joist's web crippling strength (Eq. G5-1 with the bearing given; 0 where outside its limits),
- * Ae = the stiffener's effective area at Fys.
+ * Bearing stiffener (a C-section or track screwed to the web) in a C-section flexural member:
+ * Pn = 0.7(Pwc + Ae Fy) ≥ Pwc, φ = 0.90. The AISI S100 bearing-stiffener provision for C-section flexural
+ * members, read in a published copy of the Colombian code that adopts AISI S100-2007 as its Title F:
+ * NSR-10 §F.4.3.3.7.2, Eq. F.4.3.3-72 (a public repository's text of that title, found with search).
+ * Its AISI clause number (§C3.7.2 in S100-2007) is from memory. Stated for two-flange loading; Pwc = the
+ * joist's web crippling strength (Eq. G5-1, single web, end or interior; 0 here where the web is outside
+ * its limits), Ae = the stiffener's effective area in uniform compression at its Fy. Limits of the provision: full bearing of the stiffener (else Pn is halved),
+ * a C-section or track stiffener at least 3-1/2 in deep and 33 mil, at least 3 screws to the web, the first
+ * screw at least d/8 from the flanges, stiffener length at least d − 3/8 in, bearing at least 1-1/2 in.
+ * The ASD Ω = 1.70 is from memory — verify (the published copy is LRFD only). Its S100-16 clause number
+ * could not be read.
  */
 export function bearingStiffenerPn(Pwc: number, Ae: number, Fys: number): number {
-  return Math.max(0.7 * (Pwc + Ae * Fys), Ae * Fys);
+  return Math.max(0.7 * (Pwc + Ae * Fys), Pwc); // NSR-10 Eq. F.4.3.3-72 (AISI S100 bearing stiffener in a C-section)
 }
 export const OMEGA_STIFFENER = 1.7;
 export const PHI_STIFFENER = 0.9;
+/** The provision's shortest bearing, in (limit 6 of the list above). */
+export const STIFFENER_MIN_BEARING_IN = 1.5;
 
 /** Effective area of a track or C-section under uniform compression at f (web §1.1.1, flanges §1.2.1 or §1.3), in². */
 export function effectiveAreaUniform(s: CfsDimensions, f: number): number {

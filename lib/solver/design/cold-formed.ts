@@ -7,7 +7,8 @@
  *   shear          Vn of each web (§G2.1, kv = 5.34)
  *   web crippling  Eq. G5-1 at each support and under each point load (Table G5-2, fastened, one- or
  *                  two-flange, end or interior); where it fails, or the web is too slender for it, a
- *                  bearing stiffener (Pn = 0.7(Pwc + Ae Fy)) and the answer says "add a bearing stiffener"
+ *                  bearing stiffener (Pn = 0.7(Pwc + Ae Fy) ≥ Pwc, NSR-10 Eq. F.4.3.3-72) and the answer
+ *                  says "add a bearing stiffener"
  *   combined       bending and web crippling on an unreinforced web (§H3 Eq. H3-1)
  *   flange roll    distortional buckling of the compression flange (§F4.1, Mcrd by Appendix 2 §2.3.3.3):
                  see flangeRollCheck for which flange, Lm, kφ and β
@@ -39,6 +40,7 @@ import {
   PHI_FLEXURE,
   PHI_SHEAR,
   PHI_STIFFENER,
+  STIFFENER_MIN_BEARING_IN,
   WEB_CRIPPLING_C_FASTENED,
   webCripplingPn,
   type CfsDimensions,
@@ -100,6 +102,8 @@ export interface CfsFactors {
 /** The least bearing stiffener IRC 2021 R505.3.4 allows: a 33 mil C-shape or track; taken as a 362T125-33 track piece (common practice). */
 export const STIFFENER_SECTION: CfsDimensions = { style: "T", D: 3.625 + 2 * 0.0346, B: 1.25, lip: 0, t: 0.0346, R: 0.0764 };
 export const STIFFENER_FY = 33;
+/** How the stiffener is built, as the provision's limits ask (NSR-10 §F.4.3.3.7.2, see bearingStiffenerPn). */
+const STIFFENER_WORDS = "362T125-33 track, joist depth less 3/8 in long, at least 3 screws to the web, the first d/8 from the flanges";
 
 const KIP = 1000;
 
@@ -380,7 +384,8 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
     const PnWeb = webCripplingPn(d.dims, d.Fy, N, p.case);
     const k = WEB_CRIPPLING_C_FASTENED[p.case];
     const bare = PnWeb === null ? 0 : avail(PnWeb, k.omega, k.phi);
-    const stiff = avail(bearingStiffenerPn(PnWeb ?? 0, stiffenerAe, STIFFENER_FY), OMEGA_STIFFENER, PHI_STIFFENER);
+    // the stiffener provision asks for at least 1-1/2 in of bearing: no stiffener credit on less
+    const stiff = N >= STIFFENER_MIN_BEARING_IN ? avail(bearingStiffenerPn(PnWeb ?? 0, stiffenerAe, STIFFENER_FY), OMEGA_STIFFENER, PHI_STIFFENER) : 0;
     const bareOk = PnWeb !== null && p.P <= bare;
     // a stiffener where asked for; where not said, only where the bare web does not carry the load
     const useStiffener = m.stiffeners === true || (m.stiffeners === undefined && !bareOk && stiff > bare);
@@ -392,7 +397,10 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
     let note = "";
     if (ctx.notes) {
       if (useStiffener)
-        note = `${p.where}: bearing stiffener (33 mil track, Pn = 0.7(Pwc + Ae Fy), from memory — verify) carries ${round(stiff * n * KIP, 0)} lb${PnWeb !== null ? `; the bare web ${round(bare * n * KIP, 0)} lb (Eq. G5-1, ${caseWords(p.case)}, N = ${N} in)` : `; ${slender}`}`;
+        note =
+          stiff > 0
+            ? `${p.where}: bearing stiffener (${STIFFENER_WORDS}; Pn = 0.7(Pwc + Ae Fy) ≥ Pwc, the AISI S100 provision as NSR-10 Eq. F.4.3.3-72 gives it, stated for two-flange loading and applied here with this place's own Pwc; Ω = 1.70 from memory — verify) carries ${round(stiff * n * KIP, 0)} lb${PnWeb !== null ? `; the bare web ${round(bare * n * KIP, 0)} lb (Eq. G5-1, ${caseWords(p.case)}, N = ${N} in)` : `; ${slender}`}`
+            : `${p.where}: a bearing stiffener needs at least ${STIFFENER_MIN_BEARING_IN} in of bearing (N = ${N} in given)${PnWeb === null ? `; ${slender}` : ""}`;
       else if (PnWeb === null) note = `${p.where}: ${slender} — add a bearing stiffener`;
       else
         note = `${p.where}: AISI S100-16 Eq. G5-1, ${caseWords(p.case)}, fastened, N = ${N} in, ${lrfd ? `φ = ${k.phi}` : `Ω = ${k.omega}`}${!bareOk && p.P <= stiff ? " — add a bearing stiffener" : ""}`;

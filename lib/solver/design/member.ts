@@ -251,7 +251,7 @@ export function withPlies(m: WoodMember, plies: number): WoodMember {
 
 /** The checks' standard, as the sheet's sources list it. */
 export const AISI_SOURCE =
-  "AISI S100-16 (North American Specification for the Design of Cold-Formed Steel Structural Members, 2016); web crippling Table G5-2 checked against a published copy (runtosolve/AISIS100.jl); bearing stiffener Pn = 0.7(Pwc + Ae Fy) from memory — verify";
+  "AISI S100-16 (North American Specification for the Design of Cold-Formed Steel Structural Members, 2016); web crippling Table G5-2 checked against a published copy (runtosolve/AISIS100.jl); bearing stiffener Pn = 0.7(Pwc + Ae Fy) ≥ Pwc, φ = 0.90 read in a published copy of AISI S100 as adopted by NSR-10 Title F (§F.4.3.3.7.2), its Ω = 1.70 from memory — verify";
 
 /** "800S162-54", "2-800S162-54 back-to-back header", "2-800S162-54 box header". */
 export function cfsLabel(section: string, assembly: "single" | "back-to-back" | "box"): string {
