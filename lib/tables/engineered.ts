@@ -9,7 +9,12 @@ import type { EngineeredProduct, EngineeredSizeRule } from "./types";
  * them (qsaad/stroogle data/wood/EngineeredSpecies.js); the 1.9E LVL row was not checked. Glulam
  * values are the NDS Supplement (2018 edition) Table 5A reference values for the named combination;
  * the open-source published copies found disagree on Fbx− (1,450 vs 1,850 psi for 24F-V4; balanced or
- * not for 24F-1.8E), so the glulam rows stay from memory and flagged.
+ * not for 24F-1.8E), so the glulam rows stay from memory and flagged. Searched again for a readable
+ * Table 5A (or APA's Glulam Design Specification / EWS Y117 tables) by the combination and its values
+ * (24F-V4 2400/1850/650/265/1.8; 24F-1.8E 2400/1450): the copies found (studylib, docslib) show only
+ * their covers and contents in the text that can be read. The 1.9E LVL row has no standard table to
+ * check against (each maker publishes its own): it stays flagged, and its note tells the builder to
+ * confirm with the supplier's published values.
  */
 
 export const SUPPLIER_NOTE = "typical values — confirm with the supplier's published values";

@@ -6,7 +6,10 @@
  * The editions differ in the basis of snow. ASCE 7-16 (and IRC 2021 and earlier) maps ground snow
  * on the allowable-stress basis: S enters the ASD combinations at full value (D + S,
  * D + 0.75L + 0.75S) and the LRFD ones at 1.6S leading, 0.5S as a companion. ASCE 7-22 maps
- * strength-level ground snow: 0.7S in ASD, 1.0S leading and 0.3S (× 0.5) as a companion in LRFD.
+ * strength-level ground snow: 0.7S in ASD (§2.4.1 combinations 3a, 4a, 6a as STRUCTURE magazine's
+ * "ASCE 7-22 Flat Roof Snow Load versus Minimum Snow Load" excerpts them), 1.0S leading in LRFD
+ * (φRn = 1.2D + 1.0S, STRUCTURE magazine, February 2022, "Ground Snow Loads for ASCE 7-22"). The LRFD
+ * companion factor on S in 7-22 could not be read in any published copy: see lrfdCombinations.
  */
 import type { Combination, LoadCase, NamedCombination } from "../types";
 import { LOAD_CASES } from "../types";
@@ -105,19 +108,28 @@ export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: L
  * ASCE 7 §2.3.1 basic combinations for strength design (LRFD), combinations 1–5 without E.
  * ASCE 7-16: 1.4D; 1.2D+1.6L+0.5(Lr or S or R); 1.2D+1.6(Lr or S or R)+(L or 0.5W);
  * 1.2D+1.0W+L+0.5(Lr or S or R); 0.9D+1.0W (as reproduced on public pages of the 2016 text).
- * ASCE 7-22: snow is strength level, 1.0S leading and 0.5(0.3S) as the companion (from memory of
- * the 2022 edition).
+ * ASCE 7-22: snow is strength level, 1.0S leading (checked, see the module comment). The companion
+ * factor on S in combinations 2 and 4 is from memory — verify: the two readings remembered are
+ * 0.5(Lr or 0.3S or R), i.e. 0.15S, and 0.3S on its own; the larger, 0.3S, is used (the old 0.5S on a
+ * service-level S is about 0.3 times a strength-level S, since the strength-level map is about 1.6 times
+ * the old one). See LRFD_SNOW_COMPANION_22.
  */
+/**
+ * Factor on S as a companion load in ASCE 7-22 §2.3.1 combinations 2 and 4: from memory — verify (no
+ * published copy of those two combinations was found); 0.3, the larger of the two remembered readings.
+ */
+export const LRFD_SNOW_COMPANION_22 = 0.3;
+
 export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: LoadStandard = DEFAULT_LOAD_STANDARD): NamedCombination[] {
   const raw: { terms: Term[]; needs: LoadCase[] }[] = [];
   const v22 = standard === "ASCE 7-22";
   const companions: { t: Term; c: LoadCase }[] = [
     { t: T("Lr", 0.5), c: "Lr" },
-    { t: T("S", v22 ? 0.15 : 0.5), c: "S" },
+    { t: T("S", v22 ? LRFD_SNOW_COMPANION_22 : 0.5), c: "S" },
   ];
   // (1) 1.4D
   raw.push({ terms: [T("D", 1.4)], needs: [] });
-  // (2) 1.2D + 1.6L + 0.5(Lr or 0.3S or R)
+  // (2) 1.2D + 1.6L + 0.5(Lr or S or R) [7-16]; 0.3S as the snow companion [7-22, see above]
   raw.push({ terms: [T("D", 1.2), T("L", 1.6)], needs: ["L"] });
   for (const r of companions) raw.push({ terms: [T("D", 1.2), T("L", 1.6), r.t], needs: [r.c] });
   // (3) 1.2D + 1.6(Lr or S or R) + (L or 0.5W) [7-16]; 1.2D + 1.6(Lr or R) + (L or 0.5W) and 1.2D + 1.0S + (L or 0.5W) [7-22]
@@ -125,7 +137,7 @@ export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: 
     raw.push({ terms: [T("D", 1.2), lead, T("L", 1)], needs: [lead.c] });
     raw.push({ terms: [T("D", 1.2), lead, T("W", 0.5)], needs: [lead.c, "W"] });
   }
-  // (4) 1.2D + 1.0W + L + 0.5(Lr or 0.3S or R)
+  // (4) 1.2D + 1.0W + L + 0.5(Lr or S or R) [7-16]; 0.3S as the snow companion [7-22]
   raw.push({ terms: [T("D", 1.2), T("W", 1), T("L", 1)], needs: ["W"] });
   for (const r of companions) raw.push({ terms: [T("D", 1.2), T("W", 1), T("L", 1), r.t], needs: ["W", r.c] });
   // (5) 0.9D + 1.0W
