@@ -309,7 +309,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
     a.push(
-      "glulam: the table's Fb (tension zone stressed in tension) is used for every moment; where the member hogs over a support or an overhang, confirm Fbx− with the supplier",
+      "glulam: Fbx+ (tension zone stressed in tension) for moment that sags, Fbx− for moment that hogs over a support or on an overhang (the table's values, from memory — confirm both with the supplier)",
     );
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);

@@ -19,14 +19,17 @@ import { commitVersion, type CommitResult } from "./write";
 
 export const CITED_UPDATE_NOTE = "Cited material tables: each row names its table, edition and where it was checked";
 
-/** The note of the version that carries the Table 4D Douglas Fir-Larch sources checked against published copies. */
+/** The note of the version that carries the Table 4D Douglas Fir-Larch sources checked against published copies and the lower 24F-V4 Fbx−. */
 export const TIMBER_SOURCES_NOTE =
-  "Cited material tables: NDS Supplement 2018 Table 4D Douglas Fir-Larch beams and stringers checked against published copies (values unchanged, sources renewed)";
+  "Cited material tables: NDS Supplement 2018 Table 4D Douglas Fir-Larch beams and stringers checked against published copies; glulam 24F-V4 Fbx− 1,450 psi (its stress class value, the lower reading)";
 
 /** The earlier starter's values that the cited tables correct: [table, row key, column, earlier value]. */
 export const PREVIOUS_STARTER_VALUES: [TableKey, string, string, string][] = [
   // NDS Supplement 2018 Table 4A prints 1,250 psi; the first starter tables held 1,150
   ["sawn-values", "Spruce-Pine-Fir|Select Structural|dimension|all", "Fb_psi", "1150"],
+  // NDS Supplement 2018 Table 5A: published copies give 24F-V4 Fbx− as 1,850 (the layup) or 1,450 (its
+  // stress class 24F-1.8E); the lower is used now that Fbx− is checked; the earlier starter held 1,850
+  ["engineered", "Glulam 24F-V4 DF", "FbNeg_psi", "1850"],
 ];
 
 function numbersOf(key: TableKey, row: unknown): Record<string, string> {
