@@ -69,7 +69,9 @@ const SCL_SOURCE =
 const SCL_SOURCE_UNCHECKED = "typical values for this E grade — confirm with the supplier; from memory — verify against the supplier's published values";
 const T5A = "NDS Supplement 2018, Table 5A; from memory — verify against the printed table (open-source copies disagree on Fbx−)";
 const T5A_V4 =
-  "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex checked against an open-source published copy (a 24F-V4 DF roof-beam module); Fbx− (the lower reading, 1,450) and Ex min from memory — verify against the printed table";
+  "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against three open-source published copies (Python, TypeScript, Zig); Fbx− not settled (1,850 or 1,450, the lower used): from memory — verify against the printed table";
+const T5A_18E =
+  "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against an open-source published copy (a Zig glulam table); Fbx− 1,450 held where that copy gives 2,400 (balanced): from memory — verify";
 
 export const ENGINEERED: EngineeredProduct[] = [
   {
@@ -118,13 +120,15 @@ export const ENGINEERED: EngineeredProduct[] = [
     source: SCL_SOURCE,
   },
   {
-    // Table 5A, 24F-V4 Douglas Fir-Larch, bending about x-x: Fbx+ 2400, Fc⊥x 650, Fvx 265, Ex 1.8 × 10⁶
-    // psi, as an open-source published copy gives them (a roof-beam module quoting "24F-V4 DF, NDS
-    // Supplement Table 5A": Fb 2400, Fv 265, Fc⊥ 650, E 1,800,000; exact-string search, repository not
-    // named); Ex min 0.95 × 10⁶ from memory. Unbalanced: Fbx− applies where the member hogs (over
-    // supports, on cantilevers). The copies disagree on Fbx− (1,850 psi for the 24F-V4 layup, 1,450 psi for
-    // its stress class 24F-1.8E); the lower, 1,450, is used until a printed table settles it (the first
-    // starter tables held 1,850; see PREVIOUS_STARTER_VALUES in db/cited-update.ts).
+    // Table 5A, 24F-V4 Douglas Fir-Larch, bending about x-x: Fbx+ 2400, Fc⊥x 650, Fvx 265, Ex 1.8 × 10⁶,
+    // Ex min 0.95 × 10⁶ psi, as open-source published copies give them (exact-string search, repositories
+    // not named): a Python roof-beam module ("24F-V4 DF, NDS Supplement Table 5A": 2400, 265, 650,
+    // 1,800,000), a TypeScript GLULAM table ("24F-V4 DF/DF (unbalanced)": 2400, 265, 650, 1,800,000,
+    // Ex_min 950,000) and a Zig glulam table ("NDS Supplement Table 5A/5B": the same five). Unbalanced:
+    // Fbx− applies where the member hogs (over supports, on cantilevers). The copies disagree on Fbx−
+    // (TypeScript 1,850, Zig 1,450 — the value of its stress class 24F-1.8E); the lower is used until a
+    // printed table settles it (the first starter tables held 1,850; see PREVIOUS_STARTER_VALUES in
+    // db/cited-update.ts).
     name: "Glulam 24F-V4 DF",
     kind: "glulam",
     Fb: 2400,
@@ -143,7 +147,8 @@ export const ENGINEERED: EngineeredProduct[] = [
   {
     // Table 5A, 24F-1.8E: Fbx+ 2400, Fbx− 1450 (the table's unbalanced figure; many stock beams
     // are balanced and carry 2400 both ways — take that only from the supplier's literature),
-    // Fc⊥x 650, Fvx 265 (western species), Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory).
+    // Fc⊥x 650, Fvx 265 (western species), Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi. The Zig glulam table
+    // (exact-string search, repository not named) agrees on all but Fbx−, which it gives balanced (2400).
     // x = 10 (western species) is kept for the volume factor, the larger reduction.
     name: "Glulam 24F-1.8E",
     kind: "glulam",
@@ -158,7 +163,7 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: GLULAM_WESTERN_DEPTHS,
     density: 35,
     note: SUPPLIER_NOTE,
-    source: T5A,
+    source: T5A_18E,
   },
   {
     // Table 5B-type layup combination 24F-V3, Southern Pine, bending about x-x: Fbx+ 2400, Fbx− 1950,
@@ -194,6 +199,6 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: GLULAM_FRAMING_DEPTHS,
     density: 35,
     note: SUPPLIER_NOTE,
-    source: T5A,
+    source: T5A_18E,
   },
 ];

@@ -8,8 +8,8 @@
  * D + 0.75L + 0.75S) and the LRFD ones at 1.6S leading, 0.5S as a companion. ASCE 7-22 maps
  * strength-level ground snow: 0.7S in ASD (§2.4.1 combinations 3a, 4a, 6a as STRUCTURE magazine's
  * "ASCE 7-22 Flat Roof Snow Load versus Minimum Snow Load" excerpts them), 1.0S leading in LRFD
- * (φRn = 1.2D + 1.0S, STRUCTURE magazine, February 2022, "Ground Snow Loads for ASCE 7-22"). The LRFD
- * companion factor on S in 7-22 could not be read in any published copy: see lrfdCombinations.
+ * (φRn = 1.2D + 1.0S, STRUCTURE magazine, February 2022, "Ground Snow Loads for ASCE 7-22") and 0.3S
+ * as the companion: see lrfdCombinations.
  */
 import type { Combination, LoadCase, NamedCombination } from "../types";
 import { LOAD_CASES } from "../types";
@@ -104,21 +104,19 @@ export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: L
   return build(raw, cases);
 }
 
+/** Factor on S as a companion load in ASCE 7-22 §2.3.1 combinations 2 and 4 (see lrfdCombinations). */
+export const LRFD_SNOW_COMPANION_22 = 0.3;
+
 /**
  * ASCE 7 §2.3.1 basic combinations for strength design (LRFD), combinations 1–5 without E.
  * ASCE 7-16: 1.4D; 1.2D+1.6L+0.5(Lr or S or R); 1.2D+1.6(Lr or S or R)+(L or 0.5W);
  * 1.2D+1.0W+L+0.5(Lr or S or R); 0.9D+1.0W (as reproduced on public pages of the 2016 text).
- * ASCE 7-22: snow is strength level, 1.0S leading (checked, see the module comment). The companion
- * factor on S in combinations 2 and 4 is from memory — verify: the two readings remembered are
- * 0.5(Lr or 0.3S or R), i.e. 0.15S, and 0.3S on its own; the larger, 0.3S, is used (the old 0.5S on a
- * service-level S is about 0.3 times a strength-level S, since the strength-level map is about 1.6 times
- * the old one). See LRFD_SNOW_COMPANION_22.
+ * ASCE 7-22: snow is strength level, 1.0S leading (checked, see the module comment) and 0.3S as the
+ * companion in combinations 2 and 4, as an open-source published copy of the 2022 strength combinations
+ * lists them ("2a-2: 1.2D + 1.6L + 0.3S", "3a-3: 1.2D + 1.0S + L", "4a-2: 1.2D + 1.0W + L + 0.3S", beside
+ * the tornado terms WT that are new in the 2022 edition; exact-string search, repository not named). The
+ * other reading remembered, 0.5(0.3S) = 0.15S, is smaller; 0.3S is the safe one either way.
  */
-/**
- * Factor on S as a companion load in ASCE 7-22 §2.3.1 combinations 2 and 4: from memory — verify (no
- * published copy of those two combinations was found); 0.3, the larger of the two remembered readings.
- */
-export const LRFD_SNOW_COMPANION_22 = 0.3;
 
 export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: LoadStandard = DEFAULT_LOAD_STANDARD): NamedCombination[] {
   const raw: { terms: Term[]; needs: LoadCase[] }[] = [];

@@ -269,7 +269,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     ? ""
     : std === "ASCE 7-22"
       ? lrfd
-        ? `, snow at 1.0S leading (strength-level map) and ${LRFD_SNOW_COMPANION_22}S as a companion (the companion factor from memory — verify)`
+        ? `, snow at 1.0S leading and ${LRFD_SNOW_COMPANION_22}S as a companion (strength-level map)`
         : ", snow as 0.7S (strength-level map)"
       : lrfd
         ? ", snow at 1.6S leading, 0.5S as a companion (allowable-stress map)"
