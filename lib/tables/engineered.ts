@@ -67,9 +67,10 @@ const GLULAM_FRAMING_DEPTHS = [9.25, 11.25, 11.875, 14, 16, 18];
 const SCL_SOURCE =
   "typical values for this E grade — confirm with the supplier; Fb, Fv, Fc⊥, E checked against one maker's published 2.0E values (qsaad/stroogle EngineeredSpecies.js)";
 const SCL_SOURCE_UNCHECKED = "typical values for this E grade — confirm with the supplier; from memory — verify against the supplier's published values";
-const T5A = "NDS Supplement 2018, Table 5A; from memory — verify against the printed table (open-source copies disagree on Fbx−)";
 const T5A_V4 =
   "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against three open-source published copies (Python, TypeScript, Zig); Fbx− not settled (1,850 or 1,450, the lower used): from memory — verify against the printed table";
+const T5A_V3 =
+  "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against two open-source published copies (a Kotlin WoodPropertyService, a Python glulam table); Fbx− from memory — verify against the printed table";
 const T5A_18E =
   "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against an open-source published copy (a Zig glulam table); Fbx− 1,450 held where that copy gives 2,400 (balanced): from memory — verify";
 
@@ -166,8 +167,10 @@ export const ENGINEERED: EngineeredProduct[] = [
     source: T5A_18E,
   },
   {
-    // Table 5B-type layup combination 24F-V3, Southern Pine, bending about x-x: Fbx+ 2400, Fbx− 1950,
-    // Fc⊥x 740, Fvx 300, Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory). Unbalanced. x = 20 in the
+    // Table 5A layup combination 24F-V3, Southern Pine, bending about x-x: Fbx+ 2400, Fbx− 1950,
+    // Fc⊥x 740, Fvx 300, Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi. Fbx+, Fvx, Fc⊥x and Ex agree with a Kotlin
+    // WoodPropertyService ("24F-V3 1.8E SP/SP": 2400, 300, 740, 1.8 × 10⁶) and a Python glulam table
+    // (the same four and Ex min 0.95 × 10⁶); no copy gives Fbx− (from memory). Unbalanced. x = 20 in the
     // volume factor (NDS 2018 §5.3.6), laminations 1-3/8 in.
     name: "Glulam 24F-V3 SP",
     kind: "glulam",
@@ -182,7 +185,7 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: GLULAM_SOUTHERN_DEPTHS,
     density: 36,
     note: SUPPLIER_NOTE,
-    source: T5A,
+    source: T5A_V3,
   },
   {
     // The same combination in framing widths (3-1/2 and 5-1/2 in) and lumber depths.

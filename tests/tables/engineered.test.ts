@@ -38,14 +38,18 @@ describe("engineered rows", () => {
     { copy: "TypeScript GLULAM table", name: "Glulam 24F-V4 DF", Fb: 2400, Fv: 265, FcPerp: 650, E: 1_800_000, Emin: 950_000, FbNeg: 1850 },
     { copy: "Zig glulam table", name: "Glulam 24F-V4 DF", Fb: 2400, Fv: 265, FcPerp: 650, E: 1_800_000, Emin: 950_000, FbNeg: 1450 },
     { copy: "Zig glulam table", name: "Glulam 24F-1.8E", Fb: 2400, Fv: 265, FcPerp: 650, E: 1_800_000, Emin: 950_000, FbNeg: 2400 },
+    // - a Kotlin WoodPropertyService, "24F-V3 1.8E SP/SP": bending 2400, shear 300, compressionPerp 740, E 1.8 × 10⁶;
+    // - a Python glulam table, "24F-V3": Fb 2400, Fv 300, Fc_perp 740, E 1.8 msi, E_min 0.95 msi.
+    { copy: "Kotlin WoodPropertyService", name: "Glulam 24F-V3 SP", Fb: 2400, Fv: 300, FcPerp: 740, E: 1_800_000 },
+    { copy: "Python glulam table", name: "Glulam 24F-V3 SP", Fb: 2400, Fv: 300, FcPerp: 740, E: 1_800_000, Emin: 950_000 },
   ];
   test.each(COPIES)("$name: Fbx+, Fvx, Fc⊥x, Ex, Ex min against the $copy", (c) => {
     const p = findEngineered(T, c.name);
     expect([p.Fb, p.Fv, p.FcPerp, p.E]).toEqual([c.Fb, c.Fv, c.FcPerp, c.E]);
     if (c.Emin !== undefined) expect(p.Emin).toBe(c.Emin);
     // Fbx−: the copies disagree; the row holds no more than the lowest of them for its combination
-    const lowest = Math.min(...COPIES.filter((o) => o.name === c.name && o.FbNeg !== undefined).map((o) => o.FbNeg!), 1450);
-    expect(p.FbNeg).toBeLessThanOrEqual(lowest);
+    const printed = COPIES.filter((o) => o.name === c.name && o.FbNeg !== undefined).map((o) => o.FbNeg!);
+    if (printed.length > 0) expect(p.FbNeg).toBeLessThanOrEqual(Math.min(...printed));
     expect(p.source).toMatch(/checked against/);
     expect(p.source).toMatch(/from memory — verify/);
   });
