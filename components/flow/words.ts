@@ -13,6 +13,7 @@ const TITLES: Record<string, string> = {
   "web-compactness": "Web compactness",
   "bending-crippling": "Bending with web crippling",
   "bending-shear": "Bending with shear",
+  "flange-roll": "Flange roll (distortional buckling, AISI S100-16 §F4)",
   "thickness-scope": "Steel thickness outside the checked range",
 };
 

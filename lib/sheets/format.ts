@@ -17,6 +17,7 @@ const CHECK_WORDS: Record<string, string> = {
   "web-compactness": "web compactness",
   "bending-crippling": "bending with web crippling",
   "bending-shear": "bending with shear",
+  "flange-roll": "flange roll (distortional buckling, AISI S100-16 §F4)",
   "thickness-scope": "steel thickness outside the checked range",
 };
 

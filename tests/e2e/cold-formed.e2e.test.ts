@@ -47,6 +47,11 @@ describe("a steel floor framed with C-joists", () => {
           .waitFor();
         expect(await detail.getByText(/Eq\. G5-1/).count()).toBeGreaterThan(0);
         await screenshot(`flow-cfs-5-member-check-${viewport}`, { fullPage: false });
+        // flange roll (AISI S100-16 §F4) is its own row, with the flange and the restraint taken in its note
+        const roll = detail.getByText(/Flange roll \(distortional buckling, AISI S100-16 §F4\)/);
+        await roll.first().scrollIntoViewIfNeeded();
+        expect(await detail.getByText(/top flange in compression \(sheathing not credited: kφ = 0\)/).count()).toBeGreaterThan(0);
+        await screenshot(`flow-cfs-5-flange-roll-${viewport}`, { fullPage: false });
         expect(consoleErrors).toEqual([]);
       }
     },

@@ -459,3 +459,133 @@ export function momentGradientCb(Mmax: number, MA: number, MB: number, MC: numbe
   if (m === 0) return 1;
   return (12.5 * m) / (2.5 * m + 3 * Math.abs(MA) + 4 * Math.abs(MB) + 3 * Math.abs(MC));
 }
+
+// ---------------------------------------------------------------------------------------------------
+// §F4: distortional buckling of a lipped C-section in bending (the compression flange and its lip
+// rotating about the flange-web corner), with the elastic moment Mcrd by the closed-form method of
+// Appendix 2 §2.3.3.3 (C- and Z-sections). Checked, equation by equation, against the published copy in
+// runtosolve/AISIS100.jl (src/v16.jl: table23131, app23331 to app23336, f411).
+
+/** Geometric properties of the compression flange and lip, Table 2.3.1.3-1 (simple lip at 90°), from centreline widths b and d, in. */
+export interface DistortionalFlange {
+  Af: number;
+  Jf: number;
+  Ixf: number;
+  Iyf: number;
+  Ixyf: number;
+  Cwf: number;
+  xof: number;
+  hxf: number;
+  yof: number;
+}
+
+/** Table 2.3.1.3-1 (C-section, lip at 90°): the flange-and-lip properties from centreline flange width b and lip length d, in. */
+export function distortionalFlangeProperties(b: number, d: number, t: number): DistortionalFlange {
+  const Af = (b + d) * t; // Table 2.3.1.3-1 Af
+  const Jf = (b * t ** 3) / 3 + (d * t ** 3) / 3; // Table 2.3.1.3-1 Jf
+  const Ixf = (t * (t * t * b * b + 4 * b * d ** 3 + t * t * b * d + d ** 4)) / (12 * (b + d)); // Table 2.3.1.3-1 Ixf
+  const Iyf = (t * (b ** 4 + 4 * d * b ** 3)) / (12 * (b + d)); // Table 2.3.1.3-1 Iyf
+  const Ixyf = (t * b * b * d * d) / (4 * (b + d)); // Table 2.3.1.3-1 Ixyf
+  const xof = (b * b) / (2 * (b + d)); // Table 2.3.1.3-1 xof
+  const hxf = -(b * b + 2 * d * b) / (2 * (b + d)); // Table 2.3.1.3-1 hxf
+  const yof = -(d * d) / (2 * (b + d)); // Table 2.3.1.3-1 yof = hyf
+  return { Af, Jf, Ixf, Iyf, Ixyf, Cwf: 0, xof, hxf, yof };
+}
+
+/** Critical unrestrained half-wavelength of distortional buckling in bending, Appendix 2 Eq. 2.3.3.3-4 (Lcrd), in; ho = out-to-out web depth. */
+export function distortionalLcrd(f: DistortionalFlange, ho: number, t: number, mu = POISSON): number {
+  const e = f.xof - f.hxf;
+  const flange = f.Ixf * e * e + f.Cwf - ((f.Ixyf * f.Ixyf) / f.Iyf) * e * e;
+  return (((4 * Math.PI ** 4 * ho * (1 - mu * mu)) / t ** 3) * flange + (Math.PI ** 4 * ho ** 4) / 720) ** 0.25; // Eq. 2.3.3.3-4
+}
+
+/** Elastic rotational stiffness of the flange, Appendix 2 Eq. 2.3.1.3-3 (kφfe), kip-in/rad/in. */
+export function kPhiFe(f: DistortionalFlange, L: number, E = E_CFS_KSI, G = G_CFS_KSI): number {
+  const e = f.xof - f.hxf;
+  return (Math.PI / L) ** 4 * (E * f.Ixf * e * e + E * f.Cwf - E * ((f.Ixyf * f.Ixyf) / f.Iyf) * e * e) + (Math.PI / L) ** 2 * G * f.Jf; // Eq. 2.3.1.3-3
+}
+
+/** Elastic rotational stiffness of the web in bending, Appendix 2 Eq. 2.3.3.3-5 (kφwe), kip-in/rad/in. */
+export function kPhiWeBending(ho: number, t: number, L: number, E = E_CFS_KSI, mu = POISSON): number {
+  return ((E * t ** 3) / (12 * (1 - mu * mu))) * (3 / ho + (Math.PI / L) ** 2 * ((19 * ho) / 60) + (Math.PI / L) ** 4 * (ho ** 3 / 240)); // Eq. 2.3.3.3-5
+}
+
+/** Geometric rotational stiffness of the flange (divided by the stress), Appendix 2 Eq. 2.3.1.3-5 (k̃φfg), in². */
+export function kPhiFgTilde(f: DistortionalFlange, L: number): number {
+  const e = f.xof - f.hxf;
+  const r = f.Ixyf / f.Iyf;
+  return (Math.PI / L) ** 2 * (f.Af * (e * e * r * r - 2 * f.yof * e * r + f.hxf * f.hxf + f.yof * f.yof) + f.Ixf + f.Iyf); // Eq. 2.3.1.3-5
+}
+
+/** Geometric rotational stiffness of the web in bending (divided by the stress), Appendix 2 Eq. 2.3.3.3-6 (k̃φwg), ξweb = (f1 − f2)/f1, in². */
+export function kPhiWgTildeBending(ho: number, t: number, L: number, xiWeb: number): number {
+  const a = L / ho;
+  const num = (45360 * (1 - xiWeb) + 62160) * a * a + 448 * Math.PI ** 2 + (1 / (a * a)) * (53 + 3 * (1 - xiWeb)) * Math.PI ** 4;
+  const den = Math.PI ** 4 + 28 * Math.PI ** 2 * a * a + 420 * a ** 4;
+  return ((ho * t * Math.PI ** 2) / 13440) * (num / den); // Eq. 2.3.3.3-6
+}
+
+/** Moment gradient factor of distortional buckling, Appendix 2 Eq. 2.3.3.3-3: 1 + 0.4(L/Lm)^0.7(1 + M1/M2)^0.7, 1.0 to 1.3 (M1/M2 < 0 in single curvature). */
+export function distortionalBeta(L: number, Lm: number, M1overM2: number): number {
+  return Math.min(1.3, Math.max(1, 1 + 0.4 * (L / Lm) ** 0.7 * Math.max(0, 1 + M1overM2) ** 0.7)); // Eq. 2.3.3.3-3
+}
+
+export interface DistortionalInput {
+  /** distance between discrete restraints of the compression flange against distortional buckling, in (Infinity: none) */
+  Lm: number;
+  /** rotational stiffness from restraining elements at the flange-web corner, kip-in/rad/in (0: unrestrained) */
+  kPhi: number;
+  /** moment gradient factor, 1.0 to 1.3 (1.0 is always permitted) */
+  beta: number;
+}
+
+export interface DistortionalResult {
+  /** the critical unrestrained half-wavelength and the length used L = min(Lcrd, Lm), in */
+  Lcrd: number;
+  L: number;
+  /** elastic distortional buckling stress, ksi, and moment Mcrd = Sf Fcrd, kip-in */
+  Fcrd: number;
+  Mcrd: number;
+  /** yield moment Sfy Fy, kip-in */
+  My: number;
+  lambdaD: number;
+  /** nominal flexural strength for distortional buckling, kip-in */
+  Mnd: number;
+}
+
+/** Nominal flexural strength for distortional buckling, §F4.1 Eq. F4.1-1 (λd ≤ 0.673: My) and F4.1-2, λd = √(My/Mcrd), kip-in. */
+export function nominalMnd(My: number, Mcrd: number): { Mnd: number; lambdaD: number } {
+  const lambdaD = Math.sqrt(My / Mcrd); // Eq. F4.1-3
+  if (lambdaD <= 0.673) return { Mnd: My, lambdaD }; // Eq. F4.1-1
+  const r = Math.sqrt(Mcrd / My);
+  return { Mnd: (1 - 0.22 * r) * r * My, lambdaD }; // Eq. F4.1-2
+}
+
+/**
+ * Distortional buckling of one lipped C-section bent about its x axis (web symmetric about the neutral
+ * axis: ξweb = 2), AISI S100-16 §F4.1 with Mcrd by Appendix 2 §2.3.3.3: Fcrd = β(kφfe + kφwe + kφ)/(k̃φfg + k̃φwg)
+ * (Eq. 2.3.3.3-2), Mcrd = Sf Fcrd (Eq. 2.3.3.3-1), Sf the gross section modulus to the compression fibre.
+ * null for a section without lips (the provision covers flanges with edge stiffeners).
+ */
+export function distortionalStrength(
+  s: CfsDimensions,
+  Fy: number,
+  input: DistortionalInput,
+  g: GrossProperties = grossProperties(s),
+): DistortionalResult | null {
+  if (s.style !== "S" || s.lip <= 0) return null;
+  const { t } = s;
+  const b = s.B - t; // centreline flange width (out-to-out less t/2 at each side)
+  const d = s.lip - t / 2; // centreline lip length
+  const ho = s.D; // out-to-out web depth
+  const f = distortionalFlangeProperties(b, d, t);
+  const Lcrd = distortionalLcrd(f, ho, t);
+  const L = Math.min(Lcrd, input.Lm > 0 ? input.Lm : Infinity); // §2.3.3.3: L = min(Lcrd, Lm)
+  const xiWeb = 2; // §2.3.3.3 ξweb = (f1 − f2)/f1, f2 = −f1 for a section symmetric about its bending axis
+  const Fcrd = (input.beta * (kPhiFe(f, L) + kPhiWeBending(ho, t, L) + input.kPhi)) / (kPhiFgTilde(f, L) + kPhiWgTildeBending(ho, t, L, xiWeb)); // Eq. 2.3.3.3-2
+  const Sf = g.Sx;
+  const Mcrd = Sf * Fcrd; // Eq. 2.3.3.3-1
+  const My = Sf * Fy; // §F4.1 My = Sfy Fy
+  const { Mnd, lambdaD } = nominalMnd(My, Mcrd);
+  return { Lcrd, L, Fcrd, Mcrd, My, lambdaD, Mnd };
+}

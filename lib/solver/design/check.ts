@@ -112,6 +112,7 @@ const CHECK_WORDS: Record<CheckName, string> = {
   "web-compactness": "web slenderness",
   "bending-crippling": "bending with web crippling",
   "bending-shear": "bending with shear",
+  "flange-roll": "flange roll (distortional buckling)",
   "thickness-scope": "steel thickness outside the checked range",
 };
 
@@ -321,7 +322,10 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     a.push(
       c.unbracedLengthFt > 0
         ? `compression flange braced at the supports and every ${c.unbracedLengthFt} ft: lateral-torsional buckling by AISI S100-16 §F2.1${member.assembly === "box" ? " (a box header is taken as stable between braces)" : ""}`
-        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting); distortional buckling (§F4) not checked separately",
+        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting)",
+    );
+    a.push(
+      `flange roll (distortional buckling, AISI S100-16 §F4.1 with Appendix 2 §2.3.3.3) checked for the top flange under sagging moment and the bottom flange where the member hogs, with no rotational restraint credited from sheathing (kφ = 0) and β = 1.0${c.unbracedLengthFt > 0 ? `; braces every ${c.unbracedLengthFt} ft taken as restraints of both flanges` : "; no bridging or blocking credited (L = Lcrd)"}${member.pieces > 1 ? "; each C-section of the header taken alone" : ""}`,
     );
     a.push(
       `web crippling at each support and point load by AISI S100-16 §G5 (flanges screwed to the support, bearing ${input.bearingIn} in); bearing stiffeners: ${member.stiffeners === true ? "at every support, as given" : member.stiffeners === false ? "none, as given" : "added only where the web needs one"} (33 mil C-shape or track, IRC 2021 R505.3.4)`,

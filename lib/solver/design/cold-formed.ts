@@ -9,7 +9,9 @@
  *                  two-flange, end or interior); where it fails, or the web is too slender for it, a
  *                  bearing stiffener (Pn = 0.7(Pwc + Ae Fy)) and the answer says "add a bearing stiffener"
  *   combined       bending and web crippling on an unreinforced web (§H3 Eq. H3-1)
- *   deflection     E = 29,500 ksi with the effective I at the service moment (AISI S100-16 §L: effective
+ *   flange roll    distortional buckling of the compression flange (§F4.1, Mcrd by Appendix 2 §2.3.3.3):
+                 see flangeRollCheck for which flange, Lm, kφ and β
+  deflection     E = 29,500 ksi with the effective I at the service moment (AISI S100-16 §L: effective
  *                  section at the stress the service moment causes)
  *
  * Two C-sections are taken as two single-web members sharing the load equally (a conservative reading
@@ -21,6 +23,7 @@ import {
   bearingStiffenerPn,
   bendingShearRatio,
   bendingCripplingRatio,
+  distortionalStrength,
   E_CFS_KSI,
   effectiveAreaUniform,
   effectiveSection,
@@ -40,6 +43,7 @@ import {
   webCripplingPn,
   type CfsDimensions,
   type CripplingCase,
+  type DistortionalResult,
   type GrossProperties,
 } from "../aisi/aisi-s100-16";
 import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common";
@@ -243,6 +247,8 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
     }
   }
   if (bend) checks.push(bend);
+  const roll = flangeRollCheck(m, ctx, sw);
+  if (roll) checks.push(roll);
 
   // Shear, each web (§G2.1).
   const shearN = nominalShearVn(d.h, d.dims.t, d.Fy);
@@ -454,4 +460,74 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
       pieces: n,
     },
   };
+}
+
+/**
+ * Flange roll: distortional buckling of the compression flange and its lip (AISI S100-16 §F4.1, Mcrd by
+ * the closed-form method of Appendix 2 §2.3.3.3), each bending segment and strength combination, for
+ * the flange each sign of moment puts in compression:
+ *
+ *  - sagging moment: the top flange. Sheathing screwed to it does brace it, but AISI S100-16 gives no
+ *    rotational stiffness kφ for sheathing (the provision that does is in another AISI framing standard,
+ *    not adopted here), so kφ = 0: the conservative reading.
+ *  - hogging moment (over an interior support, along an overhang): the bottom flange, unbraced except at
+ *    bridging or blocking; kφ = 0.
+ *
+ * Lm, the distance between discrete restraints of the compression flange, is the member's unbraced length
+ * where one is given (the segment's length), and none (L = Lcrd) where the member is given as continuously
+ * braced: sheathing is not a discrete restraint and bridging at an unknown spacing is not credited.
+ * β (the moment gradient factor of Eq. 2.3.3.3-3) is taken as 1.0, which the standard permits.
+ *
+ * Headers of two C-sections: each C is checked as a single lipped C carrying half the moment. Back to back,
+ * each C's flanges and lips are free as a single C's are; boxed toe to toe, the lips face each other with
+ * nothing here holding them (no track is modelled), so no restraint is credited either: the conservative
+ * reading in both.
+ */
+export function flangeRollCheck(m: CfsMember, ctx: DesignContext, sw: number): NamedCheck | null {
+  const s = m.section;
+  const d = sectionData(s);
+  const n = m.pieces;
+  const lrfd = ctx.method === "lrfd";
+  const { model } = ctx;
+  const byLm = new Map<number, DistortionalResult | null>();
+  const strength = (Lm: number) => {
+    if (!byLm.has(Lm)) byLm.set(Lm, distortionalStrength(d.dims, d.Fy, { Lm, kPhi: 0, beta: 1 }, d.g));
+    return byLm.get(Lm) ?? null;
+  };
+  let out: NamedCheck | null = null;
+  for (const seg of model.segments) {
+    const Lm = seg.luFt > 0 ? seg.luFt * 12 : Infinity;
+    const r = strength(Lm);
+    if (!r) return null; // a section without lips: §F4 is for flanges with edge stiffeners
+    const Mnd = r.Mnd * n; // kip-in, the member
+    const capacity = ((lrfd ? PHI_FLEXURE * Mnd : Mnd / OMEGA_FLEXURE) * KIP) / 12; // lb-ft; §F4.1 Ωb = 1.67, φb = 0.90
+    for (const env of ctx.strength) {
+      const k = env.fD * sw;
+      for (let i = seg.i0; i <= seg.i1; i++) {
+        const sag = env.Mmax[i] + k * model.selfWeight.M[i];
+        const hog = -(env.Mmin[i] + k * model.selfWeight.M[i]);
+        for (const [M, top] of [
+          [sag, true],
+          [hog, false],
+        ] as const) {
+          if (!(M > 0)) continue;
+          const ratio = M / capacity;
+          if (out && ratio <= out.ratio) continue;
+          out = {
+            name: "flange-roll",
+            demand: round(M, 0),
+            capacity: round(capacity, 0),
+            unit: "lb-ft",
+            ratio,
+            combination: env.name,
+            x: round(model.xs[i], 3),
+            note: ctx.notes
+              ? `${top ? "top flange in compression (sheathing not credited: kφ = 0)" : "bottom flange in compression where the joist hogs (over a support or an overhang; kφ = 0)"}, ${Lm === Infinity ? "no discrete brace credited (L = Lcrd)" : `braced every ${round(seg.luFt, 2)} ft (Lm = ${round(Lm, 1)} in)`}: ${lrfd ? "φb Mnd" : "Mnd/Ωb"}, Mnd = ${round(Mnd, 1)} kip-in (AISI S100-16 §F4.1, λd = ${round(r.lambdaD, 3)}, My = ${round(r.My * n, 1)} kip-in), Mcrd = ${round(r.Mcrd * n, 1)} kip-in (Appendix 2 §2.3.3.3, Lcrd = ${round(r.Lcrd, 1)} in, L = ${round(r.L, 1)} in, β = 1.0)${n > 1 ? ` (${n} C-sections, each taken alone)` : ""}`
+              : "",
+          };
+        }
+      }
+    }
+  }
+  return out;
 }

@@ -19,6 +19,7 @@ export type CheckName =
   | "web-compactness"
   | "bending-crippling"
   | "bending-shear"
+  | "flange-roll"
   | "thickness-scope";
 
 export interface DesignCheck {

@@ -288,8 +288,7 @@ const SINGLE: [string, number, number, number][] = [
   ["1200S162-97", 40, 24, ftIn(22, 2)],
 ];
 
-function spanOf(section: string, live: number, spacing: number, spans: 1 | 2, tables: MaterialTables): number {
-  const L = 20;
+function spanInput(section: string, live: number, spacing: number, spans: 1 | 2, L: number) {
   const supports =
     spans === 1
       ? [
@@ -301,32 +300,42 @@ function spanOf(section: string, live: number, spacing: number, spans: 1 | 2, ta
           { x: L, type: "roller" },
           { x: 2 * L, type: "roller" },
         ];
-  const r = largestSpan(
-    {
-      kind: "floor-joist",
-      member: { material: "cfs", section, stiffeners: true },
-      lengthFt: spans * L,
-      supports,
-      spacingIn: spacing,
-      bearingIn: 1.5,
-      loads: [
-        { type: "area", case: "D", psf: 10 },
-        { type: "area", case: "L", psf: live },
-      ],
-      limits: { live: 480, total: 240 },
-      minLengthFt: 4,
-      maxLengthFt: 100,
-      conditions: { selfWeight: false, patternLiveLoad: spans === 1 },
-    },
-    tables,
-  );
+  return {
+    kind: "floor-joist",
+    member: { material: "cfs", section, stiffeners: true },
+    lengthFt: spans * L,
+    supports,
+    spacingIn: spacing,
+    bearingIn: 1.5,
+    loads: [
+      { type: "area", case: "D", psf: 10 },
+      { type: "area", case: "L", psf: live },
+    ],
+    limits: { live: 480, total: 240 },
+    conditions: { selfWeight: false, patternLiveLoad: spans === 1 },
+  };
+}
+
+function spanOf(section: string, live: number, spacing: number, spans: 1 | 2, tables: MaterialTables): number {
+  const r = largestSpan({ ...spanInput(section, live, spacing, spans, 20), minLengthFt: 4, maxLengthFt: 100 }, tables);
   return (r.largestSpan ?? 0) / spans;
 }
 
-describe("Prescriptive Method (1997) Table 5.3, single spans, 33 ksi: within 4 % (the spec editions differ)", () => {
+// The 1997 tables predate the distortional buckling provisions (added to AISI S100 in its 2007 edition):
+// where bending governs, flange roll (§F4, no restraint credited from sheathing) now gives shorter spans.
+// Each row is checked both ways: never more than 4 % longer than the table, and where it is more than 4 %
+// shorter, every check but flange roll still passes at 96 % of the table's span (the old agreement), so the
+// difference is the new check alone; and no more than 10 % shorter.
+describe("Prescriptive Method (1997) Table 5.3, single spans, 33 ksi: within 4 %, or shorter by flange roll (§F4) alone", () => {
   test.each(SINGLE)("%s, %s psf live, %s in o.c.: %s ft", (section, live, spacing, published) => {
     const ours = spanOf(section, live, spacing, 1, T33);
-    expect(Math.abs(ours / published - 1)).toBeLessThan(0.04);
+    expect(ours / published).toBeLessThan(1.04);
+    expect(ours / published).toBeGreaterThan(0.9);
+    if (ours / published < 0.96) {
+      const r = checkMember(spanInput(section, live, spacing, 1, published * 0.96), T33);
+      expect(r.governing).toBe("flange-roll");
+      for (const c of r.checks) if (c.name !== "flange-roll") expect(c.ratio).toBeLessThanOrEqual(1);
+    }
   });
 });
 
