@@ -9,7 +9,12 @@ import type { EngineeredProduct, EngineeredSizeRule } from "./types";
  * them (qsaad/stroogle data/wood/EngineeredSpecies.js); the 1.9E LVL row was not checked. Glulam
  * values are the NDS Supplement (2018 edition) Table 5A reference values for the named combination;
  * the open-source published copies found disagree on Fbx− (1,450 vs 1,850 psi for 24F-V4; balanced or
- * not for 24F-1.8E), so the glulam rows stay from memory and flagged.
+ * not for 24F-1.8E), so the glulam rows stay from memory and flagged. Searched again for a readable
+ * Table 5A (or APA's Glulam Design Specification / EWS Y117 tables) by the combination and its values
+ * (24F-V4 2400/1850/650/265/1.8; 24F-1.8E 2400/1450): the copies found (studylib, docslib) show only
+ * their covers and contents in the text that can be read. The 1.9E LVL row has no standard table to
+ * check against (each maker publishes its own): it stays flagged, and its note tells the builder to
+ * confirm with the supplier's published values.
  */
 
 export const SUPPLIER_NOTE = "typical values — confirm with the supplier's published values";
@@ -62,7 +67,12 @@ const GLULAM_FRAMING_DEPTHS = [9.25, 11.25, 11.875, 14, 16, 18];
 const SCL_SOURCE =
   "typical values for this E grade — confirm with the supplier; Fb, Fv, Fc⊥, E checked against one maker's published 2.0E values (qsaad/stroogle EngineeredSpecies.js)";
 const SCL_SOURCE_UNCHECKED = "typical values for this E grade — confirm with the supplier; from memory — verify against the supplier's published values";
-const T5A = "NDS Supplement 2018, Table 5A; from memory — verify against the printed table (open-source copies disagree on Fbx−)";
+const T5A_V4 =
+  "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against three open-source published copies (Python, TypeScript, Zig); Fbx− not settled (1,850 or 1,450, the lower used): from memory — verify against the printed table";
+const T5A_V3 =
+  "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against two open-source published copies (a Kotlin WoodPropertyService, a Python glulam table); Fbx− from memory — verify against the printed table";
+const T5A_18E =
+  "NDS Supplement 2018, Table 5A; Fbx+, Fvx, Fc⊥x, Ex, Ex min checked against an open-source published copy (a Zig glulam table); Fbx− 1,450 held where that copy gives 2,400 (balanced): from memory — verify";
 
 export const ENGINEERED: EngineeredProduct[] = [
   {
@@ -111,13 +121,19 @@ export const ENGINEERED: EngineeredProduct[] = [
     source: SCL_SOURCE,
   },
   {
-    // Table 5A, 24F-V4 Douglas Fir-Larch, bending about x-x: Fbx+ 2400, Fbx− 1850, Fc⊥x 650,
-    // Fvx 265, Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory). Unbalanced: the − value
-    // applies over supports and on cantilevers.
+    // Table 5A, 24F-V4 Douglas Fir-Larch, bending about x-x: Fbx+ 2400, Fc⊥x 650, Fvx 265, Ex 1.8 × 10⁶,
+    // Ex min 0.95 × 10⁶ psi, as open-source published copies give them (exact-string search, repositories
+    // not named): a Python roof-beam module ("24F-V4 DF, NDS Supplement Table 5A": 2400, 265, 650,
+    // 1,800,000), a TypeScript GLULAM table ("24F-V4 DF/DF (unbalanced)": 2400, 265, 650, 1,800,000,
+    // Ex_min 950,000) and a Zig glulam table ("NDS Supplement Table 5A/5B": the same five). Unbalanced:
+    // Fbx− applies where the member hogs (over supports, on cantilevers). The copies disagree on Fbx−
+    // (TypeScript 1,850, Zig 1,450 — the value of its stress class 24F-1.8E); the lower is used until a
+    // printed table settles it (the first starter tables held 1,850; see PREVIOUS_STARTER_VALUES in
+    // db/cited-update.ts).
     name: "Glulam 24F-V4 DF",
     kind: "glulam",
     Fb: 2400,
-    FbNeg: 1850,
+    FbNeg: 1450,
     Fv: 265,
     FcPerp: 650,
     E: 1_800_000,
@@ -127,12 +143,13 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: GLULAM_WESTERN_DEPTHS,
     density: 35,
     note: SUPPLIER_NOTE,
-    source: T5A,
+    source: T5A_V4,
   },
   {
     // Table 5A, 24F-1.8E: Fbx+ 2400, Fbx− 1450 (the table's unbalanced figure; many stock beams
     // are balanced and carry 2400 both ways — take that only from the supplier's literature),
-    // Fc⊥x 650, Fvx 265 (western species), Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory).
+    // Fc⊥x 650, Fvx 265 (western species), Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi. The Zig glulam table
+    // (exact-string search, repository not named) agrees on all but Fbx−, which it gives balanced (2400).
     // x = 10 (western species) is kept for the volume factor, the larger reduction.
     name: "Glulam 24F-1.8E",
     kind: "glulam",
@@ -147,11 +164,13 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: GLULAM_WESTERN_DEPTHS,
     density: 35,
     note: SUPPLIER_NOTE,
-    source: T5A,
+    source: T5A_18E,
   },
   {
-    // Table 5B-type layup combination 24F-V3, Southern Pine, bending about x-x: Fbx+ 2400, Fbx− 1950,
-    // Fc⊥x 740, Fvx 300, Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi (from memory). Unbalanced. x = 20 in the
+    // Table 5A layup combination 24F-V3, Southern Pine, bending about x-x: Fbx+ 2400, Fbx− 1950,
+    // Fc⊥x 740, Fvx 300, Ex 1.8 × 10⁶, Ex min 0.95 × 10⁶ psi. Fbx+, Fvx, Fc⊥x and Ex agree with a Kotlin
+    // WoodPropertyService ("24F-V3 1.8E SP/SP": 2400, 300, 740, 1.8 × 10⁶) and a Python glulam table
+    // (the same four and Ex min 0.95 × 10⁶); no copy gives Fbx− (from memory). Unbalanced. x = 20 in the
     // volume factor (NDS 2018 §5.3.6), laminations 1-3/8 in.
     name: "Glulam 24F-V3 SP",
     kind: "glulam",
@@ -166,7 +185,7 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: GLULAM_SOUTHERN_DEPTHS,
     density: 36,
     note: SUPPLIER_NOTE,
-    source: T5A,
+    source: T5A_V3,
   },
   {
     // The same combination in framing widths (3-1/2 and 5-1/2 in) and lumber depths.
@@ -183,6 +202,6 @@ export const ENGINEERED: EngineeredProduct[] = [
     depths: GLULAM_FRAMING_DEPTHS,
     density: 35,
     note: SUPPLIER_NOTE,
-    source: T5A,
+    source: T5A_18E,
   },
 ];

@@ -1,6 +1,9 @@
 // ASCE/SEI 7-22 basic load combinations (§2.4.1 ASD, §2.3.1 LRFD) and envelopes with pattern live load.
+// ASCE 7-22 §2.4.1 snow terms as STRUCTURE magazine excerpts them ("ASCE 7-22 Flat Roof Snow Load versus
+// Minimum Snow Load", structuremag.org): 3a. D + (Lr or 0.7S or R); 4a. D + 0.75L + 0.75(Lr or 0.7S or R);
+// 6a. D + 0.75L + 0.75(0.6W) + 0.75(Lr or 0.7S or R).
 import { describe, expect, test } from "vitest";
-import { asdCombinations, lrfdCombinations } from "@/lib/solver/asce7/combinations";
+import { asdCombinations, LRFD_SNOW_COMPANION_22, lrfdCombinations } from "@/lib/solver/asce7/combinations";
 import { analyzeBeam } from "@/lib/solver/beam";
 import { envelope } from "@/lib/solver/envelope";
 import type { BeamInput, LoadCase } from "@/lib/solver/types";
@@ -69,13 +72,29 @@ describe("ASCE 7-16 §2.3.1 LRFD basic combinations", () => {
   });
 });
 
-describe("ASCE 7-22 §2.3.1 LRFD basic combinations (from memory of the 2022 edition)", () => {
+// ASCE 7-22 §2.3.1: strength-level snow leads at 1.0S, φRn = 1.2D + 1.0S (STRUCTURE magazine, February 2022,
+// "Ground Snow Loads for ASCE 7-22", Eqn. 1). Companion 0.3S as an open-source published copy of the 2022
+// strength combinations lists them (exact-string search, repository not named): "2a-2: 1.2D + 1.6L + 0.3S",
+// "3a-3: 1.2D + 1.0S + L", "3a-4: 1.2D + 1.0S + 0.5W", "4a-2: 1.2D + 1.0W + L + 0.3S".
+describe("ASCE 7-22 §2.3.1 LRFD basic combinations", () => {
   test("D and L: 1.4D and 1.2D + 1.6L", () => {
     expect(lrfdCombinations(["D", "L"]).map((c) => c.factors)).toEqual([{ D: 1.4 }, { D: 1.2, L: 1.6 }]);
   });
-  test("D, L, S: snow is strength level (1.0S leading, 0.5·0.3S companion)", () => {
+  test("D, L, S: snow is strength level, 1.0S leading and 0.3S as a companion, as published", () => {
     const got = lrfdCombinations(["D", "L", "S"], "ASCE 7-22");
-    expect(got.map((c) => c.name)).toEqual(["1.4D", "1.2D+1.6L", "1.2D+1.6L+0.15S", "1.2D+S+L"]);
+    expect(got.map((c) => c.name)).toEqual(["1.4D", "1.2D+1.6L", "1.2D+1.6L+0.3S", "1.2D+S+L"]);
+    const lead = got.find((c) => c.name === "1.2D+S+L")!;
+    expect(lead.factors).toEqual({ D: 1.2, S: 1, L: 1 });
+    expect(LRFD_SNOW_COMPANION_22).toBe(0.3);
+  });
+  test("D, L, S, W: 1.2D + 1.0S + 0.5W and 1.2D + 1.0W + L + 0.3S are among them, as published", () => {
+    const got = lrfdCombinations(["D", "L", "S", "W"], "ASCE 7-22").map((c) => c.factors);
+    expect(got).toContainEqual({ D: 1.2, S: 1, W: 0.5 });
+    expect(got).toContainEqual({ D: 1.2, W: 1, L: 1, S: 0.3 });
+    expect(got).toContainEqual({ D: 1.2, L: 1.6, S: 0.3 });
+  });
+  test("D, S alone: 1.2D + 1.0S, the published strength-level equation", () => {
+    expect(lrfdCombinations(["D", "S"], "ASCE 7-22").map((c) => c.factors)).toContainEqual({ D: 1.2, S: 1 });
   });
   test("wind uplift combination 0.9D + 1.0W is present when W is", () => {
     expect(lrfdCombinations(["D", "W"]).map((c) => c.name)).toContain("0.9D+W");

@@ -6,7 +6,10 @@
  * The editions differ in the basis of snow. ASCE 7-16 (and IRC 2021 and earlier) maps ground snow
  * on the allowable-stress basis: S enters the ASD combinations at full value (D + S,
  * D + 0.75L + 0.75S) and the LRFD ones at 1.6S leading, 0.5S as a companion. ASCE 7-22 maps
- * strength-level ground snow: 0.7S in ASD, 1.0S leading and 0.3S (× 0.5) as a companion in LRFD.
+ * strength-level ground snow: 0.7S in ASD (§2.4.1 combinations 3a, 4a, 6a as STRUCTURE magazine's
+ * "ASCE 7-22 Flat Roof Snow Load versus Minimum Snow Load" excerpts them), 1.0S leading in LRFD
+ * (φRn = 1.2D + 1.0S, STRUCTURE magazine, February 2022, "Ground Snow Loads for ASCE 7-22") and 0.3S
+ * as the companion: see lrfdCombinations.
  */
 import type { Combination, LoadCase, NamedCombination } from "../types";
 import { LOAD_CASES } from "../types";
@@ -101,23 +104,30 @@ export function asdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: L
   return build(raw, cases);
 }
 
+/** Factor on S as a companion load in ASCE 7-22 §2.3.1 combinations 2 and 4 (see lrfdCombinations). */
+export const LRFD_SNOW_COMPANION_22 = 0.3;
+
 /**
  * ASCE 7 §2.3.1 basic combinations for strength design (LRFD), combinations 1–5 without E.
  * ASCE 7-16: 1.4D; 1.2D+1.6L+0.5(Lr or S or R); 1.2D+1.6(Lr or S or R)+(L or 0.5W);
  * 1.2D+1.0W+L+0.5(Lr or S or R); 0.9D+1.0W (as reproduced on public pages of the 2016 text).
- * ASCE 7-22: snow is strength level, 1.0S leading and 0.5(0.3S) as the companion (from memory of
- * the 2022 edition).
+ * ASCE 7-22: snow is strength level, 1.0S leading (checked, see the module comment) and 0.3S as the
+ * companion in combinations 2 and 4, as an open-source published copy of the 2022 strength combinations
+ * lists them ("2a-2: 1.2D + 1.6L + 0.3S", "3a-3: 1.2D + 1.0S + L", "4a-2: 1.2D + 1.0W + L + 0.3S", beside
+ * the tornado terms WT that are new in the 2022 edition; exact-string search, repository not named). The
+ * other reading remembered, 0.5(0.3S) = 0.15S, is smaller; 0.3S is the safe one either way.
  */
+
 export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: LoadStandard = DEFAULT_LOAD_STANDARD): NamedCombination[] {
   const raw: { terms: Term[]; needs: LoadCase[] }[] = [];
   const v22 = standard === "ASCE 7-22";
   const companions: { t: Term; c: LoadCase }[] = [
     { t: T("Lr", 0.5), c: "Lr" },
-    { t: T("S", v22 ? 0.15 : 0.5), c: "S" },
+    { t: T("S", v22 ? LRFD_SNOW_COMPANION_22 : 0.5), c: "S" },
   ];
   // (1) 1.4D
   raw.push({ terms: [T("D", 1.4)], needs: [] });
-  // (2) 1.2D + 1.6L + 0.5(Lr or 0.3S or R)
+  // (2) 1.2D + 1.6L + 0.5(Lr or S or R) [7-16]; 0.3S as the snow companion [7-22, see above]
   raw.push({ terms: [T("D", 1.2), T("L", 1.6)], needs: ["L"] });
   for (const r of companions) raw.push({ terms: [T("D", 1.2), T("L", 1.6), r.t], needs: [r.c] });
   // (3) 1.2D + 1.6(Lr or S or R) + (L or 0.5W) [7-16]; 1.2D + 1.6(Lr or R) + (L or 0.5W) and 1.2D + 1.0S + (L or 0.5W) [7-22]
@@ -125,7 +135,7 @@ export function lrfdCombinations(cases: LoadCase[] = [...LOAD_CASES], standard: 
     raw.push({ terms: [T("D", 1.2), lead, T("L", 1)], needs: [lead.c] });
     raw.push({ terms: [T("D", 1.2), lead, T("W", 0.5)], needs: [lead.c, "W"] });
   }
-  // (4) 1.2D + 1.0W + L + 0.5(Lr or 0.3S or R)
+  // (4) 1.2D + 1.0W + L + 0.5(Lr or S or R) [7-16]; 0.3S as the snow companion [7-22]
   raw.push({ terms: [T("D", 1.2), T("W", 1), T("L", 1)], needs: ["W"] });
   for (const r of companions) raw.push({ terms: [T("D", 1.2), T("W", 1), T("L", 1), r.t], needs: ["W", r.c] });
   // (5) 0.9D + 1.0W

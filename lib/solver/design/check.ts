@@ -8,6 +8,7 @@ import { CAUTION, NOT_CHECKED, notCheckedFor } from "@/lib/caution";
 import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
 import type { LoadStandard } from "../asce7/standard";
+import { LRFD_SNOW_COMPANION_22 } from "../asce7/combinations";
 import { zodIssues } from "@/lib/zod-issues";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
 import { buildContext, type DesignContext } from "./context";
@@ -264,8 +265,18 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   const a: string[] = [];
   const c = input.conditions;
   const std = input.loadStandard;
+  const lrfd = input.method === "lrfd";
+  const snowWords = !ctx.model.cases.includes("S")
+    ? ""
+    : std === "ASCE 7-22"
+      ? lrfd
+        ? `, snow at 1.0S leading and ${LRFD_SNOW_COMPANION_22}S as a companion (strength-level map)`
+        : ", snow as 0.7S (strength-level map)"
+      : lrfd
+        ? ", snow at 1.6S leading, 0.5S as a companion (allowable-stress map)"
+        : ", snow at full value, D + S (allowable-stress map)";
   a.push(
-    `load combinations: ${std} ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}${ctx.model.cases.includes("S") ? (std === "ASCE 7-22" ? ", snow as 0.7S (strength-level map)" : ", snow at full value, D + S (allowable-stress map)") : ""}; deflection and reactions at service level (§2.4.1)`,
+    `load combinations: ${std} ${lrfd ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}${snowWords}; deflection and reactions at service level (§2.4.1)`,
   );
   const ro = roughOpeningOf(input);
   if (ro) a.push(ro.note);
@@ -299,7 +310,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
     a.push(
-      "glulam: the table's Fb (tension zone stressed in tension) is used for every moment; where the member hogs over a support or an overhang, confirm Fbx− with the supplier",
+      "glulam: Fbx+ (tension zone stressed in tension) for moment that sags, Fbx− for moment that hogs over a support or on an overhang (the table's values, from memory — confirm both with the supplier)",
     );
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);

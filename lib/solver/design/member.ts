@@ -52,6 +52,8 @@ export interface WoodMember {
   CF: number;
   /** glulam volume factor exponent x (NDS 2018 Eq. 5.3-1), absent otherwise */
   volumeX?: number;
+  /** glulam Fbx− (tension zone stressed in compression: moment that hogs over a support or on an overhang), psi; absent: Fb both ways */
+  FbNeg?: number;
   wetTable: WetServiceTable | "scl";
   /** dimension lumber 2–4 in thick: Ci and Cr apply */
   dimensionLumber: boolean;
@@ -218,6 +220,7 @@ export function resolveMemberUnchecked(spec: MemberSpec, tables: MaterialTables)
     Emin: product.Emin,
     CF,
     volumeX: product.sizeRule.type === "volume" ? product.sizeRule.x : undefined,
+    ...(product.FbNeg !== undefined ? { FbNeg: product.FbNeg } : {}),
     wetTable: product.kind === "glulam" ? "glulam" : "scl",
     dimensionLumber: false,
     nominalThickness: b,

@@ -120,6 +120,20 @@ export function resolveCr(
   return { Cr, basis: m.plies === 2 ? "Cr = 1.0: two plies are not three members (NDS 2018 §4.3.9)" : "Cr = 1.0 (not a repetitive member)" };
 }
 
+/**
+ * The sagging and the hogging parts of a moment envelope with the member's own weight (k × unit) added,
+ * each on its own: sag = max(M+, 0), hog = min(M−, 0) at every station.
+ */
+function signedMoments(hi: Float64Array, lo: Float64Array, unit: Float64Array, k: number): { sag: Float64Array; hog: Float64Array } {
+  const sag = new Float64Array(hi.length);
+  const hog = new Float64Array(lo.length);
+  for (let i = 0; i < hi.length; i++) {
+    sag[i] = Math.max(hi[i] + k * unit[i], 0);
+    hog[i] = Math.min(lo[i] + k * unit[i], 0);
+  }
+  return { sag, hog };
+}
+
 export interface MemberEvaluation {
   checks: NamedCheck[];
   reactions: SupportReaction[];
@@ -150,23 +164,37 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   // Bending, per unbraced segment and combination (NDS 2018 §3.3).
   // Fb* without CD (applied per combination), NDS 2018 §3.3.3.8
   const fbBase = referenceFbStar(m.Fb, { CD: 1, CM: CM.Fb, Ct: Ct.Fb, CF: m.CF, Ci: Ci.Fb, Cr }) * (lrfd ? FORMAT_CONVERSION_KF.Fb * RESISTANCE_PHI.Fb : 1);
-  let bestBend = { ratio: -1, fb: 0, FbPrime: 0, M: 0, x: 0, CD: 1, CL: 1, luFt: 0, combination: "" };
+  let bestBend = { ratio: -1, fb: 0, FbPrime: 0, M: 0, x: 0, CD: 1, CL: 1, luFt: 0, combination: "", hogging: false };
   let worstRB = 0;
+  // Unbalanced glulam (NDS Supplement 2018 Table 5A, Fbx− below Fbx+): moment that hogs (over a support,
+  // on an overhang) is checked against Fbx−, moment that sags against Fbx+, each with the same adjustments.
+  const negShare = m.FbNeg !== undefined && m.FbNeg < m.Fb ? m.FbNeg / m.Fb : null;
+  const sides = negShare === null ? null : ctx.strength.map((env) => signedMoments(env.Mmax, env.Mmin, model.selfWeight.M, env.fD * sw));
+  const zero = new Float64Array(xs.length);
   for (const seg of model.segments) {
     const luIn = seg.luFt * 12;
     const RB = luIn > 0 ? slendernessRatioRB(effectiveLengthLe(luIn, m.d), m.d, m.b) : 0;
     if (RB > worstRB) worstRB = RB;
     for (let e = 0; e < ctx.strength.length; e++) {
       const env = ctx.strength[e];
-      const p = peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, env.fD * sw, seg.i0, seg.i1);
-      const fb = (p.value * 12) / m.S;
       const CD = ctx.woodDuration[e];
       const FbStar = fbBase * CD;
       const CL = RB > 0 ? beamStabilityFactorCL(FbStar, criticalBucklingFbE(EminPrime, RB)) : 1.0;
       const stability = CV === null ? CL : Math.min(CL, CV);
       const FbPrime = FbStar * stability * Cfu;
-      const ratio = fb / FbPrime;
-      if (ratio > bestBend.ratio) bestBend = { ratio, fb, FbPrime, M: p.value, x: p.x, CD, CL, luFt: seg.luFt, combination: env.name };
+      const peaks =
+        sides === null || negShare === null
+          ? [{ p: peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, env.fD * sw, seg.i0, seg.i1), share: 1, hogging: false }]
+          : [
+              { p: peakAbs(xs, sides[e].sag, zero, zero, 0, seg.i0, seg.i1), share: 1, hogging: false },
+              { p: peakAbs(xs, zero, sides[e].hog, zero, 0, seg.i0, seg.i1), share: negShare, hogging: true },
+            ];
+      for (const { p, share, hogging } of peaks) {
+        const fb = (p.value * 12) / m.S;
+        const ratio = fb / (FbPrime * share);
+        if (ratio > bestBend.ratio)
+          bestBend = { ratio, fb, FbPrime: FbPrime * share, M: p.value, x: p.x, CD, CL, luFt: seg.luFt, combination: env.name, hogging };
+      }
     }
   }
   const bendCD = bestBend.CD;
@@ -183,7 +211,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       x: round(bestBend.x, 3),
       note: !ctx.notes
         ? ""
-        : `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
+        : `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³${negShare === null ? "" : bestBend.hogging ? ` (moment that hogs: Fbx− ${m.FbNeg} psi)` : ` (moment that sags: Fbx+ ${m.Fb} psi)`}; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
     });
   }
   if (worstRB > 0) {

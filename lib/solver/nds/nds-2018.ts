@@ -288,8 +288,13 @@ export function columnStabilityFactorCp(FcStarPsi: number, FcEPsi: number, c = 0
 export const MAX_COLUMN_SLENDERNESS = 50;
 
 /**
- * Built-up column factor Kf, NDS 2018 §15.3.2: 0.6 for nailed, 0.75 for bolted laminations (multiplies
- * Cp where the laminations may slip). From memory of the clause's text: applied here in both directions,
- * the reading that never gives the larger capacity.
+ * Built-up column factor Kf, NDS 2018 §15.3.2 (Eq. 15.3-1): 0.6 for nailed, 0.75 for bolted laminations
+ * (multiplies Cp where the laminations may slip). Checked against a published description of the clause:
+ * Simpson Strong-Tie's engineering blog "Designing Built-Up Columns" (seblog.strongtie.com, September
+ * 2015, the NDS of that time; the same words in a published "Wood Column Introduction" copy on scribd):
+ * "The NDS assigns nailed built-up intermediate columns a 60% efficiency and bolted built-up intermediate
+ * columns a 75% efficiency". That the 2018 edition keeps the factors is from memory. The blog gives the
+ * efficiency as 1.0 about the strong axis and 0.60–0.75 about the weak one; Spanlark applies Kf in both
+ * directions, the reading that never gives the larger capacity, and takes nailed (0.6) for a stud column.
  */
 export const BUILT_UP_KF = { nailed: 0.6, bolted: 0.75 } as const;

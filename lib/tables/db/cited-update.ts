@@ -19,10 +19,17 @@ import { commitVersion, type CommitResult } from "./write";
 
 export const CITED_UPDATE_NOTE = "Cited material tables: each row names its table, edition and where it was checked";
 
+/** The note of the version that carries the Table 4D Douglas Fir-Larch sources checked against published copies and the lower 24F-V4 Fbx−. */
+export const TIMBER_SOURCES_NOTE =
+  "Cited material tables: NDS Supplement 2018 Table 4D Douglas Fir-Larch beams and stringers checked against published copies; glulam 24F-V4 Fbx− 1,450 psi (its stress class value, the lower reading)";
+
 /** The earlier starter's values that the cited tables correct: [table, row key, column, earlier value]. */
 export const PREVIOUS_STARTER_VALUES: [TableKey, string, string, string][] = [
   // NDS Supplement 2018 Table 4A prints 1,250 psi; the first starter tables held 1,150
   ["sawn-values", "Spruce-Pine-Fir|Select Structural|dimension|all", "Fb_psi", "1150"],
+  // NDS Supplement 2018 Table 5A: published copies give 24F-V4 Fbx− as 1,850 (the layup) or 1,450 (its
+  // stress class 24F-1.8E); the lower is used now that Fbx− is checked; the earlier starter held 1,850
+  ["engineered", "Glulam 24F-V4 DF", "FbNeg_psi", "1850"],
 ];
 
 function numbersOf(key: TableKey, row: unknown): Record<string, string> {
@@ -87,14 +94,14 @@ export function citedUpdate(current: TableRows, starter: TableRows): CitedUpdate
  * Publishes the cited update as a new version when the database holds versions and the update changes
  * anything; returns null when there is no version yet (the seeder then loads the cited tables as version 1).
  */
-export async function publishCitedUpdate(tables: MaterialTables = STARTER_TABLES): Promise<CommitResult | null> {
+export async function publishCitedUpdate(tables: MaterialTables = STARTER_TABLES, baseNote: string = CITED_UPDATE_NOTE): Promise<CommitResult | null> {
   const baseVersionId = await currentVersionId();
   if (!baseVersionId) return null;
   const current = await loadVersionRows(baseVersionId);
   if (!current) return null;
   const starter = tablesToRows(tables);
   const { kept } = citedUpdate(current, starter);
-  const note = kept.length > 0 ? `${CITED_UPDATE_NOTE}. Kept as an admin changed them: ${kept.join("; ")}` : CITED_UPDATE_NOTE;
+  const note = kept.length > 0 ? `${baseNote}. Kept as an admin changed them: ${kept.join("; ")}` : baseNote;
   // against the version just read: a change in between is a 409, not a silent overwrite
   return commitVersion({ source: "seed", note, actor: null, baseVersionId }, (now) => citedUpdate(now, starter).rows);
 }

@@ -45,6 +45,37 @@ describe("LVL, PSL and glulam headers and beams", () => {
     expect(r.checks.find((c) => c.name === "bending")?.capacity).toBeCloseTo(g.Fb * CV, 0);
   });
 
+  // NDS Supplement 2018 Table 5A: an unbalanced glulam carries Fbx− where the tension zone is in compression
+  // (moment that hogs over the support of an overhang). 5-1/8 x 12 24F-V4, 12 ft span and an 8 ft overhang,
+  // 15 + 40 psf over 7 ft: the hogging moment at the support, live load on the overhang, is w a²/2 by statics.
+  test("glulam overhang: the moment that hogs is checked against Fbx−, computed by hand", () => {
+    const g = findEngineered(STARTER_TABLES, "Glulam 24F-V4 DF");
+    expect(g.FbNeg).toBeLessThan(g.Fb);
+    const r = checkMember(
+      {
+        ...span(20),
+        supports: [
+          { x: 0, type: "pin" },
+          { x: 12, type: "roller" },
+        ],
+        member: { material: "engineered", product: "Glulam 24F-V4 DF", width: 5.125, depth: 12 },
+      },
+      STARTER_TABLES,
+    );
+    const w = 55 * 7; // plf, D + L
+    const Mhog = (w * 8 ** 2) / 2; // lb-ft at the support
+    const S = (5.125 * 12 ** 2) / 6;
+    const fb = (Mhog * 12) / S;
+    const bending = r.checks.find((c) => c.name === "bending");
+    expect(bending?.x).toBeCloseTo(12, 1);
+    expect(bending?.demand).toBeCloseTo(fb, 0);
+    // CD 1.0 (D + L), CV = 1 (no region longer than 21 ft at d = 12, b = 5-1/8), CL = 1 (braced)
+    expect(bending?.capacity).toBeCloseTo(g.FbNeg!, 0);
+    expect(bending?.ratio).toBeCloseTo(fb / g.FbNeg!, 3);
+    expect(bending?.ratio).toBeGreaterThan(fb / g.Fb + 0.1);
+    expect(r.assumptions.join(" ")).toMatch(/Fbx− for moment that hogs/);
+  });
+
   test("glulam braced only at the ends: the smaller of CL and CV is used, never both", () => {
     const r = checkMember(
       {

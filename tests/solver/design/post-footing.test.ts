@@ -2,7 +2,7 @@ import { describe, expect, test } from "vitest";
 import { DesignInputError } from "@/lib/solver/design";
 import { checkFooting, footingAreaFt2, requiredFootingAreaFt2, SOIL_CLASSES } from "@/lib/solver/design/footing";
 import { checkPost } from "@/lib/solver/design/post";
-import { columnStabilityFactorCp } from "@/lib/solver/nds/nds-2018";
+import { BUILT_UP_KF, columnStabilityFactorCp } from "@/lib/solver/nds/nds-2018";
 import { findSawnValues, STARTER_TABLES } from "@/lib/tables";
 
 /** NDS 2018 Eq. 3.7-1, written out here: Cp = (1 + a)/2c − √[((1 + a)/2c)² − a/c], a = FcE/Fc*. */
@@ -48,7 +48,13 @@ describe("a post in axial compression", () => {
     expect(tall.governing).toBe("slenderness");
   });
 
-  test("a nailed stud column takes Kf 0.6 (NDS 2018 §15.3.2, from memory) on Cp, about its thinner side (3 × 1-1/2 = 4-1/2 in)", () => {
+  // NDS §15.3.2 as a published description gives it (Simpson Strong-Tie engineering blog "Designing Built-Up
+  // Columns", seblog.strongtie.com, 2015): nailed built-up columns 60 % efficiency, bolted 75 % (Kf 0.6 / 0.75).
+  test("Kf: nailed 0.6, bolted 0.75, as the published description of §15.3.2 gives them", () => {
+    expect(BUILT_UP_KF).toEqual({ nailed: 0.6, bolted: 0.75 });
+  });
+
+  test("a nailed stud column takes Kf 0.6 (NDS 2018 §15.3.2) on Cp, about its thinner side (3 × 1-1/2 = 4-1/2 in)", () => {
     const studs = checkPost(
       { size: "2x6", plies: 3, species: "Douglas Fir-Larch", grade: "No.2", heightFt: 8, wet: false, loads: { D: 1000, L: 3000 } },
       STARTER_TABLES,
