@@ -15,6 +15,7 @@
  * Each member is worked out by the one design path (lib/solver/design: checkMember, sizeMember,
  * checkPost, checkFooting); nothing here computes a stress.
  */
+import { wetInEffect } from "@/lib/flow/conditions";
 import { checkRequest, sizeRequest } from "@/lib/flow/request";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { FlowState } from "@/lib/flow/state";
@@ -301,7 +302,7 @@ function postLoads(post: PathMember, bearers: readonly PathMember[], solved: Rea
       out.push({
         byCase: r.byCase,
         from: `${b.label} at ${formatFeetInches(r.x)}`,
-        above: width ? { ...width, wet: b.flowState?.wet ?? false, label: b.label } : null,
+        above: width ? { ...width, wet: b.flowState ? wetInEffect(b.flowState) : false, label: b.label } : null,
       });
     }
   }
