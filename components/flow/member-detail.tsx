@@ -174,6 +174,9 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
                   At {formatFeetInches(r.x)}: {fmt(r.maxDown)} lb down ({r.maxDownCombination})
                   {r.uplift > 0 ? `, ${fmt(r.uplift)} lb uplift (${r.upliftCombination})` : ""}; bearing needed {fmt(r.requiredBearing)} in of {fmt(r.bearing)}{" "}
                   in
+                  {r.studs
+                    ? ` (the wood under its ${fmt(r.studs.widthIn)} in bearing width needs ${fmt(r.studs.woodIn)} in, the steel ${fmt(r.studs.steelIn)} in)`
+                    : ""}
                   {r.jackStuds !== null ? `; ${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"}` : ""}
                 </li>
               ))}

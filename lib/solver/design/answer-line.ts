@@ -24,7 +24,7 @@ export interface AnswerAssembly {
 
 /** What a support needs, as the answer line reads it. */
 export interface SupportNeed {
-  /** 1-1/2 in jack studs under a member's end, null where they do not apply (interior support, steel) */
+  /** 1-1/2 in jack studs under a member's end, null where they do not apply (interior support, steel not in a stud wall) */
   jackStuds: number | null;
   /** bearing length the member needs here, in */
   requiredBearing: number;

@@ -22,6 +22,7 @@ import { E_STEEL_KSI } from "../aisc360/aisc360-16";
 import { answerLine, shortLabel } from "./answer-line";
 import { memberDiagrams, type MemberDiagrams } from "./diagrams";
 import type { CheckName, CombinationRef, DesignCheck, SupportReaction } from "./types";
+import { studBearingWords, studsUnderSteel, studWallFor } from "./studs-under-steel";
 import { evaluateWood, resolveCr, resolveIncised, type WoodFactors } from "./wood";
 
 export { CAUTION, NOT_CHECKED };
@@ -156,6 +157,7 @@ export function evaluateMember(member: DesignMember, ctx: DesignContext): Evalua
         : member.kind === "cfs"
           ? evaluateCfs(member, ctx)
           : evaluateWood(member, ctx);
+  if ((member.kind === "steel" || member.kind === "cfs") && ctx.studWall) r.reactions = studsUnderSteel(member, r.reactions, ctx, ctx.studWall);
   let governing: CheckName | null = null;
   let ratio = 0;
   for (const c of r.checks) {
@@ -184,9 +186,11 @@ export function asDesignError(err: unknown): unknown {
   return err;
 }
 
-export function contextFor(input: Omit<CheckInput, "member">): DesignContext {
+/** The shared context of a design input; with the tables, the stud wall a steel member bears on (jack studs under steel). */
+export function contextFor(input: Omit<CheckInput, "member">, tables?: MaterialTables): DesignContext {
   try {
-    return buildContext(input);
+    const ctx = buildContext(input);
+    return tables ? { ...ctx, studWall: studWallFor(input.kind, input.wallFraming, tables) } : ctx;
   } catch (err) {
     throw asDesignError(err);
   }
@@ -303,6 +307,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
   if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
+  if ((member.kind === "steel" || member.kind === "cfs") && ctx.studWall) a.push(studBearingWords(member, ctx.studWall, input.method === "lrfd"));
   if (member.kind === "cfs") {
     a.push(
       `cold-formed steel ${member.section.name}${member.pieces > 1 ? ` (${member.assembly === "box" ? "two C-sections boxed, flanges toe to toe" : "two C-sections back to back"}, each taken as a single web sharing the load equally)` : ""}: AISI S100-16 ${input.method === "lrfd" ? "LRFD" : "ASD"}, Fy ${member.section.Fy} ksi (33 ksi below 54 mil, 50 ksi at 54 mil and above: common practice; order it so), E = 29,500 ksi`,
@@ -340,7 +345,7 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
       },
     ]);
   }
-  return fullCheck(input, member, contextFor(input), tables);
+  return fullCheck(input, member, contextFor(input, tables), tables);
 }
 
 /** The whole check of one resolved member in a built context (notes on): what /api/check answers and /api/size gives its top members. */

@@ -221,7 +221,7 @@ const RANKERS: Record<SizeOutput["rank"], (a: SizeCandidateResult, b: SizeCandid
 export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   const input = parseWith<SizeInput>(sizeInputSchema, json);
   const specs = candidateSpecs(input.member, tables, input.spacingIn !== undefined);
-  const ctx: DesignContext = { ...contextFor(input), notes: false };
+  const ctx: DesignContext = { ...contextFor(input, tables), notes: false };
   const passing: SizeCandidateResult[] = [];
   const failing: SizeFailure[] = [];
   let checked = 0;
