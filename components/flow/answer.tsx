@@ -18,7 +18,8 @@ import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
 import { isNoConnection, useSize } from "./use-design";
 import { answerLineOf, answerWords, recheck, shownCandidate, tablesWords, type PhoneAnswer, type Recheck } from "@/lib/offline/answers";
-import { checkDetail, checkTitle } from "./words";
+import { checkTitle } from "@/lib/solver/design/check-words";
+import { checkDetail } from "./words";
 
 // the diagrams (d3) and the full check load with the answer, not with the flow's first screen
 const AnswerDiagrams = dynamic(() => import("./answer-diagrams").then((m) => m.AnswerDiagrams), {

@@ -8,7 +8,8 @@ import { formatFeetInches } from "@/lib/flow/length";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 import { citationOf } from "@/lib/tables/citations";
-import { checkDetail, checkTitle } from "./words";
+import { checkTitle } from "@/lib/solver/design/check-words";
+import { checkDetail } from "./words";
 
 export type MemberDetailProps = {
   open: boolean;

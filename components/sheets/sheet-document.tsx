@@ -4,7 +4,8 @@ import { RatioBar } from "@/components/ui/ratio-bar";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { byCaseWords, checkWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "@/lib/sheets/format";
+import { checkWords } from "@/lib/solver/design/check-words";
+import { byCaseWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "@/lib/sheets/format";
 import { sheetSources, type SheetMember, type SheetSnapshot } from "@/lib/sheets/snapshot";
 import { FROM_MEMORY } from "@/lib/tables/citations";
 

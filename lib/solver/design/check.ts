@@ -4,6 +4,7 @@
  */
 import type { MaterialTables } from "@/lib/tables/types";
 import { ratioPercent } from "./ratio-percent";
+import { checkWords } from "./check-words";
 import { CAUTION, NOT_CHECKED, notCheckedFor } from "@/lib/caution";
 import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
@@ -100,21 +101,6 @@ export interface Evaluation {
   pass: boolean;
 }
 
-const CHECK_WORDS: Record<CheckName, string> = {
-  bending: "bending",
-  shear: "shear",
-  "deflection-live": "live load deflection",
-  "deflection-total": "total load deflection",
-  bearing: "bearing",
-  stability: "lateral stability",
-  "web-yielding": "web yielding at a support",
-  "web-crippling": "web crippling at a support",
-  "web-compactness": "web slenderness",
-  "bending-crippling": "bending with web crippling",
-  "bending-shear": "bending with shear",
-  "thickness-scope": "steel thickness outside the checked range",
-};
-
 /** A ratio as a percentage (lib/solver/design/ratio-percent.ts): a pass never reads 100 % unless it is exactly at it, a failure never 100 % or less. */
 export function percent(ratio: number, pass: boolean): string {
   return ratioPercent(ratio, pass);
@@ -122,7 +108,7 @@ export function percent(ratio: number, pass: boolean): string {
 
 /** "OK 77% (bending)" or "Over 113% (shear)": the verdict with the largest ratio and the check it is in. */
 export function verdictWords(ev: { pass: boolean; ratio: number; governing: CheckName | null }): string {
-  return `${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${CHECK_WORDS[ev.governing]})` : ""}`;
+  return `${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${checkWords(ev.governing)})` : ""}`;
 }
 
 /**

@@ -7,19 +7,22 @@ export interface CombinationRef {
   factors: Combination;
 }
 
-export type CheckName =
-  | "bending"
-  | "shear"
-  | "deflection-live"
-  | "deflection-total"
-  | "bearing"
-  | "stability"
-  | "web-yielding"
-  | "web-crippling"
-  | "web-compactness"
-  | "bending-crippling"
-  | "bending-shear"
-  | "thickness-scope";
+/** Every check a member can carry, in the order a reader meets them (words for each: ./check-words.ts). */
+export const CHECK_NAMES = [
+  "bending",
+  "shear",
+  "deflection-live",
+  "deflection-total",
+  "bearing",
+  "stability",
+  "web-yielding",
+  "web-crippling",
+  "web-compactness",
+  "bending-crippling",
+  "bending-shear",
+  "thickness-scope",
+] as const;
+export type CheckName = (typeof CHECK_NAMES)[number];
 
 export interface DesignCheck {
   name: CheckName;
