@@ -19,7 +19,7 @@ import { wetInEffect } from "@/lib/flow/conditions";
 import { checkRequest, sizeRequest } from "@/lib/flow/request";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { FlowState } from "@/lib/flow/state";
-import { summarize, type CarriedLoadSummary, type MemberResultSummary, type SummaryReaction } from "@/lib/flow/summary";
+import { designSpecOf, summarize, type CarriedLoadSummary, type MemberResultSummary, type SummaryReaction } from "@/lib/flow/summary";
 import { checkMember, DesignInputError, sizeMember } from "@/lib/solver/design";
 import { checkFooting, FOOTING_SHAPES, type FootingShape } from "@/lib/solver/design/footing";
 import { KIND_LABELS, type JobMemberKind, type MemberKind } from "@/lib/solver/design/kinds";
@@ -294,7 +294,7 @@ function postLoads(post: PathMember, bearers: readonly PathMember[], solved: Rea
     const w = solved.get(b.id);
     const s = w?.summary;
     if (!s) continue;
-    const spec = w.chosen ?? s.spec;
+    const spec = w.chosen ?? designSpecOf(s);
     const width = spec ? widthOfSpec(spec, tables) : null;
     for (const j of bearingSupports({ ...b, resultSummary: s }, "post")) {
       const r = s.reactions[j];
@@ -405,7 +405,7 @@ function footingSummary(
   return {
     memberLabel: `${worst.answer}, on ${design.soilPsf.toLocaleString("en-US")} psf soil`,
     headline: `${count} × ${worst.answer} — ${pass ? "OK" : "Over"} ${Math.round(worst.ratio * 100)}%`,
-    spec: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "footing", plies: 1 },
+    spec: { material: "footing", shape: worst.shape, sizeIn: worst.sizeIn, thicknessIn: worst.thicknessIn, bottomDepthIn: worst.bottomDepthIn },
     pass,
     governing: "soil",
     ratio: worst.ratio,
