@@ -39,7 +39,7 @@ export interface AnswerLineInput {
   /** the member's full label, e.g. "3-ply 2x12 Douglas Fir-Larch No.2" */
   label: string;
   kind?: MemberKind;
-  /** joists and rafters: spacing on centre, in */
+  /** joists and rafters: spacing on center, in */
   spacingIn?: number;
   /** a beam in a stud wall (the input names the wall framing) */
   inStudWall?: boolean;

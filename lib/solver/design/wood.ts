@@ -116,7 +116,7 @@ export function resolveIncised(m: WoodMember, given: boolean | undefined, wet: b
 }
 
 /**
- * Cr (NDS 2018 §4.3.9) and why: false is honoured for every member; built-up members of 3 or more
+ * Cr (NDS 2018 §4.3.9) and why: false is honored for every member; built-up members of 3 or more
  * plies qualify by themselves (plies through-nailed); joists and rafters at 24 in or less qualify in a
  * repetitive system (said, or the floor-joist, deck-joist or rafter kind); two plies never by the built-up rule.
  */
@@ -346,7 +346,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
 }
 
 /**
- * Where the shear found at x is read: a point between a support's centre and d past its face stands
+ * Where the shear found at x is read: a point between a support's center and d past its face stands
  * for the section at d from the face (the loads of §3.4.3.1 leave nothing between), in ft.
  */
 function criticalSection(supports: { x: number }[], lengthFt: number, bearingIn: number, dIn: number, x: number): number {
