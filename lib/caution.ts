@@ -16,7 +16,7 @@ export const CAUTION =
 export const NOT_CHECKED: readonly string[] = [
   "Connections and hangers",
   "Fasteners: nails, screws, bolts and their spacing",
-  "Posts, studs, columns and footings, and the plates or walls under the bearing (bearing is checked on this member only). Posts and footings added to a job are checked for axial load and soil bearing only: not bending in the post, uplift, post bases and anchors, steel columns, or the concrete's own strength",
+  "Posts, studs, columns and footings, and the plates or walls under the bearing (bearing is checked on this member only; under a steel header in a stud wall the wood under its flanges is checked too). Posts and footings added to a job are checked for axial load and soil bearing only: not bending in the post, uplift, post bases and anchors, steel columns, or the concrete's own strength",
   "Lateral loads: wind and earthquake on the building, bracing and shear walls; wind on this member beyond the loads given",
   "Point loads on joists without blocking or a beam under them",
   "Notches, holes and cuts in the member",

@@ -26,7 +26,7 @@ export { CrewLink } from "./crew-link";
 export { JobSheet } from "./job-sheet";
 
 /**
- * Initialises every model on a Sequelize instance, then wires the associations — all in this one place.
+ * Initializes every model on a Sequelize instance, then wires the associations — all in this one place.
  * A new model: write models/<name>.ts with `init<Name>(sequelize)`, call it below, add its associations.
  */
 export function initModels(sequelize: Sequelize): void {

@@ -25,7 +25,7 @@ function icoWithPng(png: Buffer, size: number): Buffer {
   header.writeUInt8(size, 7);
   header.writeUInt8(0, 8); // no palette
   header.writeUInt8(0, 9);
-  header.writeUInt16LE(1, 10); // colour planes
+  header.writeUInt16LE(1, 10); // color planes
   header.writeUInt16LE(32, 12); // bits per pixel
   header.writeUInt32LE(png.length, 14);
   header.writeUInt32LE(22, 18); // the image starts after the header and the entry

@@ -41,17 +41,17 @@ export async function postJson<T>(url: string, body: unknown): Promise<PostResul
   if (res.ok) return { ok: true, status: res.status, data: data as T };
   const error = typeof data.error === "string" ? data.error : "something went wrong on our side; try again";
   const issues = Array.isArray(data.issues) ? (data.issues as FieldIssue[]) : [];
-  return { ok: false, status: res.status, error: capitalise(error), issues };
+  return { ok: false, status: res.status, error: capitalize(error), issues };
 }
 
 /** Field issues from the server as formik errors: { email: "…" }. */
 export function issuesToErrors(issues: FieldIssue[]): Record<string, string> {
   const errors: Record<string, string> = {};
-  for (const issue of issues) if (!errors[issue.path]) errors[issue.path] = capitalise(issue.message);
+  for (const issue of issues) if (!errors[issue.path]) errors[issue.path] = capitalize(issue.message);
   return errors;
 }
 
-export function capitalise(message: string): string {
+export function capitalize(message: string): string {
   return message ? message[0].toUpperCase() + message.slice(1) : message;
 }
 

@@ -1,4 +1,5 @@
 import type { ScheduleRow } from "@/lib/crew/schedule";
+import { TradeText } from "@/components/ui/trade-text";
 import { StatusBadge } from "@/components/ui/status-badge";
 
 export type CrewScheduleProps = {
@@ -21,12 +22,16 @@ export function CrewSchedule({ rows }: CrewScheduleProps) {
           <h2 className="text-xl font-bold text-ink">{row.label}</h2>
           {row.headline ? (
             <p className="mt-2 text-2xl leading-snug font-bold text-ink" data-testid="crew-headline">
-              {row.headline}
+              <TradeText text={row.headline} />
             </p>
           ) : (
             <p className="mt-2 text-lg font-bold text-caution-ink">Not sized yet: do not cut this one.</p>
           )}
-          {row.memberLabel ? <p className="text-ink-soft">{row.memberLabel}</p> : null}
+          {row.memberLabel ? (
+            <p className="text-ink-soft">
+              <TradeText text={row.memberLabel} />
+            </p>
+          ) : null}
           {row.change ? (
             <p className="mt-2 rounded-lg border-2 border-caution-ink/40 bg-caution-bg p-2 font-bold text-ink" data-testid="crew-change">
               ⚠ {row.change}
@@ -57,7 +62,9 @@ export function CrewSchedule({ rows }: CrewScheduleProps) {
           {row.facts.length > 0 ? (
             <ul className="mt-2 flex flex-col gap-1 text-ink" data-testid="crew-facts">
               {row.facts.map((f) => (
-                <li key={f}>{f}</li>
+                <li key={f}>
+                  <TradeText text={f} />
+                </li>
               ))}
             </ul>
           ) : null}
@@ -89,7 +96,9 @@ export function CrewSchedule({ rows }: CrewScheduleProps) {
                     <th scope="row" className="py-2 pr-2 font-bold">
                       {s.name}
                     </th>
-                    <td className="py-2 pr-2">{s.bearing}</td>
+                    <td className="py-2 pr-2">
+                      <TradeText text={s.bearing} />
+                    </td>
                     <td className="py-2 text-right font-mono whitespace-nowrap tabular-nums">{s.reaction}</td>
                   </tr>
                 ))}

@@ -10,7 +10,7 @@ export type BeamDiagramProps = {
   title: string;
   quantity: DiagramQuantity;
   segments: readonly DiagramSegment[];
-  /** labelled points (largest positive, largest negative…), computed by the solver from the polynomials */
+  /** labeled points (largest positive, largest negative…), computed by the solver from the polynomials */
   extremes: readonly DiagramExtreme[];
   /** the value's unit, e.g. "lb", "lb-ft", "in" */
   unit: string;
@@ -108,7 +108,7 @@ const GRID_PATH = [
 
 const defaultFormat = (v: number) => Math.round(v).toLocaleString("en-US");
 
-/** One exact diagram (shear, moment or deflection) on squared paper, with its extremes labelled. */
+/** One exact diagram (shear, moment or deflection) on squared paper, with its extremes labeled. */
 export function BeamDiagram({ title, quantity, segments, extremes, unit, supports, format = defaultFormat, subtitle, className }: BeamDiagramProps) {
   const lengthFt = segments.length > 0 ? segments[segments.length - 1].x1 : 1;
   const chain = diagramChain(

@@ -20,7 +20,7 @@ const H = 200;
 const BEAM_Y = 112;
 const BAND = 19;
 
-/** The loads on the member: line loads as bands stacked by case (each labelled), point loads as arrows, the supports and their reactions. */
+/** The loads on the member: line loads as bands stacked by case (each labeled), point loads as arrows, the supports and their reactions. */
 export function LoadDiagram({ title, lengthFt, supports, loads, reactions, subtitle, className }: LoadDiagramProps) {
   const x = scaleLinear()
     .domain([0, lengthFt])

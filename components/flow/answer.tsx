@@ -1,5 +1,6 @@
 "use client";
 
+import { TradeText } from "@/components/ui/trade-text";
 import dynamic from "next/dynamic";
 import { useEffect, useMemo, useState, type ReactNode } from "react";
 import { Caution } from "@/components/ui/caution";
@@ -18,7 +19,8 @@ import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
 import { isNoConnection, useSize } from "./use-design";
 import { answerLineOf, answerWords, recheck, shownCandidate, tablesWords, type PhoneAnswer, type Recheck } from "@/lib/offline/answers";
-import { checkDetail, checkTitle } from "./words";
+import { checkTitle } from "@/lib/solver/design/check-words";
+import { checkDetail } from "./words";
 
 // the diagrams (d3) and the full check load with the answer, not with the flow's first screen
 const AnswerDiagrams = dynamic(() => import("./answer-diagrams").then((m) => m.AnswerDiagrams), {
@@ -238,7 +240,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
               ) : null}
               <p className="text-sm font-bold tracking-wide text-graphite uppercase">Build</p>
               <p className="text-3xl leading-tight font-bold text-ink" data-testid="answer-headline">
-                {headline}
+                <TradeText text={headline} />
               </p>
               <p className="mt-2 flex flex-wrap items-center gap-2 text-ink-soft">
                 <StatusBadge status="pass" label={ratioVerdict(chosenCandidate.ratio).text} />
@@ -249,7 +251,9 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
               {chosenCheck ? (
                 <ul className="mt-3 flex flex-col gap-1 border-t-2 border-rule pt-2 text-ink" data-testid="answer-facts">
                   {answerFacts(chosenCheck).map((f) => (
-                    <li key={f}>{f}</li>
+                    <li key={f}>
+                      <TradeText text={f} />
+                    </li>
                   ))}
                 </ul>
               ) : null}
@@ -301,9 +305,13 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
                         </p>
                       ) : null}
                       <p>
-                        {studs && r.jackStuds !== null
-                          ? `${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"} (needs ${formatInches(r.requiredBearing)} of bearing)`
-                          : `Bearing: needs ${formatInches(r.requiredBearing)}, you have ${formatInches(r.bearing)}`}
+                        <TradeText
+                          text={
+                            studs && r.jackStuds !== null
+                              ? `${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"} (needs ${formatInches(r.requiredBearing)} of bearing)`
+                              : `Bearing: needs ${formatInches(r.requiredBearing)}, you have ${formatInches(r.bearing)}`
+                          }
+                        />
                       </p>
                     </li>
                   ))}

@@ -8,7 +8,8 @@ import { formatFeetInches } from "@/lib/flow/length";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 import { citationOf } from "@/lib/tables/citations";
-import { checkDetail, checkTitle } from "./words";
+import { checkTitle } from "@/lib/solver/design/check-words";
+import { checkDetail } from "./words";
 
 export type MemberDetailProps = {
   open: boolean;
@@ -174,6 +175,9 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
                   At {formatFeetInches(r.x)}: {fmt(r.maxDown)} lb down ({r.maxDownCombination})
                   {r.uplift > 0 ? `, ${fmt(r.uplift)} lb uplift (${r.upliftCombination})` : ""}; bearing needed {fmt(r.requiredBearing)} in of {fmt(r.bearing)}{" "}
                   in
+                  {r.studs
+                    ? ` (the wood under its ${fmt(r.studs.widthIn)} in bearing width needs ${fmt(r.studs.woodIn)} in, the steel ${fmt(r.studs.steelIn)} in)`
+                    : ""}
                   {r.jackStuds !== null ? `; ${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"}` : ""}
                 </li>
               ))}

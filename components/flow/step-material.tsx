@@ -2,6 +2,7 @@
 
 import { SelectField } from "@/components/ui/field";
 import { wallOf, type FlowState, type MaterialFamily } from "@/lib/flow/state";
+import { conditionQuestions } from "@/lib/flow/conditions";
 import { INCISED_SPECIES } from "@/lib/solver/design/wood";
 import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
 import { ENGINEERED } from "@/lib/tables/engineered";
@@ -46,8 +47,8 @@ function Checkbox({ label, hint, checked, onChange }: { label: string; hint?: st
 /** Step 4: what it is made of, and the conditions the checks need. */
 export function StepMaterial({ state, update }: StepMaterialProps) {
   const m = state.material;
-  const sawnFamily = m.family === "sawn" || m.family === "built-up" || m.family === "any";
-  const treated = state.wet || state.kind === "deck-joist" || state.kind === "deck-beam";
+  // only what applies to the chosen material is asked (wood-only questions name wood under "any")
+  const asked = conditionQuestions(state);
   // Spanlark's default when the builder has not said: fir and spruce incised, Southern Pine not (NDS 2018 §4.3.8)
   const incisedDefault = m.family === "any" ? true : INCISED_SPECIES.includes(m.species);
   const incised = state.incised ?? incisedDefault;
@@ -114,9 +115,9 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
         />
       ) : null}
 
-      {sawnFamily && treated ? (
+      {asked.incised !== "no" ? (
         <ChoiceGroup
-          legend="Treated lumber with small slits in its faces?"
+          legend={asked.incised === "wood" ? "If it is sawn lumber: treated, with small slits in its faces?" : "Treated lumber with small slits in its faces?"}
           name="incised"
           look="segments"
           hint={`Most treated fir and spruce is; Southern Pine usually is not. Slits (incising) lower the strength: ×0.80 on bending and shear, ×0.95 on stiffness (NDS 2018 §4.3.8).${state.incised === null || state.incised === undefined ? ` Assumed ${incisedDefault ? "yes" : "no"} for ${m.family === "any" ? "fir and spruce (no for Southern Pine)" : m.species}.` : ""}`}
@@ -205,11 +206,27 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
         <h3 id="conditions-title" className="mb-2 text-xl font-bold">
           Conditions
         </h3>
-        <Checkbox label="Wet service" hint="Outdoors or damp: decks, exposed framing" checked={state.wet} onChange={(wet) => update((s) => ({ ...s, wet }))} />
-        {state.width.mode === "spacing" && state.width.spacingIn <= 24 ? (
+        {asked.wet !== "no" ? (
           <Checkbox
-            label="Joists share the load"
-            hint="Three or more at 24 in or less, sheathed together (repetitive members, Cr)"
+            label={asked.wet === "wood" ? "Wood in wet service" : "Wet service"}
+            hint={
+              asked.wet === "wood"
+                ? "Wood only: outdoors or damp, like decks and exposed framing. Steel is checked the same wet or dry; I-joists, LVL and PSL are left out when wet."
+                : m.family === "engineered"
+                  ? "Outdoors or damp: decks, exposed framing. Glulam only; LVL and PSL are for dry service."
+                  : "Outdoors or damp: decks, exposed framing"
+            }
+            checked={state.wet}
+            onChange={(wet) => update((s) => ({ ...s, wet }))}
+          />
+        ) : null}
+        {m.family === "ijoist" ? (
+          <p className="py-1 text-sm text-graphite">I-joists are for dry service only (APA PRI-400): for a deck or wet framing choose sawn lumber.</p>
+        ) : null}
+        {asked.repetitive !== "no" && state.width.mode === "spacing" && state.width.spacingIn <= 24 ? (
+          <Checkbox
+            label={asked.repetitive === "wood" ? "Wood joists share the load" : "Joists share the load"}
+            hint={`${asked.repetitive === "wood" ? "Sawn lumber only: three" : "Three"} or more at 24 in or less, sheathed together (repetitive members, Cr)`}
             checked={state.repetitive}
             onChange={(repetitive) => update((s) => ({ ...s, repetitive }))}
           />

@@ -1,10 +1,12 @@
 import type { ReactNode } from "react";
+import { TradeText } from "@/components/ui/trade-text";
 import { BeamDiagram } from "@/components/diagrams/beam-diagram";
 import { RatioBar } from "@/components/ui/ratio-bar";
 import { StatusBadge } from "@/components/ui/status-badge";
 import { WarningIcon } from "@/components/ui/icons";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { byCaseWords, checkWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "@/lib/sheets/format";
+import { checkWords } from "@/lib/solver/design/check-words";
+import { byCaseWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "@/lib/sheets/format";
 import { sheetSources, type SheetMember, type SheetSnapshot } from "@/lib/sheets/snapshot";
 import { FROM_MEMORY } from "@/lib/tables/citations";
 
@@ -50,15 +52,21 @@ function MemberSection({ m, index }: { m: SheetMember; index: number }) {
         <h2 id={`member-${m.id}`} className="text-2xl font-bold">
           {m.label}
         </h2>
-        <p className="mt-1 text-xl font-bold">{m.headline}</p>
-        <p className="text-ink-soft">{m.memberLabel}</p>
+        <p className="mt-1 text-xl font-bold">
+          <TradeText text={m.headline} />
+        </p>
+        <p className="text-ink-soft">
+          <TradeText text={m.memberLabel} />
+        </p>
         <p className="mt-2">
           <StatusBadge status={m.pass ? "pass" : "fail"} label={`${m.pass ? "OK" : "Over"} ${ratioPercent(m.ratio)}, ${checkWords(m.governing)} governs`} />
         </p>
         {m.facts && m.facts.length > 0 ? (
           <ul className="mt-2 flex flex-col gap-0.5" data-testid="sheet-facts">
             {m.facts.map((f) => (
-              <li key={f}>{f}</li>
+              <li key={f}>
+                <TradeText text={f} />
+              </li>
             ))}
           </ul>
         ) : null}
@@ -122,7 +130,7 @@ function MemberSection({ m, index }: { m: SheetMember; index: number }) {
               <td className="px-1.5 py-1">{byCaseWords(r.byCase)}</td>
               <td className="px-1.5 py-1 font-mono tabular-nums">{r.uplift > 0 ? `${formatLb(r.uplift)} (${r.upliftCombination ?? ""})` : "none"}</td>
               <td className="px-1.5 py-1 font-mono tabular-nums">
-                {formatInches(r.bearing)} / {formatInches(r.requiredBearing)}
+                <TradeText text={`${formatInches(r.bearing)} / ${formatInches(r.requiredBearing)}`} />
               </td>
               <td className="px-1.5 py-1 font-mono tabular-nums">{r.jackStuds === null ? "—" : r.jackStuds}</td>
             </tr>

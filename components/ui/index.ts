@@ -20,3 +20,4 @@ export { RATIO_BAR_MAX, RatioBar, ratioVerdict, type RatioBarProps, type RatioVe
 export { Skeleton, Spinner, type SkeletonProps, type SpinnerProps } from "./spinner";
 export { StatusBadge, type Status, type StatusBadgeProps } from "./status-badge";
 export { ToastProvider, useToast, type ToastApi, type ToastOptions } from "./toast";
+export { TradeText, type TradeTextProps } from "./trade-text";

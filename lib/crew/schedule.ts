@@ -5,7 +5,8 @@
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { jobKindLabel, type JobMemberKind } from "@/lib/solver/design/kinds";
 import { basisWords, changeWords, type MemberResultSummary } from "@/lib/flow/summary";
-import { checkWords, formatLb, supportName } from "@/lib/sheets/format";
+import { checkWords } from "@/lib/solver/design/check-words";
+import { formatLb, supportName } from "@/lib/sheets/format";
 import { ratioPercent } from "@/lib/solver/design/ratio-percent";
 
 export interface ScheduleSupport {

@@ -23,7 +23,7 @@ export function createSequelize(url: string): Sequelize {
 }
 
 // Next.js bundles route handlers and pages separately, each with its own copy of the model classes; the
-// instance is shared through globalThis, so each copy initialises its own classes on it once.
+// instance is shared through globalThis, so each copy initializes its own classes on it once.
 let modelsReadyHere = false;
 
 export function getSequelize(): Sequelize {

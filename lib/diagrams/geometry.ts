@@ -7,7 +7,7 @@
  * coefficients a_k = c_k h^k, the control values are a0, a0 + a1/3, a0 + 2a1/3 + a2/3 and
  * a0 + a1 + a2 + a3. Deflection (degree 5) is split into short pieces, each a cubic Hermite curve
  * through the exact end values and slopes (error far below a pixel). Pieces are also split at the
- * requested points (the extremes), so the drawn curve passes exactly through every labelled value.
+ * requested points (the extremes), so the drawn curve passes exactly through every labeled value.
  * Where V or M jumps between segments (a point load, a couple, a reaction), a vertical line joins
  * the two values: the step is drawn, not smoothed.
  */
@@ -55,7 +55,7 @@ export function valueIn(segment: DiagramSegment, quantity: DiagramQuantity, x: n
 
 /** Bézier controls of a polynomial of degree ≤ 3 over ξ ∈ [a, b] of a segment starting at x0. */
 function exactCubic(c: readonly number[], x0: number, a: number, b: number): readonly [Point, Point, Point] {
-  // re-centre the polynomial at ξ = a: p(a + s) = Σ d_k s^k (Taylor shift)
+  // re-center the polynomial at ξ = a: p(a + s) = Σ d_k s^k (Taylor shift)
   const c0 = c[0] ?? 0;
   const c1 = c[1] ?? 0;
   const c2 = c[2] ?? 0;
@@ -93,7 +93,7 @@ function hermite(c: readonly number[], dc: readonly number[], x0: number, a: num
 /**
  * The diagram of one quantity as a Bézier chain in data coordinates (x in ft; y in lb, lb-ft or in),
  * starting and ending on the axis (y = 0) so the filled shape closes on the member.
- * `splitAt` lists x positions the curve must pass through as piece ends (the labelled extremes).
+ * `splitAt` lists x positions the curve must pass through as piece ends (the labeled extremes).
  */
 export function diagramChain(
   segments: readonly DiagramSegment[],

@@ -111,8 +111,8 @@ export function parseLength(raw: string): LengthParse {
   if (m) {
     const value = Number(m[1]);
     const unit = m[2].toLowerCase();
-    const metres = unit === "m" ? value : unit === "cm" ? value / 100 : value / 1000;
-    return finite(metres * FT_PER_M);
+    const meters = unit === "m" ? value : unit === "cm" ? value / 100 : value / 1000;
+    return finite(meters * FT_PER_M);
   }
 
   if (/[a-z]/i.test(text.replace(/\b(ft|feet|foot|in|inch|inches|m|cm|mm)\b/gi, ""))) {

@@ -7,6 +7,7 @@ import type { LoadStandard } from "@/lib/solver/asce7/standard";
 import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
 import type { z } from "zod";
 import type { checkFieldsSchema, DesignLoad, MemberSpec, sizeFamilySchema, sizeFieldsSchema } from "@/lib/solver/design/schema";
+import { conditionQuestions } from "./conditions";
 import { mainSpanFt, overhangs, sortedSupports, wallOf, type FlowMaterial, type FlowState } from "./state";
 
 /** The request bodies, typed by the server's own schemas (what /api/size and /api/check accept). */
@@ -78,6 +79,7 @@ export function designBase(state: FlowState, carried: readonly DesignLoad[] = []
   // with a rough opening the span is the opening plus half the bearing at each end, exactly
   const span = ro !== undefined ? ro + state.bearingIn / 12 : undefined;
   const standard: LoadStandard = state.loadStandard ?? "ASCE 7-16";
+  const asked = conditionQuestions(state);
   return {
     ...(span !== undefined && ro !== undefined
       ? {
@@ -93,11 +95,12 @@ export function designBase(state: FlowState, carried: readonly DesignLoad[] = []
     loads: [...designLoads(state), ...carried],
     bearingIn: state.bearingIn,
     conditions: {
-      wet: state.wet,
+      // only the questions that apply to the material go (lib/flow/conditions.ts): steel is never sent wet
+      ...(asked.wet !== "no" ? { wet: state.wet } : {}),
       // not said: the engine's default by species (NDS 2018 §4.3.8)
-      ...(state.incised === true || state.incised === false ? { incised: state.incised } : {}),
+      ...(asked.incised !== "no" && (state.incised === true || state.incised === false) ? { incised: state.incised } : {}),
       // joists say whether they share the load; beams and headers take the engine's rule (3+ plies, NDS 2018 §4.3.9)
-      ...(state.width.mode === "spacing" ? { repetitive: state.repetitive } : {}),
+      ...(asked.repetitive !== "no" ? { repetitive: state.repetitive } : {}),
       unbracedLengthFt: state.unbracedFt,
       selfWeight: state.selfWeight,
     },

@@ -166,7 +166,7 @@ export type MemberEnd = "left" | "right";
 /** The overhang a tap adds: 2 ft, a usual deck joist overhang and inside a quarter of a 12 ft back span (common practice). */
 export const DEFAULT_OVERHANG_FT = 2;
 
-/** How close a moved support may come to its neighbour, ft (1 in): two supports at one point are refused by the solver. */
+/** How close a moved support may come to its neighbor, ft (1 in): two supports at one point are refused by the solver. */
 export const SUPPORT_GAP_FT = 1 / 12;
 
 /** The longest overhang an end can take before the whole member passes MAX_LENGTH_FT, ft. */
@@ -192,7 +192,7 @@ export function removeOverhang(state: FlowState, end: MemberEnd): FlowState {
   return withOverhang(state, end, 0);
 }
 
-/** Where a support may go, ft from the left end: on the member and at least SUPPORT_GAP_FT from either neighbour. */
+/** Where a support may go, ft from the left end: on the member and at least SUPPORT_GAP_FT from either neighbor. */
 export function supportRange(state: FlowState, index: number): { min: number; max: number } {
   const here = state.supports[index];
   if (!here) return { min: 0, max: state.lengthFt };
@@ -206,7 +206,7 @@ export function supportRange(state: FlowState, index: number): { min: number; ma
 
 /**
  * Moves one support (by its index in state.supports) to `x` ft from the left end, to the nearest 1/16 in. It
- * stays on the member and does not pass or touch a neighbour; the member's length does not change, so moving an
+ * stays on the member and does not pass or touch a neighbor; the member's length does not change, so moving an
  * end support inward makes an overhang.
  */
 export function moveSupport(state: FlowState, index: number, x: number): FlowState {

@@ -5,6 +5,7 @@
  */
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { LoadStandard } from "@/lib/solver/asce7/standard";
+import type { FootingShape } from "@/lib/solver/design/footing";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { LoadCase, SupportType } from "@/lib/solver/types";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
@@ -52,12 +53,37 @@ export interface AnswerChange {
   at: string;
 }
 
+/** A footing as the load path sizes it: concrete by its shape and plan size, no lumber. */
+export interface FootingSpec {
+  material: "footing";
+  shape: FootingShape;
+  /** diameter (round) or side (square), in */
+  sizeIn: number;
+  thicknessIn: number;
+  /** how deep its bottom is set below grade, in */
+  bottomDepthIn: number;
+}
+
+/** What a saved answer says to build: a framing member or post (a design spec), or a footing. */
+export type SummarySpec = MemberSpec | FootingSpec;
+
+/**
+ * The design spec of a saved answer, null for a footing (footings saved before they had their own
+ * type carry a sawn spec of size "footing": read as a footing too).
+ */
+export function designSpecOf(summary: Pick<MemberResultSummary, "spec"> | null | undefined): MemberSpec | null {
+  const spec = summary?.spec;
+  if (!spec || spec.material === "footing") return null;
+  if (spec.material === "sawn" && spec.size === "footing") return null;
+  return spec;
+}
+
 export interface MemberResultSummary {
   /** "3-ply 2x12 No.2 Douglas Fir-Larch" */
   memberLabel: string;
   /** the answer in one line: "3-ply 2x12 No.2 — 2 jack studs each end" */
   headline: string;
-  spec: MemberSpec;
+  spec: SummarySpec;
   pass: boolean;
   governing: string | null;
   ratio: number;

@@ -15,10 +15,11 @@
  * Each member is worked out by the one design path (lib/solver/design: checkMember, sizeMember,
  * checkPost, checkFooting); nothing here computes a stress.
  */
+import { wetInEffect } from "@/lib/flow/conditions";
 import { checkRequest, sizeRequest } from "@/lib/flow/request";
 import { formatFeetInches } from "@/lib/flow/length";
 import type { FlowState } from "@/lib/flow/state";
-import { summarize, type CarriedLoadSummary, type MemberResultSummary, type SummaryReaction } from "@/lib/flow/summary";
+import { designSpecOf, summarize, type CarriedLoadSummary, type MemberResultSummary, type SummaryReaction } from "@/lib/flow/summary";
 import { checkMember, DesignInputError, sizeMember } from "@/lib/solver/design";
 import { checkFooting, FOOTING_SHAPES, type FootingShape } from "@/lib/solver/design/footing";
 import { KIND_LABELS, type JobMemberKind, type MemberKind } from "@/lib/solver/design/kinds";
@@ -293,7 +294,7 @@ function postLoads(post: PathMember, bearers: readonly PathMember[], solved: Rea
     const w = solved.get(b.id);
     const s = w?.summary;
     if (!s) continue;
-    const spec = w.chosen ?? s.spec;
+    const spec = w.chosen ?? designSpecOf(s);
     const width = spec ? widthOfSpec(spec, tables) : null;
     for (const j of bearingSupports({ ...b, resultSummary: s }, "post")) {
       const r = s.reactions[j];
@@ -301,7 +302,7 @@ function postLoads(post: PathMember, bearers: readonly PathMember[], solved: Rea
       out.push({
         byCase: r.byCase,
         from: `${b.label} at ${formatFeetInches(r.x)}`,
-        above: width ? { ...width, wet: b.flowState?.wet ?? false, label: b.label } : null,
+        above: width ? { ...width, wet: b.flowState ? wetInEffect(b.flowState) : false, label: b.label } : null,
       });
     }
   }
@@ -404,7 +405,7 @@ function footingSummary(
   return {
     memberLabel: `${worst.answer}, on ${design.soilPsf.toLocaleString("en-US")} psf soil`,
     headline: `${count} × ${worst.answer} — ${pass ? "OK" : "Over"} ${Math.round(worst.ratio * 100)}%`,
-    spec: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "footing", plies: 1 },
+    spec: { material: "footing", shape: worst.shape, sizeIn: worst.sizeIn, thicknessIn: worst.thicknessIn, bottomDepthIn: worst.bottomDepthIn },
     pass,
     governing: "soil",
     ratio: worst.ratio,

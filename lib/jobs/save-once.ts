@@ -1,4 +1,5 @@
 import "server-only";
+import { designSpecOf } from "@/lib/flow/summary";
 import { createHash } from "node:crypto";
 import { UniqueConstraintError } from "sequelize";
 import { getSequelize } from "@/lib/db";
@@ -48,15 +49,16 @@ export async function saveMemberOnce(
   try {
     let response: SavedMemberResponse | null = null;
     await saveMember(ownerId, input, limit, async ({ job, member, summary }, transaction) => {
+      // a member saved from the flow is framing: its answer always has a design spec
+      const spec = designSpecOf(summary);
       const tables = await tablesStamp(summary ? { version: summary.tables } : await getCurrentTables());
       const saved: SavedMemberResponse = {
         jobId: job.id,
         jobName: job.name,
         memberId: member.id,
         label: member.label,
-        answer: summary
-          ? { headline: summary.headline, memberLabel: summary.memberLabel, spec: summary.spec, ratio: summary.ratio, governing: summary.governing }
-          : null,
+        answer:
+          summary && spec ? { headline: summary.headline, memberLabel: summary.memberLabel, spec, ratio: summary.ratio, governing: summary.governing } : null,
         tables,
         savedAt: member.createdAt.toISOString(),
       };

@@ -1,4 +1,5 @@
 import "server-only";
+import { designSpecOf } from "@/lib/flow/summary";
 import { getJob, type JobView } from "@/lib/jobs/queries";
 import { getCurrentTables } from "@/lib/tables/current";
 import { buildOrderList, notCountedNotes, type OrderList } from "./order-list";
@@ -23,7 +24,7 @@ export async function getJobOrder(ownerId: string, jobId: string, now: Date = ne
         label: m.label,
         kind: m.kind,
         flowState: m.flowState,
-        spec: m.chosenMember ?? m.resultSummary?.spec ?? null,
+        spec: m.chosenMember ?? designSpecOf(m.resultSummary),
         summary: m.resultSummary,
         details: m.orderDetails,
       })),

@@ -54,7 +54,7 @@ export function stockLengthFor(neededFt: number, stockFt: readonly number[]): St
 }
 
 /**
- * Joists (or rafters) across a run of `widthFt` at `spacingIn` on centre: one at each end and one at every
+ * Joists (or rafters) across a run of `widthFt` at `spacingIn` on center: one at each end and one at every
  * spacing between, the last space short where the width is not a whole number of spaces (common practice).
  * Example: 16 ft at 16 in → 192 / 16 = 12 spaces → 13 joists.
  */

@@ -45,7 +45,7 @@ export async function startCheckout(
     success_url: back.saveSheetForJobId
       ? `${appUrl}/billing?checkout=success&session_id={CHECKOUT_SESSION_ID}&next=${encodeURIComponent(saveSheetReturnPath(back.saveSheetForJobId))}`
       : `${appUrl}/billing?checkout=success&session_id={CHECKOUT_SESSION_ID}`,
-    cancel_url: back.saveSheetForJobId ? `${appUrl}/pricing?checkout=cancelled&job=${back.saveSheetForJobId}` : `${appUrl}/pricing?checkout=cancelled`,
+    cancel_url: back.saveSheetForJobId ? `${appUrl}/pricing?checkout=canceled&job=${back.saveSheetForJobId}` : `${appUrl}/pricing?checkout=canceled`,
     metadata: { userId: user.id, plan },
     subscription_data: { metadata: { userId: user.id, plan } },
   });

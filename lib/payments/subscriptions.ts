@@ -17,7 +17,7 @@ export interface SubscriptionSummary {
   status: SubscriptionStatus;
   /** True while the subscription gives access (active or trialing). */
   active: boolean;
-  /** Set when the subscriber has cancelled: access continues until currentPeriodEnd, then it ends. */
+  /** Set when the subscriber has canceled: access continues until currentPeriodEnd, then it ends. */
   cancelAtPeriodEnd: boolean;
   currentPeriodEnd: Date | null;
   endedAt: Date | null;

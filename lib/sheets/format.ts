@@ -5,27 +5,6 @@
 import { formatFeetInches } from "@/lib/flow/length";
 import { ratioPercent as percentOf } from "@/lib/solver/design/ratio-percent";
 
-const CHECK_WORDS: Record<string, string> = {
-  bending: "bending",
-  shear: "shear",
-  "deflection-live": "deflection, live",
-  "deflection-total": "deflection, total",
-  bearing: "bearing",
-  stability: "stability",
-  "web-yielding": "web yielding",
-  "web-crippling": "web crippling",
-  "web-compactness": "web compactness",
-  "bending-crippling": "bending with web crippling",
-  "bending-shear": "bending with shear",
-  "flange-roll": "flange roll (distortional buckling, AISI S100-16 §F4)",
-  "thickness-scope": "steel thickness outside the checked range",
-};
-
-export function checkWords(name: string | null): string {
-  if (!name) return "—";
-  return CHECK_WORDS[name] ?? name.replace(/-/g, " ");
-}
-
 /** 0.6373 → "64%", 0.996 → "99.6%", 1.004 → "100.4%" (lib/solver/design/ratio-percent.ts: never 100% for a near pass, never 100% or less for a failure) */
 export function ratioPercent(ratio: number, pass: boolean = ratio <= 1): string {
   return `${percentOf(ratio, pass)}%`;

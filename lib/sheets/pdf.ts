@@ -5,7 +5,8 @@ import { INK } from "@/lib/diagrams/palette";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { FROM_MEMORY } from "@/lib/tables/citations";
 import { sheetSources, type SheetDiagram, type SheetMember, type SheetSnapshot } from "./snapshot";
-import { byCaseWords, checkWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "./format";
+import { checkWords } from "@/lib/solver/design/check-words";
+import { byCaseWords, formatCheckValue, formatLb, formatSheetDate, ratioPercent, supportName } from "./format";
 
 /**
  * The job sheet as a PDF (pdfkit), drawn only from the frozen snapshot. Diagrams are vector paths: each

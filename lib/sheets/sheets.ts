@@ -1,4 +1,5 @@
 import "server-only";
+import { designSpecOf } from "@/lib/flow/summary";
 import { Op } from "sequelize";
 import { getSequelize } from "@/lib/db";
 import { HttpError } from "@/lib/http";
@@ -107,7 +108,7 @@ export async function saveJobSheet(user: SessionUser, jobId: string, now: Date =
         carried: m.carried,
         carriedWords: m.carriedWords,
         flowState: m.flowState,
-        chosenMember: m.chosenMember ?? m.resultSummary?.spec ?? null,
+        chosenMember: m.chosenMember ?? designSpecOf(m.resultSummary),
         savedTables: m.resultSummary?.tables ?? null,
         savedAnswer: m.resultSummary ? { headline: m.resultSummary.headline, ratio: m.resultSummary.ratio } : null,
       })),

@@ -5,6 +5,7 @@
  */
 import { CAUTION, CAUTION_TITLE, notCheckedFor } from "@/lib/caution";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
+import { conditionQuestions } from "@/lib/flow/conditions";
 import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, SUPPORT_WORDS, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
 import { answerFacts, spacingOf } from "@/lib/flow/summary";
@@ -195,7 +196,8 @@ function inputRows(state: FlowState): [string, string][] {
   if (state.kind === "header" && state.roughOpeningFt) rows.push(["Rough opening", formatFeetInches(state.roughOpeningFt)]);
   const wall = wallOf(state);
   if (wall) rows.push(["Wall framing", `${wall} wall`]);
-  if (state.incised === true || state.incised === false) rows.push(["Treated lumber incised", state.incised ? "yes (as given)" : "no (as given)"]);
+  if (conditionQuestions(state).incised !== "no" && (state.incised === true || state.incised === false))
+    rows.push(["Treated lumber incised", state.incised ? "yes (as given)" : "no (as given)"]);
   for (const p of state.pointLoads) rows.push([`Point load (${p.case})`, `${p.label ? `${p.label}: ` : ""}${fmtNumber(p.P)} lb at ${formatFeetInches(p.x)}`]);
   for (const l of state.lineLoads) {
     rows.push([`Line load (${l.case})`, `${l.label ? `${l.label}: ` : ""}${fmtNumber(l.w)} plf from ${formatFeetInches(l.from)} to ${formatFeetInches(l.to)}`]);
@@ -204,11 +206,20 @@ function inputRows(state: FlowState): [string, string][] {
     ["Material", materialWords(state)],
     ["Bearing length", formatInches(state.bearingIn)],
     ["Deflection limits", `live L/${state.limits.live}, total L/${state.limits.total}`],
-    ["Service", state.wet ? "wet (exposed)" : "dry"],
-    ["Repetitive members", state.repetitive ? "yes" : "no"],
+    ...serviceRows(state),
     ["Unbraced length", state.unbracedFt === 0 ? "0 (braced along its length)" : formatFeetInches(state.unbracedFt)],
     ["Own weight counted", state.selfWeight ? "yes" : "no"],
   );
+  return rows;
+}
+
+/** Wet service and repetitive members, only where they apply to the material (lib/flow/conditions.ts). */
+function serviceRows(state: FlowState): [string, string][] {
+  const asked = conditionQuestions(state);
+  const rows: [string, string][] = [];
+  if (asked.wet !== "no") rows.push([asked.wet === "wood" ? "Service (wood)" : "Service", state.wet ? "wet (exposed)" : "dry"]);
+  if (asked.repetitive !== "no")
+    rows.push([asked.repetitive === "wood" ? "Repetitive members (sawn lumber)" : "Repetitive members", state.repetitive ? "yes" : "no"]);
   return rows;
 }
 

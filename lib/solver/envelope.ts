@@ -7,7 +7,7 @@
  *
  * Patterns (common practice for continuous beams): live load on all spans, on alternate spans
  * (odd, even), and on the two spans beside each interior support. A pattern that loads the same
- * spans as another (because some spans carry no patterned load) is analysed once.
+ * spans as another (because some spans carry no patterned load) is analyzed once.
  */
 import type { BeamInput, Extreme, LoadCase, NamedCombination } from "./types";
 import { makeAnalysis, type BeamAnalysis } from "./beam/analysis";

@@ -163,7 +163,7 @@ let warnedEmpty = false;
 /** The current published version of the material tables. */
 export async function getCurrentTables(): Promise<MaterialTables> {
   if (!hasDatabase()) return STARTER_TABLES;
-  getSequelize(); // initialises the models on first use
+  getSequelize(); // initializes the models on first use
   // Only the app server listens; in a script the listener's connection would keep the process alive.
   if (process.env.NEXT_RUNTIME === "nodejs" && listener().status === "off" && !listener().retry) void startTablesListener();
 

@@ -76,7 +76,7 @@ function cpuSeconds(): number {
 
 /** Median CPU seconds per call, over 25 batches sized to take about 20 ms each (after a warm-up). */
 function time(fn: () => void): { cpu: number; wall: number } {
-  // warm up on CPU time, so that the JIT has optimised the code even on a busy machine
+  // warm up on CPU time, so that the JIT has optimized the code even on a busy machine
   const warm = cpuSeconds();
   while (cpuSeconds() - warm < 0.5) for (let i = 0; i < 50; i++) fn();
   let n = 1;

@@ -31,7 +31,7 @@ export function headerState(): FlowState {
   };
 }
 
-/** A 13 ft floor joist at 16 in on centre, 40 psf live and 10 psf dead. */
+/** A 13 ft floor joist at 16 in on center, 40 psf live and 10 psf dead. */
 export function joistState(): FlowState {
   return {
     ...defaultFlowState("floor-joist"),

@@ -96,7 +96,7 @@ describe("subscriptions", () => {
     expect(await page.getByLabel("Card number").inputValue()).toBe(TEST_CARDS.declined);
     await shoot(page, "payments-checkout-declined-phone");
 
-    await Promise.all([page.waitForURL(/\/pricing\?checkout=cancelled/), page.getByRole("link", { name: "Cancel and return" }).click()]);
+    await Promise.all([page.waitForURL(/\/pricing\?checkout=canceled/), page.getByRole("link", { name: "Cancel and return" }).click()]);
     expect(await page.getByText("Checkout canceled. Nothing was charged.").isVisible()).toBe(true);
 
     await goto("/billing");
@@ -105,7 +105,7 @@ describe("subscriptions", () => {
     expect(consoleErrors).toEqual([]);
   });
 
-  test("cancelling in the portal keeps the paid features until the period ends, then the account is free again", async () => {
+  test("canceling in the portal keeps the paid features until the period ends, then the account is free again", async () => {
     const opened = await session.open(null, { viewport: "desktop" });
     const { page, context, goto, consoleErrors } = opened;
     await signUpBuilder(context, "cancels");
@@ -122,12 +122,12 @@ describe("subscriptions", () => {
     await page.getByRole("button", { name: "Cancel at end of period" }).click();
     await page.getByRole("status").waitFor();
     expect(await page.getByRole("status").textContent()).toContain("end at the close of the current period");
-    await shoot(page, "payments-portal-cancelled-desktop");
+    await shoot(page, "payments-portal-canceled-desktop");
 
     await Promise.all([page.waitForURL(/\/billing$/), page.getByRole("link", { name: "Return to the site" }).click()]);
     expect(await roleShown(opened)).toBe("subscriber");
     expect(await page.getByTestId("billing-status").textContent()).toMatch(/^Canceled\. You keep every paid feature until [A-Z][a-z]+ \d{1,2}, \d{4}/);
-    await shoot(page, "payments-billing-cancelling-desktop");
+    await shoot(page, "payments-billing-canceling-desktop");
 
     expect(await endBillingPeriod(subscriptionId ?? "")).toEqual(["customer.subscription.deleted"]);
     await goto("/billing");

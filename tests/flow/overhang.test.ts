@@ -147,7 +147,7 @@ describe("moving a support", () => {
     expectValid(s);
   });
 
-  test("it cannot pass or touch its neighbour: it stops 1 in short", () => {
+  test("it cannot pass or touch its neighbor: it stops 1 in short", () => {
     const three: FlowState = {
       ...deckJoist(),
       supports: [

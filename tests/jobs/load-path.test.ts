@@ -1,6 +1,8 @@
 import { describe, expect, test } from "vitest";
 import { defaultFlowState } from "@/lib/flow/defaults";
 import type { FlowState } from "@/lib/flow/state";
+import { scheduleRow } from "@/lib/crew/schedule";
+import { designSpecOf } from "@/lib/flow/summary";
 import { checkOrder, cycleIssue, workOutJob, type PathMember } from "@/lib/jobs/load-path";
 import { woodDensity } from "@/lib/solver/nds/nds-2018";
 import { STARTER_TABLES, findSawnValues } from "@/lib/tables";
@@ -186,6 +188,18 @@ describe("the load path of a deck, worked by hand", () => {
     expect(f1?.memberLabel).toContain(`${d} in round × 10 in thick, bottom 36 in below grade`);
     expect(f1?.checks).toHaveLength(4);
     expect(f1?.pass).toBe(true);
+  });
+
+  test("a footing's answer names concrete, not lumber: its own spec, no design spec; the crew schedule reads it", () => {
+    expect(f1?.spec).toEqual({ material: "footing", shape: "round", sizeIn: expect.any(Number), thicknessIn: 10, bottomDepthIn: 36 });
+    expect(designSpecOf(f1)).toBeNull();
+    // a footing saved before it had its own type (a sawn spec of size "footing") reads the same
+    expect(designSpecOf({ spec: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "footing", plies: 1 } })).toBeNull();
+    // the post keeps its real lumber
+    expect(designSpecOf(p1)).toEqual({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "6x6", plies: 1 });
+    const row = scheduleRow({ id: "f1", label: "F1", kind: "footing", resultSummary: f1 ?? null });
+    expect(row.headline).toMatch(/round × 10 in thick/);
+    expect(row.verdict?.pass).toBe(true);
   });
 
   test("the members are worked out top down, joists first", () => {

@@ -108,7 +108,7 @@ describe.skipIf(!TEST_DB)("subscription life cycle against the stand-in", () => 
     await expect(startCheckout(user, "yearly")).rejects.toMatchObject({ status: 409 });
   });
 
-  test("cancelling in the portal keeps access until the period ends, then the role is cleared", async () => {
+  test("canceling in the portal keeps access until the period ends, then the role is cleared", async () => {
     const user = await builder();
     const { sessionId } = await startCheckout(user, "monthly");
     await pay(standin.url, sessionId);

@@ -171,10 +171,10 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
     const t0 = now() - 300;
     const base = { id: subId, customer, status: "active", periodStart: t0, periodEnd: t0 + 30 * DAY };
     await deliver(eventObject("customer.subscription.created", subscriptionObject(base), t0));
-    const cancelled = eventObject("customer.subscription.updated", subscriptionObject({ ...base, cancelAtPeriodEnd: true }), t0 + 100);
+    const canceled = eventObject("customer.subscription.updated", subscriptionObject({ ...base, cancelAtPeriodEnd: true }), t0 + 100);
     const resumed = eventObject("customer.subscription.updated", subscriptionObject({ ...base, cancelAtPeriodEnd: false }), t0 + 200);
     await deliver(resumed);
-    expect((await deliver(cancelled)).body.outcome).toBe("stale");
+    expect((await deliver(canceled)).body.outcome).toBe("stale");
     expect(await getSubscription(userId)).toMatchObject({ cancelAtPeriodEnd: false, active: true });
   });
 
@@ -189,7 +189,7 @@ describe.skipIf(!TEST_DB)("POST /api/stripe/webhook", () => {
     expect(await roleOf(userId)).toBe("builder");
   });
 
-  test("cancelling at period end keeps access until Stripe ends the subscription", async () => {
+  test("canceling at period end keeps access until Stripe ends the subscription", async () => {
     const { userId, customer } = await makeCustomer();
     const subId = fakeId("sub");
     const t0 = now() - 100;

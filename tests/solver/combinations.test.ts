@@ -128,14 +128,14 @@ describe("envelopes with pattern live load (common practice for continuous joist
     const labels = env.runs.map((r) => `${r.combination.name} / ${r.pattern}`);
     expect(labels).toEqual(["D / all spans", "D+L / all spans", "D+L / span 1", "D+L / span 2"]);
     // The largest sagging moment comes from live load on one span only (AISC Manual 15th ed.,
-    // Table 3-23 case 29 plus case 33 for the dead load) — checked by analysing that layout directly.
+    // Table 3-23 case 29 plus case 33 for the dead load) — checked by analyzing that layout directly.
     const direct = analyzeBeam({ ...input, loads: [input.loads[0], { type: "udl", from: 0, to: l, w: wL, case: "L" }] });
     expectClose(env.Mmax.value, direct.extremes.Mpos.value, 1e-9);
     expect(env.runs[env.Mmax.run].pattern).toBe("span 1");
-    // Two-span closed forms: D+L everywhere gives −(wD+wL)l²/8 over the centre support ...
+    // Two-span closed forms: D+L everywhere gives −(wD+wL)l²/8 over the center support ...
     expectClose(env.Mmin.value, (-(wD + wL) * l * l) / 8, 1e-9);
     expect(env.runs[env.Mmin.run].pattern).toBe("all spans");
-    // ... and the centre reaction 10(wD+wL)l/8; the end reaction is least with live load on the far span
+    // ... and the center reaction 10(wD+wL)l/8; the end reaction is least with live load on the far span
     expectClose(env.reactions[1].maxDown.F, (10 * (wD + wL) * l) / 8, 1e-9);
     expectClose(env.reactions[0].maxUp.F, (3 * wD * l) / 8 - (wL * l) / 16, 1e-9);
     expect(env.runs[env.reactions[0].maxUp.run].pattern).toBe("span 2");

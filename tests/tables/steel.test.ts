@@ -12,7 +12,7 @@ const rows = shapes.map((s) => [s.name, s] as const);
 /** density of structural steel, lb/ft³ (AISC Manual 15th ed., Table 17-12; common practice 490) */
 const STEEL_DENSITY_PCF = 490;
 
-/** The three-rectangle idealisation: two flanges bf x tf and a web tw x (d − 2tf), no fillets. */
+/** The three-rectangle idealization: two flanges bf x tf and a web tw x (d − 2tf), no fillets. */
 function threeRectangles(d: number, bf: number, tf: number, tw: number) {
   const hw = d - 2 * tf;
   const A = 2 * bf * tf + hw * tw;

@@ -28,7 +28,7 @@ export default async function PricingPage({ searchParams }: PricingPageProps) {
         title="Plans"
         lead="Sizing members is free. A subscription saves job sheets you can print again, and lifts the limits on saved jobs and crew links."
       />
-      {params.checkout === "cancelled" ? (
+      {params.checkout === "canceled" ? (
         <p role="status" className="rounded-card border-2 border-rule bg-paper-raised p-3 font-bold">
           Checkout canceled. Nothing was charged.
         </p>

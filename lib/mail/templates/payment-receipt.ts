@@ -13,7 +13,7 @@ export interface PaymentReceiptMailInput {
   periodEnd?: Date | null;
   /** The payment's reference (invoice or payment number) to quote in questions. */
   reference: string;
-  /** The billing page, where the subscription can be managed or cancelled. */
+  /** The billing page, where the subscription can be managed or canceled. */
   billingLink: string;
 }
 

@@ -24,7 +24,7 @@ export interface AnswerAssembly {
 
 /** What a support needs, as the answer line reads it. */
 export interface SupportNeed {
-  /** 1-1/2 in jack studs under a member's end, null where they do not apply (interior support, steel) */
+  /** 1-1/2 in jack studs under a member's end, null where they do not apply (interior support, steel not in a stud wall) */
   jackStuds: number | null;
   /** bearing length the member needs here, in */
   requiredBearing: number;
@@ -39,7 +39,7 @@ export interface AnswerLineInput {
   /** the member's full label, e.g. "3-ply 2x12 Douglas Fir-Larch No.2" */
   label: string;
   kind?: MemberKind;
-  /** joists and rafters: spacing on centre, in */
+  /** joists and rafters: spacing on center, in */
   spacingIn?: number;
   /** a beam in a stud wall (the input names the wall framing) */
   inStudWall?: boolean;

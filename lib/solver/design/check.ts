@@ -4,11 +4,11 @@
  */
 import type { MaterialTables } from "@/lib/tables/types";
 import { ratioPercent } from "./ratio-percent";
+import { checkWords } from "./check-words";
 import { CAUTION, NOT_CHECKED, notCheckedFor } from "@/lib/caution";
 import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
 import type { LoadStandard } from "../asce7/standard";
-import { LRFD_SNOW_COMPANION_22 } from "../asce7/combinations";
 import { zodIssues } from "@/lib/zod-issues";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
 import { buildContext, type DesignContext } from "./context";
@@ -23,6 +23,7 @@ import { E_STEEL_KSI } from "../aisc360/aisc360-16";
 import { answerLine, shortLabel } from "./answer-line";
 import { memberDiagrams, type MemberDiagrams } from "./diagrams";
 import type { CheckName, CombinationRef, DesignCheck, SupportReaction } from "./types";
+import { studBearingWords, studsUnderSteel, studWallFor } from "./studs-under-steel";
 import { evaluateWood, resolveCr, resolveIncised, type WoodFactors } from "./wood";
 
 export { CAUTION, NOT_CHECKED };
@@ -100,22 +101,6 @@ export interface Evaluation {
   pass: boolean;
 }
 
-const CHECK_WORDS: Record<CheckName, string> = {
-  bending: "bending",
-  shear: "shear",
-  "deflection-live": "live load deflection",
-  "deflection-total": "total load deflection",
-  bearing: "bearing",
-  stability: "lateral stability",
-  "web-yielding": "web yielding at a support",
-  "web-crippling": "web crippling at a support",
-  "web-compactness": "web slenderness",
-  "bending-crippling": "bending with web crippling",
-  "bending-shear": "bending with shear",
-  "flange-roll": "flange roll (distortional buckling)",
-  "thickness-scope": "steel thickness outside the checked range",
-};
-
 /** A ratio as a percentage (lib/solver/design/ratio-percent.ts): a pass never reads 100 % unless it is exactly at it, a failure never 100 % or less. */
 export function percent(ratio: number, pass: boolean): string {
   return ratioPercent(ratio, pass);
@@ -123,7 +108,7 @@ export function percent(ratio: number, pass: boolean): string {
 
 /** "OK 77% (bending)" or "Over 113% (shear)": the verdict with the largest ratio and the check it is in. */
 export function verdictWords(ev: { pass: boolean; ratio: number; governing: CheckName | null }): string {
-  return `${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${CHECK_WORDS[ev.governing]})` : ""}`;
+  return `${ev.pass ? "OK" : "Over"} ${percent(ev.ratio, ev.pass)}%${ev.governing ? ` (${checkWords(ev.governing)})` : ""}`;
 }
 
 /**
@@ -158,6 +143,7 @@ export function evaluateMember(member: DesignMember, ctx: DesignContext): Evalua
         : member.kind === "cfs"
           ? evaluateCfs(member, ctx)
           : evaluateWood(member, ctx);
+  if ((member.kind === "steel" || member.kind === "cfs") && ctx.studWall) r.reactions = studsUnderSteel(member, r.reactions, ctx, ctx.studWall);
   let governing: CheckName | null = null;
   let ratio = 0;
   for (const c of r.checks) {
@@ -186,9 +172,11 @@ export function asDesignError(err: unknown): unknown {
   return err;
 }
 
-export function contextFor(input: Omit<CheckInput, "member">): DesignContext {
+/** The shared context of a design input; with the tables, the stud wall a steel member bears on (jack studs under steel). */
+export function contextFor(input: Omit<CheckInput, "member">, tables?: MaterialTables): DesignContext {
   try {
-    return buildContext(input);
+    const ctx = buildContext(input);
+    return tables ? { ...ctx, studWall: studWallFor(input.kind, input.wallFraming, tables) } : ctx;
   } catch (err) {
     throw asDesignError(err);
   }
@@ -265,18 +253,8 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   const a: string[] = [];
   const c = input.conditions;
   const std = input.loadStandard;
-  const lrfd = input.method === "lrfd";
-  const snowWords = !ctx.model.cases.includes("S")
-    ? ""
-    : std === "ASCE 7-22"
-      ? lrfd
-        ? `, snow at 1.0S leading and ${LRFD_SNOW_COMPANION_22}S as a companion (strength-level map)`
-        : ", snow as 0.7S (strength-level map)"
-      : lrfd
-        ? ", snow at 1.6S leading, 0.5S as a companion (allowable-stress map)"
-        : ", snow at full value, D + S (allowable-stress map)";
   a.push(
-    `load combinations: ${std} ${lrfd ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}${snowWords}; deflection and reactions at service level (§2.4.1)`,
+    `load combinations: ${std} ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}${ctx.model.cases.includes("S") ? (std === "ASCE 7-22" ? ", snow as 0.7S (strength-level map)" : ", snow at full value, D + S (allowable-stress map)") : ""}; deflection and reactions at service level (§2.4.1)`,
   );
   const ro = roughOpeningOf(input);
   if (ro) a.push(ro.note);
@@ -310,11 +288,12 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
     a.push(
-      "glulam: Fbx+ (tension zone stressed in tension) for moment that sags, Fbx− for moment that hogs over a support or on an overhang (the table's values, from memory — confirm both with the supplier)",
+      "glulam: the table's Fb (tension zone stressed in tension) is used for every moment; where the member hogs over a support or an overhang, confirm Fbx− with the supplier",
     );
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
   if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
+  if ((member.kind === "steel" || member.kind === "cfs") && ctx.studWall) a.push(studBearingWords(member, ctx.studWall, input.method === "lrfd"));
   if (member.kind === "cfs") {
     a.push(
       `cold-formed steel ${member.section.name}${member.pieces > 1 ? ` (${member.assembly === "box" ? "two C-sections boxed, flanges toe to toe" : "two C-sections back to back"}, each taken as a single web sharing the load equally)` : ""}: AISI S100-16 ${input.method === "lrfd" ? "LRFD" : "ASD"}, Fy ${member.section.Fy} ksi (33 ksi below 54 mil, 50 ksi at 54 mil and above: common practice; order it so), E = 29,500 ksi`,
@@ -322,10 +301,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     a.push(
       c.unbracedLengthFt > 0
         ? `compression flange braced at the supports and every ${c.unbracedLengthFt} ft: lateral-torsional buckling by AISI S100-16 §F2.1${member.assembly === "box" ? " (a box header is taken as stable between braces)" : ""}`
-        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting)",
-    );
-    a.push(
-      `flange roll (distortional buckling, AISI S100-16 §F4.1 with Appendix 2 §2.3.3.3) checked for the top flange under sagging moment and the bottom flange where the member hogs, with no rotational restraint credited from sheathing (kφ = 0) and β = 1.0${c.unbracedLengthFt > 0 ? `; braces every ${c.unbracedLengthFt} ft taken as restraints of both flanges` : "; no bridging or blocking credited (L = Lcrd)"}${member.pieces > 1 ? "; each C-section of the header taken alone" : ""}`,
+        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting); distortional buckling (§F4) not checked separately",
     );
     a.push(
       `web crippling at each support and point load by AISI S100-16 §G5 (flanges screwed to the support, bearing ${input.bearingIn} in); bearing stiffeners: ${member.stiffeners === true ? "at every support, as given" : member.stiffeners === false ? "none, as given" : "added only where the web needs one"} (33 mil C-shape or track, IRC 2021 R505.3.4)`,
@@ -355,7 +331,7 @@ export function checkMember(json: unknown, tables: MaterialTables): CheckOutput 
       },
     ]);
   }
-  return fullCheck(input, member, contextFor(input), tables);
+  return fullCheck(input, member, contextFor(input, tables), tables);
 }
 
 /** The whole check of one resolved member in a built context (notes on): what /api/check answers and /api/size gives its top members. */

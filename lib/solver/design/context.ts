@@ -11,6 +11,7 @@ import { buildLoadModel, type ComboEnvelope, type LoadModel } from "./load-model
 import { resolveLimits } from "./presets";
 import type { CheckInput, DesignConditions } from "./schema";
 import { loadsForShear, shearZones } from "./shear-near-supports";
+import type { StudWall } from "./studs-under-steel";
 import { takeDown, type TakenDownLoad } from "./take-down";
 
 export interface DesignContext {
@@ -43,6 +44,8 @@ export interface DesignContext {
   shearModel(dIn: number): { model: LoadModel; strength: ComboEnvelope[] };
   /** every combination the checks may name (strength, service, live-only), by name */
   combinations: ReadonlyMap<string, Combination>;
+  /** the stud wall the member sits in and the wood it bears on (counts jack studs under steel); absent when not in a wall */
+  studWall?: StudWall | null;
 }
 
 function comboName(f: Combination): string {

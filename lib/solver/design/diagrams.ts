@@ -8,7 +8,7 @@ import { analyzeBeam, type Segment } from "../beam";
 import type { Combination, Load, LoadCase, Reaction, Support } from "../types";
 import type { CombinationRef, DesignCheck, SupportReaction } from "./types";
 
-/** A labelled extreme of a diagram: value and where, ft. */
+/** A labeled extreme of a diagram: value and where, ft. */
 export interface DiagramExtreme {
   x: number;
   value: number;

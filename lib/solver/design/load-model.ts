@@ -1,6 +1,6 @@
 /**
  * The analysis behind the design checks, built once per layout and load set and shared by every
- * candidate member: each load case (and, for pattern live load, each region's live load) is analysed
+ * candidate member: each load case (and, for pattern live load, each region's live load) is analyzed
  * once with a reference stiffness, and every combination is formed by superposition. The member's
  * own weight is a separate unit load, scaled per candidate; deflections scale with EI_REF/(E'·I).
  *

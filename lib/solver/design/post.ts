@@ -218,7 +218,7 @@ export function checkPost(input: PostInput, tables: MaterialTables): PostOutput 
     `Pinned at top and bottom (Ke ${Ke}), braced nowhere between: le = ${(leIn / 12).toFixed(2)} ft`,
     input.wet ? "Wet service (outdoors): CM on Fc and Emin, NDS Supplement 2018" : "Dry service",
     incised ? "Treated and incised: Ci 0.80 on Fc, 0.95 on Emin (NDS 2018 §4.3.8)" : "Not incised",
-    "Axial load only: no bending from a beam off the post's centre, wind or a rail (not checked)",
+    "Axial load only: no bending from a beam off the post's center, wind or a rail (not checked)",
   ];
   if (section.sizeClass === "beams-stringers") {
     assumptions.push(

@@ -112,7 +112,7 @@ export const conditionsSchema = z
     /**
      * member in a repetitive system (joists or rafters at 24 in or less, at least 3, sheathed); Cr, NDS
      * 2018 §4.3.9. Not given: yes for a floor-joist, deck-joist or rafter kind at 24 in or less, and for a
-     * built-up member of 3 or more plies; false is honoured for every member.
+     * built-up member of 3 or more plies; false is honored for every member.
      */
     repetitive: z.boolean().optional(),
     /** unbraced length of the compression edge, ft; 0 = continuously braced */
@@ -159,7 +159,7 @@ const designFields = {
     .min(1, "give at least one support")
     // Capped here, before the cross-field check compares supports pair by pair.
     .max(LIMITS.maxSupports, `at most ${LIMITS.maxSupports} supports`),
-  /** joist spacing, in on centre */
+  /** joist spacing, in on center */
   spacingIn: positive("in")
     .refine((v) => v <= 96, "must be at most 96 in")
     .optional(),

@@ -2,7 +2,7 @@
  * Loads for the shear check of a wood member with loads near supports left out, NDS 2018 §3.4.3.1:
  * (a) uniformly distributed loads within d of the support may be ignored; (b) a concentrated load
  * within d may be multiplied by x/d, x measured from the support face to the load. The face lies half
- * the bearing length from the support's centre line. Nothing is dropped otherwise: a point load on the
+ * the bearing length from the support's center line. Nothing is dropped otherwise: a point load on the
  * bearing itself (x ≤ 0) goes straight into the support and counts 0; linearly varying loads and
  * couples are kept whole (the conservative reading).
  *
@@ -15,7 +15,7 @@ import type { Load, LoadCase, Support } from "../types";
 export interface ShearZone {
   /** index of the support */
   support: number;
-  /** support centre, face and the section at d past the face, ft */
+  /** support center, face and the section at d past the face, ft */
   x: number;
   faceX: number;
   sectionX: number;
@@ -23,7 +23,7 @@ export interface ShearZone {
   side: 1 | -1;
 }
 
-/** The zones between each support's centre and d past its face, on each side where the member goes on. */
+/** The zones between each support's center and d past its face, on each side where the member goes on. */
 export function shearZones(supports: Support[], lengthFt: number, bearingIn: number, dIn: number): ShearZone[] {
   const zones: ShearZone[] = [];
   const halfBearingFt = bearingIn / 24;

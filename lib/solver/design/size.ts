@@ -221,7 +221,7 @@ const RANKERS: Record<SizeOutput["rank"], (a: SizeCandidateResult, b: SizeCandid
 export function sizeMember(json: unknown, tables: MaterialTables): SizeOutput {
   const input = parseWith<SizeInput>(sizeInputSchema, json);
   const specs = candidateSpecs(input.member, tables, input.spacingIn !== undefined);
-  const ctx: DesignContext = { ...contextFor(input), notes: false };
+  const ctx: DesignContext = { ...contextFor(input, tables), notes: false };
   const passing: SizeCandidateResult[] = [];
   const failing: SizeFailure[] = [];
   let checked = 0;
@@ -315,7 +315,8 @@ function perMemberWords(input: SizeInput, m: DesignMember): string[] {
 
 /** Incised and Cr as the search applied them to sawn lumber. */
 function familyWoodWords(input: SizeInput): string[] {
-  if (input.member.material === "steel" || input.member.material === "engineered" || input.member.material === "cfs") return [];
+  // incised and Cr are sawn dimension lumber's: nothing to say of a search without it
+  if (input.member.material !== "sawn" && input.member.material !== "any") return [];
   const c = input.conditions;
   const treated = c.wet || input.kind === "deck-joist" || input.kind === "deck-beam";
   const incised =

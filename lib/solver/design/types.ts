@@ -7,20 +7,23 @@ export interface CombinationRef {
   factors: Combination;
 }
 
-export type CheckName =
-  | "bending"
-  | "shear"
-  | "deflection-live"
-  | "deflection-total"
-  | "bearing"
-  | "stability"
-  | "web-yielding"
-  | "web-crippling"
-  | "web-compactness"
-  | "bending-crippling"
-  | "bending-shear"
-  | "flange-roll"
-  | "thickness-scope";
+/** Every check a member can carry, in the order a reader meets them (words for each: ./check-words.ts). */
+export const CHECK_NAMES = [
+  "bending",
+  "shear",
+  "deflection-live",
+  "deflection-total",
+  "bearing",
+  "stability",
+  "web-yielding",
+  "web-crippling",
+  "web-compactness",
+  "bending-crippling",
+  "bending-shear",
+  "flange-roll",
+  "thickness-scope",
+] as const;
+export type CheckName = (typeof CHECK_NAMES)[number];
 
 export interface DesignCheck {
   name: CheckName;
@@ -58,8 +61,10 @@ export interface SupportReaction {
   bearing: number;
   /** bearing length the member needs here, in (steel: for web local yielding and web crippling; 48 means more than 48 in) */
   requiredBearing: number;
-  /** wood members, supports at the member's ends: 1-1/2 in jack studs needed under this end of a header (bearing on the member only); null otherwise */
+  /** supports at the ends of a wood member, or of a steel member in a stud wall: 1-1/2 in jack studs needed under this end; null otherwise */
   jackStuds: number | null;
+  /** a steel member in a stud wall: the bearing the wood under it needs and the steel's own, in; the width it bears with, in; the wood's Fc⊥ used, psi */
+  studs?: { woodIn: number; steelIn: number; widthIn: number; FcPerpPsi: number };
   /** cold-formed steel: a bearing stiffener is needed at this support (the answer says so) */
   bearingStiffener?: boolean;
 }

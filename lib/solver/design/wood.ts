@@ -34,6 +34,26 @@ import type { NamedCheck, SupportReaction } from "./types";
 /** Width of one jack stud, in (a 2x stud's dressed thickness). */
 export const JACK_STUD_IN = 1.5;
 
+/**
+ * Bearing length needed on wood, in (NDS 2018 §3.10.2: fc⊥ = R / (b·lb) ≤ Fc⊥′), with R in lb, the
+ * contact width b in in, and Fc⊥ adjusted by every factor but Cb, psi. Away from the end (3 in or more)
+ * and under 6 in, Cb = (lb + 0.375)/lb (§3.10.4), so lb = R/(b·Fc⊥) − 0.375.
+ * Example: 3,000 lb on a 3 in wide member with Fc⊥ 625 psi at its end needs 3000/(3·625) = 1.6 in.
+ */
+export function requiredBearingIn(RLb: number, widthIn: number, FcPerpPsi: number, fromEndIn: number): number {
+  const plain = RLb / (widthIn * FcPerpPsi);
+  return fromEndIn >= 3 && plain < 6 ? Math.max(plain - 0.375, 0) : plain;
+}
+
+/**
+ * Jack studs (1-1/2 in each) under a member's end: enough for the bearing the check used and for the
+ * bearing needed, so the count and the check read the same numbers; at least one. Null away from the
+ * member's ends: an interior support is a post or wall, not counted in studs here.
+ */
+export function jackStudsUnder(requiredIn: number, bearingIn: number, fromEndIn: number): number | null {
+  return fromEndIn <= 1e-6 ? Math.max(1, Math.ceil(Math.max(requiredIn, bearingIn) / JACK_STUD_IN - 1e-9)) : null;
+}
+
 export interface WoodFactors {
   method: "asd" | "lrfd";
   /** CD (ASD) or λ (LRFD) of the combination governing bending */
@@ -96,7 +116,7 @@ export function resolveIncised(m: WoodMember, given: boolean | undefined, wet: b
 }
 
 /**
- * Cr (NDS 2018 §4.3.9) and why: false is honoured for every member; built-up members of 3 or more
+ * Cr (NDS 2018 §4.3.9) and why: false is honored for every member; built-up members of 3 or more
  * plies qualify by themselves (plies through-nailed); joists and rafters at 24 in or less qualify in a
  * repetitive system (said, or the floor-joist, deck-joist or rafter kind); two plies never by the built-up rule.
  */
@@ -292,16 +312,13 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
     const FcPrime = adjustedFcPerp(FcBase, { CM: 1, Ct: 1, Ci: 1, Cb });
     const fc = R / (m.b * ctx.bearingIn);
     const ratio = fc / FcPrime;
-    let required = R / (m.b * FcBase);
-    if (fromEndIn >= 3 && required < 6) required = Math.max(R / (m.b * FcBase) - 0.375, 0);
+    const required = requiredBearingIn(R, m.b, FcBase, fromEndIn);
     if (ratio > bestBearing.ratio) bestBearing = { ratio, fc, FcPrime, R, x: s.x, Cb, combination };
     reactions.push({
       ...service[j],
       bearing: ctx.bearingIn,
       requiredBearing: round(required, 2),
-      // jack studs hold a header's ends; an interior support is a post or wall, not counted in studs here.
-      // Enough studs for the bearing the check assumed and for the bearing needed: the count and the check read the same numbers.
-      jackStuds: fromEndIn <= 1e-6 ? Math.max(1, Math.ceil(Math.max(required, ctx.bearingIn) / JACK_STUD_IN - 1e-9)) : null,
+      jackStuds: jackStudsUnder(required, ctx.bearingIn, fromEndIn),
     });
   }
   const bearingCb = bestBearing.Cb;
@@ -357,7 +374,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
 }
 
 /**
- * Where the shear found at x is read: a point between a support's centre and d past its face stands
+ * Where the shear found at x is read: a point between a support's center and d past its face stands
  * for the section at d from the face (the loads of §3.4.3.1 leave nothing between), in ft.
  */
 function criticalSection(supports: { x: number }[], lengthFt: number, bearingIn: number, dIn: number, x: number): number {

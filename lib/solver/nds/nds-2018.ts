@@ -75,7 +75,7 @@ export function incisingFactorCi(incised: boolean): { Fb: number; Fv: number; Fc
 
 /**
  * Repetitive member factor Cr, NDS 2018 §4.3.9: 1.15 on Fb for dimension lumber 2–4 in thick used as
- * joists, rafters or similar, in contact or at most 24 in on centre, at least 3 in number, joined by
+ * joists, rafters or similar, in contact or at most 24 in on center, at least 3 in number, joined by
  * a load-distributing element. A member at a spacing (joists, rafters) qualifies through the system
  * around it; a member with no spacing (a beam or header) only by being built up of 3 or more plies
  * in contact, nailed together. Two plies never qualify by themselves.

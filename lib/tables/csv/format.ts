@@ -143,7 +143,7 @@ export function restoreCell(cell: string): string {
   return QUOTED_FORMULA_START.test(cell) ? cell.slice(1) : cell;
 }
 
-/** One table as a CSV file, in the format parseTableCsv reads back unchanged; formula-like cells neutralised. */
+/** One table as a CSV file, in the format parseTableCsv reads back unchanged; formula-like cells neutralized. */
 export function tableToCsv<K extends TableKey>(table: K, rows: TableRowMap[K][]): string {
   const fields = expectedHeader(table);
   const data = rows.map((row) => {

@@ -289,7 +289,7 @@ export async function copyTableRows(key: TableKey, fromVersionId: string, toVers
     .join(", ");
   const table = model.getTableName();
   const sequelize = model.sequelize;
-  if (!sequelize) throw new Error(`model for ${key} is not initialised`);
+  if (!sequelize) throw new Error(`model for ${key} is not initialized`);
   await sequelize.query(
     `INSERT INTO "${String(table)}" (id, version_id, ${columns}) SELECT gen_random_uuid(), :to, ${columns} FROM "${String(table)}" WHERE version_id = :from`,
     { replacements: { to: toVersionId, from: fromVersionId }, transaction },

@@ -11,7 +11,7 @@ import { emptyRows, rowsToTables, tablesToRows } from "./rows";
 
 /**
  * Every change to the tables goes through commitVersion: in one transaction it takes a lock that
- * serialises writers, reads the current version, builds the next set of rows, and — when anything
+ * serializes writers, reads the current version, builds the next set of rows, and — when anything
  * changed — writes version N+1 with the change summary, a fresh copy of the changed tables' rows and an
  * in-database copy of the others. Published versions are never updated. A change that changes nothing
  * writes no version.
@@ -39,7 +39,7 @@ export type CommitResult =
 
 function sequelizeOf(): Sequelize {
   const sequelize = TableVersion.sequelize;
-  if (!sequelize) throw new Error("the material table models are not initialised (call initModels)");
+  if (!sequelize) throw new Error("the material table models are not initialized (call initModels)");
   return sequelize;
 }
 

@@ -8,7 +8,7 @@ import { NumberWithUnitField, SelectField, TextField } from "@/components/ui/fie
 afterEach(cleanup);
 
 describe("TextField", () => {
-  test("is labelled, and its hint and error are announced with it", () => {
+  test("is labeled, and its hint and error are announced with it", () => {
     render(<TextField label="Job name" name="name" hint="As the crew knows it" error="Job name is required" />);
     const input = screen.getByLabelText("Job name");
     expect(input.getAttribute("aria-invalid")).toBe("true");

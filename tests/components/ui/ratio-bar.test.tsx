@@ -29,13 +29,13 @@ describe("ratioVerdict", () => {
 });
 
 describe("RatioBar", () => {
-  test("a pass just under the line reads under 100% on the bar, in words and not only in colour", () => {
+  test("a pass just under the line reads under 100% on the bar, in words and not only in color", () => {
     render(<RatioBar ratio={0.996} label="Bending" />);
     expect(screen.getByText("OK 99.6%")).toBeTruthy();
     expect(screen.queryByText("OK 100%")).toBeNull();
   });
 
-  test("a passing check says OK with its percent in words, not only in colour", () => {
+  test("a passing check says OK with its percent in words, not only in color", () => {
     const { container } = render(<RatioBar ratio={0.82} label="Bending" />);
     expect(screen.getByText("OK 82%")).toBeTruthy();
     expect(screen.getByText("Bending")).toBeTruthy();

@@ -10,7 +10,7 @@ describe("StatusBadge", () => {
     { status: "pass" as const, word: "OK" },
     { status: "fail" as const, word: "Over" },
     { status: "caution" as const, word: "Check" },
-  ])("$status carries the word $word and an icon, not only a colour", ({ status, word }) => {
+  ])("$status carries the word $word and an icon, not only a color", ({ status, word }) => {
     const { container } = render(<StatusBadge status={status} />);
     expect(container.textContent).toBe(word);
     expect(container.querySelector("svg")).not.toBeNull();

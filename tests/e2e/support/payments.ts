@@ -99,7 +99,7 @@ export async function subscribe(page: Page, plan: "monthly" | "yearly" = "monthl
 }
 
 /**
- * Ends the current period of one subscription on the stand-in (a cancelled one then ends, another renews)
+ * Ends the current period of one subscription on the stand-in (a canceled one then ends, another renews)
  * and waits until its webhooks are delivered.
  */
 export async function endBillingPeriod(subscriptionId: string): Promise<string[]> {

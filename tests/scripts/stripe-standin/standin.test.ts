@@ -333,7 +333,7 @@ describe("the stand-in through the official SDK", () => {
     await expect(stripe.subscriptions.update(subId, { cancel_at_period_end: false })).rejects.toMatchObject({ statusCode: 400 });
   });
 
-  test("advancing the clock renews (invoice.paid), fails a renewal (payment_failed, past_due), and ends a cancelled one", async () => {
+  test("advancing the clock renews (invoice.paid), fails a renewal (payment_failed, past_due), and ends a canceled one", async () => {
     const { session } = await openSession("clock@example.test");
     await pay(standin.url, session.id);
     const subId = (await stripe.checkout.sessions.retrieve(session.id)).subscription as string;

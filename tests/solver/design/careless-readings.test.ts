@@ -76,7 +76,7 @@ describe("careless readings that pass an undersized member", () => {
     expect(r.pass).toBe(false);
   });
 
-  test("Cr for 3 plies when the input says repetitive: false (honoured): 3-ply 2x10, 10 ft", () => {
+  test("Cr for 3 plies when the input says repetitive: false (honored): 3-ply 2x10, 10 ft", () => {
     const input = {
       member: dfl("2x10", 3),
       ...simple(10),

@@ -35,7 +35,7 @@ describe("Cr, NDS 2018 §4.3.9: at least three members joined by a load-distribu
   test.each([
     // plies, conditions, kind, spacing?, Cr, why
     [2, { repetitive: true }, undefined, 1.0, "a 2-ply beam flagged repetitive has no spacing: not a repetitive system"],
-    [3, { repetitive: false }, undefined, 1.0, "explicit false is honoured for 3 plies"],
+    [3, { repetitive: false }, undefined, 1.0, "explicit false is honored for 3 plies"],
     [3, {}, undefined, 1.15, "3 plies through-nailed by default, the assumption written out"],
     [4, {}, "beam", 1.15, "4 plies"],
     [2, {}, "beam", 1.0, "2 plies never by the built-up rule"],
@@ -136,7 +136,7 @@ describe("the unbraced length given is the one checked, placed where it is worst
   });
 
   test("steel: W12x14 over 14 ft, braces said to be 10 ft apart → checked at Lb = 10 ft (AISC 360-16 Eq. F2-3), fails", () => {
-    // D 250 plf + L 600 plf: Ma = 850 × 14² / 8 = 20.83 kip-ft. Worst placement of a 10 ft segment: centred on
+    // D 250 plf + L 600 plf: Ma = 850 × 14² / 8 = 20.83 kip-ft. Worst placement of a 10 ft segment: centered on
     // the midspan, Cb = 12.5·49 / (2.5·49 + 3·42.75 + 4·49 + 3·42.75) = 1.065 (M ∝ x(14 − x)).
     const r = checkMember(
       {

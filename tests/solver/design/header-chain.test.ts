@@ -6,7 +6,7 @@ import { STARTER_TABLES } from "@/lib/tables";
  * The whole chain on one header, worked by hand (invented job: the Alder Lane garage, a 6 ft window
  * header in the first-floor bearing wall).
  *
- * Member: 2-ply 2x10 Douglas Fir-Larch No.2, 6 ft centre to centre of bearing, 3 in bearing (two
+ * Member: 2-ply 2x10 Douglas Fir-Larch No.2, 6 ft center to center of bearing, 3 in bearing (two
  * jack studs) at each end, compression edge held by the framing above, dry, 70 °F.
  * NDS Supplement 2018 Table 4A (from memory): Fb 900, Fv 180, Fc⊥ 625, E 1,600,000 psi, CF 1.1 (2x10).
  * Section (Table 1B): b = 3.0 in, d = 9.25 in, A = 27.75 in², S = 42.78 in³, I = 197.86 in⁴.

@@ -8,12 +8,12 @@ import type { Load } from "@/lib/solver/types";
  * Shear with loads near supports left out, NDS 2018 §3.4.3.1:
  * (a) uniformly distributed loads within d of the support may be ignored;
  * (b) concentrated loads within d of the support may be multiplied by x/d, x from the support face.
- * The support face is half the bearing length from the support's centre line. Hand figures below,
+ * The support face is half the bearing length from the support's center line. Hand figures below,
  * fv = 3V/2A (NDS 2018 Eq. 3.4-2), Fv' = Fv × CD (NDS 2018 Table 2.3.2: CD = 1.0 for L).
  */
 const s = findSawnSize(STARTER_TABLES, "2x10"); // d = 9.25 in, A = 13.875 in²
 const v = sawnValuesForSize(STARTER_TABLES, "Douglas Fir-Larch", "No.2", "2x10");
-const bearing = 3; // in → face 1.5 in from the centre line
+const bearing = 3; // in → face 1.5 in from the center line
 
 function joist(length: number, loads: Record<string, unknown>[], supports?: { x: number; type: string }[], ignore = true) {
   return {
@@ -32,7 +32,7 @@ function joist(length: number, loads: Record<string, unknown>[], supports?: { x:
 const shear = (r: ReturnType<typeof checkMember>) => r.checks.find((c) => c.name === "shear");
 
 describe("NDS 2018 §3.4.3.1(b): a point load within d of the face counts at x/d, never dropped", () => {
-  // 10 ft span, P = 4000 lb (L) at a = 9 in from the left support's centre: x = 9 − 1.5 = 7.5 in from the face,
+  // 10 ft span, P = 4000 lb (L) at a = 9 in from the left support's center: x = 9 − 1.5 = 7.5 in from the face,
   // x/d = 7.5/9.25 = 0.8108. V at the left face = 0.8108 × 4000 × (10 − 0.75)/10 = 3000 lb.
   const a = 0.75;
   const P = 4000;

@@ -8,7 +8,7 @@ import type { SawnGrade, Species } from "@/lib/tables/types";
  * IRC 2021 Table R502.3.1(1) (30 psf live, 10 psf dead, L/360) and Table R502.3.1(2) (40 psf live,
  * 10 psf dead, L/360); the same figures are in the AWC Span Tables for Joists and Rafters (2018).
  * The tables print ft-in rounded down to the inch and measure the span as NDS §3.2.1 does (face to
- * face plus half the bearing); we search centre to centre, so we accept −1 in to +2 in.
+ * face plus half the bearing); we search center to center, so we accept −1 in to +2 in.
  * Table figures: DF-L Select Structural 2x10 at 12/16/24 in (30 psf) as quoted by public span-table
  * pages; SPF No.2 2x10 at 16 in (40 psf) as quoted from the 2015 IRC on a public engineering forum;
  * the rest from memory of the printed tables.

@@ -77,7 +77,7 @@ describe("parseTableCsv", () => {
     ["an empty file", "", /empty/],
     ["a header only", `${VALUES_HEADER}\n`, /no rows/],
     ["another table's header", `${expectedHeader("steel-grades").join(",")}\nA36,36,58\n`, /missing columns species/],
-    ["an extra column", `${VALUES_HEADER},colour\n${DFL_NO2},red\n`, /unknown column colour/],
+    ["an extra column", `${VALUES_HEADER},color\n${DFL_NO2},red\n`, /unknown column color/],
     ["an unclosed quote", `${VALUES_HEADER}\n"Douglas Fir-Larch,No.2\n`, /not valid CSV/],
     ["a binary-looking text", "\u0001\u0002PNG\n", /does not match/],
   ])("%s is refused as a whole file", (_label, text, message) => {
