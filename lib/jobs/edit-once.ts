@@ -37,7 +37,14 @@ function stableJson(value: unknown): string {
  * What the builder set on a member, as a sha-256 hex: its name, inputs, chosen member and where it sits. The
  * answer the server works out is not part of it (a recheck after new tables is not a change of the builder's).
  */
-export function memberVersion(m: Pick<Member, "label" | "flowState" | "chosenMember" | "carriedByMemberId" | "bearing" | "supportDesign">): string {
+export function memberVersion(m: {
+  label: string;
+  flowState: unknown;
+  chosenMember: unknown;
+  carriedByMemberId?: string | null;
+  bearing?: unknown;
+  supportDesign?: unknown;
+}): string {
   const what = {
     label: m.label,
     flowState: m.flowState,

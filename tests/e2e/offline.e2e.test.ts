@@ -120,7 +120,7 @@ describe("no signal at 390x844", () => {
     await dialog.getByLabel(/Member name/).fill(label);
     await dialog.getByRole("button", { name: "Save" }).click();
     await page.getByText(`No signal: ${label} is saved on this phone and goes to ${jobName} when the signal is back.`).waitFor();
-    await expect.poll(() => page.getByTestId("offline-bar").textContent()).toMatch(/1 save is waiting to send/);
+    await expect.poll(() => page.getByTestId("offline-bar").textContent()).toMatch(/1 change waiting to send/);
     await page.screenshot({ path: "tests/artifacts/offline-2-saved-on-phone.png" });
 
     // walking back out: the save is sent once, and the server's recheck is shown
