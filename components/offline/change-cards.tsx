@@ -34,8 +34,8 @@ export function ConflictCard({ save }: { save: QueuedSave }) {
       <p className="flex items-start gap-2 font-bold text-over-ink">
         <WarningIcon className="mt-0.5 h-5 w-5 shrink-0" />
         {conflict.deleted
-          ? `Your change to ${save.label} was not sent: ${now.label} was deleted from ${conflict.jobName} after this phone opened it.`
-          : `Your change to ${save.label} was not sent: ${now.label} in ${conflict.jobName} was changed on another screen after this phone opened it.`}
+          ? `Your change to ${save.label} in ${conflict.jobName} was not sent: it was deleted after this phone opened it.`
+          : `Your change to ${save.label} in ${conflict.jobName} was not sent: it was changed on another screen after this phone opened it.`}
       </p>
       {conflict.deleted ? null : changes.length > 0 ? (
         <div>

@@ -48,7 +48,7 @@ export function JobOnPhone({ jobId }: { jobId: string }) {
             <InfoIcon className="mt-1 h-5 w-5 shrink-0" />
             <span>
               {waitingWords(pending.length)}
-              {online ? "; sending now." : ": they go when the signal is back."}
+              {online ? "; sending now." : pending.length === 1 ? ": it goes when the signal is back." : ": they go when the signal is back."}
             </span>
           </p>
           <ul className="list-disc pl-6 text-ink">

@@ -9,7 +9,7 @@ import { Button } from "@/components/ui/button";
 import { InfoIcon, WarningIcon } from "@/components/ui/icons";
 import { ConflictCard, SentCard, waitingWords } from "./change-cards";
 import { refreshPhoneTables } from "./phone-tables";
-import { forgetSave, onQueueChange, queuedSaves, sendQueuedSaves, sentSaves, type QueuedSave, type SentRecord } from "./save-queue";
+import { forgetSave, onQueueChange, onWorkerSent, queuedSaves, sendQueuedSaves, sentSaves, type QueuedSave, type SentRecord } from "./save-queue";
 
 const RETRY_MS = 30_000;
 /** A sent save's message is shown until dismissed, for this long at most. */
@@ -54,9 +54,11 @@ export function OfflineShell() {
   }, []);
 
   const send = useCallback(async () => {
-    const done = await sendQueuedSaves();
-    if (done.length > 0) router.refresh();
+    if (await sendQueuedSaves()) router.refresh();
   }, [router]);
+
+  // the service worker sent (or settled) queued items: the page reads the server again
+  useEffect(() => onWorkerSent(() => router.refresh()), [router]);
 
   useEffect(() => {
     reloadQueue();

@@ -13,7 +13,7 @@ export type { QueuedSave, SentRecord } from "@/lib/offline/queue";
  */
 
 const CHANGED = "spanlark:save-queue";
-let sending: Promise<SentRecord[]> | null = null;
+let sending: Promise<boolean> | null = null;
 
 function announce(): void {
   window.dispatchEvent(new Event(CHANGED));
@@ -92,15 +92,24 @@ export function recheckOf(record: SentRecord): Recheck | null {
   return record.phoneAnswer ? recheck(record.phoneAnswer, record.response) : null;
 }
 
-/** Sends every waiting item once (one sender at a time per page); answers those the server took. */
-export function sendQueuedSaves(): Promise<SentRecord[]> {
+/** Sends every waiting item once (one sender at a time per page); answers whether anything changed (sent, refused, in conflict). */
+export function sendQueuedSaves(): Promise<boolean> {
   sending ??= sendQueue("page")
     .then((outcome) => {
       if (outcome.changed) announce();
-      return outcome.sent;
+      return outcome.changed;
     })
     .finally(() => {
       sending = null;
     });
   return sending;
+}
+
+/** Calls `listener` when the service worker sent or settled queued items (the page should read the server again). */
+export function onWorkerSent(listener: () => void): () => void {
+  const fromWorker = (event: MessageEvent) => {
+    if ((event.data as { type?: unknown } | null)?.type === "QUEUE_CHANGED") listener();
+  };
+  navigator.serviceWorker?.addEventListener("message", fromWorker);
+  return () => navigator.serviceWorker?.removeEventListener("message", fromWorker);
 }

@@ -25,7 +25,12 @@ function loadCount(s: FlowState): number {
 
 function specWords(spec: MemberSpec | null): string {
   if (!spec) return "the best that passes";
-  const parts = Object.entries(spec as Record<string, unknown>)
+  const s = spec as Record<string, unknown>;
+  if (typeof s.size === "string") {
+    const plies = typeof s.plies === "number" && s.plies > 1 ? `${s.plies}-ply ` : "";
+    return [`${plies}${s.size}`, s.grade, s.species].filter((x) => typeof x === "string" && x).join(" ");
+  }
+  const parts = Object.entries(s)
     .filter(([k, v]) => k !== "material" && (typeof v === "string" || typeof v === "number"))
     .map(([, v]) => String(v));
   return parts.join(" ") || spec.material;

@@ -5,61 +5,17 @@
 // once and the server's recheck is shown; the job holds the member once. A save sent twice with one
 // Idempotency-Key makes one member and gets the same answer. A crew link opened once reads with no signal.
 import { randomUUID } from "node:crypto";
-import type { BrowserContext, Page, Route } from "playwright-core";
+import type { Page } from "playwright-core";
 import { describe, expect, test } from "vitest";
 import { defaultFlowState } from "@/lib/flow/defaults";
 import { baseUrl, setupBrowser, type OpenedPage } from "./support/browser";
 import { nextStep, typeLength, waitForAnswer } from "./support/flow";
+import { OFFLINE_NOISE, goOffline, goOnline, waitUntilKept } from "./support/offline";
 import { signIn } from "./support/payments";
 
 const session = setupBrowser();
 
 const SAM = { email: "sam@hollisrowe.test", password: "subscriber-demo-pass" };
-// requests refused while offline, and the prefetches the router tries then
-const OFFLINE_NOISE = [/ERR_INTERNET_DISCONNECTED/, /ERR_FAILED/, /Failed to fetch/, /favicon\.ico/];
-
-/** Cuts the network: the page's own requests (setOffline) and any the service worker sends for it. */
-async function goOffline(context: BrowserContext): Promise<void> {
-  await context.setOffline(true);
-  await context.route("**/*", refuseFromWorker);
-}
-
-async function goOnline(context: BrowserContext): Promise<void> {
-  await context.unroute("**/*", refuseFromWorker);
-  await context.setOffline(false);
-}
-
-function refuseFromWorker(route: Route): Promise<void> {
-  return route.request().serviceWorker() ? route.abort("internetdisconnected") : route.fallback();
-}
-
-/** Waits until the service worker controls the page and has kept `paths` and the material tables on the phone. */
-async function waitUntilKept(page: Page, paths: string[]): Promise<void> {
-  await page.waitForFunction(() => navigator.serviceWorker.controller !== null, null, { timeout: 30_000 });
-  await expect
-    .poll(
-      () =>
-        page.evaluate(async (wanted) => {
-          const cache = await caches.open("spanlark-pages");
-          const kept = (await cache.keys()).map((r) => new URL(r.url).pathname);
-          const tables = await new Promise<boolean>((resolve) => {
-            const open = indexedDB.open("spanlark-tables");
-            open.onsuccess = () => {
-              const db = open.result;
-              if (!db.objectStoreNames.contains("tables")) return resolve(false);
-              const get = db.transaction("tables").objectStore("tables").get("current");
-              get.onsuccess = () => resolve(Boolean(get.result));
-              get.onerror = () => resolve(false);
-            };
-            open.onerror = () => resolve(false);
-          });
-          return tables && wanted.every((p) => kept.includes(p));
-        }, paths),
-      { timeout: 30_000, interval: 500 },
-    )
-    .toBe(true);
-}
-
 async function membersNamed(page: Page, jobName: string, label: string): Promise<number> {
   await page.goto(`${baseUrl()}/jobs`, { waitUntil: "load" });
   await page

@@ -31,6 +31,6 @@ describe("what changed in a member since the phone opened it", () => {
     const now: MemberSnapshot = { ...base, chosenMember: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x10", plies: 2 } as never };
     const lines = memberChanges(base, now);
     expect(lines).toHaveLength(1);
-    expect(lines[0]).toMatch(/^chosen member: was the best that passes, now .*2x10/);
+    expect(lines[0]).toBe("chosen member: was the best that passes, now 2-ply 2x10 No.2 Douglas Fir-Larch");
   });
 });
