@@ -2,9 +2,9 @@ import type { Metadata, Viewport } from "next";
 import localFont from "next/font/local";
 import { connection } from "next/server";
 import { Suspense, type ReactNode } from "react";
-import { OfflineShell } from "@/components/offline/offline-shell";
 import { AdminNavLink } from "@/components/shell/admin-nav-link";
 import { BottomNav } from "@/components/shell/bottom-nav";
+import { DeferredOfflineShell } from "@/components/shell/deferred-offline-shell";
 import { SiteFooter } from "@/components/shell/site-footer";
 import { SiteHeader } from "@/components/shell/site-header";
 import { ToastProvider } from "@/components/ui/toast";
@@ -28,6 +28,10 @@ const plexMono = localFont({
   ],
   variable: "--font-mono",
   display: "swap",
+  // figures only (tables, step numbers), not the first screen's text: not preloaded, so the slow link carries the
+  // body font, the styles and the scripts first; the fallback is metric-matched by next/font, so the swap does not
+  // move the page
+  preload: false,
   fallback: ["ui-monospace", "Menlo", "monospace"],
 });
 
@@ -69,7 +73,7 @@ export default async function RootLayout({ children }: { children: ReactNode }) 
               </Suspense>
             }
           />
-          <OfflineShell />
+          <DeferredOfflineShell />
           <main id="main" tabIndex={-1} className="mx-auto w-full max-w-5xl flex-1 px-4 pt-6 focus:outline-none">
             {children}
           </main>

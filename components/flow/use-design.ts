@@ -1,12 +1,15 @@
 "use client";
 
-import { useEffect, useState, useSyncExternalStore } from "react";
+import { useEffect, useState } from "react";
 import useSWR from "swr";
 import type { SizeOutput } from "@/lib/solver/design/size";
 import { sizeRequest } from "@/lib/flow/request";
 import type { FlowState } from "@/lib/flow/state";
 import type { TablesStamp } from "@/lib/offline/answers";
 import { readPhoneTables, refreshPhoneTables } from "@/components/offline/phone-tables";
+import { useOnline } from "@/components/ui/use-online";
+
+export { useOnline };
 
 /** A refusal from the design routes: the field-level issues of a 400, or why the request failed. */
 export class DesignRequestError extends Error {
@@ -130,22 +133,4 @@ export function useSize(state: FlowState) {
   }, [online, data?.onPhone, mutate]);
 
   return swr;
-}
-
-function subscribeOnline(onChange: () => void): () => void {
-  window.addEventListener("online", onChange);
-  window.addEventListener("offline", onChange);
-  return () => {
-    window.removeEventListener("online", onChange);
-    window.removeEventListener("offline", onChange);
-  };
-}
-
-/** navigator.onLine, kept current (true while rendering on the server). */
-export function useOnline(): boolean {
-  return useSyncExternalStore(
-    subscribeOnline,
-    () => navigator.onLine,
-    () => true,
-  );
 }

@@ -2,7 +2,7 @@
 
 import { useSyncExternalStore } from "react";
 import { InfoIcon } from "@/components/ui/icons";
-import { useOnline } from "@/components/flow/use-design";
+import { useOnline } from "@/components/ui/use-online";
 
 export type CopyAgeProps = {
   /** when the page was read from the server, ISO 8601 */
