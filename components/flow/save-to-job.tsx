@@ -11,11 +11,20 @@ import { SelectField, TextField } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
 import { saveMemberSchema, type SaveMemberForm } from "@/lib/flow/forms";
 import { queueSave } from "@/components/offline/save-queue";
-import type { PhoneAnswer } from "@/lib/offline/answers";
+import type { MemberSnapshot, PhoneAnswer } from "@/lib/offline/answers";
 import { KIND_LABELS, type FlowState } from "@/lib/flow/state";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 
-export type SaveTarget = { jobId: string; memberId: string; label: string; jobName: string };
+export type SaveTarget = {
+  jobId: string;
+  memberId: string;
+  label: string;
+  jobName: string;
+  /** the member's version when this page was drawn: a change made with no signal applies only to it */
+  version?: string;
+  /** the member as this page was drawn, to say what changed if it changes elsewhere first */
+  base?: MemberSnapshot;
+};
 
 export type SaveToJobProps = {
   open: boolean;
@@ -88,8 +97,28 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               onClose();
               toast.show({ message: `No signal: ${values.label} is saved on this phone and goes to ${jobName} when the signal is back.` });
             };
-            if (!editing && !navigator.onLine) {
-              await keepOnPhone();
+            // a change to a saved member waits on the phone too, applied later only if nobody changed the member meanwhile
+            const offlineEdit = editing?.version && editing.base ? { version: editing.version, base: editing.base } : null;
+            const keepChangeOnPhone = async (target: SaveTarget, made: { version: string; base: MemberSnapshot }) => {
+              await queueSave({
+                key,
+                kind: "edit",
+                memberId: target.memberId,
+                jobId: target.jobId,
+                body: { baseVersion: made.version, label: values.label, flowState: state, chosenMember: chosen, ...(accountId ? { accountId } : {}) },
+                label: values.label,
+                jobName,
+                phoneAnswer,
+                base: made.base,
+                queuedAt: new Date().toISOString(),
+              });
+              saveKey.current = null;
+              onClose();
+              toast.show({ message: `No signal: your change to ${values.label} is kept on this phone and goes to ${jobName} when the signal is back.` });
+            };
+            if (!navigator.onLine && (!editing || offlineEdit)) {
+              if (editing && offlineEdit) await keepChangeOnPhone(editing, offlineEdit);
+              else await keepOnPhone();
               return;
             }
             let result: Awaited<ReturnType<typeof saveMember>>;
@@ -101,6 +130,10 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               if (!isUnsent(err)) throw err;
               if (!editing) {
                 await keepOnPhone();
+                return;
+              }
+              if (offlineEdit) {
+                await keepChangeOnPhone(editing, offlineEdit);
                 return;
               }
               setServerError({ message: "No signal: changes to a saved member need a signal. Your inputs are kept; try again when you have one." });

@@ -58,10 +58,12 @@ export type JobPageProps = {
   job: { id: string; name: string; siteAddress: string; notes: string; members: JobPageMember[] };
   /** more sections under the members (crew link, job sheets) */
   children?: ReactNode;
+  /** what this phone still has to send to the job, and what it sent (above the members) */
+  onPhone?: ReactNode;
 };
 
 /** A job: its members (edit, duplicate, delete with Undo) and the job's own actions. */
-export function JobPage({ job, children }: JobPageProps) {
+export function JobPage({ job, children, onPhone }: JobPageProps) {
   const router = useRouter();
   const toast = useToast();
   const [editing, setEditing] = useState(false);
@@ -121,6 +123,7 @@ export function JobPage({ job, children }: JobPageProps) {
         </p>
       ) : null}
 
+      {onPhone}
       <section aria-labelledby="members-title" className="flex flex-col gap-3">
         <h2 id="members-title" className="text-2xl font-bold">
           Members

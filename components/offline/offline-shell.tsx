@@ -6,12 +6,14 @@ import { useCallback, useEffect, useRef, useState } from "react";
 import { useOnline } from "@/components/flow/use-design";
 import { isCrewPage } from "@/components/shell/nav-items";
 import { Button } from "@/components/ui/button";
-import { CheckIcon, InfoIcon, WarningIcon } from "@/components/ui/icons";
-import { answerWords } from "@/lib/offline/answers";
+import { InfoIcon, WarningIcon } from "@/components/ui/icons";
+import { ConflictCard, SentCard, waitingWords } from "./change-cards";
 import { refreshPhoneTables } from "./phone-tables";
-import { forgetSave, onQueueChange, queuedSaves, sendQueuedSaves, type QueuedSave, type SentSave } from "./save-queue";
+import { forgetSave, onQueueChange, onWorkerSent, queuedSaves, sendQueuedSaves, sentSaves, type QueuedSave, type SentRecord } from "./save-queue";
 
 const RETRY_MS = 30_000;
+/** A sent save's message is shown until dismissed, for this long at most. */
+const SENT_SHOWN_MS = 24 * 3600 * 1000;
 
 /**
  * Spanlark with no signal, once per page: registers the service worker (built app only), offers a newer version
@@ -26,7 +28,7 @@ export function OfflineShell() {
   const crew = isCrewPage(usePathname() ?? "/");
   const [update, setUpdate] = useState<Serwist | null>(null);
   const [waiting, setWaiting] = useState<QueuedSave[]>([]);
-  const [sent, setSent] = useState<SentSave[]>([]);
+  const [sent, setSent] = useState<SentRecord[]>([]);
   const registered = useRef(false);
 
   useEffect(() => {
@@ -34,6 +36,10 @@ export function OfflineShell() {
     registered.current = true;
     const sw = new Serwist("/serwist/sw.js", { scope: "/", type: "classic" });
     sw.addEventListener("waiting", () => setUpdate(sw));
+    // the browser looks for a newer worker on each page load; a phone that keeps the app open looks when it comes back to it
+    document.addEventListener("visibilitychange", () => {
+      if (document.visibilityState === "visible") void sw.update();
+    });
     // this page was drawn before the worker took over (the first visit): ask it to keep this page too
     if (!navigator.serviceWorker.controller) {
       sw.addEventListener("controlling", () => navigator.serviceWorker.controller?.postMessage({ type: "WARM_PAGES", urls: [window.location.href] }));
@@ -43,15 +49,16 @@ export function OfflineShell() {
 
   const reloadQueue = useCallback(() => {
     void queuedSaves().then(setWaiting);
+    const since = Date.now() - SENT_SHOWN_MS;
+    void sentSaves().then((all) => setSent(all.filter((r) => !r.seen && Date.parse(r.sentAt) > since).reverse()));
   }, []);
 
   const send = useCallback(async () => {
-    const done = await sendQueuedSaves();
-    if (done.length > 0) {
-      setSent((before) => [...before, ...done]);
-      router.refresh();
-    }
+    if (await sendQueuedSaves()) router.refresh();
   }, [router]);
+
+  // the service worker sent (or settled) queued items: the page reads the server again
+  useEffect(() => onWorkerSent(() => router.refresh()), [router]);
 
   useEffect(() => {
     reloadQueue();
@@ -69,8 +76,9 @@ export function OfflineShell() {
     };
   }, [online, send]);
 
-  const pending = waiting.filter((s) => !s.refused);
+  const pending = waiting.filter((s) => !s.refused && !s.conflict);
   const refused = waiting.filter((s) => s.refused);
+  const conflicts = waiting.filter((s) => s.conflict && !s.refused);
 
   return (
     <div className="no-print mx-auto flex w-full max-w-5xl flex-col gap-2 px-4 empty:hidden [&:not(:empty)]:pt-3" data-testid="offline-shell">
@@ -92,23 +100,24 @@ export function OfflineShell() {
         <p role="status" className="flex items-start gap-2 rounded-lg border-2 border-ink bg-paper-raised p-2 text-ink" data-testid="offline-bar">
           <InfoIcon className="mt-0.5 h-5 w-5 shrink-0" />
           <span>
-            <span className="font-bold">No signal.</span> Sizing works on this phone; saves wait here until the signal is back.
-            {pending.length > 0 ? ` ${pending.length} ${pending.length === 1 ? "save is" : "saves are"} waiting to send.` : ""}
+            <span className="font-bold">No signal.</span> Sizing works on this phone; saves and changes wait here until the signal is back.
+            {pending.length > 0 ? ` ${waitingWords(pending.length)}.` : ""}
           </span>
         </p>
       ) : pending.length > 0 ? (
         <p role="status" className="flex items-start gap-2 rounded-lg border-2 border-rule-strong bg-paper-raised p-2 text-ink" data-testid="saves-waiting">
           <InfoIcon className="mt-0.5 h-5 w-5 shrink-0" />
           <span>
-            {pending.length} {pending.length === 1 ? "save made" : "saves made"} with no signal {pending.length === 1 ? "is" : "are"} waiting to send (
-            {pending.map((s) => s.label).join(", ")}). Sign in with the account that made {pending.length === 1 ? "it" : "them"} if you signed out.
+            {waitingWords(pending.length)} ({pending.map((s) => s.label).join(", ")}). Sign in with the account that made {pending.length === 1 ? "it" : "them"}{" "}
+            if you signed out.
           </span>
         </p>
       ) : null}
       {refused.map((s) => (
         <div key={s.key} role="alert" className="flex flex-col gap-1 rounded-lg border-2 border-over bg-over-bg p-2 pl-3 text-ink">
           <p className="flex items-start gap-2 font-bold text-over-ink">
-            <WarningIcon className="mt-0.5 h-5 w-5 shrink-0" /> {s.label} was not saved to {s.jobName}.
+            <WarningIcon className="mt-0.5 h-5 w-5 shrink-0" />{" "}
+            {s.kind === "edit" ? `Your change to ${s.label} was not sent.` : `${s.label} was not saved to ${s.jobName}.`}
           </p>
           <p>{s.refused}</p>
           <Button variant="secondary" className="self-start" onClick={() => void forgetSave(s.key)}>
@@ -116,38 +125,11 @@ export function OfflineShell() {
           </Button>
         </div>
       ))}
-      {sent.map(({ save, response, recheck }) => (
-        <div
-          key={save.key}
-          role={recheck && !recheck.same ? "alert" : "status"}
-          className={
-            recheck && !recheck.same
-              ? "flex flex-col gap-1 rounded-lg border-2 border-over bg-over-bg p-2 pl-3 text-ink"
-              : "flex flex-col gap-1 rounded-lg border-2 border-spruce bg-spruce-light p-2 pl-3 text-ink"
-          }
-          data-testid="sent-save"
-        >
-          <p className="flex items-start gap-2 font-bold">
-            <CheckIcon className="mt-0.5 h-5 w-5 shrink-0 text-sound" /> {response.label} saved to {response.jobName} from this phone.
-          </p>
-          {recheck ? (
-            recheck.same ? (
-              <p>Rechecked by the server: the same answer as worked out on this phone.</p>
-            ) : (
-              <>
-                <p className="font-bold text-over-ink">Rechecked by the server: the answer changed.</p>
-                <p>This phone worked out: {answerWords(recheck.phone)}.</p>
-                <p>The server says: {answerWords(recheck.server)}. The job keeps the server&apos;s answer.</p>
-                <p>Why: {recheck.why}</p>
-              </>
-            )
-          ) : (
-            <p>The server worked out its answer: {answerWords(response.answer)}.</p>
-          )}
-          <Button variant="ghost" className="self-start" onClick={() => setSent((all) => all.filter((x) => x.save.key !== save.key))}>
-            Dismiss
-          </Button>
-        </div>
+      {conflicts.map((s) => (
+        <ConflictCard key={s.key} save={s} />
+      ))}
+      {sent.map((record) => (
+        <SentCard key={record.key} record={record} />
       ))}
     </div>
   );

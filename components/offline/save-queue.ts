@@ -1,110 +1,115 @@
 "use client";
 
-import { createStore, del, entries, set, update } from "idb-keyval";
-import { recheck, type PhoneAnswer, type Recheck, type SavedMemberResponse } from "@/lib/offline/answers";
+import { recheck, type Recheck } from "@/lib/offline/answers";
+import { SYNC_TAG, markSentSeen, putQueued, readQueue, readSent, removeQueued, sendQueue, type QueuedSave, type SentRecord } from "@/lib/offline/queue";
+
+export type { QueuedSave, SentRecord } from "@/lib/offline/queue";
 
 /**
- * Saves made with no signal wait here (IndexedDB) until the server takes them, each under the key it will be
- * sent with (Idempotency-Key): sending one again after a lost answer never makes a second member, so a save is
- * removed only once the server has answered it.
+ * The page's side of the queue of saves and changes made with no signal (lib/offline/queue.ts): queues them,
+ * asks the service worker to send them by Background Sync where the browser has it (even with no Spanlark page
+ * open), sends them itself while a page is open (every browser), and tells the page when anything changed
+ * (here, or in the worker: it posts QUEUE_CHANGED).
  */
 
-export interface QueuedSave {
-  /** the idempotency key, a UUID made when the builder pressed Save */
-  key: string;
-  /** the body of POST /api/members */
-  body: Record<string, unknown>;
-  /** for the words on screen */
-  label: string;
-  jobName: string;
-  /** the answer as this phone worked it out, when it did (compared with the server's when sent) */
-  phoneAnswer: PhoneAnswer | null;
-  /** ISO 8601 */
-  queuedAt: string;
-  /** set when the server refused it for good (the builder must act); such a save is not sent again by itself */
-  refused?: string;
-}
-
-export interface SentSave {
-  save: QueuedSave;
-  response: SavedMemberResponse;
-  /** the server's recheck of the phone's answer; null when the phone had none (sized online, saved offline) */
-  recheck: Recheck | null;
-}
-
 const CHANGED = "spanlark:save-queue";
-let store: ReturnType<typeof createStore> | null = null;
-let sending: Promise<SentSave[]> | null = null;
-
-function queueStore(): ReturnType<typeof createStore> {
-  store ??= createStore("spanlark-saves", "saves");
-  return store;
-}
+let sending: Promise<boolean> | null = null;
 
 function announce(): void {
   window.dispatchEvent(new Event(CHANGED));
 }
 
-/** Calls `listener` whenever a save is queued, sent or refused; returns the unsubscribe. */
+/** Calls `listener` whenever an item is queued, sent or refused, by this page or by the service worker; returns the unsubscribe. */
 export function onQueueChange(listener: () => void): () => void {
+  const fromWorker = (event: MessageEvent) => {
+    if ((event.data as { type?: unknown } | null)?.type === "QUEUE_CHANGED") listener();
+  };
   window.addEventListener(CHANGED, listener);
-  return () => window.removeEventListener(CHANGED, listener);
+  navigator.serviceWorker?.addEventListener("message", fromWorker);
+  return () => {
+    window.removeEventListener(CHANGED, listener);
+    navigator.serviceWorker?.removeEventListener("message", fromWorker);
+  };
+}
+
+type SyncRegistration = ServiceWorkerRegistration & { sync?: { register: (tag: string) => Promise<void> } };
+
+/** Asks the service worker to send the queue when the signal is back, page open or not (Background Sync; a no-op without it). */
+async function askWorkerToSend(): Promise<void> {
+  if (!("serviceWorker" in navigator) || !navigator.serviceWorker.controller) return;
+  try {
+    const registration = (await navigator.serviceWorker.ready) as SyncRegistration;
+    await registration.sync?.register(SYNC_TAG);
+  } catch {
+    // no Background Sync here (or refused): the open page sends it
+  }
 }
 
 export async function queueSave(save: QueuedSave): Promise<void> {
-  await set(save.key, save, queueStore());
+  await putQueued(save);
   announce();
+  await askWorkerToSend();
 }
 
 export async function queuedSaves(): Promise<QueuedSave[]> {
-  try {
-    const all = await entries<string, QueuedSave>(queueStore());
-    return all.map(([, v]) => v).sort((a, b) => a.queuedAt.localeCompare(b.queuedAt));
-  } catch {
-    return [];
-  }
+  return readQueue();
+}
+
+export async function sentSaves(): Promise<SentRecord[]> {
+  return readSent();
 }
 
 export async function forgetSave(key: string): Promise<void> {
-  await del(key, queueStore());
+  await removeQueued(key);
   announce();
 }
 
-/** Sends every waiting save once (one sender at a time per page); returns those the server took. */
-export function sendQueuedSaves(): Promise<SentSave[]> {
-  sending ??= sendAll().finally(() => {
-    sending = null;
-  });
+export async function dismissSent(key: string): Promise<void> {
+  await markSentSeen(key);
+  announce();
+}
+
+/** The builder keeps their change over the member as it is now: queued again on its current version, under a new key. */
+export async function sendMineAnyway(save: QueuedSave): Promise<void> {
+  if (!save.conflict) return;
+  const again: QueuedSave = {
+    ...save,
+    key: crypto.randomUUID(),
+    body: { ...save.body, baseVersion: save.conflict.version },
+    base: save.conflict.current,
+    conflict: undefined,
+    refused: undefined,
+    queuedAt: new Date().toISOString(),
+  };
+  await putQueued(again);
+  await removeQueued(save.key);
+  announce();
+  await askWorkerToSend();
+}
+
+/** The server's recheck of a sent item's phone answer; null when the phone had none. */
+export function recheckOf(record: SentRecord): Recheck | null {
+  return record.phoneAnswer ? recheck(record.phoneAnswer, record.response) : null;
+}
+
+/** Sends every waiting item once (one sender at a time per page); answers whether anything changed (sent, refused, in conflict). */
+export function sendQueuedSaves(): Promise<boolean> {
+  sending ??= sendQueue("page")
+    .then((outcome) => {
+      if (outcome.changed) announce();
+      return outcome.changed;
+    })
+    .finally(() => {
+      sending = null;
+    });
   return sending;
 }
 
-async function sendAll(): Promise<SentSave[]> {
-  const sent: SentSave[] = [];
-  for (const save of await queuedSaves()) {
-    if (save.refused) continue;
-    let res: Response;
-    try {
-      res = await fetch("/api/members", {
-        method: "POST",
-        headers: { "content-type": "application/json", "idempotency-key": save.key },
-        body: JSON.stringify(save.body),
-        signal: AbortSignal.timeout(20_000),
-      });
-    } catch {
-      break; // no signal yet: try again later, same key
-    }
-    if (res.ok) {
-      const response = (await res.json()) as SavedMemberResponse;
-      await forgetSave(save.key);
-      sent.push({ save, response, recheck: save.phoneAnswer ? recheck(save.phoneAnswer, response) : null });
-      continue;
-    }
-    // signed out, a server or database hiccup, too many requests: the save waits for the next try
-    if (res.status === 401 || res.status === 408 || res.status === 429 || res.status >= 500) continue;
-    const data = (await res.json().catch(() => null)) as { error?: string; issues?: { message: string }[] } | null;
-    const why = data?.issues?.length ? data.issues.map((i) => i.message).join("; ") : (data?.error ?? `The server answered ${res.status}`);
-    await update<QueuedSave>(save.key, (v) => ({ ...(v ?? save), refused: why }), queueStore());
-    announce();
-  }
-  return sent;
+/** Calls `listener` when the service worker sent or settled queued items (the page should read the server again). */
+export function onWorkerSent(listener: () => void): () => void {
+  const fromWorker = (event: MessageEvent) => {
+    if ((event.data as { type?: unknown } | null)?.type === "QUEUE_CHANGED") listener();
+  };
+  navigator.serviceWorker?.addEventListener("message", fromWorker);
+  return () => navigator.serviceWorker?.removeEventListener("message", fromWorker);
 }

@@ -163,3 +163,19 @@ export const updateMemberSchema = z.object({
   ...orderDetailsFields,
 });
 export type UpdateMemberInput = z.infer<typeof updateMemberSchema>;
+
+/**
+ * A change to a saved member made on a phone with no signal (PATCH /api/members/[memberId]), sent later: its
+ * name, inputs and chosen member, and the version of the member the phone changed (applied only if the member
+ * is still that version).
+ */
+export const editMemberSchema = z.object({
+  /** the member's version when the phone opened it (lib/jobs/edit-once.ts#memberVersion) */
+  baseVersion: z.string().regex(/^[0-9a-f]{64}$/, "Base version: send the version the member had when this phone opened it"),
+  label,
+  flowState: flowStateSchema,
+  chosenMember: memberSchema.nullable().default(null),
+  /** the account the change was made in (a change queued on a phone is refused when another account sends it) */
+  accountId: uuid("Account").optional(),
+});
+export type EditMemberInput = z.infer<typeof editMemberSchema>;

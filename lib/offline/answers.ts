@@ -2,6 +2,7 @@
  * Answers worked out on the phone with no signal, and the server's recheck of them. Pure: the answer
  * screen, the save queue, the save route and their tests share it.
  */
+import type { FlowState } from "@/lib/flow/state";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult, SizeOutput } from "@/lib/solver/design/size";
 
@@ -47,6 +48,27 @@ export interface SavedMemberResponse {
   tables: TablesStamp;
   /** ISO 8601 */
   savedAt: string;
+}
+
+/** A saved member as the builder set it (what a change made on a phone is compared with). */
+export interface MemberSnapshot {
+  label: string;
+  flowState: FlowState | null;
+  chosenMember: MemberSpec | null;
+  /** its answer's headline when it was read; null when nothing works */
+  headline: string | null;
+}
+
+/** The server's 409 to a change made on a phone whose member changed since (PATCH /api/members/[memberId]). */
+export interface MemberConflict {
+  memberId: string;
+  jobId: string;
+  jobName: string;
+  /** deleted since the phone opened it */
+  deleted: boolean;
+  /** its version now (sending the phone's change again over it takes this as the base) */
+  version: string;
+  current: MemberSnapshot;
 }
 
 /** The answer of a member worked out on the phone, kept with a save that waits for a signal. */

@@ -217,6 +217,19 @@ export const ACCESS_TABLE: AccessRow[] = [
     setup: async () => ({ body: (await jobsFixture("save")()).args?.[0] }),
   },
   {
+    method: "PATCH",
+    path: "/api/members/[memberId]",
+    allowed: ["owner"],
+    note: "a change queued on a phone, once per Idempotency-Key, 409 if the member changed since; 404 for a member of someone else's job (tests/jobs/edit-once)",
+    setup: async () => {
+      const { defaultFlowState } = await import("@/lib/flow/defaults");
+      const fixture = await jobsFixture("update-member")();
+      const memberId = (fixture.args?.[0] as { memberId?: string } | undefined)?.memberId;
+      const body = { baseVersion: "0".repeat(64), label: "Taken over", flowState: defaultFlowState("header"), chosenMember: null };
+      return memberId ? { params: { memberId }, body } : { body };
+    },
+  },
+  {
     method: "ACTION",
     path: "components/jobs/actions.ts#updateJob",
     allowed: ["owner"],

@@ -3,63 +3,21 @@
 // the service worker itself would send, so nothing reaches the server), the app reopens from the phone, sizes
 // a header with the tables kept on the phone, saves it to a new job; the signal comes back, the save is sent
 // once and the server's recheck is shown; the job holds the member once. A save sent twice with one
-// Idempotency-Key makes one member and gets the same answer. A crew link opened once reads with no signal.
+// Idempotency-Key makes one member and gets the same answer. A crew link opened once reads with no signal, and
+// its site-board PDF opens and downloads from the phone, with when it was last updated.
 import { randomUUID } from "node:crypto";
-import type { BrowserContext, Page, Route } from "playwright-core";
+import { readFile } from "node:fs/promises";
+import type { Page } from "playwright-core";
 import { describe, expect, test } from "vitest";
 import { defaultFlowState } from "@/lib/flow/defaults";
 import { baseUrl, setupBrowser, type OpenedPage } from "./support/browser";
 import { nextStep, typeLength, waitForAnswer } from "./support/flow";
+import { OFFLINE_NOISE, goOffline, goOnline, waitUntilKept } from "./support/offline";
 import { signIn } from "./support/payments";
 
 const session = setupBrowser();
 
 const SAM = { email: "sam@hollisrowe.test", password: "subscriber-demo-pass" };
-// requests refused while offline, and the prefetches the router tries then
-const OFFLINE_NOISE = [/ERR_INTERNET_DISCONNECTED/, /ERR_FAILED/, /Failed to fetch/, /favicon\.ico/];
-
-/** Cuts the network: the page's own requests (setOffline) and any the service worker sends for it. */
-async function goOffline(context: BrowserContext): Promise<void> {
-  await context.setOffline(true);
-  await context.route("**/*", refuseFromWorker);
-}
-
-async function goOnline(context: BrowserContext): Promise<void> {
-  await context.unroute("**/*", refuseFromWorker);
-  await context.setOffline(false);
-}
-
-function refuseFromWorker(route: Route): Promise<void> {
-  return route.request().serviceWorker() ? route.abort("internetdisconnected") : route.fallback();
-}
-
-/** Waits until the service worker controls the page and has kept `paths` and the material tables on the phone. */
-async function waitUntilKept(page: Page, paths: string[]): Promise<void> {
-  await page.waitForFunction(() => navigator.serviceWorker.controller !== null, null, { timeout: 30_000 });
-  await expect
-    .poll(
-      () =>
-        page.evaluate(async (wanted) => {
-          const cache = await caches.open("spanlark-pages");
-          const kept = (await cache.keys()).map((r) => new URL(r.url).pathname);
-          const tables = await new Promise<boolean>((resolve) => {
-            const open = indexedDB.open("spanlark-tables");
-            open.onsuccess = () => {
-              const db = open.result;
-              if (!db.objectStoreNames.contains("tables")) return resolve(false);
-              const get = db.transaction("tables").objectStore("tables").get("current");
-              get.onsuccess = () => resolve(Boolean(get.result));
-              get.onerror = () => resolve(false);
-            };
-            open.onerror = () => resolve(false);
-          });
-          return tables && wanted.every((p) => kept.includes(p));
-        }, paths),
-      { timeout: 30_000, interval: 500 },
-    )
-    .toBe(true);
-}
-
 async function membersNamed(page: Page, jobName: string, label: string): Promise<number> {
   await page.goto(`${baseUrl()}/jobs`, { waitUntil: "load" });
   await page
@@ -120,7 +78,7 @@ describe("no signal at 390x844", () => {
     await dialog.getByLabel(/Member name/).fill(label);
     await dialog.getByRole("button", { name: "Save" }).click();
     await page.getByText(`No signal: ${label} is saved on this phone and goes to ${jobName} when the signal is back.`).waitFor();
-    await expect.poll(() => page.getByTestId("offline-bar").textContent()).toMatch(/1 save is waiting to send/);
+    await expect.poll(() => page.getByTestId("offline-bar").textContent()).toMatch(/1 change waiting to send/);
     await page.screenshot({ path: "tests/artifacts/offline-2-saved-on-phone.png" });
 
     // walking back out: the save is sent once, and the server's recheck is shown
@@ -194,6 +152,13 @@ describe("no signal at 390x844", () => {
       })
       .toBe(true);
     const headlinesOnline = await crew.page.getByTestId("crew-headline").allTextContents();
+    // the site-board PDF is kept beside the page
+    const pdfPath = `/api/crew/${crewPath.split("/crew/")[1]}/pdf`;
+    await expect
+      .poll(() => crew.page.evaluate(async (p) => Boolean(await (await caches.open("spanlark-crew-pdf")).match(new URL(p, location.origin).href)), pdfPath), {
+        timeout: 30_000,
+      })
+      .toBe(true);
 
     await goOffline(crew.context);
     const again = await crew.context.newPage();
@@ -206,6 +171,24 @@ describe("no signal at 390x844", () => {
     );
     expect(await again.getByTestId("crew-headline").allTextContents()).toEqual(headlinesOnline);
     expect(await again.getByRole("main").getByRole("complementary", { name: "Safety caution" }).count()).toBe(1);
+    // the PDF with no signal: from the phone, with when it was last updated
+    const kept = again.getByTestId("crew-pdf-kept");
+    await kept.waitFor();
+    expect(await kept.textContent()).toMatch(
+      /^No signal: the PDF kept on this phone, last updated [A-Z][a-z]{2}, [A-Z][a-z]{2} \d{1,2}, \d{1,2}:\d{2} [AP]M\.$/,
+    );
+    const pdf = await again.evaluate(async (p) => {
+      const res = await fetch(p);
+      const bytes = new Uint8Array(await res.arrayBuffer());
+      return { status: res.status, type: res.headers.get("content-type"), head: String.fromCharCode(...bytes.slice(0, 5)), size: bytes.length };
+    }, pdfPath);
+    expect(pdf).toMatchObject({ status: 200, type: "application/pdf", head: "%PDF-" });
+    expect(pdf.size).toBeGreaterThan(5_000);
+    const [download] = await Promise.all([again.waitForEvent("download"), again.getByTestId("crew-board-pdf").click()]);
+    expect(await download.failure()).toBeNull();
+    const file = await download.path();
+    expect((await readFile(file)).subarray(0, 5).toString("latin1")).toBe("%PDF-");
+    await again.getByTestId("crew-board-pdf").scrollIntoViewIfNeeded();
     await again.screenshot({ path: "tests/artifacts/offline-4-crew-link-no-signal.png" });
     await goOnline(crew.context);
   }, 120_000);

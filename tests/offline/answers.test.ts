@@ -6,7 +6,7 @@ import { defaultFlowState } from "@/lib/flow/defaults";
 import { sizeRequest } from "@/lib/flow/request";
 import { withMainSpan } from "@/lib/flow/state";
 import { answerLineOf, recheck, shownCandidate, tablesWords, type TablesStamp } from "@/lib/offline/answers";
-import { isPrivatePath, pageCacheKey, shouldCachePage } from "@/lib/offline/pages";
+import { crewPdfPath, isCrewPdfPath, isPrivatePath, pageCacheKey, shouldCachePage } from "@/lib/offline/pages";
 import { sizeMember } from "@/lib/solver/design";
 import { STARTER_TABLES } from "@/lib/tables";
 import type { MaterialTables } from "@/lib/tables/types";
@@ -79,12 +79,32 @@ describe("pages the service worker keeps", () => {
   test.each([
     ["the bare sizing flow", "https://spanlark.test/size", true, "https://spanlark.test/size"],
     ["the flow with a state in its address: found as /size, not stored", "https://spanlark.test/size?s=abc&step=answer", false, "https://spanlark.test/size"],
+    [
+      "a saved member reopened to change it: its own page",
+      "https://spanlark.test/size?job=0b7f1c2e-8a4d-4c1e-9f3a-2d5e6f7a8b9c&member=1c2d3e4f-5a6b-4c7d-8e9f-0a1b2c3d4e5f",
+      true,
+      "https://spanlark.test/size?job=0b7f1c2e-8a4d-4c1e-9f3a-2d5e6f7a8b9c&member=1c2d3e4f-5a6b-4c7d-8e9f-0a1b2c3d4e5f",
+    ],
+    [
+      "a saved member with a state in its address: found by job and member, not stored",
+      "https://spanlark.test/size?job=0b7f1c2e-8a4d-4c1e-9f3a-2d5e6f7a8b9c&member=1c2d3e4f-5a6b-4c7d-8e9f-0a1b2c3d4e5f&s=abc",
+      false,
+      "https://spanlark.test/size?job=0b7f1c2e-8a4d-4c1e-9f3a-2d5e6f7a8b9c&member=1c2d3e4f-5a6b-4c7d-8e9f-0a1b2c3d4e5f",
+    ],
     ["a crew link", "https://spanlark.test/crew/AbC_dEf", true, "https://spanlark.test/crew/AbC_dEf"],
     ["an admin page", "https://spanlark.test/admin/tables", false, "https://spanlark.test/admin/tables"],
     ["a password reset with its token", "https://spanlark.test/reset-password?token=x", false, "https://spanlark.test/reset-password?token=x"],
   ])("%s", (_label, url, stored, key) => {
     expect(shouldCachePage(url)).toBe(stored);
     expect(pageCacheKey(url)).toBe(key);
+  });
+
+  test("a crew link's site-board PDF is kept beside its page", () => {
+    expect(crewPdfPath("/crew/AbC_dEf")).toBe("/api/crew/AbC_dEf/pdf");
+    expect(crewPdfPath("/crew/AbC_dEf/more")).toBeNull();
+    expect(crewPdfPath("/jobs/x")).toBeNull();
+    expect(isCrewPdfPath("/api/crew/AbC_dEf/pdf")).toBe(true);
+    expect(isCrewPdfPath("/api/crew/AbC_dEf")).toBe(false);
   });
 
   test("private paths", () => {

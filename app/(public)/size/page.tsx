@@ -3,6 +3,7 @@ import { notFound, redirect } from "next/navigation";
 import { SizingFlow } from "@/components/flow/sizing-flow";
 import { getSessionUser } from "@/lib/auth/session";
 import { nullWhenDatabaseDown } from "@/lib/db/unavailable";
+import { memberVersion } from "@/lib/jobs/edit-once";
 import { getMember, jobChoices } from "@/lib/jobs/queries";
 import { resolveFlowStart } from "@/lib/flow/url";
 
@@ -38,9 +39,17 @@ export default async function SizePage({ searchParams }: SizePageProps) {
         params={params}
         signedIn
         jobs={jobs}
-        editing={{ jobId: member.jobId, memberId: member.id, label: member.label, jobName: member.jobName }}
+        editing={{
+          jobId: member.jobId,
+          memberId: member.id,
+          label: member.label,
+          jobName: member.jobName,
+          version: memberVersion(member),
+          base: { label: member.label, flowState: member.flowState, chosenMember: member.chosenMember, headline: member.resultSummary?.headline ?? null },
+        }}
         openSave={false}
         initialChosen={member.chosenMember}
+        accountId={user.id}
       />
     );
   }

@@ -47,10 +47,13 @@ export interface AppProcess {
   stop: () => Promise<void>;
 }
 
-/** Starts the built app (scripts/serve.mjs, one process) on `port` with `env` over this process's environment. */
-export async function startApp(port: number, env: Record<string, string>): Promise<AppProcess> {
+/**
+ * Starts the built app (scripts/serve.mjs, one process) on `port` with `env` over this process's environment,
+ * from `cwd` (the worktree; another folder holding a build of its own for a second release).
+ */
+export async function startApp(port: number, env: Record<string, string>, cwd: string = ROOT): Promise<AppProcess> {
   const child = spawn(process.execPath, ["scripts/serve.mjs", "-H", "127.0.0.1", "-p", String(port)], {
-    cwd: ROOT,
+    cwd,
     env: { ...process.env, NODE_ENV: "production", LOG_LEVEL: "warn", SPANLARK_WORKERS: "1", ...env },
     stdio: ["ignore", "pipe", "pipe"],
   });

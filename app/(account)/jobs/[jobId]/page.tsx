@@ -2,6 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CrewLinkPanel } from "@/components/crew/crew-link-panel";
 import { JobPage } from "@/components/jobs/job-page";
+import { JobOnPhone } from "@/components/offline/job-on-phone";
 import { SheetPanel } from "@/components/sheets/sheet-panel";
 import { userForPage } from "@/lib/auth/guard";
 import { getJob } from "@/lib/jobs/queries";
@@ -25,6 +26,7 @@ export default async function JobRoute({ params, searchParams }: JobRouteProps) 
   if (!job) notFound();
   return (
     <JobPage
+      onPhone={<JobOnPhone jobId={job.id} />}
       job={{
         id: job.id,
         name: job.name,

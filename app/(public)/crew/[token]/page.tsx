@@ -2,7 +2,7 @@ import type { Metadata } from "next";
 import { notFound } from "next/navigation";
 import { CrewSchedule } from "@/components/crew/crew-schedule";
 import { CopyAge } from "@/components/offline/copy-age";
-import { buttonClasses } from "@/components/ui/button";
+import { CrewPdfLink } from "@/components/offline/crew-pdf-link";
 import { Caution } from "@/components/ui/caution";
 import { WarningIcon } from "@/components/ui/icons";
 import { openCrewLink } from "@/lib/crew/links";
@@ -35,14 +35,7 @@ export default async function CrewPage({ params }: CrewPageProps) {
         {view.expiresAt ? <p className="text-ink-soft">This link works until {formatSheetDate(view.expiresAt)}.</p> : null}
         <CopyAge readAt={view.readAt} changedAt={view.changedAt} />
       </header>
-      <a
-        href={`/api/crew/${token}/pdf`}
-        download
-        className={`${buttonClasses({ variant: "secondary" })} no-print w-full sm:w-fit`}
-        data-testid="crew-board-pdf"
-      >
-        Print for the site board (PDF)
-      </a>
+      <CrewPdfLink token={token} />
       <p className="flex items-center gap-2 rounded-card border-2 border-caution bg-caution-bg px-3 py-2 font-bold text-caution-ink">
         <WarningIcon className="h-5 w-5 shrink-0" />
         <a href="#caution" className="inline-flex min-h-touch items-center text-caution-ink">
