@@ -11,6 +11,7 @@ import { Job } from "@/models/job";
 import { Member } from "@/models/member";
 import { MemberSave } from "@/models/member-save";
 import type { EditMemberInput } from "./schemas";
+import { savedAnswerOf } from "./save-once";
 import { computeSummary, recheckJob } from "./service";
 
 /**
@@ -158,9 +159,7 @@ export async function editMemberOnce(
         jobName: member.job.name,
         memberId: member.id,
         label: member.label,
-        answer: summary
-          ? { headline: summary.headline, memberLabel: summary.memberLabel, spec: summary.spec, ratio: summary.ratio, governing: summary.governing }
-          : null,
+        answer: savedAnswerOf(summary),
         tables,
         savedAt: new Date().toISOString(),
       };

@@ -1,10 +1,10 @@
 import "server-only";
-import { designSpecOf } from "@/lib/flow/summary";
+import { designSpecOf, type MemberResultSummary } from "@/lib/flow/summary";
 import { createHash } from "node:crypto";
 import { UniqueConstraintError } from "sequelize";
 import { getSequelize } from "@/lib/db";
 import { HttpError } from "@/lib/http";
-import type { SavedMemberResponse } from "@/lib/offline/answers";
+import type { AnswerLine, SavedMemberResponse } from "@/lib/offline/answers";
 import { getCurrentTables } from "@/lib/tables/current";
 import { tablesStamp } from "@/lib/tables/stamp";
 import { MemberSave } from "@/models/member-save";
@@ -19,6 +19,12 @@ import { saveMember, type SavedJobsLimit } from "./service";
  */
 
 /** sha-256 of the save as parsed, without the key and account: the same save sent again hashes the same. */
+/** The answer line a save or an edit reports back to the phone; a member saved from the flow is framing, so its answer always has a design spec. */
+export function savedAnswerOf(summary: MemberResultSummary | null): AnswerLine | null {
+  const spec = designSpecOf(summary);
+  return summary && spec ? { headline: summary.headline, memberLabel: summary.memberLabel, spec, ratio: summary.ratio, governing: summary.governing } : null;
+}
+
 export function saveHash(input: SaveMemberInput): string {
   const { saveKey: _key, accountId: _account, ...rest } = input;
   return createHash("sha256").update(JSON.stringify(rest)).digest("hex");
@@ -49,16 +55,13 @@ export async function saveMemberOnce(
   try {
     let response: SavedMemberResponse | null = null;
     await saveMember(ownerId, input, limit, async ({ job, member, summary }, transaction) => {
-      // a member saved from the flow is framing: its answer always has a design spec
-      const spec = designSpecOf(summary);
       const tables = await tablesStamp(summary ? { version: summary.tables } : await getCurrentTables());
       const saved: SavedMemberResponse = {
         jobId: job.id,
         jobName: job.name,
         memberId: member.id,
         label: member.label,
-        answer:
-          summary && spec ? { headline: summary.headline, memberLabel: summary.memberLabel, spec, ratio: summary.ratio, governing: summary.governing } : null,
+        answer: savedAnswerOf(summary),
         tables,
         savedAt: member.createdAt.toISOString(),
       };
