@@ -9,6 +9,7 @@ import { CAUTION, NOT_CHECKED, notCheckedFor } from "@/lib/caution";
 import { BeamInputError, BeamInstabilityError } from "../beam";
 import type { ZodError } from "zod";
 import type { LoadStandard } from "../asce7/standard";
+import { LRFD_SNOW_COMPANION_22 } from "../asce7/combinations";
 import { zodIssues } from "@/lib/zod-issues";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
 import { buildContext, type DesignContext } from "./context";
@@ -253,8 +254,18 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   const a: string[] = [];
   const c = input.conditions;
   const std = input.loadStandard;
+  const lrfd = input.method === "lrfd";
+  const snowWords = !ctx.model.cases.includes("S")
+    ? ""
+    : std === "ASCE 7-22"
+      ? lrfd
+        ? `, snow at 1.0S leading and ${LRFD_SNOW_COMPANION_22}S as a companion (strength-level map)`
+        : ", snow as 0.7S (strength-level map)"
+      : lrfd
+        ? ", snow at 1.6S leading, 0.5S as a companion (allowable-stress map)"
+        : ", snow at full value, D + S (allowable-stress map)";
   a.push(
-    `load combinations: ${std} ${input.method === "lrfd" ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}${ctx.model.cases.includes("S") ? (std === "ASCE 7-22" ? ", snow as 0.7S (strength-level map)" : ", snow at full value, D + S (allowable-stress map)") : ""}; deflection and reactions at service level (§2.4.1)`,
+    `load combinations: ${std} ${lrfd ? "§2.3.1 (strength)" : "§2.4.1 (allowable stress)"}${snowWords}; deflection and reactions at service level (§2.4.1)`,
   );
   const ro = roughOpeningOf(input);
   if (ro) a.push(ro.note);
@@ -288,7 +299,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "wood" && member.volumeX !== undefined && ctx.model.regions.length > 1) {
     a.push(
-      "glulam: the table's Fb (tension zone stressed in tension) is used for every moment; where the member hogs over a support or an overhang, confirm Fbx− with the supplier",
+      "glulam: Fbx+ (tension zone stressed in tension) for moment that sags, Fbx− for moment that hogs over a support or on an overhang (the table's values, from memory — confirm both with the supplier)",
     );
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
@@ -301,7 +312,10 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     a.push(
       c.unbracedLengthFt > 0
         ? `compression flange braced at the supports and every ${c.unbracedLengthFt} ft: lateral-torsional buckling by AISI S100-16 §F2.1${member.assembly === "box" ? " (a box header is taken as stable between braces)" : ""}`
-        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting); distortional buckling (§F4) not checked separately",
+        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting)",
+    );
+    a.push(
+      `flange roll (distortional buckling, AISI S100-16 §F4.1 with Appendix 2 §2.3.3.3) checked for the top flange under sagging moment and the bottom flange where the member hogs, with no rotational restraint credited from sheathing (kφ = 0) and β = 1.0${c.unbracedLengthFt > 0 ? `; braces every ${c.unbracedLengthFt} ft taken as restraints of both flanges` : "; no bridging or blocking credited (L = Lcrd)"}${member.pieces > 1 ? "; each C-section of the header taken alone" : ""}`,
     );
     a.push(
       `web crippling at each support and point load by AISI S100-16 §G5 (flanges screwed to the support, bearing ${input.bearingIn} in); bearing stiffeners: ${member.stiffeners === true ? "at every support, as given" : member.stiffeners === false ? "none, as given" : "added only where the web needs one"} (33 mil C-shape or track, IRC 2021 R505.3.4)`,

@@ -128,7 +128,7 @@ describe("bearing stiffener (AISI S100 provision, published copy NSR-10 Eq. F.4.
 // L/480 live, L/240 total; published copy pc-365.net/news/202010/11414.html) come out up to 18 % longer on
 // AISI S100-16 with the design thickness (0.0346 in). Reproduced here: taking the thickness as the mils
 // themselves (0.033 in, the minimum base-metal thickness) brings every 33 mil row checked to within
-// −8 % / +7 %; the rest of the gap at 24 in o.c. matches shear buckling, which governs these webs
+// −10 % / +7 % (−8 % before the flange roll check of §F4 was added); the rest of the gap at 24 in o.c. matches shear buckling, which governs these webs
 // (h/t ≈ 225) at the interior support and which the older specification gave a larger safety factor
 // (that older factor from memory). That the 1997 table used the minimum thickness is inferred from this
 // reproduction, not read in it. No published copy of IRC 2021 Table R505.3.2 could be read to confirm
@@ -194,14 +194,16 @@ const ROWS_33: [string, number, number, number][] = [
 ];
 
 describe("Prescriptive Method (1997) Table 5.4, 33 mil rows: the difference explained by the thickness taken", () => {
-  test("design thickness: up to about 18 % longer than the table; thickness = mils: within −8 % / +7 %", () => {
+  test("design thickness: up to about 18 % longer than the table; thickness = mils: within −10 % / +7 %", () => {
     const design = at33(false);
     const minimum = at33(true);
     const byDesign = ROWS_33.map(([s, l, sp, pub]) => twoSpan(s, l, sp, design) / pub);
     const byMils = ROWS_33.map(([s, l, sp, pub]) => twoSpan(s, l, sp, minimum) / pub);
     expect(Math.max(...byDesign)).toBeGreaterThan(1.15);
     expect(Math.max(...byMils)).toBeLessThan(1.07);
-    expect(Math.min(...byMils)).toBeGreaterThan(0.92);
+    // flange roll (AISI S100-16 §F4; the 1997 table predates it) can only shorten a span: with it, the
+    // shortest row comes out about 10 % under the table (it was 8 % before that check was added)
+    expect(Math.min(...byMils)).toBeGreaterThan(0.9);
   }, 120_000);
 });
 
