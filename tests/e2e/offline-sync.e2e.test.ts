@@ -133,7 +133,10 @@ describe("Background Sync and changes made with no signal", () => {
     // the page under it now shows the member as it is (8 ft), not the phone's older copy
     await expect.poll(() => page.getByText("Header · 8' 0\" span").count(), { timeout: 30_000 }).toBe(1);
     expect(words).toContain(`span: was 6' 0", now 8' 0"`);
-    expect(words).toContain(`Your change is kept on this phone (${label}, span 7' 0"). Nothing was overwritten.`);
+    // the kept-change line follows once the phone's copy is read back from its store: wait for it
+    await expect
+      .poll(async () => (await conflict.textContent()) ?? "", { timeout: 30_000 })
+      .toContain(`Your change is kept on this phone (${label}, span 7' 0"). Nothing was overwritten.`);
     expect((await memberInDatabase(memberId))?.lengthFt).toBe(8);
     await page.getByTestId("job-on-phone").evaluate((el) => window.scrollTo(0, el.getBoundingClientRect().top + window.scrollY - 90));
     await saveScreenshot(page, "offline-6-change-conflict-390", { fullPage: false });
