@@ -5,6 +5,7 @@ import { STIFFENER_FY, STIFFENER_SECTION } from "@/lib/solver/design/cold-formed
 import { findCfsSection, STARTER_TABLES } from "@/lib/tables";
 import { cfsDimensions, cfsProperties } from "@/lib/tables/cold-formed";
 import type { MaterialTables } from "@/lib/tables/types";
+import { cfsFloor } from "../../support/cfs-floor";
 
 // Checks of the cold-formed steel tables and provisions against published sources outside the project.
 
@@ -65,24 +66,7 @@ describe("section properties against the SSMA Technical Guide (2024) property ta
 // least 1-1/2 in. Ω = 1.70 for ASD is from memory (that copy is LRFD only).
 
 function floor(section: string, spanFt: number, extra: Record<string, unknown> = {}) {
-  return {
-    kind: "floor-joist",
-    member: { material: "cfs", section, stiffeners: true },
-    lengthFt: spanFt,
-    supports: [
-      { x: 0, type: "pin" },
-      { x: spanFt, type: "roller" },
-    ],
-    spacingIn: 16,
-    loads: [
-      { type: "area", case: "D", psf: 10 },
-      { type: "area", case: "L", psf: 40 },
-    ],
-    bearingIn: 1.5,
-    conditions: { selfWeight: false },
-    limits: { live: 480, total: 240 },
-    ...extra,
-  };
+  return cfsFloor(section, spanFt, extra, true);
 }
 
 describe("bearing stiffener (AISI S100 provision, published copy NSR-10 Eq. F.4.3.3-72)", () => {

@@ -4,6 +4,7 @@ import { DesignInputError } from "@/lib/solver/design/errors";
 import { findCfsSection, STARTER_TABLES } from "@/lib/tables";
 import { cfsProperties } from "@/lib/tables/cold-formed";
 import type { MaterialTables } from "@/lib/tables/types";
+import { cfsFloor } from "../../support/cfs-floor";
 
 // Cold-formed steel joists and headers checked by AISI S100-16 (lib/solver/design/cold-formed.ts). The
 // worked examples compute each figure here from the equations: M = wL²/8, V = R = wL/2, Δ = 5wL⁴/384EI,
@@ -13,24 +14,7 @@ import type { MaterialTables } from "@/lib/tables/types";
 const T = STARTER_TABLES;
 
 function floor(section: string, spanFt: number, extra: Record<string, unknown> = {}) {
-  return {
-    kind: "floor-joist",
-    member: { material: "cfs", section },
-    lengthFt: spanFt,
-    supports: [
-      { x: 0, type: "pin" },
-      { x: spanFt, type: "roller" },
-    ],
-    spacingIn: 16,
-    loads: [
-      { type: "area", case: "D", psf: 10 },
-      { type: "area", case: "L", psf: 40 },
-    ],
-    bearingIn: 1.5,
-    conditions: { selfWeight: false },
-    limits: { live: 480, total: 240 },
-    ...extra,
-  };
+  return cfsFloor(section, spanFt, extra);
 }
 
 describe("800S162-54 floor joist at 16 in o.c. over 14 ft, 10 psf dead + 40 psf live (AISI S100-16, ASD, computed here)", () => {
