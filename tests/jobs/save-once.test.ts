@@ -10,6 +10,7 @@ import { defaultFlowState } from "@/lib/flow/defaults";
 import { withMainSpan } from "@/lib/flow/state";
 import { fromClient } from "../support/client-ip";
 import { who } from "../support/session-mock";
+import { subscriberAccount } from "../support/subscriber";
 
 const TEST_DB = process.env.TEST_DATABASE_URL;
 if (TEST_DB) process.env.DATABASE_URL = TEST_DB;
@@ -18,20 +19,7 @@ process.env.NEXTAUTH_SECRET ??= "test-secret-for-vitest-only-0123456789";
 vi.mock("@/lib/auth/session", () => import("../support/session-mock"));
 vi.mock("next/cache", () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn() }));
 
-async function account(): Promise<SessionUser> {
-  const { getSequelize } = await import("@/lib/db");
-  const { User } = await import("@/models/user");
-  getSequelize();
-  const user = await User.create({
-    email: `once-${randomUUID().slice(0, 8)}@save-once.test`,
-    passwordHash: "not-a-hash",
-    name: "Robin Ashdown",
-    company: "Ashdown Decks",
-    role: "subscriber",
-    emailVerifiedAt: new Date(),
-  });
-  return { id: user.id, email: user.email, name: user.name, company: user.company, role: user.role };
-}
+const account = (): Promise<SessionUser> => subscriberAccount("once");
 
 const header8 = withMainSpan(defaultFlowState("header"), 8);
 
