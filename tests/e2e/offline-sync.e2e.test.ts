@@ -33,6 +33,7 @@ describe("Background Sync and changes made with no signal", () => {
     await waitUntilKept(first.page, ["/", "/size"]);
     const { context } = first;
 
+    await first.page.close();
     await goOffline(context);
     const page = await context.newPage();
     await page.goto(`${baseUrl()}/size`, { waitUntil: "load" });

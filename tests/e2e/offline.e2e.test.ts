@@ -40,7 +40,10 @@ describe("no signal at 390x844", () => {
     expect(manifest.icons.some((i) => i.purpose === "any" && i.sizes === "192x192")).toBe(true);
 
     // the basement: no signal, and the app opened again from the home screen
+    // the tab is closed and the app opened again from the home screen (one page: a second tab left open in
+    // the background can stall a screenshot in headless Chromium on a busy machine)
     const { context } = first;
+    await first.page.close();
     await goOffline(context);
     const page = await context.newPage();
     const errors: string[] = [];
@@ -160,6 +163,7 @@ describe("no signal at 390x844", () => {
       })
       .toBe(true);
 
+    await crew.page.close();
     await goOffline(crew.context);
     const again = await crew.context.newPage();
     await again.goto(`${baseUrl()}${crewPath}`, { waitUntil: "load" });
