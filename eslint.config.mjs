@@ -41,10 +41,9 @@ const FRAMEWORK = rule("lib/solver and lib/flow are pure TypeScript: no framewor
   "@/models/**",
   "**/models/**",
 ]);
-const NEXT_LINK = rule(
-  "Use Link from @/components/ui/link: it fetches the next page when the builder reaches for the link, not for every link on screen.",
-  ["next/link"],
-);
+const NEXT_LINK = rule("Use Link from @/components/ui/link: it fetches the next page when the builder reaches for the link, not for every link on screen.", [
+  "next/link",
+]);
 const restrict = (...patterns) => ({ "no-restricted-imports": ["error", { patterns }] });
 
 export default defineConfig([
