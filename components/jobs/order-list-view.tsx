@@ -48,8 +48,8 @@ export function OrderListView({ list }: OrderListViewProps) {
               </tr>
             </thead>
             <tbody>
-              {group.lines.map((line) => (
-                <tr key={`${line.item}-${line.lengthFt}-${line.unit}`} className="border-b border-rule align-top" data-testid="order-line">
+              {group.lines.map((line, i) => (
+                <tr key={`${line.item}-${line.lengthFt}-${line.unit}-${i}`} className="border-b border-rule align-top" data-testid="order-line">
                   <td className="py-2 pr-2">
                     <span className="text-lg font-bold">{line.item}</span>
                     <span className="block text-sm text-ink-soft sm:hidden">{line.uses.join("; ")}</span>
