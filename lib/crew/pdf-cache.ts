@@ -17,7 +17,7 @@ import { crewQrPng } from "./qr";
  * instances never serve a stale sheet; they each draw it once.
  */
 
-/** Bounds of the per-process cache: the fewest of this many sheets and this many bytes (a sheet is ~60–150 kB). */
+/** Bounds of the per-process cache: the fewest of this many sheets and this many bytes (a one-page sheet is tens of kB). */
 export const CREW_PDF_CACHE_ENTRIES = 64;
 export const CREW_PDF_CACHE_BYTES = 16 * 1024 * 1024;
 
