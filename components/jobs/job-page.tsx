@@ -72,6 +72,13 @@ export function JobPage({ job, children, onPhone }: JobPageProps) {
   const [problem, setProblem] = useState<string | null>(null);
 
   const run = (work: () => Promise<void>) => startTransition(work);
+  const byId = new Map(job.members.map((m) => [m.id, m]));
+  const builtUnder = (m: JobPageMember) => {
+    const posts = m.carriedById ? byId.get(m.carriedById) : undefined;
+    if (posts?.kind !== "post") return undefined;
+    const footings = posts.carriedById ? byId.get(posts.carriedById) : undefined;
+    return { posts: posts.label, footings: footings?.kind === "footing" ? footings.label : null };
+  };
 
   const [askCarried, setAskCarried] = useState<{ member: JobPageMember; message: string } | null>(null);
   const [supportDialog, setSupportDialog] = useState<{ type: SupportDesign["type"]; under?: JobPageMember; editing?: JobPageMember } | null>(null);
@@ -264,7 +271,9 @@ export function JobPage({ job, children, onPhone }: JobPageProps) {
                       />
                     );
                   })()}
-                  {m.orderDetails && isFramingKind(m.kind) ? <OrderDetailsForm memberId={m.id} label={m.label} kind={m.kind} details={m.orderDetails} /> : null}
+                  {m.orderDetails && isFramingKind(m.kind) ? (
+                    <OrderDetailsForm memberId={m.id} label={m.label} kind={m.kind} details={m.orderDetails} built={builtUnder(m)} />
+                  ) : null}
                   <div className="flex flex-wrap gap-2">
                     {isFramingKind(m.kind) ? (
                       <ButtonLink href={`/size?job=${job.id}&member=${m.id}`} variant="secondary">

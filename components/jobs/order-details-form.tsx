@@ -14,6 +14,8 @@ export type OrderDetailsFormProps = {
   label: string;
   kind: MemberKind;
   details: OrderDetails;
+  /** the member stands on posts (and those on footings) built on the job page: the order list counts those instead */
+  built?: { posts: string | null; footings: string | null };
 };
 
 const WIDTH_WORDS: Partial<Record<MemberKind, string>> = {
@@ -39,7 +41,7 @@ function lengthFt(raw: string): number | null | string {
 }
 
 /** The order details of one member, under its card on the job page. */
-export function OrderDetailsForm({ memberId, label, kind, details }: OrderDetailsFormProps) {
+export function OrderDetailsForm({ memberId, label, kind, details, built }: OrderDetailsFormProps) {
   const router = useRouter();
   const [pending, startTransition] = useTransition();
   const [width, setWidth] = useState(feetText(details.runWidthFt));
@@ -147,7 +149,14 @@ export function OrderDetailsForm({ memberId, label, kind, details }: OrderDetail
                 name="footingDepthIn"
               />
             </div>
-            <p className="text-sm text-ink-soft">Spanlark counts posts and concrete; it does not check them.</p>
+            <p className="text-sm text-ink-soft">Spanlark counts posts and concrete from these numbers; it does not check them.</p>
+            {built?.posts ? (
+              <p className="text-sm text-ink-soft" data-testid="order-details-built">
+                This member stands on {built.posts}
+                {built.footings ? ` on ${built.footings}` : ""}, built and checked on this page: the order list counts{" "}
+                {built.footings ? "those posts and footings" : "those posts"}, and these numbers only for supports not on them.
+              </p>
+            ) : null}
           </>
         ) : null}
         {errors.form ? (

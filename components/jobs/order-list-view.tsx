@@ -48,18 +48,32 @@ export function OrderListView({ list }: OrderListViewProps) {
               </tr>
             </thead>
             <tbody>
-              {group.lines.map((line) => (
-                <tr key={`${line.item}-${line.lengthFt}-${line.unit}`} className="border-b border-rule align-top" data-testid="order-line">
+              {group.lines.map((line, i) => (
+                <tr key={`${line.item}-${line.lengthFt}-${line.unit}-${i}`} className="border-b border-rule align-top" data-testid="order-line">
                   <td className="py-2 pr-2">
                     <span className="text-lg font-bold">{line.item}</span>
-                    <span className="block text-sm text-ink-soft sm:hidden">{line.uses.join("; ")}</span>
-                    {line.notes.length > 0 ? <span className="block text-sm text-ink-soft">{line.notes.join("; ")}</span> : null}
+                    {line.uses.map((use) => (
+                      <span key={use} className="block text-sm text-ink sm:hidden">
+                        {use}
+                      </span>
+                    ))}
+                    {line.notes.map((note) => (
+                      <span key={note} className="mt-1 block text-sm text-ink-soft">
+                        {note}
+                      </span>
+                    ))}
                   </td>
                   <td className="py-2 pr-2 text-right text-lg whitespace-nowrap">{formatStockLength(line.lengthFt)}</td>
                   <td className="py-2 pr-2 text-right text-lg font-bold whitespace-nowrap">
                     {line.quantity} <span className="text-sm font-normal">{line.unit}</span>
                   </td>
-                  <td className="hidden py-2 pr-2 text-ink-soft sm:table-cell">{line.uses.join("; ")}</td>
+                  <td className="hidden py-2 pr-2 text-ink-soft sm:table-cell">
+                    {line.uses.map((use) => (
+                      <span key={use} className="block">
+                        {use}
+                      </span>
+                    ))}
+                  </td>
                   <td className="py-2 text-right whitespace-nowrap">
                     {line.price !== null ? (
                       <span className="text-lg">{formatDollars(line.price)}</span>

@@ -24,13 +24,25 @@ declare global {
 
 declare const self: ServiceWorkerGlobalScope;
 
-/** A crew link's site-board PDF, fetched into the phone's cache beside its page (the crew reads both on site). */
+/**
+ * A crew link's site-board PDF, fetched into the phone's cache beside its page (the crew reads both on site). The
+ * kept copy's ETag goes with the request: an unchanged sheet comes back as a 304 (the server draws nothing) and the
+ * kept copy is marked current.
+ */
 async function keepCrewPdf(pageUrl: string): Promise<void> {
   const pdf = crewPdfPath(new URL(pageUrl).pathname);
   if (!pdf) return;
   try {
-    const res = await fetch(pdf, { credentials: "same-origin" });
-    if (res.ok) await (await caches.open(CREW_PDF_CACHE)).put(new URL(pdf, self.location.origin).href, res);
+    const cache = await caches.open(CREW_PDF_CACHE);
+    const key = new URL(pdf, self.location.origin).href;
+    const kept = await cache.match(key);
+    const etag = kept?.headers.get("etag");
+    const res = await fetch(pdf, { credentials: "same-origin", headers: etag ? { "if-none-match": etag } : {} });
+    if (res.status === 304 && kept) {
+      const headers = new Headers(kept.headers);
+      headers.set("date", res.headers.get("date") ?? new Date().toUTCString());
+      await cache.put(key, new Response(await kept.blob(), { status: 200, headers }));
+    } else if (res.ok) await cache.put(key, res);
   } catch {
     // no signal: kept the next time the page is opened with one
   }

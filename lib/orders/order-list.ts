@@ -11,6 +11,7 @@ import type { MemberResultSummary } from "@/lib/flow/summary";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import { costPerFoot, type ItemRef } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species, StockMaterial } from "@/lib/tables/types";
+import type { BuiltFootings, BuiltPosts, BuiltSupport, BuiltUnder, SupportPlace } from "./load-path-supports";
 import {
   blockingRows,
   blocksPerPiece,
@@ -20,6 +21,7 @@ import {
   footingCubicYards,
   joistCount,
   KING_STUDS_PER_END,
+  padCubicYards,
   spacerStrips,
   SPACER_IN,
   stockLengthFor,
@@ -46,6 +48,8 @@ export interface OrderMember {
   spec: MemberSpec | null;
   summary: MemberResultSummary | null;
   details: OrderDetails;
+  /** how many of its supports stand on posts and footings built in the job's load path (counted from there, not from `details`) */
+  builtUnder?: BuiltUnder;
 }
 
 export type OrderUnit = "pcs" | "sheets" | "cu yd";
@@ -91,6 +95,8 @@ export interface OrderList {
 export interface OrderOptions {
   /** stud length for jack and king studs, ft (an 8 ft wall: common practice) */
   studLengthFt?: number;
+  /** the posts and footings built and checked in the job's load path (lib/orders/load-path-supports.ts) */
+  supports?: readonly BuiltSupport[];
 }
 
 /** The stock lengths of a material family from the tables; sawn lumber falls back to 8–24 ft. */
@@ -122,6 +128,8 @@ interface Piece {
   ref: ItemRef | null;
   /** order of sizes inside a group: depth in, then width */
   sortKey: number;
+  /** keeps pieces of the same item on their own line (posts checked on the load path apart from typed ones) */
+  tag?: string;
 }
 
 function sawnGroup(species: string, grade: string): string {
@@ -387,14 +395,25 @@ function floorExtras(
   return pieces;
 }
 
-/** Posts under each support of a beam on posts, and a round footing under each. */
-function postPieces(m: OrderMember, tables: MaterialTables, missing: string[]): { pieces: Piece[]; concreteYd3: number; footingUse: string | null } {
-  const none = { pieces: [], concreteYd3: 0, footingUse: null };
+interface Concrete {
+  yd3: number;
+  use: string;
+}
+
+/**
+ * Posts under each support of a beam on posts, and a round footing under each, from the numbers typed on the
+ * beam (not checked): only for the supports that do not stand on posts and footings built in the load path.
+ */
+function typedPostPieces(m: OrderMember, tables: MaterialTables, missing: string[]): { pieces: Piece[]; concrete: Concrete | null } {
+  const none = { pieces: [], concrete: null };
   if (!ON_POSTS.includes(m.kind)) return none;
-  const posts = m.flowState.supports.length;
+  const supports = m.flowState.supports.length;
+  const posts = Math.max(0, supports - (m.builtUnder?.posts ?? 0));
+  const footings = Math.max(0, supports - (m.builtUnder?.footings ?? 0));
+  const rest = (n: number) => (n < supports ? ` not built on the job page` : "");
   const d = m.details;
   const pieces: Piece[] = [];
-  if (d.postHeightFt && d.postHeightFt > 0) {
+  if (posts > 0 && d.postHeightFt && d.postHeightFt > 0) {
     const size = d.postSize && POST_SIZE_CHOICES.includes(d.postSize) ? d.postSize : DEFAULT_POST_SIZE;
     const species = m.spec?.material === "sawn" ? m.spec.species : null;
     const stock = stockLengthFor(d.postHeightFt, stockLengthsOf(tables, "sawn"));
@@ -405,27 +424,103 @@ function postPieces(m: OrderMember, tables: MaterialTables, missing: string[]): 
       lengthFt: stock.pieceFt,
       quantity: posts * stock.pieces,
       unit: "pcs",
-      use: `${m.label}: ${plural(posts, "post")}, ${formatFeetInches(d.postHeightFt)} tall`,
+      use: `${m.label}: ${plural(posts, "post")}${rest(posts)}, ${formatFeetInches(d.postHeightFt)} tall`,
       note: "post size is the builder's choice here and not checked: add the posts on the job page to have them checked",
       ref: species ? { material: "sawn", species: species as Species, grade: "No.2", size } : null,
       sortKey: depth * 100 + t,
+      tag: "typed",
     });
-  } else if (m.kind === "deck-beam") {
-    missing.push(`${m.label}: add the post height to list its ${posts} posts.`);
+  } else if (posts > 0 && m.kind === "deck-beam") {
+    missing.push(`${m.label}: add the post height to list its ${plural(posts, "post")}${rest(posts)}.`);
   }
-  if (d.footingDiameterIn && d.footingDepthIn) {
+  if (footings > 0 && d.footingDiameterIn && d.footingDepthIn) {
     return {
       pieces,
-      concreteYd3: posts * footingCubicYards(d.footingDiameterIn, d.footingDepthIn),
-      footingUse: `${m.label}: ${plural(posts, "footing")} ${formatInches(d.footingDiameterIn)} across, ${formatInches(d.footingDepthIn)} deep`,
+      concrete: {
+        yd3: footings * footingCubicYards(d.footingDiameterIn, d.footingDepthIn),
+        use: `${m.label}: ${plural(footings, "footing")}${rest(footings)}, ${formatInches(d.footingDiameterIn)} across, ${formatInches(d.footingDepthIn)} deep (typed, not checked)`,
+      },
     };
   }
-  if (m.kind === "deck-beam") missing.push(`${m.label}: add the footing diameter and depth to list the concrete.`);
-  return { ...none, pieces };
+  if (footings > 0 && m.kind === "deck-beam") missing.push(`${m.label}: add the footing diameter and depth to list the concrete.`);
+  return { pieces, concrete: null };
 }
 
-function lineKey(p: Pick<Piece, "group" | "item" | "lengthFt" | "unit">): string {
-  return `${p.group}\u0000${p.item}\u0000${p.lengthFt ?? ""}\u0000${p.unit}`;
+/** "0' 0" and 8' 0"", "0' 0", 8' 0" and 16' 0"" */
+function listWords(items: readonly string[]): string {
+  return items.length <= 1 ? (items[0] ?? "") : `${items.slice(0, -1).join(", ")} and ${items[items.length - 1]}`;
+}
+
+/** "under B1 deck beam at 0' 0" and 8' 0"; under B2 at 4' 0"": the places grouped by the member they stand under. */
+function placeWords(places: readonly SupportPlace[]): string {
+  const byUnder = new Map<string, string[]>();
+  for (const p of places) byUnder.set(p.under, [...(byUnder.get(p.under) ?? []), p.at]);
+  return [...byUnder.entries()].map(([under, ats]) => `under ${under} at ${listWords(ats)}`).join("; ");
+}
+
+/** What a built post or footing that cannot be ordered as it is lacks, in words; null when it can be ordered. */
+function notOrderable(s: BuiltSupport): string | null {
+  const what = s.type === "post" ? "posts" : "footings";
+  if (s.places.length === 0) {
+    return s.type === "post"
+      ? `${s.label}: no sized member stands on these posts yet, so none are counted.`
+      : `${s.label}: no posts with an answer stand on these footings yet, so no concrete is counted.`;
+  }
+  if (s.pass === null) return `${s.label}: these ${what} have not been checked yet (open the job page to work them out), so they are not counted.`;
+  if (!s.pass) {
+    const shown = s.problems.slice(0, 2);
+    const more = s.problems.length - shown.length;
+    const why = shown.length > 0 ? ` (${shown.join("; ")}${more > 0 ? `; ${more} more on the job page` : ""})` : "";
+    return `${s.label}: these ${what} do NOT pass their check${why}, so they are not ordered. Change them on the job page until they pass and the list counts them.`;
+  }
+  return null;
+}
+
+/** Post pieces of posts built and checked in the load path: the designed size, species and grade, at the stock length their height needs. */
+function builtPostPieces(s: BuiltPosts, tables: MaterialTables): Piece[] {
+  const { size, plies, species, grade, heightFt } = s.design;
+  const count = s.places.length;
+  const stock = stockLengthFor(heightFt, stockLengthsOf(tables, "sawn"));
+  // a post is one piece from footing to beam: taller than the longest stock length, it is ordered cut to length, never joined
+  const lengthFt = stock.pieces > 1 ? Math.ceil(heightFt - 1e-9) : stock.pieceFt;
+  const studColumn = plies > 1;
+  const { t, d } = nominal(size);
+  const where = placeWords(s.places);
+  return [
+    {
+      group: sawnGroup(species, grade),
+      item: studColumn ? size : `${size} post`,
+      lengthFt,
+      quantity: count * (studColumn ? plies : 1),
+      unit: "pcs",
+      use: studColumn
+        ? `${s.label}: ${plural(count, "stud column")} of ${plies} ${size}, ${formatFeetInches(heightFt)} tall ${where}`
+        : `${s.label}: ${plural(count, "post")} ${formatFeetInches(heightFt)} tall ${where}`,
+      note:
+        stock.pieces > 1
+          ? "checked on the job's load path; taller than the longest stock length: order each post in one piece, cut to length"
+          : "checked on the job's load path",
+      ref: { material: "sawn", species, grade, size },
+      sortKey: d * 100 + t,
+      tag: "load path",
+    },
+  ];
+}
+
+/** The concrete of footings built and checked in the load path: each pad as designed. */
+function builtFootingConcrete(s: BuiltFootings): Concrete | null {
+  const spec = s.spec;
+  if (!spec) return null;
+  const count = s.places.length;
+  const shape = spec.shape === "round" ? `${spec.sizeIn} in round` : `${spec.sizeIn} x ${spec.sizeIn} in square`;
+  return {
+    yd3: count * padCubicYards(spec.shape, spec.sizeIn, spec.thicknessIn),
+    use: `${s.label}: ${plural(count, "footing")} ${shape} × ${spec.thicknessIn} in thick ${placeWords(s.places)}`,
+  };
+}
+
+function lineKey(p: Pick<Piece, "group" | "item" | "lengthFt" | "unit" | "tag">): string {
+  return `${p.group}\u0000${p.item}\u0000${p.lengthFt ?? ""}\u0000${p.unit}\u0000${p.tag ?? ""}`;
 }
 
 /** The order list for members as they are now, priced from `tables.costs` where it has the item. */
@@ -433,14 +528,23 @@ export function buildOrderList(members: readonly OrderMember[], tables: Material
   const studLengthFt = options.studLengthFt ?? 8;
   const missing: string[] = [];
   const pieces: Piece[] = [];
-  let concrete = 0;
-  const footingUses: string[] = [];
+  const typedConcrete: Concrete[] = [];
+  const builtConcrete: Concrete[] = [];
   for (const m of members) {
     pieces.push(...memberPieces(m, tables, missing, studLengthFt));
-    const posts = postPieces(m, tables, missing);
+    const posts = typedPostPieces(m, tables, missing);
     pieces.push(...posts.pieces);
-    concrete += posts.concreteYd3;
-    if (posts.footingUse) footingUses.push(posts.footingUse);
+    if (posts.concrete) typedConcrete.push(posts.concrete);
+  }
+  // built posts and footings are ordered only when they pass their check; otherwise "Not counted yet" says why
+  for (const s of options.supports ?? []) {
+    const problem = notOrderable(s);
+    if (problem) missing.push(problem);
+    else if (s.type === "post") pieces.push(...builtPostPieces(s, tables));
+    else {
+      const concrete = builtFootingConcrete(s);
+      if (concrete) builtConcrete.push(concrete);
+    }
   }
 
   const lines = new Map<string, OrderLine & { sortKey: number }>();
@@ -470,17 +574,24 @@ export function buildOrderList(members: readonly OrderMember[], tables: Material
   for (const line of lines.values()) {
     line.price = line.costPerFt !== null && line.lengthFt !== null ? Math.round(line.costPerFt * line.lengthFt * line.quantity * 100) / 100 : null;
   }
-  if (concrete > 0) {
+  const concrete = [...builtConcrete, ...typedConcrete];
+  const volume = concrete.reduce((sum, c) => sum + c.yd3, 0);
+  if (volume > 0) {
+    const notes = [`${volume.toFixed(3)} cu yd of footings plus 10% (common practice)`];
+    if (builtConcrete.length > 0) {
+      notes.push(
+        "the checked footings are the pads as designed, plain concrete (the design names no reinforcing); a pier or form from the pad up to grade is not designed here and not counted",
+      );
+    }
+    if (typedConcrete.length > 0) notes.push("the footings typed on a beam are not checked: add them on the job page to have them checked");
     lines.set("concrete", {
       group: "Concrete",
       item: "Footing concrete",
       lengthFt: null,
-      quantity: concreteToOrder(concrete),
+      quantity: concreteToOrder(volume),
       unit: "cu yd",
-      uses: footingUses,
-      notes: [
-        `${concrete.toFixed(3)} cu yd of holes plus 10% (common practice); these footings are not checked: add them on the job page to have them checked`,
-      ],
+      uses: concrete.map((c) => c.use),
+      notes,
       costPerFt: null,
       price: null,
       sortKey: 0,
@@ -509,20 +620,6 @@ export function buildOrderList(members: readonly OrderMember[], tables: Material
     missing,
     tablesVersion: tables.version,
   };
-}
-
-/**
- * What the list leaves out of a job's load path: posts and footings added as members are checked on the job page
- * but not yet counted here, so the list says so for each rather than quietly ordering too little.
- */
-export function notCountedNotes(members: readonly { label: string; kind: string }[]): string[] {
-  return members.flatMap((m) =>
-    m.kind === "post" || m.kind === "footing"
-      ? [
-          `${m.label}: ${m.kind === "post" ? "posts" : "footings"} from the load path are not counted in this list yet — add them to the order from the job page.`,
-        ]
-      : [],
-  );
 }
 
 /** "$1,234.50" */

@@ -100,6 +100,17 @@ export function footingCubicYards(diameterIn: number, depthIn: number): number {
   return (Math.PI * (diameterIn / 2) ** 2 * depthIn) / 46_656;
 }
 
+/**
+ * Volume of one footing pad as the load path designs it, cubic yards: a round pad is the cylinder of
+ * footingCubicYards (diameter, thickness); a square pad is side² × thickness / 46,656 in³ to the yd³.
+ * Example: 18 in round × 10 in → π × 9² × 10 / 46,656 = 0.0545 yd³; 24 in square × 12 in → 6,912 / 46,656 = 0.148 yd³.
+ */
+export function padCubicYards(shape: "round" | "square", sizeIn: number, thicknessIn: number): number {
+  if (shape === "round") return footingCubicYards(sizeIn, thicknessIn);
+  if (!(sizeIn > 0) || !(thicknessIn > 0)) return 0;
+  return (sizeIn * sizeIn * thicknessIn) / 46_656;
+}
+
 /** Concrete to order for the holes' volume, with CONCRETE_EXTRA more, rounded up to the next 0.01 yd³. */
 export function concreteToOrder(volumeYd3: number, extra: number = CONCRETE_EXTRA): number {
   return Math.ceil(volumeYd3 * (1 + extra) * 100 - 1e-9) / 100;

@@ -1,10 +1,13 @@
 // The load path as a builder builds it in Chromium at 390x844: deck joists and a deck beam sized in the flow and
 // saved to one job; on the job page the joists are put on the beam (their reactions become its load, saying where
 // they come from), posts are added under the beam and footings under the posts; the crew link, opened signed out,
-// reads the whole chain. Screenshots go to tests/artifacts/.
+// reads the whole chain; the order list counts the built posts and the footings' concrete from their design, each
+// naming the beam and supports it stands under (screen and CSV). Screenshots go to tests/artifacts/.
 import { randomUUID } from "node:crypto";
 import type { Page } from "playwright-core";
+import Papa from "papaparse";
 import { describe, expect, test } from "vitest";
+import { concreteToOrder, DEFAULT_SAWN_STOCK_FT, padCubicYards, stockLengthFor } from "@/lib/orders/rules";
 import { baseUrl, setupBrowser } from "./support/browser";
 import { nextStep, sizeAndSaveMember, waitForAnswer } from "./support/flow";
 import { signIn } from "./support/payments";
@@ -80,6 +83,40 @@ describe("the load path of a deck at 390x844", () => {
     await page.setViewportSize({ width: 1280, height: 800 });
     await owner.screenshot("load-path-3-job-page-desktop", { fullPage: true });
     await page.setViewportSize({ width: 390, height: 844 });
+
+    // the order list: the two checked 6x6 posts at the stock length for 8 ft, and the designed pads' concrete
+    // (π (D/2)² t per footing, 46,656 in³ to the yd³, + 10 %: common practice), each line naming where it stands
+    const footingWords = /2 × (\d+) in round × (\d+) in thick/.exec((await card(page, "F1 footings").textContent()) ?? "");
+    expect(footingWords).not.toBeNull();
+    const [diameterIn, thicknessIn] = [Number(footingWords![1]), Number(footingWords![2])];
+    const jobUrl = page.url();
+    await page.getByTestId("open-order").click();
+    await page.getByRole("heading", { level: 1, name: `Order list: ${jobName}` }).waitFor();
+    const postLine = page.getByTestId("order-line").filter({ hasText: "6x6 post" });
+    const postText = (await postLine.textContent()) ?? "";
+    expect(postText).toContain(`P1 deck posts: 2 posts 8' 0" tall under B1 deck beam at`);
+    expect(postText).toContain("checked on the job's load path");
+    expect(postText).toMatch(new RegExp(`${stockLengthFor(8, DEFAULT_SAWN_STOCK_FT).pieceFt} ft\\s*2\\s*pcs`));
+    const concreteLine = page.getByTestId("order-line").filter({ hasText: "Footing concrete" });
+    const concrete = concreteToOrder(2 * padCubicYards("round", diameterIn, thicknessIn));
+    expect(await concreteLine.textContent()).toMatch(new RegExp(`${String(concrete).replace(".", "\\.")}\\s*cu yd`));
+    expect(await concreteLine.textContent()).toContain(
+      `F1 footings: 2 footings ${diameterIn} in round × ${thicknessIn} in thick under P1 deck posts (B1 deck beam) at`,
+    );
+    expect(await page.getByTestId("order-list").textContent()).not.toMatch(/not counted in this list/);
+    await postLine.scrollIntoViewIfNeeded();
+    await owner.screenshot("load-path-5-order-phone", { fullPage: false });
+    await owner.screenshot("load-path-5-order-phone-full", { fullPage: true });
+    await page.setViewportSize({ width: 1280, height: 800 });
+    await owner.screenshot("load-path-6-order-desktop", { fullPage: true });
+    await page.setViewportSize({ width: 390, height: 844 });
+    const csv = await owner.context.request.get(`${baseUrl()}${new URL(page.url()).pathname.replace(/^\/jobs\//, "/api/jobs/")}?format=csv`);
+    const csvRows = Papa.parse<string[]>((await csv.text()).trim()).data;
+    expect(csvRows.find((r) => r[1] === "6x6 post")?.[3]).toBe("2");
+    expect(csvRows.find((r) => r[1] === "6x6 post")?.[7]).toMatch(/^P1 deck posts: 2 posts 8' 0" tall under B1 deck beam at /);
+    expect(csvRows.find((r) => r[1] === "Footing concrete")?.[3]).toBe(String(concrete));
+    await page.goto(jobUrl, { waitUntil: "load" });
+    await page.getByRole("heading", { level: 1, name: jobName }).waitFor();
 
     // the crew link, opened signed out, reads the same chain
     const panel = page.getByRole("region", { name: "Crew link" });

@@ -5,7 +5,7 @@ import { checkRequest, sizeRequest } from "@/lib/flow/request";
 import { withMainSpan, withOverhang, type FlowState } from "@/lib/flow/state";
 import { summarize } from "@/lib/flow/summary";
 import { orderCsv } from "@/lib/orders/csv";
-import { buildOrderList, cutLengthFt, NO_ORDER_DETAILS, notCountedNotes, type OrderDetails, type OrderLine, type OrderMember } from "@/lib/orders/order-list";
+import { buildOrderList, cutLengthFt, NO_ORDER_DETAILS, type OrderDetails, type OrderLine, type OrderMember } from "@/lib/orders/order-list";
 import { blockingRows, blocksPerPiece, concreteToOrder, footingCubicYards, joistCount, stockLengthFor, stripsPerSheet, studSizeFor } from "@/lib/orders/rules";
 import { checkMember, sizeMember } from "@/lib/solver/design";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -188,19 +188,5 @@ describe("CSV", () => {
     expect(cells.some((c) => c.startsWith("'=HYPERLINK"))).toBe(true);
     expect(rows.length - 2).toBe(lines(list).length); // header and total line
     expect(cells.filter((c) => c.includes("no price in the cost table")).length).toBe(lines(list).filter((l) => l.price === null).length);
-  });
-});
-
-describe("posts and footings from the load path", () => {
-  test("each post or footing member is named as not counted, so the list never quietly orders too little", () => {
-    const notes = notCountedNotes([
-      { label: "J1", kind: "deck-joist" },
-      { label: "B1", kind: "deck-beam" },
-      { label: "P1", kind: "post" },
-      { label: "F1", kind: "footing" },
-    ]);
-    expect(notes).toHaveLength(2);
-    expect(notes[0]).toMatch(/^P1: posts from the load path are not counted/);
-    expect(notes[1]).toMatch(/^F1: footings from the load path are not counted/);
   });
 });

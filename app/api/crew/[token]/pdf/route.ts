@@ -1,8 +1,7 @@
 import { env } from "@/lib/env";
 import { HttpError, route } from "@/lib/http";
 import { openCrewLink } from "@/lib/crew/links";
-import { renderCrewPdf } from "@/lib/crew/pdf";
-import { crewQrPng } from "@/lib/crew/qr";
+import { crewPdf, crewPdfVersion, etagMatches } from "@/lib/crew/pdf-cache";
 import { crewLinkUrl } from "@/lib/crew/token";
 import { paperSchema } from "@/lib/orders/schemas";
 
@@ -18,13 +17,13 @@ export const GET = route<Ctx>(async (req, ctx) => {
   const view = await openCrewLink(token);
   if (!view) throw new HttpError(404, "This crew link is not active");
   const url = crewLinkUrl(env().APP_URL, token);
-  const pdf = await renderCrewPdf(view, { url, qrPng: await crewQrPng(url, 400) }, paper.data);
+  const now = new Date();
+  const version = crewPdfVersion(view, url, paper.data, now);
+  // the phone may keep it (the service worker does, for no signal) but asks each time: an unchanged sheet is a 304, never drawn again
+  const headers = { etag: `"${version}"`, "cache-control": "private, no-cache", "referrer-policy": "no-referrer" };
+  if (etagMatches(req.headers.get("if-none-match"), headers.etag)) return new Response(null, { status: 304, headers });
+  const pdf = await crewPdf(view, url, paper.data, now, version);
   return new Response(new Uint8Array(pdf), {
-    headers: {
-      "content-type": "application/pdf",
-      "content-disposition": 'attachment; filename="crew-sheet.pdf"',
-      "cache-control": "private, no-store",
-      "referrer-policy": "no-referrer",
-    },
+    headers: { ...headers, "content-type": "application/pdf", "content-disposition": 'attachment; filename="crew-sheet.pdf"' },
   });
 });
