@@ -94,6 +94,8 @@ export interface MemberResultSummary {
   lengthFt: number;
   /** material tables version the answer came from */
   tables: string;
+  /** the edition of the design rules it was worked out on (absent in answers saved before editions were recorded) */
+  rules?: string;
   /** when the answer was worked out, ISO 8601 */
   computedAt: string;
   /** the ASCE 7 edition the answer was worked on (absent in answers saved before it was recorded: ASCE 7-22) */
@@ -135,6 +137,7 @@ export function answerFacts(check: CheckOutput): string[] {
   if (typeof f.incisedBasis === "string" && (f.incised === true || /treated|as given/.test(f.incisedBasis))) facts.push(`Lumber: ${f.incisedBasis}`);
   if (check.roughOpening) facts.push(`Span: ${check.roughOpening.note}`);
   if (check.bracing.instruction) facts.push(`Bracing: ${check.bracing.instruction}`);
+  if (check.bracing.bottomEdge) facts.push(`Bracing: ${check.bracing.bottomEdge}`);
   return facts;
 }
 
@@ -177,6 +180,7 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     spanFt: mainSpanFt(state),
     lengthFt: state.lengthFt,
     tables: check.tables,
+    rules: check.rules,
     computedAt: computedAt.toISOString(),
     loadStandard: check.loadStandard,
     facts: answerFacts(check),

@@ -207,7 +207,8 @@ function inputRows(state: FlowState): [string, string][] {
     ["Bearing length", formatInches(state.bearingIn)],
     ["Deflection limits", `live L/${state.limits.live}, total L/${state.limits.total}`],
     ...serviceRows(state),
-    ["Unbraced length", state.unbracedFt === 0 ? "0 (braced along its length)" : formatFeetInches(state.unbracedFt)],
+    ["Top edge braced every", state.unbracedFt === 0 ? "0 (braced along its length)" : formatFeetInches(state.unbracedFt)],
+    ["Bottom edge braced", state.bottomBraced ? "along its length (ceiling fastened to it)" : "at the supports only"],
     ["Own weight counted", state.selfWeight ? "yes" : "no"],
   );
   return rows;
