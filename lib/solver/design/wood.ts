@@ -149,7 +149,6 @@ export interface MemberEvaluation {
 export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluation {
   const { model, conditions: cond } = ctx;
   const lrfd = ctx.method === "lrfd";
-  const xs = model.xs;
   const sw = cond.selfWeight ? m.weightPlf : 0;
 
   const CM = m.wetTable === "scl" ? { Fb: 1, Fv: 1, FcPerp: 1, E: 1 } : wetServiceFactorCM(m.wetTable, cond.wet, m.Fb * m.CF);
