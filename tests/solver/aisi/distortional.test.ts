@@ -27,7 +27,7 @@ function flangeByIntegration(b: number, d: number, t: number) {
   const Ix = (b * t ** 3) / 12 + b * t * yc ** 2 + (t * d ** 3) / 12 + d * t * (d / 2 - yc) ** 2;
   const Iy = (t * b ** 3) / 12 + b * t * (b / 2 - xc) ** 2 + d * t * (b - xc) ** 2; // the lip's own t³d/12 left out, as the table does
   const Ixy = b * t * (b / 2 - xc) * (0 - yc) + d * t * (b - xc) * (d / 2 - yc); // positive with the lip along +y, as the table's signs read
-  // the shear centre of two strips meeting at a corner is the corner (b, 0); the web joins at (0, 0)
+  // the shear center of two strips meeting at a corner is the corner (b, 0); the web joins at (0, 0)
   return { A, J: ((b + d) * t ** 3) / 3, Ix, Iy, Ixy, xo: b - xc, hx: -xc, yo: -yc };
 }
 
@@ -61,7 +61,7 @@ function mndHere(My: number, Mcrd: number) {
 }
 
 describe("Table 2.3.1.3-1: the flange and lip properties", () => {
-  test("800S200-54 (t = 0.0566, b = 1.943, d = 0.597 centreline): the Design Manual's example values within 3 % (AISI D100-17 p. II-184, as runtosolve/AISIS100.jl's test data gives them)", () => {
+  test("800S200-54 (t = 0.0566, b = 1.943, d = 0.597 centerline): the Design Manual's example values within 3 % (AISI D100-17 p. II-184, as runtosolve/AISIS100.jl's test data gives them)", () => {
     const s = findCfsSection(T, "800S200-54");
     const b = s.flange - s.t;
     const d = s.lip - s.t / 2;
