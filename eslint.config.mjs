@@ -41,6 +41,9 @@ const FRAMEWORK = rule("lib/solver and lib/flow are pure TypeScript: no framewor
   "@/models/**",
   "**/models/**",
 ]);
+const NEXT_LINK = rule("Use Link from @/components/ui/link: it fetches the next page when the builder reaches for the link, not for every link on screen.", [
+  "next/link",
+]);
 const restrict = (...patterns) => ({ "no-restricted-imports": ["error", { patterns }] });
 
 export default defineConfig([
@@ -54,7 +57,8 @@ export default defineConfig([
   },
   { files: ["lib/**/*.{ts,tsx}"], rules: restrict(COMPONENTS, DEV_TOOLS) },
   { files: ["lib/solver/**/*.{ts,tsx}", "lib/flow/**/*.{ts,tsx}"], rules: restrict(COMPONENTS, DEV_TOOLS, FRAMEWORK) },
-  { files: ["components/**/*.{ts,tsx}", "app/**/*.{ts,tsx}"], rules: restrict(MODELS, DEV_TOOLS) },
+  { files: ["components/**/*.{ts,tsx}", "app/**/*.{ts,tsx}"], rules: restrict(MODELS, DEV_TOOLS, NEXT_LINK) },
+  { files: ["components/ui/link.tsx"], rules: restrict(MODELS, DEV_TOOLS) },
   { files: ["models/**/*.ts", "migrations/**/*.ts", "seeders/**/*.ts"], rules: restrict(COMPONENTS, DEV_TOOLS) },
   globalIgnores([".next/**", "out/**", "build/**", "next-env.d.ts", "node_modules/**", ".data/**", "tests/artifacts/**", "coverage/**"]),
 ]);

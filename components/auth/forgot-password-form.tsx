@@ -1,7 +1,7 @@
 "use client";
 
 import { useFormik } from "formik";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { useState } from "react";
 import * as yup from "yup";
 import { Button } from "@/components/ui/button";

@@ -2,7 +2,7 @@
 
 import { useFormik } from "formik";
 import { rewarmPhonePages } from "@/components/offline/phone-pages";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { signIn } from "next-auth/react";
 import { useState } from "react";
 import * as yup from "yup";

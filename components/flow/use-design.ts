@@ -9,8 +9,6 @@ import type { TablesStamp } from "@/lib/offline/answers";
 import { readPhoneTables, refreshPhoneTables } from "@/components/offline/phone-tables";
 import { useOnline } from "@/components/ui/use-online";
 
-export { useOnline };
-
 /** A refusal from the design routes: the field-level issues of a 400, or why the request failed. */
 export class DesignRequestError extends Error {
   constructor(

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useState } from "react";
-import { useOnline } from "@/components/flow/use-design";
+import { useOnline } from "@/components/ui/use-online";
 import { buttonClasses } from "@/components/ui/button";
 import { CREW_PDF_CACHE } from "@/lib/offline/pages";
 

@@ -1,7 +1,7 @@
 "use client";
 
 import { useEffect, useState } from "react";
-import { useOnline } from "@/components/flow/use-design";
+import { useOnline } from "@/components/ui/use-online";
 import { InfoIcon } from "@/components/ui/icons";
 import { jobOf, kindOf } from "@/lib/offline/queue";
 import { ConflictCard, phoneTime, waitingWords } from "./change-cards";

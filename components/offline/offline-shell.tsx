@@ -3,7 +3,7 @@
 import { Serwist } from "@serwist/window";
 import { usePathname, useRouter } from "next/navigation";
 import { useCallback, useEffect, useRef, useState } from "react";
-import { useOnline } from "@/components/flow/use-design";
+import { useOnline } from "@/components/ui/use-online";
 import { isCrewPage } from "@/components/shell/nav-items";
 import { Button } from "@/components/ui/button";
 import { InfoIcon, WarningIcon } from "@/components/ui/icons";

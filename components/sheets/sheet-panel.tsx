@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { Card } from "@/components/ui/card";
 import { getSessionUser } from "@/lib/auth/session";
 import { SHEET_LAPSED_WORDS, sheetAccess } from "@/lib/sheets/access";

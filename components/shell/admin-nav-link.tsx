@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { getSessionUser } from "@/lib/auth/session";
 
 /** "Admin" in the header, for an admin only (the role is read on the server on each request). */

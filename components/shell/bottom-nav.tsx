@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { usePathname } from "next/navigation";
 import { cx } from "@/components/ui/cx";
 import { NavIcon } from "./nav-icon";

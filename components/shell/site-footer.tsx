@@ -1,4 +1,4 @@
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { Caution } from "@/components/ui/caution";
 import { AccountFooterLinks } from "./account-footer-links";
 

@@ -1,6 +1,6 @@
 "use client";
 
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { usePathname } from "next/navigation";
 import { cx } from "@/components/ui/cx";
 import { NavIcon } from "./nav-icon";
@@ -15,13 +15,15 @@ export type SiteHeaderProps = {
 
 /**
  * The top bar: the name (home) on every screen, the three places as a top nav on wide screens, and Admin for
- * admins on every screen size. The crew's page shows only the name: the crew has no account.
+ * admins on every screen size. The crew's page shows only the name: the crew has no account. A solid bar, not a
+ * see-through blurred one: the blur costs a slow phone work on every scroll, and text showing through lowers the
+ * contrast a builder needs in sunlight.
  */
 export function SiteHeader({ adminLink }: SiteHeaderProps) {
   const pathname = usePathname() ?? "/";
   const crew = isCrewPage(pathname);
   return (
-    <header className="no-print sticky top-0 z-40 border-b-2 border-rule bg-paper/95 backdrop-blur supports-[backdrop-filter]:bg-paper/85">
+    <header className="no-print sticky top-0 z-40 border-b-2 border-rule bg-paper">
       <div className="mx-auto flex h-14 max-w-5xl items-center justify-between gap-4 px-4">
         <Link href="/" className="-ml-1 inline-flex min-h-touch items-center rounded-lg px-1 no-underline" aria-label="Spanlark home">
           <Wordmark />

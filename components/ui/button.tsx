@@ -1,4 +1,4 @@
-import Link, { type LinkProps } from "next/link";
+import { Link, type LinkProps } from "@/components/ui/link";
 import type { AnchorHTMLAttributes, ButtonHTMLAttributes, ReactNode } from "react";
 import { cx } from "./cx";
 import { Spinner } from "./spinner";
@@ -61,13 +61,12 @@ export function Button({ variant, size, fullWidth, icon, loading = false, classN
 export type ButtonLinkProps = Omit<AnchorHTMLAttributes<HTMLAnchorElement>, "href"> &
   ButtonLook & {
     href: LinkProps["href"];
-    prefetch?: LinkProps["prefetch"];
   };
 
 /** A link that looks like a button: for moving to another page, not for doing something. */
-export function ButtonLink({ variant, size, fullWidth, icon, className, children, href, prefetch, ...rest }: ButtonLinkProps) {
+export function ButtonLink({ variant, size, fullWidth, icon, className, children, href, ...rest }: ButtonLinkProps) {
   return (
-    <Link href={href} prefetch={prefetch} className={cx(buttonClasses({ variant, size, fullWidth }), className)} {...rest}>
+    <Link href={href} className={cx(buttonClasses({ variant, size, fullWidth }), className)} {...rest}>
       {icon}
       <span>{children}</span>
     </Link>

@@ -1,4 +1,4 @@
-import Link, { type LinkProps } from "next/link";
+import { Link, type LinkProps } from "@/components/ui/link";
 import type { HTMLAttributes, ReactNode } from "react";
 import { ArrowRightIcon } from "./icons";
 import { cx } from "./cx";

@@ -1,4 +1,4 @@
-import Link, { type LinkProps } from "next/link";
+import { Link, type LinkProps } from "@/components/ui/link";
 import type { ReactNode } from "react";
 import { ArrowLeftIcon } from "./icons";
 import { cx } from "./cx";

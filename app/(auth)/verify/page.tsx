@@ -1,5 +1,5 @@
 import type { Metadata } from "next";
-import Link from "next/link";
+import { Link } from "@/components/ui/link";
 import { VerifyEmail } from "@/components/auth/verify-email";
 import { FormAlert } from "@/components/auth/form-alert";
 import { PageHeader } from "@/components/ui/page-header";
