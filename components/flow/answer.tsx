@@ -368,6 +368,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
         open={detail !== null}
         check={detailCheck ?? null}
         chosen={detail !== null && chosenSpec !== null && sameSpec(detail, chosenSpec)}
+        jackStuds={studs}
         onChoose={() => {
           if (detail) onChoose(detail);
           setDetail(null);

@@ -3,6 +3,7 @@
  * Pure: the caller passes the material tables (starter data in the CLI, the published version in the app).
  */
 import { DESIGN_RULES } from "./rules";
+import { hogsAnywhere } from "./load-model";
 import type { MaterialTables } from "@/lib/tables/types";
 import { ratioPercent } from "./ratio-percent";
 import { checkWords } from "./check-words";
@@ -280,7 +281,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
       ? `top edge braced at the supports and every ${c.unbracedLengthFt} ft between; that spacing is checked wherever along the span it is worst`
       : "top edge braced continuously (sheathing or decking fastened along it)",
   );
-  if (member.kind !== "ijoist") {
+  if (member.kind !== "ijoist" && hogsAnywhere(ctx.model, ctx.strength, c.selfWeight ? member.weightPlf : 0)) {
     a.push(
       c.bottomEdgeBraced
         ? "bottom edge braced along its length, as given (a ceiling fastened directly to it): where the member hogs it is taken as braced"

@@ -391,3 +391,9 @@ export function momentNoise(model: LoadModel, envs: ComboEnvelope[], swPlf: numb
   }
   return 1e-6 * top;
 }
+
+/** Whether any of the given combinations makes the member hog anywhere (so its bottom edge is in compression somewhere). */
+export function hogsAnywhere(model: LoadModel, envs: ComboEnvelope[], swPlf: number): boolean {
+  const noise = momentNoise(model, envs, swPlf);
+  return envs.some((env) => env.Mmin.some((m, i) => m + env.fD * swPlf * model.selfWeight.M[i] < -noise));
+}

@@ -116,6 +116,7 @@ describe("two-span Douglas Fir-Larch No.2 2x10 floor joist, 16 in o.c., two 12 f
     expect(Math.abs(bend.capacity - FbStar)).toBeLessThan(0.5);
     expect(bend.note).toMatch(/moment that sags: top edge in compression, braced along its length/);
     expect(r.checks.find((c) => c.name === "stability")).toBeUndefined();
+    expect(r.assumptions.join(" ")).not.toMatch(/bottom edge/);
   });
 });
 
