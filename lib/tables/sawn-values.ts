@@ -122,11 +122,15 @@ const TABLE_4B: SawnDesignValues[] = ALL_GRADES.flatMap((grade) => {
 // (Missouri S&T, web.mst.edu/jthomas/classes/5260/problem/04/017, "Nominal Design Values for No. 1 DF-L",
 // Beams & Stringers column), whose LRFD nominal values divided back by KF/φ of NDS Appendix N give
 // every one of the seven.
-// Hem-Fir: no readable copy of its Beams and Stringers block was found (one design note agrees on
-// No.2 Fb 675 psi and E 1,100,000 psi only), so those rows stay from memory and flagged.
+// Hem-Fir No.2: all seven values checked against a university worked problem (Missouri S&T,
+// web.mst.edu/jthomas/classes/5260/problem/04/030, "No. 2 Hem-Fir", Timbers (Table 4D) Beams & Stringers
+// column); the page does not name the Supplement's edition. Hem-Fir Select Structural and No.1: no readable
+// copy was found, so those rows stay from memory and flagged.
 const T4D_DFL =
   "NDS Supplement 2018, Table 4D, Beams and Stringers; checked against an open-source TypeScript published copy (Table 4D DF-L timbers, 2018) and, for No.1, a Missouri S&T worked problem (web.mst.edu, problem 4.17, LRFD nominal values)";
 const T4D_HF = "NDS Supplement 2018, Table 4D, Beams and Stringers; from memory — verify against the printed table";
+const T4D_HF_NO2 =
+  "NDS Supplement 2018, Table 4D, Beams and Stringers; checked against a Missouri S&T worked problem (web.mst.edu, problem 4.30, Beams & Stringers column; the page names no edition)";
 
 const TABLE_4D: SawnDesignValues[] = [
   //                                                        Fb    Ft   Fv  Fc⊥   Fc    E          Emin
@@ -135,7 +139,7 @@ const TABLE_4D: SawnDesignValues[] = [
   row("Douglas Fir-Larch", "No.2", "beams-stringers", [875, 425, 170, 625, 600, 1_300_000, 470_000], 0.5, T4D_DFL),
   row("Hem-Fir", "Select Structural", "beams-stringers", [1300, 750, 140, 405, 925, 1_300_000, 470_000], 0.43, T4D_HF),
   row("Hem-Fir", "No.1", "beams-stringers", [1050, 525, 140, 405, 750, 1_300_000, 470_000], 0.43, T4D_HF),
-  row("Hem-Fir", "No.2", "beams-stringers", [675, 350, 140, 405, 500, 1_100_000, 400_000], 0.43, T4D_HF),
+  row("Hem-Fir", "No.2", "beams-stringers", [675, 350, 140, 405, 500, 1_100_000, 400_000], 0.43, T4D_HF_NO2),
 ];
 
 export const SAWN_VALUES: SawnDesignValues[] = [...TABLE_4A, ...TABLE_4B, ...TABLE_4D];

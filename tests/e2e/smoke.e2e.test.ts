@@ -59,6 +59,21 @@ describe("home page", () => {
     expect(consoleErrors).toEqual([]);
   });
 
+  test("starting, the page fetches no other page; a finger on a link fetches that one (the link fetches when reached for)", async () => {
+    const opened = await session.open(null, { viewport: "phone" });
+    const fetchedAhead: string[] = [];
+    opened.page.on("request", (request) => {
+      if (request.headers()["next-router-prefetch"]) fetchedAhead.push(new URL(request.url()).pathname);
+    });
+    await opened.goto("/");
+    // the framework's default would have fetched every link on screen by now (the kind cards, the bottom bar)
+    await opened.page.waitForTimeout(2_500);
+    expect(fetchedAhead).toEqual([]);
+    await opened.page.getByRole("navigation", { name: "Main" }).getByRole("link", { name: "Jobs" }).dispatchEvent("touchstart");
+    await expect.poll(() => fetchedAhead, { timeout: 10_000 }).toContain("/jobs");
+    expect(opened.consoleErrors).toEqual([]);
+  });
+
   test("touch targets on the phone are at least 44 px tall", async () => {
     const { page } = await session.open("/", { viewport: "phone" });
     const small = await page.evaluate(() =>

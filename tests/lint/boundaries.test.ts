@@ -27,6 +27,11 @@ describe("import boundaries", () => {
       code: 'import { startStandin } from "@/scripts/stripe-standin/server";\nexport const a = startStandin;\n',
       why: "shipped code imports a dev tool",
     },
+    {
+      file: "components/jobs/probe.tsx",
+      code: 'import Link from "next/link";\nexport const a = Link;\n',
+      why: "a component links with next/link, not the intent link",
+    },
   ])(
     "$why: refused",
     async ({ file, code }) => {
@@ -39,6 +44,8 @@ describe("import boundaries", () => {
     { file: "lib/sheets/probe.ts", code: 'import { CAUTION } from "@/lib/caution";\nexport const a = CAUTION;\n' },
     { file: "components/jobs/probe.ts", code: 'import type { Role } from "@/lib/auth/role-list";\nexport type A = Role;\n' },
     { file: "lib/solver/probe.ts", code: 'import { z } from "zod";\nexport const a = z;\n' },
+    { file: "app/probe.tsx", code: 'import { Link } from "@/components/ui/link";\nexport const a = Link;\n' },
+    { file: "components/ui/link.tsx", code: 'import NextLink from "next/link";\nexport const a = NextLink;\n' },
   ])(
     "$file may import what it needs",
     async ({ file, code }) => {

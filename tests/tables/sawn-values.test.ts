@@ -194,15 +194,19 @@ const TABLE_4D_DFL_TS: [SawnGrade, Values7][] = [
 const MST_DFL_NO1_BS = { Fb: 3431, Ft: 1823, Fv: 490, FcPerp: 1302, Fc: 2220, E: 1_600_000, Emin: 1_024_000 };
 const KF_OVER_PHI = { Fb: 2.16 / 0.85, Ft: 2.16 / 0.8, Fv: 2.16 / 0.75, FcPerp: 1.875 / 0.9, Fc: 2.16 / 0.9, Emin: 1.5 / 0.85 };
 
-// NDS Supplement 2018, Table 4D, Beams and Stringers, Hem-Fir: no readable copy of the block was found,
-// so these rows are from memory and must say so (flagged on the admin screens and the job sheet's
-// appendix). One published design note (exact-string search, repository not named) agrees on No.2
-// Fb 675 psi and E 1,100,000 psi for a solid 6x10; the other values are held still until a copy is read.
+// NDS Supplement 2018, Table 4D, Beams and Stringers, Hem-Fir Select Structural and No.1: no readable copy
+// of those rows was found, so they are from memory and must say so (flagged on the admin screens and the
+// job sheet's appendix).
 const TABLE_4D_HF_FROM_MEMORY: [SawnGrade, Values7][] = [
   ["Select Structural", [1300, 750, 140, 405, 925, 1_300_000, 470_000]],
   ["No.1", [1050, 525, 140, 405, 750, 1_300_000, 470_000]],
-  ["No.2", [675, 350, 140, 405, 500, 1_100_000, 400_000]],
 ];
+
+// Missouri S&T worked problem 4.30 (web.mst.edu/jthomas/classes/5260/problem/04/030, read with the search
+// tool): "ASD, No. 2 Hem-Fir", the "Timbers (Table 4D)" Beams & Stringers column: Fb 675, Ft 350, Fv 140,
+// Fc⊥ 405, Fc 500 psi, E 1,100,000, Emin 400,000 psi (the page names no Supplement edition). One published
+// design note (exact-string search, repository not named) also agrees on Fb 675 psi and E 1,100,000 psi.
+const MST_HF_NO2_BS: Values7 = [675, 350, 140, 405, 500, 1_100_000, 400_000];
 
 describe("NDS Supplement 2018 Table 4D, Beams and Stringers", () => {
   test.each(TABLE_4D_DFL_TS)("Douglas Fir-Larch %s against the TypeScript published copy", (grade, values) => {
@@ -229,9 +233,12 @@ describe("NDS Supplement 2018 Table 4D, Beams and Stringers", () => {
     expect(isFromMemory(v.source)).toBe(true);
   });
 
-  test("Hem-Fir No.2: Fb and E agree with the one published design note found", () => {
+  test("Hem-Fir No.2 against the Missouri S&T worked problem's Beams & Stringers column, cited", () => {
     const v = findSawnValues(T, "Hem-Fir", "No.2", "beams-stringers");
-    expect([v.Fb, v.E]).toEqual([675, 1_100_000]);
+    expect(valuesOf(v)).toEqual(MST_HF_NO2_BS);
+    expect(v.source).toContain("NDS Supplement 2018, Table 4D");
+    expect(v.source).toMatch(/Missouri S&T.*problem 4\.30/);
+    expect(isFromMemory(v.source)).toBe(false);
   });
   // Specific gravity G as Tables 4A/4B print it (and NDS 2018 Table 12.3.3A): Spruce-Pine-Fir 0.42 as
   // the Kotlin published copy notes; the others from memory.

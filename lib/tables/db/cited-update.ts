@@ -23,6 +23,10 @@ export const CITED_UPDATE_NOTE = "Cited material tables: each row names its tabl
 export const TIMBER_SOURCES_NOTE =
   "Cited material tables: NDS Supplement 2018 Table 4D Douglas Fir-Larch beams and stringers checked against published copies; glulam 24F-V4 Fbx− 1,450 psi (its stress class value, the lower reading)";
 
+/** The note of the version that carries the Table 4D Hem-Fir No.2 source, checked against a published worked problem. */
+export const HEM_FIR_TIMBER_NOTE =
+  "Cited material tables: NDS Supplement 2018 Table 4D Hem-Fir No.2 beams and stringers checked against a published worked problem";
+
 /** The earlier starter's values that the cited tables correct: [table, row key, column, earlier value]. */
 export const PREVIOUS_STARTER_VALUES: [TableKey, string, string, string][] = [
   // NDS Supplement 2018 Table 4A prints 1,250 psi; the first starter tables held 1,150

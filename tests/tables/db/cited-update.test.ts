@@ -2,7 +2,7 @@ import { afterAll, beforeAll, describe, expect, test } from "vitest";
 import { getSequelize } from "@/lib/db";
 import { STARTER_TABLES } from "@/lib/tables";
 import { resetTablesCache } from "@/lib/tables/current";
-import { citedUpdate, CITED_UPDATE_NOTE, publishCitedUpdate, TIMBER_SOURCES_NOTE } from "@/lib/tables/db/cited-update";
+import { citedUpdate, CITED_UPDATE_NOTE, HEM_FIR_TIMBER_NOTE, publishCitedUpdate, TIMBER_SOURCES_NOTE } from "@/lib/tables/db/cited-update";
 import { loadVersion } from "@/lib/tables/db/queries";
 import { tablesToRows } from "@/lib/tables/db/rows";
 import { seedTables } from "@/lib/tables/db/write";
@@ -10,6 +10,7 @@ import type { MaterialTables, SawnDesignValues } from "@/lib/tables/types";
 import { TableVersion } from "@/models/material-tables";
 import { down as migrationDown, up as migrationUp } from "@/migrations/20261203120000-cited-table-values";
 import { down as timberDown, up as timberUp } from "@/migrations/20261205110000-cited-timber-sources";
+import { down as hemFirDown, up as hemFirUp } from "@/migrations/20261205130000-cited-hem-fir-timbers";
 import { TEST_DB, useOwnMigratedDatabase, type OwnDatabase } from "./support";
 
 // The cited tables reach a database that already holds versions as one new version; the earlier
@@ -112,7 +113,7 @@ describe.skipIf(!TEST_DB)("the cited-tables migration on a database seeded with 
     const before = await TableVersion.count();
     expect(before).toBeGreaterThan(0);
     const DFL_NO1_BS = (v: SawnDesignValues) => v.species === "Douglas Fir-Larch" && v.grade === "No.1" && v.sizeClass === "beams-stringers";
-    const HF_NO2_BS = (v: SawnDesignValues) => v.species === "Hem-Fir" && v.grade === "No.2" && v.sizeClass === "beams-stringers";
+    const HF_SS_BS = (v: SawnDesignValues) => v.species === "Hem-Fir" && v.grade === "Select Structural" && v.sizeClass === "beams-stringers";
     const latest = async () => (await TableVersion.findAll({ order: [["number", "DESC"]], limit: 1 }))[0];
     const earlier = await latest();
     expect((await loadVersion(earlier.id))!.sawnValues.find(DFL_NO1_BS)!.source).toMatch(/from memory/);
@@ -126,13 +127,36 @@ describe.skipIf(!TEST_DB)("the cited-tables migration on a database seeded with 
     expect(dfl.source).toMatch(/checked against/);
     expect(dfl.source).not.toMatch(/from memory/);
     expect(dfl.Fb).toBe(1350);
-    expect(now.sawnValues.find(HF_NO2_BS)!.source).toMatch(/from memory/);
+    expect(now.sawnValues.find(HF_SS_BS)!.source).toMatch(/from memory/);
     // frozen: the version before keeps its words
     expect((await loadVersion(earlier.id))!.sawnValues.find(DFL_NO1_BS)!.source).toMatch(/from memory/);
 
     await timberUp(ctx);
     expect(await TableVersion.count()).toBe(before + 1);
     await timberDown(ctx);
+    expect(await TableVersion.count()).toBe(before);
+  });
+  test("the Table 4D Hem-Fir No.2 source reaches a database as one more version; the version before keeps its flagged words", async () => {
+    const ctx = { context: { queryInterface: getSequelize().getQueryInterface(), sequelize: getSequelize() } };
+    const before = await TableVersion.count();
+    const HF_NO2_BS = (v: SawnDesignValues) => v.species === "Hem-Fir" && v.grade === "No.2" && v.sizeClass === "beams-stringers";
+    const latest = async () => (await TableVersion.findAll({ order: [["number", "DESC"]], limit: 1 }))[0];
+    const earlier = await latest();
+    expect((await loadVersion(earlier.id))!.sawnValues.find(HF_NO2_BS)!.source).toMatch(/from memory/);
+
+    await hemFirUp(ctx);
+    const published = await latest();
+    expect(published.number).toBe(earlier.number + 1);
+    expect(published.note).toContain(HEM_FIR_TIMBER_NOTE);
+    const hf = (await loadVersion(published.id))!.sawnValues.find(HF_NO2_BS)!;
+    expect(hf.source).toMatch(/Missouri S&T/);
+    expect(hf.source).not.toMatch(/from memory/);
+    expect([hf.Fb, hf.Fc, hf.E]).toEqual([675, 500, 1_100_000]);
+    expect((await loadVersion(earlier.id))!.sawnValues.find(HF_NO2_BS)!.source).toMatch(/from memory/);
+
+    await hemFirUp(ctx);
+    expect(await TableVersion.count()).toBe(before + 1);
+    await hemFirDown(ctx);
     expect(await TableVersion.count()).toBe(before);
   });
 });
