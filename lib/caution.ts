@@ -29,7 +29,7 @@ export const NOT_CHECKED: readonly string[] = [
 export const NOT_CHECKED_COLD_FORMED: readonly string[] = [
   "Cold-formed steel: web holes beyond the standard punchouts, and punchouts near a support or point load",
   "Cold-formed steel: screws, clips, hangers and connections, and the fastening of bearing stiffeners",
-  "Cold-formed steel: the bridging, blocking and strapping that brace the flange not sheathed (bottom flange over interior supports), and their connections. Flange roll (distortional buckling) is checked, crediting no restraint from sheathing and none from bridging or blocking unless an unbraced length is given",
+  "Cold-formed steel: the bridging, blocking and strapping that brace the flange not sheathed (bottom flange over interior supports), and their connections. Flange roll (distortional buckling) is checked, crediting no restraint from sheathing, none from bridging or blocking for the bottom flange, and for the top flange only at the brace spacing given",
 ];
 
 /** The not-checked list for the materials shown: the common list, and the cold-formed steel items when one is cold-formed steel. */

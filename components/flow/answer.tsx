@@ -11,8 +11,7 @@ import { StatusBadge } from "@/components/ui/status-badge";
 import { CheckIcon, InfoIcon, WarningIcon } from "@/components/ui/icons";
 import { cx } from "@/components/ui/cx";
 import { formatFeetInches, formatInches } from "@/lib/flow/length";
-import { answerFacts, shortLabel, spacingOf, spanWords } from "@/lib/flow/summary";
-import { jackStudsApply } from "@/lib/solver/design/answer-line";
+import { answerFacts, jackStudsUnder, shortLabel, spanWords } from "@/lib/flow/summary";
 import { KIND_LABELS, type FlowState, type FlowStepId } from "@/lib/flow/state";
 import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -205,7 +204,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
 
   const busy = size.isLoading || size.isValidating;
   const headline = chosenCandidate?.answer ?? null;
-  const studs = jackStudsApply(state.kind, spacingOf(state));
+  const studs = jackStudsUnder(state);
 
   return (
     <div className="flex flex-col gap-6" aria-busy={busy}>
@@ -369,6 +368,7 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
         open={detail !== null}
         check={detailCheck ?? null}
         chosen={detail !== null && chosenSpec !== null && sameSpec(detail, chosenSpec)}
+        jackStuds={studs}
         onChoose={() => {
           if (detail) onChoose(detail);
           setDetail(null);

@@ -15,6 +15,8 @@ export type MemberDetailProps = {
   open: boolean;
   check: CheckOutput | null;
   chosen: boolean;
+  /** whether the crew builds jack studs under this member's ends (jackStudsUnder): otherwise the bearing alone is shown */
+  jackStuds: boolean;
   onChoose: () => void;
   onClose: () => void;
 };
@@ -89,7 +91,7 @@ export function factorRows(factors: CheckOutput["factors"]): { name: string; val
 }
 
 /** A member's whole check: each check with its demand, capacity and combination, every factor, the loads and assumptions. */
-export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberDetailProps) {
+export function MemberDetail({ open, check, chosen, jackStuds, onChoose, onClose }: MemberDetailProps) {
   return (
     <Dialog
       open={open}
@@ -178,7 +180,7 @@ export function MemberDetail({ open, check, chosen, onChoose, onClose }: MemberD
                   {r.studs
                     ? ` (the wood under its ${fmt(r.studs.widthIn)} in bearing width needs ${fmt(r.studs.woodIn)} in, the steel ${fmt(r.studs.steelIn)} in)`
                     : ""}
-                  {r.jackStuds !== null ? `; ${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"}` : ""}
+                  {jackStuds && r.jackStuds !== null ? `; ${r.jackStuds} jack stud${r.jackStuds === 1 ? "" : "s"}` : ""}
                 </li>
               ))}
             </ul>

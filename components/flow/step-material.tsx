@@ -1,7 +1,7 @@
 "use client";
 
 import { SelectField } from "@/components/ui/field";
-import { wallOf, type FlowState, type MaterialFamily } from "@/lib/flow/state";
+import { overhangs, spansFt, wallOf, type FlowState, type MaterialFamily } from "@/lib/flow/state";
 import { conditionQuestions } from "@/lib/flow/conditions";
 import { INCISED_SPECIES } from "@/lib/solver/design/wood";
 import { DEFLECTION_PRESETS } from "@/lib/solver/design/presets";
@@ -54,6 +54,9 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
   const incised = state.incised ?? incisedDefault;
   const inWall = state.kind === "header" || state.kind === "beam";
   const preset = DEFLECTION_PRESETS.find((p) => p.live === state.limits.live && p.total === state.limits.total);
+  // where the member hogs under gravity load (more than one span, an overhang) the bottom edge is in compression
+  const ends = overhangs(state);
+  const hogs = spansFt(state).length !== 1 || ends.left > 1e-9 || ends.right > 1e-9;
   return (
     <div className="flex flex-col gap-6">
       <ChoiceGroup
@@ -241,6 +244,14 @@ export function StepMaterial({ state, update }: StepMaterialProps) {
           maxFt={state.lengthFt}
           onCommit={(unbracedFt) => update((s) => ({ ...s, unbracedFt }))}
         />
+        {m.family !== "ijoist" && hogs ? (
+          <Checkbox
+            label="Bottom edge braced along its length"
+            hint="A ceiling fastened right to it. Not ticked: over a support or on an overhang the bottom edge is taken as braced only at the supports."
+            checked={state.bottomBraced === true}
+            onChange={(bottomBraced) => update((s) => ({ ...s, bottomBraced }))}
+          />
+        ) : null}
       </section>
     </div>
   );

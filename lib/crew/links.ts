@@ -1,5 +1,5 @@
 import "server-only";
-import { recheckIfTablesChanged } from "@/lib/jobs/service";
+import { recheckIfOutdated } from "@/lib/jobs/service";
 import { notCheckedFor } from "@/lib/caution";
 import { Op } from "sequelize";
 import { getSequelize } from "@/lib/db";
@@ -199,7 +199,7 @@ export async function openCrewLink(token: string, now: Date = new Date()): Promi
   const job = await Job.findOne({ where: { id: link.jobId, ownerId: link.ownerId, deletedAt: { [Op.is]: null } } });
   if (!job) return null;
   // new tables since the members were worked out: the crew never reads a stale answer
-  await recheckIfTablesChanged(job.id);
+  await recheckIfOutdated(job.id);
   const members = await Member.findAll({
     where: { jobId: job.id, deletedAt: { [Op.is]: null } },
     order: [

@@ -40,6 +40,7 @@ const BASE: Omit<FlowState, "kind" | "lengthFt" | "supports" | "width" | "areaLo
   wet: false,
   repetitive: false,
   unbracedFt: 0,
+  bottomBraced: false,
   selfWeight: true,
   loadStandard: "ASCE 7-16",
   incised: null,

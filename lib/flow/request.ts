@@ -102,6 +102,7 @@ export function designBase(state: FlowState, carried: readonly DesignLoad[] = []
       // joists say whether they share the load; beams and headers take the engine's rule (3+ plies, NDS 2018 §4.3.9)
       ...(asked.repetitive !== "no" ? { repetitive: state.repetitive } : {}),
       unbracedLengthFt: state.unbracedFt,
+      bottomEdgeBraced: state.bottomBraced === true,
       selfWeight: state.selfWeight,
     },
     limits: limitsFor(state),

@@ -82,6 +82,8 @@ export const flowStateSchema = z
     wet: z.boolean(),
     repetitive: z.boolean(),
     unbracedFt: z.number().min(0, "cannot be negative").max(MAX_LENGTH_FT),
+    /** the bottom edge braced along its length (a ceiling fastened directly to it); absent in states saved before it was asked: no */
+    bottomBraced: z.boolean().optional(),
     selfWeight: z.boolean(),
     loadStandard: z.enum(LOAD_STANDARDS, { error: `must be one of ${LOAD_STANDARDS.join(", ")}` }).optional(),
     incised: z.boolean().nullable().optional(),

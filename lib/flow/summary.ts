@@ -10,7 +10,7 @@ import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { LoadCase, SupportType } from "@/lib/solver/types";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
 import { formatFeetInches } from "./length";
-import { mainSpanFt, overhangs, spansFt, type FlowState } from "./state";
+import { mainSpanFt, overhangs, spansFt, wallOf, type FlowState } from "./state";
 
 export interface SummaryReaction {
   /** ft from the left end */
@@ -94,6 +94,8 @@ export interface MemberResultSummary {
   lengthFt: number;
   /** material tables version the answer came from */
   tables: string;
+  /** the edition of the design rules it was worked out on (absent in answers saved before editions were recorded) */
+  rules?: string;
   /** when the answer was worked out, ISO 8601 */
   computedAt: string;
   /** the ASCE 7 edition the answer was worked on (absent in answers saved before it was recorded: ASCE 7-22) */
@@ -135,10 +137,19 @@ export function answerFacts(check: CheckOutput): string[] {
   if (typeof f.incisedBasis === "string" && (f.incised === true || /treated|as given/.test(f.incisedBasis))) facts.push(`Lumber: ${f.incisedBasis}`);
   if (check.roughOpening) facts.push(`Span: ${check.roughOpening.note}`);
   if (check.bracing.instruction) facts.push(`Bracing: ${check.bracing.instruction}`);
+  if (check.bracing.bottomEdge) facts.push(`Bracing: ${check.bracing.bottomEdge}`);
   return facts;
 }
 
 export { shortLabel } from "@/lib/solver/design/answer-line";
+
+/**
+ * Whether the crew builds jack studs under this member's ends, by the answer line's own rule (a header, or a
+ * beam in a stud wall): the answer screen, the saved summary and the sheet read it so they agree with the headline.
+ */
+export function jackStudsUnder(state: Pick<FlowState, "kind" | "width" | "wallFraming">): boolean {
+  return jackStudsApply(state.kind, spacingOf(state), wallOf(state) !== null);
+}
 
 /** The spacing to name in the answer line, when the member is one of many at a spacing. */
 export function spacingOf(state: Pick<FlowState, "width">): number | undefined {
@@ -154,7 +165,7 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     uplift: r.uplift,
     bearing: r.bearing,
     requiredBearing: r.requiredBearing,
-    jackStuds: jackStudsApply(state.kind, spacingOf(state)) ? r.jackStuds : null,
+    jackStuds: jackStudsUnder(state) ? r.jackStuds : null,
     // handed down the load path: live load at its largest here with span-by-span placement (never the smaller full-span value)
     byCase: r.liveMax !== undefined ? { ...r.byCase, L: r.liveMax } : r.byCase,
   }));
@@ -177,6 +188,7 @@ export function summarize(state: FlowState, check: CheckOutput, computedAt: Date
     spanFt: mainSpanFt(state),
     lengthFt: state.lengthFt,
     tables: check.tables,
+    rules: check.rules,
     computedAt: computedAt.toISOString(),
     loadStandard: check.loadStandard,
     facts: answerFacts(check),

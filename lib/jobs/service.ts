@@ -5,7 +5,7 @@ import { HttpError } from "@/lib/http";
 import { checkRequest, sizeRequest } from "@/lib/flow/request";
 import type { FlowState } from "@/lib/flow/state";
 import { summarize, type MemberResultSummary } from "@/lib/flow/summary";
-import { checkMember, DesignInputError, sizeMember } from "@/lib/solver/design";
+import { checkMember, DESIGN_RULES, DESIGN_RULES_CHANGE, DesignInputError, sizeMember } from "@/lib/solver/design";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import { getCurrentTables } from "@/lib/tables/current";
 import { Job } from "@/models/job";
@@ -398,13 +398,21 @@ function canonical(v: unknown): string {
   return JSON.stringify(v) ?? "null";
 }
 
-/** A job whose members were worked out with other tables than the current ones is worked out again (the admin published new tables). */
-export async function recheckIfTablesChanged(jobId: string): Promise<boolean> {
+/**
+ * A job whose members were worked out with other tables than the current ones (the admin published new tables),
+ * or whose framing answers came from an earlier edition of the design rules (lib/solver/design/rules.ts), is
+ * worked out again; each answer that changes is flagged with why.
+ */
+export async function recheckIfOutdated(jobId: string): Promise<boolean> {
   getSequelize();
   const tables = await getCurrentTables();
-  const members = await Member.findAll({ where: { jobId, deletedAt: { [Op.is]: null } }, attributes: ["id", "resultSummary"] });
+  const members = await Member.findAll({ where: { jobId, deletedAt: { [Op.is]: null } }, attributes: ["id", "resultSummary", "flowState"] });
   if (members.some((m) => m.resultSummary !== null && m.resultSummary.tables !== tables.version)) {
     await recheckJob(jobId, { editedId: null, reason: "new material tables were published" });
+    return true;
+  }
+  if (members.some((m) => m.flowState !== null && m.resultSummary !== null && m.resultSummary.rules !== DESIGN_RULES)) {
+    await recheckJob(jobId, { editedId: null, reason: DESIGN_RULES_CHANGE });
     return true;
   }
   return false;

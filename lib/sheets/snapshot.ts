@@ -8,8 +8,7 @@ import { formatFeetInches, formatInches } from "@/lib/flow/length";
 import { conditionQuestions } from "@/lib/flow/conditions";
 import { checkRequest } from "@/lib/flow/request";
 import { KIND_LABELS, mainSpanFt, sortedSupports, SUPPORT_WORDS, wallOf, type FlowState, type MemberKind } from "@/lib/flow/state";
-import { answerFacts, spacingOf } from "@/lib/flow/summary";
-import { jackStudsApply } from "@/lib/solver/design/answer-line";
+import { answerFacts, jackStudsUnder } from "@/lib/flow/summary";
 import { EXPOSURE_CE, EXPOSURE_WORDS, THERMAL_CT, THERMAL_WORDS } from "@/lib/solver/asce7/snow";
 import { LOAD_STANDARD_WORDS } from "@/lib/solver/asce7/standard";
 import type { Segment } from "@/lib/solver/beam";
@@ -207,7 +206,8 @@ function inputRows(state: FlowState): [string, string][] {
     ["Bearing length", formatInches(state.bearingIn)],
     ["Deflection limits", `live L/${state.limits.live}, total L/${state.limits.total}`],
     ...serviceRows(state),
-    ["Unbraced length", state.unbracedFt === 0 ? "0 (braced along its length)" : formatFeetInches(state.unbracedFt)],
+    ["Top edge braced every", state.unbracedFt === 0 ? "0 (braced along its length)" : formatFeetInches(state.unbracedFt)],
+    ["Bottom edge braced", state.bottomBraced ? "along its length (ceiling fastened to it)" : "at the supports only"],
     ["Own weight counted", state.selfWeight ? "yes" : "no"],
   );
   return rows;
@@ -311,7 +311,7 @@ export function sheetSources(snapshot: Pick<SheetSnapshot, "members">): { source
 export function sheetMember(source: SheetMemberSource, spec: MemberSpec, tables: MaterialTables): SheetMember {
   const state = source.flowState;
   const check = checkMember(checkRequest(state, spec, source.carried ?? []), tables);
-  const studs = jackStudsApply(state.kind, spacingOf(state));
+  const studs = jackStudsUnder(state);
   const reactions = check.reactions.map((r) => ({ ...r, jackStuds: studs ? r.jackStuds : null }));
   const headline = check.answer;
   const saved = source.savedAnswer;

@@ -160,7 +160,7 @@ describe.skipIf(!TEST_DB)("a live job's load path (PostgreSQL)", () => {
   test("new tables since the members were worked out: opening the job works the whole path out again", async () => {
     who.current = owner;
     const { Member } = await import("@/models/member");
-    const { recheckIfTablesChanged } = await import("@/lib/jobs/service");
+    const { recheckIfOutdated } = await import("@/lib/jobs/service");
     const { getCurrentTables } = await import("@/lib/tables/current");
     const current = (await getCurrentTables()).version;
     const row = await Member.findByPk(ids.f1);
@@ -169,9 +169,27 @@ describe.skipIf(!TEST_DB)("a live job's load path (PostgreSQL)", () => {
     row.resultSummary = { ...row.resultSummary, tables: "an-older-version" };
     row.changed("resultSummary", true);
     await row.save();
-    expect(await recheckIfTablesChanged(jobId)).toBe(true);
+    expect(await recheckIfOutdated(jobId)).toBe(true);
     expect((await member(ids.f1))?.resultSummary?.tables).toBe(current);
-    expect(await recheckIfTablesChanged(jobId)).toBe(false);
+    expect(await recheckIfOutdated(jobId)).toBe(false);
+  });
+
+  test("answers from an earlier edition of the design rules: opening the job works them out again on the current one", async () => {
+    who.current = owner;
+    const { Member } = await import("@/models/member");
+    const { recheckIfOutdated } = await import("@/lib/jobs/service");
+    const { DESIGN_RULES } = await import("@/lib/solver/design");
+    const row = await Member.findByPk(ids.b1);
+    if (!row?.resultSummary) throw new Error("B1 has no answer");
+    expect(row.resultSummary.rules).toBe(DESIGN_RULES);
+    // as if B1 had been saved before design rule editions were recorded
+    const { rules: _rules, ...older } = row.resultSummary;
+    row.resultSummary = older;
+    row.changed("resultSummary", true);
+    await row.save();
+    expect(await recheckIfOutdated(jobId)).toBe(true);
+    expect((await member(ids.b1))?.resultSummary?.rules).toBe(DESIGN_RULES);
+    expect(await recheckIfOutdated(jobId)).toBe(false);
   });
 
   test("deleting a carrier asks first (409 naming what sits on it); keeping them leaves them on nothing", async () => {

@@ -97,9 +97,9 @@ export interface GrossProperties {
   J: number;
   /** warping constant, in⁶ */
   Cw: number;
-  /** shear centre from the centroid along x, in (negative: beyond the web) */
+  /** shear center from the centroid along x, in (negative: beyond the web) */
   xo: number;
-  /** polar radius of gyration about the shear centre, in (AISI S100-16 §F2.1.1: r0 = √(rx² + ry² + xo²)) */
+  /** polar radius of gyration about the shear center, in (AISI S100-16 §F2.1.1: r0 = √(rx² + ry² + xo²)) */
   r0: number;
 }
 
@@ -115,7 +115,7 @@ function piecesOf(pts: [number, number][], t: number): Piece[] {
 
 /**
  * Thin-walled open-section properties of a chain of straight pieces (midline, thickness t): area,
- * moments of inertia, J, and the shear centre and warping constant from the sectorial coordinate
+ * moments of inertia, J, and the shear center and warping constant from the sectorial coordinate
  * (Vlasov's theory of thin-walled open sections).
  */
 export function chainProperties(pts: [number, number][], t: number): GrossProperties {
@@ -169,7 +169,7 @@ export function chainProperties(pts: [number, number][], t: number): GrossProper
     IwX += (L * t * (wc[i - 1] * (2 * X1 + X2) + wc[i] * (X1 + 2 * X2))) / 6;
     IwY += (L * t * (wc[i - 1] * (2 * Y1 + Y2) + wc[i] * (Y1 + 2 * Y2))) / 6;
   }
-  // the pole (shear centre) that makes the sectorial products with X and Y vanish
+  // the pole (shear center) that makes the sectorial products with X and Y vanish
   const det = Iyy * Ixx - Ixy * Ixy;
   const ax = (Iyy * IwY - Ixy * IwX) / det;
   const ay = (Ixy * IwY - Ixx * IwX) / det;
@@ -196,7 +196,7 @@ export function chainProperties(pts: [number, number][], t: number): GrossProper
 /** Gross properties of a C-section or track from its dimensions, rounded corners included. */
 export function grossProperties(s: CfsDimensions): GrossProperties {
   const g = chainProperties(midlinePoints(s), s.t);
-  // Sx to the outside fibre, D/2 from mid-depth (the section is symmetric about its x axis)
+  // Sx to the outside fiber, D/2 from mid-depth (the section is symmetric about its x axis)
   return { ...g, Sx: g.Ix / (s.D / 2) };
 }
 
@@ -262,7 +262,7 @@ export function edgeStiffenedFlange(w: number, d: number, t: number, f: number):
 export interface EffectiveSection {
   /** effective moment of inertia about x, in⁴ */
   Ie: number;
-  /** effective section modulus to the extreme compression fibre, in³ */
+  /** effective section modulus to the extreme compression fiber, in³ */
   Se: number;
   /** neutral axis below mid-depth, in */
   shift: number;
@@ -279,7 +279,7 @@ export function effectiveSection(s: CfsDimensions, f: number): EffectiveSection 
   const c = R + t;
   const { h, w, d } = flatWidths(s);
   const yFlange = D / 2 - t / 2;
-  // corners: quarter arcs, area π r t / 2, centroid 0.637 r from the arc's centre (toward the corner)
+  // corners: quarter arcs, area π r t / 2, centroid 0.637 r from the arc's center (toward the corner)
   const cornerA = (Math.PI * r * t) / 2;
   const cornerOff = 0.637 * r;
   const yCornerTop = yFlange - r + cornerOff;
@@ -475,7 +475,7 @@ export function momentGradientCb(Mmax: number, MA: number, MB: number, MC: numbe
 // Appendix 2 §2.3.3.3 (C- and Z-sections). Checked, equation by equation, against the published copy in
 // runtosolve/AISIS100.jl (src/v16.jl: table23131, app23331 to app23336, f411).
 
-/** Geometric properties of the compression flange and lip, Table 2.3.1.3-1 (simple lip at 90°), from centreline widths b and d, in. */
+/** Geometric properties of the compression flange and lip, Table 2.3.1.3-1 (simple lip at 90°), from centerline widths b and d, in. */
 export interface DistortionalFlange {
   Af: number;
   Jf: number;
@@ -488,7 +488,7 @@ export interface DistortionalFlange {
   yof: number;
 }
 
-/** Table 2.3.1.3-1 (C-section, lip at 90°): the flange-and-lip properties from centreline flange width b and lip length d, in. */
+/** Table 2.3.1.3-1 (C-section, lip at 90°): the flange-and-lip properties from centerline flange width b and lip length d, in. */
 export function distortionalFlangeProperties(b: number, d: number, t: number): DistortionalFlange {
   const Af = (b + d) * t; // Table 2.3.1.3-1 Af
   const Jf = (b * t ** 3) / 3 + (d * t ** 3) / 3; // Table 2.3.1.3-1 Jf
@@ -573,7 +573,7 @@ export function nominalMnd(My: number, Mcrd: number): { Mnd: number; lambdaD: nu
 /**
  * Distortional buckling of one lipped C-section bent about its x axis (web symmetric about the neutral
  * axis: ξweb = 2), AISI S100-16 §F4.1 with Mcrd by Appendix 2 §2.3.3.3: Fcrd = β(kφfe + kφwe + kφ)/(k̃φfg + k̃φwg)
- * (Eq. 2.3.3.3-2), Mcrd = Sf Fcrd (Eq. 2.3.3.3-1), Sf the gross section modulus to the compression fibre.
+ * (Eq. 2.3.3.3-2), Mcrd = Sf Fcrd (Eq. 2.3.3.3-1), Sf the gross section modulus to the compression fiber.
  * null for a section without lips (the provision covers flanges with edge stiffeners).
  */
 export function distortionalStrength(
@@ -584,8 +584,8 @@ export function distortionalStrength(
 ): DistortionalResult | null {
   if (s.style !== "S" || s.lip <= 0) return null;
   const { t } = s;
-  const b = s.B - t; // centreline flange width (out-to-out less t/2 at each side)
-  const d = s.lip - t / 2; // centreline lip length
+  const b = s.B - t; // centerline flange width (out-to-out less t/2 at each side)
+  const d = s.lip - t / 2; // centerline lip length
   const ho = s.D; // out-to-out web depth
   const f = distortionalFlangeProperties(b, d, t);
   const Lcrd = distortionalLcrd(f, ho, t);

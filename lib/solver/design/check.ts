@@ -2,6 +2,8 @@
  * Checks one member against its loads: `npm run check` and POST /api/check.
  * Pure: the caller passes the material tables (starter data in the CLI, the published version in the app).
  */
+import { DESIGN_RULES } from "./rules";
+import { hogsAnywhere } from "./load-model";
 import type { MaterialTables } from "@/lib/tables/types";
 import { ratioPercent } from "./ratio-percent";
 import { checkWords } from "./check-words";
@@ -62,6 +64,8 @@ export interface CheckOutput {
   caution: string;
   /** version of the material tables used */
   tables: string;
+  /** the edition of the design rules the answer was worked out on (./rules.ts) */
+  rules: string;
   /** loads, shear, moment, deflection and reactions as drawn, with their combinations; null when nothing names a combination */
   diagrams: MemberDiagrams | null;
   /** the ASCE 7 edition the loads were combined in (and the snow map it reads) */
@@ -83,6 +87,8 @@ export interface Bracing {
   neededFt: number | null;
   /** the instruction, e.g. "brace the top flange at 7 ft 0 in or closer" */
   instruction: string | null;
+  /** where the member hogs and the bottom edge was given as braced along its length: what the crew must build for it */
+  bottomEdge: string | null;
 }
 
 export interface RoughOpening {
@@ -272,12 +278,14 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   a.push(c.selfWeight ? `member's own weight counted as dead load: ${Math.round(member.weightPlf * 10) / 10} plf` : "member's own weight not counted");
   a.push(
     c.unbracedLengthFt > 0
-      ? `compression edge braced at the supports and every ${c.unbracedLengthFt} ft between; that spacing is checked wherever along the span it is worst`
-      : "compression edge braced continuously (sheathing or decking fastened along it)",
+      ? `top edge braced at the supports and every ${c.unbracedLengthFt} ft between; that spacing is checked wherever along the span it is worst`
+      : "top edge braced continuously (sheathing or decking fastened along it)",
   );
-  if (ctx.model.regions.length > 1) {
+  if (member.kind !== "ijoist" && hogsAnywhere(ctx.model, ctx.strength, c.selfWeight ? member.weightPlf : 0)) {
     a.push(
-      "where the member hogs (over an interior support or at an overhang) the bottom edge is in compression: the same bracing is assumed there (blocking or bracing at the supports)",
+      c.bottomEdgeBraced
+        ? "bottom edge braced along its length, as given (a ceiling fastened directly to it): where the member hogs it is taken as braced"
+        : `where the member hogs (over an interior support, on an overhang, under uplift) the bottom edge is in compression and is taken as braced only at the supports${c.unbracedLengthFt > 0 ? ", not at the top edge's braces" : ""}: its stability is checked over the whole span or overhang (${member.kind === "wood" ? "NDS 2018 §3.3.3" : member.kind === "steel" ? "AISC 360-16 §F2, Cb = 1.0" : "AISI S100-16 §F2.1, Cb = 1.0"})`,
     );
   }
   if (ctx.model.patterned) a.push(`live load placed span by span for the worst effect (pattern loading, ${std} §4.3.3)`);
@@ -303,7 +311,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     );
   }
   if (member.kind === "wood" && member.note) a.push(`${member.label}: ${member.note}`);
-  if (member.kind === "steel") a.push("W-shape bent about its major axis; compression flange braced at the supports");
+  if (member.kind === "steel") a.push("W-shape bent about its major axis; both flanges braced at the supports");
   if ((member.kind === "steel" || member.kind === "cfs") && ctx.studWall) a.push(studBearingWords(member, ctx.studWall, input.method === "lrfd"));
   if (member.kind === "cfs") {
     a.push(
@@ -311,11 +319,11 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
     );
     a.push(
       c.unbracedLengthFt > 0
-        ? `compression flange braced at the supports and every ${c.unbracedLengthFt} ft: lateral-torsional buckling by AISI S100-16 §F2.1${member.assembly === "box" ? " (a box header is taken as stable between braces)" : ""}`
-        : "compression flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting)",
+        ? `top flange braced at the supports and every ${c.unbracedLengthFt} ft: lateral-torsional buckling by AISI S100-16 §F2.1${member.assembly === "box" ? " (a box header is taken as stable between braces)" : ""}`
+        : `top flange braced continuously by the sheathing screwed to it (AISI S100-16 §F2 not limiting where the member sags)${member.assembly === "box" ? "; a box header is taken as stable between braces" : ""}`,
     );
     a.push(
-      `flange roll (distortional buckling, AISI S100-16 §F4.1 with Appendix 2 §2.3.3.3) checked for the top flange under sagging moment and the bottom flange where the member hogs, with no rotational restraint credited from sheathing (kφ = 0) and β = 1.0${c.unbracedLengthFt > 0 ? `; braces every ${c.unbracedLengthFt} ft taken as restraints of both flanges` : "; no bridging or blocking credited (L = Lcrd)"}${member.pieces > 1 ? "; each C-section of the header taken alone" : ""}`,
+      `flange roll (distortional buckling, AISI S100-16 §F4.1 with Appendix 2 §2.3.3.3) checked for the top flange under sagging moment and the bottom flange where the member hogs, with no rotational restraint credited from sheathing (kφ = 0) and β = 1.0${c.unbracedLengthFt > 0 ? `; braces every ${c.unbracedLengthFt} ft taken as restraints of the top flange only (L = Lcrd for the bottom flange)` : "; no bridging or blocking credited (L = Lcrd)"}${member.pieces > 1 ? "; each C-section of the header taken alone" : ""}`,
     );
     a.push(
       `web crippling at each support and point load by AISI S100-16 §G5 (flanges screwed to the support, bearing ${input.bearingIn} in); bearing stiffeners: ${member.stiffeners === true ? "at every support, as given" : member.stiffeners === false ? "none, as given" : "added only where the web needs one"} (33 mil C-shape or track, IRC 2021 R505.3.4)`,
@@ -400,6 +408,7 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     notChecked: notCheckedFor([member.spec.material]),
     caution: CAUTION,
     tables: tables.version,
+    rules: DESIGN_RULES,
     loadStandard: input.loadStandard,
     kind: input.kind ?? null,
     assembly,
@@ -416,7 +425,13 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
  */
 function bracingFor(input: Omit<CheckInput, "member">, member: DesignMember, ev: Evaluation): Bracing {
   const givenFt = input.conditions.unbracedLengthFt;
-  const none: Bracing = { givenFt, neededFt: null, instruction: null };
+  // the answer rests on the bottom edge's bracing only where the member hogs (more than one span, an overhang)
+  const hogs = member.kind !== "ijoist" && (input.supports.length !== 2 || input.supports.some((s) => s.x > 1e-9 && s.x < input.lengthFt - 1e-9));
+  const bottomEdge =
+    input.conditions.bottomEdgeBraced && hogs
+      ? "the bottom edge is taken as braced along its length: fasten the ceiling directly to it, over the supports and on any overhang"
+      : null;
+  const none: Bracing = { givenFt, neededFt: null, instruction: null, bottomEdge };
   if (givenFt <= 0 || ev.pass) return none;
   const passesAt = (lbFt: number) => evaluateMember(member, contextFor({ ...input, conditions: { ...input.conditions, unbracedLengthFt: lbFt } })).pass;
   const minFt = 1 / 12;
@@ -431,5 +446,5 @@ function bracingFor(input: Omit<CheckInput, "member">, member: DesignMember, ev:
   const neededFt = Math.floor(lo * 12) / 12;
   if (neededFt < minFt) return none;
   const edge = member.kind === "steel" ? "top flange" : "top edge";
-  return { givenFt, neededFt, instruction: `brace the ${edge} at ${feetInches(neededFt)} or closer (at ${feetInches(givenFt)} it does not pass)` };
+  return { givenFt, neededFt, bottomEdge, instruction: `brace the ${edge} at ${feetInches(neededFt)} or closer (at ${feetInches(givenFt)} it does not pass)` };
 }

@@ -50,7 +50,7 @@ import {
 } from "../aisi/aisi-s100-16";
 import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common";
 import type { DesignContext } from "./context";
-import { peakAbs } from "./load-model";
+import { momentNoise, peakAbs, peakOnEdge } from "./load-model";
 import type { CfsAssembly, MemberSpec } from "./schema";
 import type { NamedCheck, SupportReaction } from "./types";
 
@@ -218,13 +218,21 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
   let bend: NamedCheck | null = null;
   let gov = { Lb: 0, Cb: 1, Fn: d.Fy, Se: d.SeFy * n, Mn: d.Mnlo * n };
   const strengthAt = new Map<string, { Mn: number; Fn: number; Se: number }>();
+  // The top flange against moment that sags (Lb from the top edge's braces), the bottom flange against
+  // moment that hogs (braced at the supports only unless given otherwise), §F2.1 for each; Cb by
+  // Eq. F2.1.1-2 for the top flange, 1.0 for the bottom flange (the top flange braced: the equation's
+  // case is not this one) and on a cantilever.
+  const noise = momentNoise(model, ctx.strength, sw);
   for (const seg of model.segments) {
     const LbIn = seg.luFt * 12;
+    const bottom = seg.edge === "bottom";
     for (const env of ctx.strength) {
       const k = env.fD * sw;
-      const p = peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, k, seg.i0, seg.i1);
+      const p = peakOnEdge(model, env, k, seg);
+      if (bottom && !(p.value > noise)) continue;
       const absAt = (i: number) => Math.max(Math.abs(env.Mmax[i] + k * model.selfWeight.M[i]), Math.abs(env.Mmin[i] + k * model.selfWeight.M[i]));
-      const Cb = seg.cantilever || LbIn === 0 ? 1 : momentGradientCb(p.value, absAt(seg.iA), absAt(seg.iB), absAt(seg.iC));
+      const Mabs = bottom ? p.value : peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, k, seg.i0, seg.i1).value;
+      const Cb = bottom || seg.cantilever || LbIn === 0 ? 1 : momentGradientCb(Mabs, absAt(seg.iA), absAt(seg.iB), absAt(seg.iC));
       const key = `${LbIn}|${round(Cb, 4)}`;
       let one = strengthAt.get(key);
       if (!one) {
@@ -234,6 +242,9 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
       const capacity = (avail(one.Mn * n, OMEGA_FLEXURE, PHI_FLEXURE) * KIP) / 12; // lb-ft
       const ratio = p.value / capacity;
       if (!bend || ratio > bend.ratio) {
+        const flange = bottom
+          ? `moment that hogs: bottom flange in compression, ${LbIn > 0 ? `braced only at the supports, Lb = ${round(seg.luFt, 2)} ft, Cb = 1.0` : "braced along its length, as given"}`
+          : `moment that sags: top flange in compression, ${LbIn > 0 ? `Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}` : "braced by the sheathing"}`;
         bend = {
           name: "bending",
           demand: round(p.value, 0),
@@ -243,7 +254,7 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
           combination: env.name,
           x: round(p.x, 3),
           note: ctx.notes
-            ? `${lrfd ? "φb Mnℓ" : "Mnℓ/Ωb"}, Mnℓ = Se Fn (AISI S100-16 §F3.1, effective width) with Fn = ${round(one.Fn, 2)} ksi (§F2.1${LbIn > 0 ? `, Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}` : ", compression flange braced"}), Se = ${round(one.Se * n, 3)} in³${n > 1 ? ` (${n} C-sections)` : ""}`
+            ? `${lrfd ? "φb Mnℓ" : "Mnℓ/Ωb"}, Mnℓ = Se Fn (AISI S100-16 §F3.1, effective width) with Fn = ${round(one.Fn, 2)} ksi (§F2.1; ${flange}), Se = ${round(one.Se * n, 3)} in³${n > 1 ? ` (${n} C-sections)` : ""}`
             : "",
         };
         gov = { Lb: seg.luFt, Cb, Fn: one.Fn, Se: one.Se * n, Mn: one.Mn * n };
@@ -478,12 +489,12 @@ export function evaluateCfs(m: CfsMember, ctx: DesignContext): { checks: NamedCh
  *  - sagging moment: the top flange. Sheathing screwed to it does brace it, but AISI S100-16 gives no
  *    rotational stiffness kφ for sheathing (the provision that does is in another AISI framing standard,
  *    not adopted here), so kφ = 0: the conservative reading.
- *  - hogging moment (over an interior support, along an overhang): the bottom flange, unbraced except at
- *    bridging or blocking; kφ = 0.
+ *  - hogging moment (over an interior support, along an overhang): the bottom flange; kφ = 0.
  *
- * Lm, the distance between discrete restraints of the compression flange, is the member's unbraced length
- * where one is given (the segment's length), and none (L = Lcrd) where the member is given as continuously
- * braced: sheathing is not a discrete restraint and bridging at an unknown spacing is not credited.
+ * Lm, the distance between discrete restraints of the compression flange: for the top flange the top
+ * edge's brace spacing where one is given (the segment's length), and none (L = Lcrd) where it is braced
+ * continuously (sheathing is not a discrete restraint); for the bottom flange none (L = Lcrd): the top
+ * edge's braces are not taken to hold it, and bridging at an unknown spacing is not credited.
  * β (the moment gradient factor of Eq. 2.3.3.3-3) is taken as 1.0, which the standard permits.
  *
  * Headers of two C-sections: each C is checked as a single lipped C carrying half the moment. Back to back,
@@ -504,7 +515,8 @@ export function flangeRollCheck(m: CfsMember, ctx: DesignContext, sw: number): N
   };
   let out: NamedCheck | null = null;
   for (const seg of model.segments) {
-    const Lm = seg.luFt > 0 ? seg.luFt * 12 : Infinity;
+    // braces given hold the top flange; the bottom flange has no discrete restraint credited between the supports
+    const Lm = seg.edge === "top" && seg.luFt > 0 ? seg.luFt * 12 : Infinity;
     const r = strength(Lm);
     if (!r) return null; // a section without lips: §F4 is for flanges with edge stiffeners
     const Mnd = r.Mnd * n; // kip-in, the member
@@ -518,7 +530,7 @@ export function flangeRollCheck(m: CfsMember, ctx: DesignContext, sw: number): N
           [sag, true],
           [hog, false],
         ] as const) {
-          if (!(M > 0)) continue;
+          if (!(M > 0) || top !== (seg.edge === "top")) continue;
           const ratio = M / capacity;
           if (out && ratio <= out.ratio) continue;
           out = {

@@ -104,6 +104,7 @@ export function buildContext(input: DesignProblem): DesignContext {
     supports: input.supports,
     loads: lineLoads,
     unbracedFt: input.conditions.unbracedLengthFt,
+    bottomBraced: input.conditions.bottomEdgeBraced,
     pattern: input.conditions.patternLiveLoad,
   });
   const combos = combinationsFor(model.cases, input.loadStandard);

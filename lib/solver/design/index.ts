@@ -2,6 +2,7 @@
 export { checkMember, evaluateMember, NOT_CHECKED, CAUTION, type CheckOutput, type MemberSummary, type Evaluation } from "./check";
 export { sizeMember, largestSpan, candidateSpecs, type SizeOutput, type SizeCandidateResult, type SizeFailure, type SpanOutput } from "./size";
 export { DesignInputError, type DesignIssue } from "./errors";
+export { DESIGN_RULES, DESIGN_RULES_CHANGE } from "./rules";
 export {
   checkInputSchema,
   sizeInputSchema,

@@ -27,15 +27,26 @@ export interface ModelRegion {
 }
 
 /**
- * A length of the member between lateral braces of the compression edge. With braces at a given
- * spacing that does not divide a region, the segment of that length is tried at several places
- * along the region (where the braces fall is not known): the checks take the worst placement.
+ * A length of the member between lateral braces of one edge, checked against the moment that puts
+ * that edge in compression: the top edge against moment that sags, the bottom edge against moment
+ * that hogs (over an interior support, along an overhang, or under uplift).
+ *
+ * Top edge: braced continuously (unbraced length 0: sheathing or decking fastened along it) or at
+ * the supports and at braces every unbracedFt. With braces at a spacing that does not divide a
+ * region, the segment of that length is tried at several places along the region (where the braces
+ * fall is not known): the checks take the worst placement.
+ *
+ * Bottom edge: sheathing, decking and top-edge braces do not hold it, so it is braced only at the
+ * supports (one segment per region; an overhang's free end is not braced), unless the input says
+ * it is braced along its length (a ceiling fastened directly to it).
  */
 export interface BendingSegment {
   from: number;
   to: number;
   region: number;
-  /** unbraced length, ft (0 when continuously braced) */
+  /** the edge this segment is about: "top" checks moment that sags, "bottom" moment that hogs */
+  edge: "top" | "bottom";
+  /** unbraced length of that edge, ft (0 when continuously braced) */
   luFt: number;
   /** free end of an overhang: Cb = 1.0 (AISC 360-16 §F1) */
   cantilever: boolean;
@@ -84,14 +95,18 @@ export interface LoadModel {
   /** 1 plf of dead load over the whole member */
   selfWeight: CaseArrays;
   envelopes(combos: NamedCombination[]): ComboEnvelope[];
+  /** stand-ins for "no moment of this sign" (−∞ as a max, +∞ as a min), for peakOnEdge */
+  noMoment: { hi: Float64Array; lo: Float64Array };
 }
 
 export interface LoadModelInput {
   length: number;
   supports: Support[];
   loads: (Load & { case: LoadCase })[];
-  /** ft; 0 = continuously braced */
+  /** top edge's brace spacing, ft; 0 = continuously braced */
   unbracedFt: number;
+  /** bottom edge braced along its length (a ceiling fastened directly to it); otherwise only at the supports */
+  bottomBraced?: boolean;
   /** split live load by region for pattern loading */
   pattern: boolean;
   /** stations per region */
@@ -140,21 +155,24 @@ export function buildLoadModel(input: LoadModelInput): LoadModel {
   const eps = Math.max(1e-7 * L, 1e-9);
   const perRegion = input.stationsPerRegion ?? 48;
 
-  // Bending segments: supports brace the compression edge. Braces every unbracedFt in between are
-  // checked at the spacing given, the segment slid along the region (its worst place governs); in an
-  // overhang every placement takes Cb = 1.0 (free end, AISC 360-16 §F1).
-  const rawSegs: { from: number; to: number; region: number; luFt: number; cantilever: boolean }[] = [];
+  // Bending segments. Top edge: supports brace it; braces every unbracedFt in between are checked at
+  // the spacing given, the segment slid along the region (its worst place governs). Bottom edge: braced
+  // at the supports only (or along its length when the input says so), one segment per region. In an
+  // overhang every segment takes Cb = 1.0 (free end, AISC 360-16 §F1).
+  const rawSegs: { from: number; to: number; region: number; edge: "top" | "bottom"; luFt: number; cantilever: boolean }[] = [];
   prep.regions.forEach((r, ri) => {
     const len = r.to - r.from;
     const lb = input.unbracedFt;
+    const cantilever = r.kind !== "span";
     if (lb <= 0 || lb >= len - 1e-9 * Math.max(L, 1)) {
-      rawSegs.push({ from: r.from, to: r.to, region: ri, luFt: lb > 0 ? len : 0, cantilever: r.kind !== "span" });
-      return;
+      rawSegs.push({ from: r.from, to: r.to, region: ri, edge: "top", luFt: lb > 0 ? len : 0, cantilever });
+    } else {
+      for (let k = 0; k <= BRACE_PLACEMENTS; k++) {
+        const from = r.from + ((len - lb) * k) / BRACE_PLACEMENTS;
+        rawSegs.push({ from, to: from + lb, region: ri, edge: "top", luFt: lb, cantilever });
+      }
     }
-    for (let k = 0; k <= BRACE_PLACEMENTS; k++) {
-      const from = r.from + ((len - lb) * k) / BRACE_PLACEMENTS;
-      rawSegs.push({ from, to: from + lb, region: ri, luFt: lb, cantilever: r.kind !== "span" });
-    }
+    rawSegs.push({ from: r.from, to: r.to, region: ri, edge: "bottom", luFt: input.bottomBraced ? 0 : len, cantilever });
   });
 
   const pts: number[] = [0, L];
@@ -248,7 +266,8 @@ export function buildLoadModel(input: LoadModelInput): LoadModel {
     });
   }
 
-  return { length: L, supports, xs, regions, segments, cases, patterned, perCase, selfWeight, envelopes };
+  const noMoment = { hi: new Float64Array(n).fill(-Infinity), lo: new Float64Array(n).fill(Infinity) };
+  return { length: L, supports, xs, regions, segments, cases, patterned, perCase, selfWeight, envelopes, noMoment };
 }
 
 function addFixed(env: ComboEnvelope, a: CaseArrays, f: number, n: number, ns: number): void {
@@ -347,4 +366,34 @@ export function peakAbs(xs: Float64Array, hi: Float64Array, lo: Float64Array, un
     }
   }
   return { value: Math.max(best, 0), x, i: bi };
+}
+
+/**
+ * Largest moment over a bending segment that puts the segment's edge in compression, with the
+ * member's own weight (k × unit) added: moment that sags for the top edge, moment that hogs for
+ * the bottom edge (value positive either way, 0 when the segment has none of that sign).
+ */
+export function peakOnEdge(model: LoadModel, env: ComboEnvelope, k: number, seg: BendingSegment): Peak {
+  return seg.edge === "top"
+    ? peakAbs(model.xs, env.Mmax, model.noMoment.lo, model.selfWeight.M, k, seg.i0, seg.i1)
+    : peakAbs(model.xs, model.noMoment.hi, env.Mmin, model.selfWeight.M, k, seg.i0, seg.i1);
+}
+
+/**
+ * A moment below which an edge is not taken to be in compression: a millionth of the largest moment
+ * over the member and the given combinations (the supports of a simple span read ±1e-12, not 0).
+ */
+export function momentNoise(model: LoadModel, envs: ComboEnvelope[], swPlf: number): number {
+  let top = 0;
+  for (const env of envs) {
+    const p = peakAbs(model.xs, env.Mmax, env.Mmin, model.selfWeight.M, env.fD * swPlf, 0, model.xs.length - 1, false);
+    if (p.value > top) top = p.value;
+  }
+  return 1e-6 * top;
+}
+
+/** Whether any of the given combinations makes the member hog anywhere (so its bottom edge is in compression somewhere). */
+export function hogsAnywhere(model: LoadModel, envs: ComboEnvelope[], swPlf: number): boolean {
+  const noise = momentNoise(model, envs, swPlf);
+  return envs.some((env) => env.Mmin.some((m, i) => m + env.fD * swPlf * model.selfWeight.M[i] < -noise));
 }

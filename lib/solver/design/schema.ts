@@ -115,11 +115,17 @@ export const conditionsSchema = z
      * built-up member of 3 or more plies; false is honored for every member.
      */
     repetitive: z.boolean().optional(),
-    /** unbraced length of the compression edge, ft; 0 = continuously braced */
+    /**
+     * spacing of the braces of the top edge, ft; 0 = braced continuously (sheathing or decking fastened along
+     * it). The braces hold the top edge only: where the member hogs, the bottom edge is in compression and is
+     * taken as braced at the supports alone, unless bottomEdgeBraced says otherwise.
+     */
     unbracedLengthFt: z
       .number()
       .refine((v) => Number.isFinite(v) && v >= 0, "must be 0 (continuously braced) or more (ft)")
       .default(0),
+    /** the bottom edge is braced along its length (a ceiling fastened directly to it); not given: braced at the supports only */
+    bottomEdgeBraced: z.boolean().default(false),
     selfWeight: z.boolean().default(true),
     /** sustained temperature, °F (NDS Table 2.3.3) */
     temperatureF: z

@@ -25,7 +25,7 @@ import {
 } from "../aisc360/aisc360-16";
 import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common";
 import type { DesignContext } from "./context";
-import { peakAbs } from "./load-model";
+import { momentNoise, peakAbs, peakOnEdge } from "./load-model";
 import type { SteelMember } from "./member";
 import type { NamedCheck, SupportReaction } from "./types";
 
@@ -114,13 +114,23 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Nam
   const MnFLB = nominalFlexureFLB(s, Fy);
   let bend: NamedCheck | null = null;
   let gov = { Lb: 0, Cb: 1, Mn: Mp, state: "yielding" as SteelFactors["flexureLimitState"] };
+  // Each edge against the moment that puts it in compression: the top flange where the member sags
+  // (Lb from the top edge's braces), the bottom flange where it hogs (braced at the supports only unless
+  // given otherwise). Cb from the segment's moment diagram (Eq. F1-1) for the top flange; 1.0 for the
+  // bottom flange: with the top flange braced, Eq. F1-1 does not apply and the Commentary's method for
+  // that case was not found in a published copy, so the conservative 1.0 is used (and 1.0 on a
+  // cantilever's free end, §F1).
+  const noise = momentNoise(model, ctx.strength, sw);
   for (const seg of model.segments) {
     const LbIn = seg.luFt * 12;
     for (const env of ctx.strength) {
       const k = env.fD * sw;
-      const p = peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, k, seg.i0, seg.i1);
+      const p = peakOnEdge(model, env, k, seg);
+      if (seg.edge === "bottom" && !(p.value > noise)) continue;
       const absAt = (i: number) => Math.max(Math.abs(env.Mmax[i] + k * model.selfWeight.M[i]), Math.abs(env.Mmin[i] + k * model.selfWeight.M[i]));
-      const Cb = seg.cantilever || LbIn === 0 ? 1.0 : ltbModifierCb(p.value, absAt(seg.iA), absAt(seg.iB), absAt(seg.iC));
+      const bottom = seg.edge === "bottom";
+      const Mabs = bottom ? p.value : peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, k, seg.i0, seg.i1).value;
+      const Cb = bottom || seg.cantilever || LbIn === 0 ? 1.0 : ltbModifierCb(Mabs, absAt(seg.iA), absAt(seg.iB), absAt(seg.iC));
       const MnLTB = LbIn === 0 ? Mp : nominalFlexureLTB(s, Fy, LbIn, Cb);
       const Mn = Math.min(MnLTB, MnFLB);
       const capacity = avail(Mn, OMEGA_B, PHI_B) / 12; // kip-ft
@@ -128,6 +138,9 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Nam
       const ratio = demand / capacity;
       if (!bend || ratio > bend.ratio) {
         const state: SteelFactors["flexureLimitState"] = MnFLB < MnLTB ? "flange local buckling" : MnLTB < Mp ? "lateral-torsional buckling" : "yielding";
+        const flange = bottom
+          ? `moment that hogs: bottom flange in compression, ${LbIn > 0 ? `braced only at the supports, Lb = ${round(seg.luFt, 2)} ft, Cb = 1.0 (taken conservatively with the top flange braced)` : "braced along its length, as given"}`
+          : `moment that sags: top flange in compression, Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}`;
         bend = {
           name: "bending",
           demand: round(demand, 3),
@@ -136,9 +149,7 @@ export function evaluateSteel(m: SteelMember, ctx: DesignContext): { checks: Nam
           ratio,
           combination: env.name,
           x: round(p.x, 3),
-          note: !ctx.notes
-            ? ""
-            : `${lrfd ? "φb Mn" : "Mn/Ωb"} with Mn by ${state} (AISC 360-16 ${state === "flange local buckling" ? "F3" : "F2"}), Lb = ${round(seg.luFt, 2)} ft, Cb = ${round(Cb, 3)}`,
+          note: !ctx.notes ? "" : `${lrfd ? "φb Mn" : "Mn/Ωb"} with Mn by ${state} (AISC 360-16 ${state === "flange local buckling" ? "F3" : "F2"}); ${flange}`,
         };
         gov = { Lb: seg.luFt, Cb, Mn, state };
       }

@@ -26,7 +26,7 @@ import {
 } from "../nds/nds-2018";
 import { deflectionCheck, factoredReaction, reactionsFor, round } from "./common";
 import type { DesignContext } from "./context";
-import { peakAbs } from "./load-model";
+import { momentNoise, peakAbs, peakOnEdge } from "./load-model";
 import { DECK_KINDS, REPETITIVE_KINDS, type MemberKind } from "./kinds";
 import type { WoodMember } from "./member";
 import type { NamedCheck, SupportReaction } from "./types";
@@ -140,20 +140,6 @@ export function resolveCr(
   return { Cr, basis: m.plies === 2 ? "Cr = 1.0: two plies are not three members (NDS 2018 §4.3.9)" : "Cr = 1.0 (not a repetitive member)" };
 }
 
-/**
- * The sagging and the hogging parts of a moment envelope with the member's own weight (k × unit) added,
- * each on its own: sag = max(M+, 0), hog = min(M−, 0) at every station.
- */
-function signedMoments(hi: Float64Array, lo: Float64Array, unit: Float64Array, k: number): { sag: Float64Array; hog: Float64Array } {
-  const sag = new Float64Array(hi.length);
-  const hog = new Float64Array(lo.length);
-  for (let i = 0; i < hi.length; i++) {
-    sag[i] = Math.max(hi[i] + k * unit[i], 0);
-    hog[i] = Math.min(lo[i] + k * unit[i], 0);
-  }
-  return { sag, hog };
-}
-
 export interface MemberEvaluation {
   checks: NamedCheck[];
   reactions: SupportReaction[];
@@ -163,7 +149,6 @@ export interface MemberEvaluation {
 export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluation {
   const { model, conditions: cond } = ctx;
   const lrfd = ctx.method === "lrfd";
-  const xs = model.xs;
   const sw = cond.selfWeight ? m.weightPlf : 0;
 
   const CM = m.wetTable === "scl" ? { Fb: 1, Fv: 1, FcPerp: 1, E: 1 } : wetServiceFactorCM(m.wetTable, cond.wet, m.Fb * m.CF);
@@ -181,7 +166,12 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   const CV = m.volumeX !== undefined ? volumeFactorCV(longest, m.d, m.plyWidth, m.volumeX) : null;
   const checks: NamedCheck[] = [];
 
-  // Bending, per unbraced segment and combination (NDS 2018 §3.3).
+  // Bending, per unbraced segment of each edge and combination (NDS 2018 §3.3): the top edge against
+  // moment that sags, the bottom edge against moment that hogs, each with the CL of its own lu
+  // (§3.3.3: le from Table 3.3.3, RB, FbE, CL). The bottom edge is braced at the supports only
+  // unless the input says otherwise (see BendingSegment). The approximate lateral support rules of
+  // §4.4.1 are not used in place of §3.3.3: they ask for the ends held in position and, from d/b over
+  // 4, the compression edge held in line, which the input does not say.
   // Fb* without CD (applied per combination), NDS 2018 §3.3.3.8
   const fbBase = referenceFbStar(m.Fb, { CD: 1, CM: CM.Fb, Ct: Ct.Fb, CF: m.CF, Ci: Ci.Fb, Cr }) * (lrfd ? FORMAT_CONVERSION_KF.Fb * RESISTANCE_PHI.Fb : 1);
   let bestBend = { ratio: -1, fb: 0, FbPrime: 0, M: 0, x: 0, CD: 1, CL: 1, luFt: 0, combination: "", hogging: false };
@@ -189,38 +179,37 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
   // Unbalanced glulam (NDS Supplement 2018 Table 5A, Fbx− below Fbx+): moment that hogs (over a support,
   // on an overhang) is checked against Fbx−, moment that sags against Fbx+, each with the same adjustments.
   const negShare = m.FbNeg !== undefined && m.FbNeg < m.Fb ? m.FbNeg / m.Fb : null;
-  const sides = negShare === null ? null : ctx.strength.map((env) => signedMoments(env.Mmax, env.Mmin, model.selfWeight.M, env.fD * sw));
-  const zero = new Float64Array(xs.length);
+  const noise = momentNoise(model, ctx.strength, sw);
   for (const seg of model.segments) {
+    const hogging = seg.edge === "bottom";
+    const share = hogging && negShare !== null ? negShare : 1;
+    const peaks = ctx.strength.map((env) => peakOnEdge(model, env, env.fD * sw, seg));
+    // an edge that no combination puts in compression here needs no stability factor
+    if (hogging && !peaks.some((p) => p.value > noise)) continue;
     const luIn = seg.luFt * 12;
     const RB = luIn > 0 ? slendernessRatioRB(effectiveLengthLe(luIn, m.d), m.d, m.b) : 0;
     if (RB > worstRB) worstRB = RB;
     for (let e = 0; e < ctx.strength.length; e++) {
       const env = ctx.strength[e];
       const CD = ctx.woodDuration[e];
-      const FbStar = fbBase * CD;
+      // Fb* of the edge in compression: from Fbx− where an unbalanced glulam hogs (§3.3.3.8)
+      const FbStar = fbBase * CD * share;
       const CL = RB > 0 ? beamStabilityFactorCL(FbStar, criticalBucklingFbE(EminPrime, RB)) : 1.0;
       const stability = CV === null ? CL : Math.min(CL, CV);
       const FbPrime = FbStar * stability * Cfu;
-      const peaks =
-        sides === null || negShare === null
-          ? [{ p: peakAbs(xs, env.Mmax, env.Mmin, model.selfWeight.M, env.fD * sw, seg.i0, seg.i1), share: 1, hogging: false }]
-          : [
-              { p: peakAbs(xs, sides[e].sag, zero, zero, 0, seg.i0, seg.i1), share: 1, hogging: false },
-              { p: peakAbs(xs, zero, sides[e].hog, zero, 0, seg.i0, seg.i1), share: negShare, hogging: true },
-            ];
-      for (const { p, share, hogging } of peaks) {
-        const fb = (p.value * 12) / m.S;
-        const ratio = fb / (FbPrime * share);
-        if (ratio > bestBend.ratio)
-          bestBend = { ratio, fb, FbPrime: FbPrime * share, M: p.value, x: p.x, CD, CL, luFt: seg.luFt, combination: env.name, hogging };
-      }
+      const p = peaks[e];
+      const fb = (p.value * 12) / m.S;
+      const ratio = fb / FbPrime;
+      if (ratio > bestBend.ratio) bestBend = { ratio, fb, FbPrime, M: p.value, x: p.x, CD, CL, luFt: seg.luFt, combination: env.name, hogging };
     }
   }
   const bendCD = bestBend.CD;
   const bendCL = bestBend.CL;
   const bendFbPrime = bestBend.FbPrime;
   if (bestBend.ratio >= 0) {
+    const edgeWords = bestBend.hogging
+      ? `moment that hogs: bottom edge in compression, ${bestBend.luFt > 0 ? `braced only at the supports (lu = ${round(bestBend.luFt, 2)} ft)` : "braced along its length, as given"}`
+      : `moment that sags: top edge in compression, ${bestBend.luFt > 0 ? `lu = ${round(bestBend.luFt, 2)} ft` : "braced along its length"}`;
     checks.push({
       name: "bending",
       demand: round(bestBend.fb, 1),
@@ -231,7 +220,7 @@ export function evaluateWood(m: WoodMember, ctx: DesignContext): MemberEvaluatio
       x: round(bestBend.x, 3),
       note: !ctx.notes
         ? ""
-        : `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³${negShare === null ? "" : bestBend.hogging ? ` (moment that hogs: Fbx− ${m.FbNeg} psi)` : ` (moment that sags: Fbx+ ${m.Fb} psi)`}; Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? ` (lu = ${round(bestBend.luFt, 2)} ft)` : " (compression edge braced)"}`,
+        : `fb = M/S = ${round(bestBend.M, 0)} lb-ft × 12 / ${round(m.S, 2)} in³ (${edgeWords}${negShare === null ? "" : bestBend.hogging ? `; Fbx− ${m.FbNeg} psi` : `; Fbx+ ${m.Fb} psi`}); Fb' with ${lrfd ? "λ" : "CD"} = ${bestBend.CD}, CL = ${round(bestBend.CL, 3)}${bestBend.luFt > 0 ? " (NDS 2018 §3.3.3, le by Table 3.3.3)" : ""}`,
     });
   }
   if (worstRB > 0) {

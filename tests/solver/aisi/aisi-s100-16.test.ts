@@ -20,13 +20,13 @@ const S800: CfsDimensions = { style: "S", D: 8, B: 1.625, lip: 0.5, t: 0.0566, R
 
 describe("thin-walled section properties (textbook closed forms, computed here)", () => {
   // A plain channel with square corners, midline web h and flanges b, thickness t. Timoshenko & Gere,
-  // Theory of Elastic Stability (2nd ed.), and every steel design text: shear centre e = 3b²/(6b + h)
+  // Theory of Elastic Stability (2nd ed.), and every steel design text: shear center e = 3b²/(6b + h)
   // from the web's midline, Cw = t b³ h² (3b + 2h) / (12 (6b + h)), J = Σ b t³/3. Tolerance 1e-9 relative.
   test.each([
     [2, 6, 0.1],
     [1.625, 8, 0.0566],
     [3, 12, 0.25],
-  ])("channel b=%s h=%s t=%s: shear centre, Cw, J, Ix", (b, h, t) => {
+  ])("channel b=%s h=%s t=%s: shear center, Cw, J, Ix", (b, h, t) => {
     const g = chainProperties(
       [
         [b, h / 2],
@@ -96,7 +96,7 @@ describe("flexure, shear and web crippling (AISI S100-16 equations computed here
     const sey = (Math.PI ** 2 * E_CFS_KSI) / (L / g.ry) ** 2;
     const st = (11_300 * g.J + (Math.PI ** 2 * E_CFS_KSI * g.Cw) / (L * L)) / (g.A * g.r0 ** 2);
     expect(elasticLtbStressFcre(g, g.Sx, L, 1)).toBeCloseTo(((g.r0 * g.A) / g.Sx) * Math.sqrt(sey * st), 9);
-    // r0 about the shear centre: rx² + ry² + xo²
+    // r0 about the shear center: rx² + ry² + xo²
     expect(g.r0 ** 2).toBeCloseTo(g.rx ** 2 + g.ry ** 2 + g.xo ** 2, 9);
   });
 

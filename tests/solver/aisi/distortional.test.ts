@@ -27,7 +27,7 @@ function flangeByIntegration(b: number, d: number, t: number) {
   const Ix = (b * t ** 3) / 12 + b * t * yc ** 2 + (t * d ** 3) / 12 + d * t * (d / 2 - yc) ** 2;
   const Iy = (t * b ** 3) / 12 + b * t * (b / 2 - xc) ** 2 + d * t * (b - xc) ** 2; // the lip's own t³d/12 left out, as the table does
   const Ixy = b * t * (b / 2 - xc) * (0 - yc) + d * t * (b - xc) * (d / 2 - yc); // positive with the lip along +y, as the table's signs read
-  // the shear centre of two strips meeting at a corner is the corner (b, 0); the web joins at (0, 0)
+  // the shear center of two strips meeting at a corner is the corner (b, 0); the web joins at (0, 0)
   return { A, J: ((b + d) * t ** 3) / 3, Ix, Iy, Ixy, xo: b - xc, hx: -xc, yo: -yc };
 }
 
@@ -61,7 +61,7 @@ function mndHere(My: number, Mcrd: number) {
 }
 
 describe("Table 2.3.1.3-1: the flange and lip properties", () => {
-  test("800S200-54 (t = 0.0566, b = 1.943, d = 0.597 centreline): the Design Manual's example values within 3 % (AISI D100-17 p. II-184, as runtosolve/AISIS100.jl's test data gives them)", () => {
+  test("800S200-54 (t = 0.0566, b = 1.943, d = 0.597 centerline): the Design Manual's example values within 3 % (AISI D100-17 p. II-184, as runtosolve/AISIS100.jl's test data gives them)", () => {
     const s = findCfsSection(T, "800S200-54");
     const b = s.flange - s.t;
     const d = s.lip - s.t / 2;
@@ -198,8 +198,21 @@ describe("a continuous joist whose bottom flange over the interior support rolls
   const Mcrd = mcrdHere(s.depth, s.flange, s.lip, s.t, g.Sx, Infinity).Mcrd;
   const Mnd = mndHere(g.Sx * s.Fy, Mcrd);
 
-  test("ASD: demand wL²/8 at the interior support against Mnd/1.67, computed here; bending (§F3.1) passes, flange roll fails and governs", () => {
+  // With the bottom flange braced only at the supports, lateral-torsional buckling of the bottom flange over the
+  // 16 ft span (§F2.1) fails first; a ceiling screwed to the bottom flange braces it along its length (§F2 then
+  // not limiting), yet gives no rotational restraint the standard credits, so flange roll still fails there.
+  const ceiling = { conditions: { selfWeight: false, patternLiveLoad: false, bottomEdgeBraced: true } };
+
+  test("bottom flange braced only at the supports: §F2.1 over the whole span, Cb = 1.0, fails", () => {
     const r = checkMember(twoSpans("800S200-54", 16), T);
+    const bend = r.checks.find((c) => c.name === "bending")!;
+    expect(bend.note).toMatch(/bottom flange in compression, braced only at the supports, Lb = 16 ft, Cb = 1\.0/);
+    expect(bend.ratio).toBeGreaterThan(1);
+    expect(r.pass).toBe(false);
+  });
+
+  test("ASD: demand wL²/8 at the interior support against Mnd/1.67, computed here; bending (§F3.1) passes, flange roll fails and governs", () => {
+    const r = checkMember(twoSpans("800S200-54", 16, ceiling), T);
     const roll = r.checks.find((c) => c.name === "flange-roll")!;
     const bend = r.checks.find((c) => c.name === "bending")!;
     expect(roll.x).toBeCloseTo(16, 1);
@@ -213,19 +226,19 @@ describe("a continuous joist whose bottom flange over the interior support rolls
   });
 
   test("LRFD: against 0.90 Mnd, demand 1.2D + 1.6L", () => {
-    const r = checkMember(twoSpans("800S200-54", 16, { method: "lrfd" }), T);
+    const r = checkMember(twoSpans("800S200-54", 16, { method: "lrfd", ...ceiling }), T);
     const roll = r.checks.find((c) => c.name === "flange-roll")!;
     expect(roll.capacity / ((0.9 * Mnd * 1000) / 12)).toBeCloseTo(1, 3);
     expect(roll.demand).toBeCloseTo(((((1.2 * 10 + 1.6 * 40) * 24) / 12) * 16 * 16) / 8, -1);
   });
 
   test("the sizing search does not offer 800S200-54 there, and every C-joist it offers passes flange roll", () => {
-    const out = sizeMember({ ...twoSpans("x", 16), member: { material: "cfs", flanges: [2] }, limit: 100 }, T);
+    const out = sizeMember({ ...twoSpans("x", 16, ceiling), member: { material: "cfs", flanges: [2] }, limit: 100 }, T);
     expect(out.passing.length).toBeGreaterThan(0);
     expect(out.passing.some((p) => p.member.material === "cfs" && p.member.section === "800S200-54")).toBe(false);
     for (const p of out.passing) {
       if (p.member.material !== "cfs") continue;
-      const again = checkMember(twoSpans(p.member.section, 16), T);
+      const again = checkMember(twoSpans(p.member.section, 16, ceiling), T);
       expect(again.checks.find((c) => c.name === "flange-roll")!.ratio).toBeLessThanOrEqual(1);
     }
   });
@@ -275,12 +288,26 @@ describe("a continuous joist whose bottom flange over the interior support rolls
     }
   });
 
-  test("an unbraced length shorter than Lcrd is taken as the restraint spacing Lm (and no longer: a longer one gives L = Lcrd)", () => {
-    const cap = (lb: number) =>
-      checkMember(twoSpans("800S200-54", 16, { conditions: { selfWeight: false, patternLiveLoad: false, unbracedLengthFt: lb } }), T).checks.find(
-        (c) => c.name === "flange-roll",
-      )!.capacity;
+  test("a top-edge brace spacing shorter than Lcrd is taken as the top flange's Lm (and no longer: a longer one gives L = Lcrd)", () => {
+    const simple = (lb: number) => ({
+      ...twoSpans("800S200-54", 14, { conditions: { selfWeight: false, unbracedLengthFt: lb } }),
+      lengthFt: 14,
+      supports: [
+        { x: 0, type: "pin" },
+        { x: 14, type: "roller" },
+      ],
+    });
+    const cap = (lb: number) => checkMember(simple(lb), T).checks.find((c) => c.name === "flange-roll")!.capacity;
     expect(cap(4)).toBeCloseTo(cap(0), 6);
     expect(cap(1)).toBeGreaterThan(cap(0));
+  });
+
+  test("the top edge's braces are not taken to restrain the bottom flange: over the interior support L = Lcrd whatever their spacing", () => {
+    const roll = (lb: number) =>
+      checkMember(twoSpans("800S200-54", 16, { conditions: { selfWeight: false, patternLiveLoad: false, unbracedLengthFt: lb } }), T).checks.find(
+        (c) => c.name === "flange-roll",
+      )!;
+    expect(roll(1).note).toMatch(/bottom flange/);
+    expect(roll(1).capacity).toBeCloseTo(roll(0).capacity, 6);
   });
 });

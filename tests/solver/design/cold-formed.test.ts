@@ -303,7 +303,11 @@ function spanInput(section: string, live: number, spacing: number, spans: 1 | 2,
       { type: "area", case: "L", psf: live },
     ],
     limits: { live: 480, total: 240 },
-    conditions: { selfWeight: false, patternLiveLoad: spans === 1 },
+    // The Prescriptive Method (1997) §5.4 "Joist Bracing" has the bottom flanges braced by a gypsum board ceiling
+    // or continuous steel straps with blocking (published copies: the contents at wnwk.com/doc/3532630.html, the
+    // strap wording at m.dybbs8.com/doc-1114951.html), so its two-span rows are read with the bottom edge braced
+    // along its length; without that, the bottom flange over the interior support is braced only at the supports.
+    conditions: { selfWeight: false, patternLiveLoad: spans === 1, bottomEdgeBraced: spans === 2 },
   };
 }
 

@@ -69,10 +69,23 @@ describe("LVL, PSL and glulam headers and beams", () => {
     const bending = r.checks.find((c) => c.name === "bending");
     expect(bending?.x).toBeCloseTo(12, 1);
     expect(bending?.demand).toBeCloseTo(fb, 0);
-    // CD 1.0 (D + L), CV = 1 (no region longer than 21 ft at d = 12, b = 5-1/8), CL = 1 (braced)
-    expect(bending?.capacity).toBeCloseTo(g.FbNeg!, 0);
-    expect(bending?.ratio).toBeCloseTo(fb / g.FbNeg!, 3);
+    // CD 1.0 (D + L), CV = 1 (no region longer than 21 ft at d = 12, b = 5-1/8). The hogging moment puts the
+    // bottom edge in compression on both sides of the support: along the 8 ft overhang and back into the 12 ft
+    // span up to where the moment changes sign. That edge is braced only at the supports, so the longer side
+    // governs: lu = 12 ft, CL by NDS 2018 §3.3.3 (this check read CL = 1 before the bottom edge was told apart
+    // from the top): le by Table 3.3.3 (7 ≤ lu/d ≤ 14.3: 1.63 lu + 3d), RB = √(le d/b²), FbE = 1.20 Emin'/RB²,
+    // Fb* = Fbx− (Eq. 3.3-6).
+    const luIn = 144;
+    const leIn = 1.63 * luIn + 3 * 12;
+    const RB = Math.sqrt((leIn * 12) / 5.125 ** 2);
+    const FbE = (1.2 * g.Emin) / RB ** 2;
+    const a = (1 + FbE / g.FbNeg!) / 1.9;
+    const CL = a - Math.sqrt(a * a - FbE / g.FbNeg! / 0.95);
+    expect(CL).toBeLessThan(1);
+    expect(bending?.capacity).toBeCloseTo(g.FbNeg! * CL, 0);
+    expect(bending?.ratio).toBeCloseTo(fb / (g.FbNeg! * CL), 3);
     expect(bending?.ratio).toBeGreaterThan(fb / g.Fb + 0.1);
+    expect(bending?.note).toMatch(/bottom edge in compression, braced only at the supports \(lu = 12 ft\)/);
     expect(r.assumptions.join(" ")).toMatch(/Fbx− for moment that hogs/);
   });
 

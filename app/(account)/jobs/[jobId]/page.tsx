@@ -6,7 +6,7 @@ import { JobOnPhone } from "@/components/offline/job-on-phone";
 import { SheetPanel } from "@/components/sheets/sheet-panel";
 import { userForPage } from "@/lib/auth/guard";
 import { getJob } from "@/lib/jobs/queries";
-import { recheckIfTablesChanged } from "@/lib/jobs/service";
+import { recheckIfOutdated } from "@/lib/jobs/service";
 import { changeWords } from "@/lib/flow/summary";
 
 export const metadata: Metadata = { title: "Job" };
@@ -22,7 +22,7 @@ export default async function JobRoute({ params, searchParams }: JobRouteProps) 
   const found = await getJob(user.id, jobId);
   if (!found) notFound();
   // new tables published since the members were worked out: the whole load path is worked out again first
-  const job = (await recheckIfTablesChanged(found.id)) ? await getJob(user.id, jobId) : found;
+  const job = (await recheckIfOutdated(found.id)) ? await getJob(user.id, jobId) : found;
   if (!job) notFound();
   return (
     <JobPage
