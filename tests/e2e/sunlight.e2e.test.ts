@@ -9,7 +9,7 @@ import type { Page } from "playwright-core";
 import { describe, expect, test } from "vitest";
 import { measurePageScripts } from "../../scripts/bench/weight";
 import { baseUrl, setupBrowser, type OpenedPage } from "./support/browser";
-import { nextStep, waitForAnswer } from "./support/flow";
+import { nextStep, waitForAnswer, waitForHydrated } from "./support/flow";
 import { signIn } from "./support/payments";
 
 const session = setupBrowser();
@@ -156,15 +156,7 @@ describe("a thumb in sunlight", () => {
     // a number field holds the step the same way
     const desk = await session.open("/size?kind=floor-joist", { viewport: "desktop" });
     const bearing = desk.page.getByLabel("Bearing length at each support");
-    // typed before React has hydrated the field, the entry would be reset by the form's own value: wait until
-    // React has attached its props to the input (its internal "__reactProps$" key)
-    await bearing.evaluate(
-      (el) =>
-        new Promise<void>((resolve) => {
-          const ready = () => (Object.keys(el).some((k) => k.startsWith("__reactProps$")) ? resolve() : setTimeout(ready, 50));
-          ready();
-        }),
-    );
+    await waitForHydrated(bearing);
     await bearing.fill("");
     await bearing.blur();
     await desk.page.getByRole("button", { name: /Next: Loads/ }).click();

@@ -1,13 +1,28 @@
 // Browser-test steps through the sizing flow (/size): type a length the way it was measured, move on a
 // step, wait for the answer, and size one member from the first step to "Save to a job". Used by the flow
 // journey and by the paid job-sheet journey.
-import type { Page } from "playwright-core";
+import type { Locator, Page } from "playwright-core";
 import { KIND_LABELS, type MemberKind } from "@/lib/flow/state";
 import { baseUrl } from "./browser";
 
 /** Types into a length (or number) field and leaves it, so the flow reads it. */
+/**
+ * Waits until React has hydrated a field (attached its props, the internal "__reactProps$" key): typed before
+ * that, the entry is reset by the form's own value when React takes the page over.
+ */
+export async function waitForHydrated(field: Locator): Promise<void> {
+  await field.evaluate(
+    (el) =>
+      new Promise<void>((resolve) => {
+        const ready = () => (Object.keys(el).some((k) => k.startsWith("__reactProps$")) ? resolve() : setTimeout(ready, 50));
+        ready();
+      }),
+  );
+}
+
 export async function typeLength(page: Page, label: string | RegExp, text: string): Promise<void> {
   const field = page.getByLabel(label).first();
+  await waitForHydrated(field);
   await field.fill(text);
   await field.blur();
 }
