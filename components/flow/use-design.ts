@@ -69,9 +69,10 @@ async function sizeAnywhere(url: string, body: string): Promise<SizeAnswer> {
     const out = await postJson<SizeOutput>(url, body);
     // the version the server sized with, named in full (fetched once when it is new to this phone)
     const kept = await refreshPhoneTables(out.tables).catch(() => null);
+    // kept (a second server answer, on reconnect, still shows the recheck); the phone's answers to other requests
+    // stay too: on reconnect the server may answer an earlier request first, and clearing them then lost this
+    // request's recheck. At most 24 are kept (below).
     const replaced = phoneAnswers.get(body) ?? null;
-    // kept for this request (a second server answer, on reconnect, still shows the recheck); others are done
-    for (const key of phoneAnswers.keys()) if (key !== body) phoneAnswers.delete(key);
     return { ...out, onPhone: null, stamp: kept?.stamp.id === out.tables ? kept.stamp : null, replaced };
   } catch (err) {
     if (!isNoConnection(err)) throw err;
