@@ -14,7 +14,9 @@ export async function waitForHydrated(field: Locator): Promise<void> {
   await field.evaluate(
     (el) =>
       new Promise<void>((resolve) => {
-        const ready = () => (Object.keys(el).some((k) => k.startsWith("__reactProps$")) ? resolve() : setTimeout(ready, 50));
+        // at most 10 s: a field React does not own (none found so far) is typed into as before
+        const until = Date.now() + 10_000;
+        const ready = () => (Object.keys(el).some((k) => k.startsWith("__reactProps$")) || Date.now() > until ? resolve() : setTimeout(ready, 50));
         ready();
       }),
   );
