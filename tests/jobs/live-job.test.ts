@@ -4,9 +4,9 @@
 import { randomUUID } from "node:crypto";
 import { beforeAll, describe, expect, test, vi } from "vitest";
 import type { SessionUser } from "@/lib/auth/roles";
-import { defaultFlowState } from "@/lib/flow/defaults";
 import type { FlowState } from "@/lib/flow/state";
 import { who } from "../support/session-mock";
+import { WRENFIELD_BEAM, WRENFIELD_JOISTS } from "../support/wrenfield-deck";
 
 const TEST_DB = process.env.TEST_DATABASE_URL;
 if (TEST_DB) process.env.DATABASE_URL = TEST_DB;
@@ -18,23 +18,8 @@ vi.mock("next/cache", () => ({ revalidatePath: vi.fn(), revalidateTag: vi.fn() }
 type Actions = typeof import("@/components/jobs/actions");
 type Queries = typeof import("@/lib/jobs/queries");
 
-const joists: FlowState = {
-  ...defaultFlowState("deck-joist"),
-  areaLoads: [
-    { id: "l", preset: "deck", label: "Deck", case: "L", psf: 40 },
-    { id: "d", preset: "floor-dead", label: "Dead", case: "D", psf: 10 },
-  ],
-};
-const beam: FlowState = {
-  ...defaultFlowState("deck-beam"),
-  lengthFt: 24,
-  supports: [
-    { x: 0, type: "pin" },
-    { x: 8, type: "roller" },
-    { x: 16, type: "roller" },
-    { x: 24, type: "roller" },
-  ],
-};
+const joists = WRENFIELD_JOISTS;
+const beam = WRENFIELD_BEAM;
 
 function ok<T extends { ok: boolean }>(r: T): Extract<T, { ok: true }> {
   if (!r.ok) throw new Error(`expected ok, got ${JSON.stringify(r)}`);

@@ -1,8 +1,6 @@
 import Papa from "papaparse";
 import { describe, expect, test } from "vitest";
-import { defaultFlowState } from "@/lib/flow/defaults";
 import { formatFeetInches } from "@/lib/flow/length";
-import type { FlowState } from "@/lib/flow/state";
 import type { FootingSpec } from "@/lib/flow/summary";
 import { workOutJob, type Bearing, type FootingDesign, type PostDesign } from "@/lib/jobs/load-path";
 import { orderCsv } from "@/lib/orders/csv";
@@ -11,29 +9,15 @@ import { NO_ORDER_DETAILS, type OrderDetails, type OrderLine, type OrderList } f
 import { concreteToOrder, DEFAULT_SAWN_STOCK_FT, footingCubicYards, padCubicYards, stockLengthFor } from "@/lib/orders/rules";
 import { costPerFoot, itemKey, STARTER_TABLES } from "@/lib/tables";
 import type { MaterialTables } from "@/lib/tables/types";
+import { WRENFIELD_BEAM, WRENFIELD_JOISTS } from "../support/wrenfield-deck";
 
 // The order list of a job whose load path builds the posts and footings: an invented deck (the Wrenfield Road
 // deck of tests/jobs/load-path.test.ts) worked out by the load path, then counted. The counting rules are common
 // practice (a post per support, stock lengths 8–24 ft in 2 ft steps, a footing under each post, 10 % extra
 // concrete); each expectation is worked out here from the inputs and the designed sizes, not pasted.
 
-const J1_STATE: FlowState = {
-  ...defaultFlowState("deck-joist"),
-  areaLoads: [
-    { id: "l", preset: "deck", label: "Deck", case: "L", psf: 40 },
-    { id: "d", preset: "floor-dead", label: "Dead", case: "D", psf: 10 },
-  ],
-};
-const B1_STATE: FlowState = {
-  ...defaultFlowState("deck-beam"),
-  lengthFt: 24,
-  supports: [
-    { x: 0, type: "pin" },
-    { x: 8, type: "roller" },
-    { x: 16, type: "roller" },
-    { x: 24, type: "roller" },
-  ],
-};
+const J1_STATE = WRENFIELD_JOISTS;
+const B1_STATE = WRENFIELD_BEAM;
 const POST: PostDesign = { type: "post", size: "6x6", plies: 1, species: "Douglas Fir-Larch", grade: "No.2", heightFt: 8, wet: true };
 const FOOTING: FootingDesign = { type: "footing", shape: "round", sizeIn: null, thicknessIn: 10, soilPsf: 1500, frostDepthIn: 36, bottomDepthIn: null };
 /** what a builder types on the beam's "For the order list" (the unchecked fallback) */
