@@ -17,7 +17,7 @@ import type { CheckOutput } from "@/lib/solver/design/check";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { SizeCandidateResult } from "@/lib/solver/design/size";
 import { isNoConnection, useSize } from "./use-design";
-import { answerLineOf, answerWords, recheck, shownCandidate, tablesWords, type PhoneAnswer, type Recheck } from "@/lib/offline/answers";
+import { answerLineOf, answerWords, recheck, shownCandidate, shownLine, tablesWords, type PhoneAnswer, type Recheck } from "@/lib/offline/answers";
 import { checkTitle } from "@/lib/solver/design/check-words";
 import { checkDetail } from "./words";
 
@@ -196,8 +196,8 @@ export function Answer({ state, chosen, onChoose, onChosenCheck, onGoTo, variant
   }, [phoneAnswer, onPhoneAnswer]);
   const serverCheck = useMemo(() => {
     const replaced = size.data?.replaced;
-    if (!size.data || !replaced?.onPhone) return null;
-    const phone = { answer: answerLineOf(shownCandidate(replaced, chosen)), tables: replaced.onPhone };
+    if (!size.data || !replaced) return null;
+    const phone = { answer: shownLine(replaced, chosen), tables: replaced.tables };
     const tables = size.data.stamp ?? (size.data.tables === phone.tables.id ? phone.tables : { id: size.data.tables, number: null, publishedAt: null });
     return recheck(phone, { answer: answerLineOf(shownCandidate(size.data, chosen)), tables });
   }, [size.data, chosen]);

@@ -1,11 +1,12 @@
 "use client";
 
-import { useEffect, useState } from "react";
+import { useEffect, useRef, useState } from "react";
 import useSWR from "swr";
 import type { SizeOutput } from "@/lib/solver/design/size";
 import { sizeRequest } from "@/lib/flow/request";
 import type { FlowState } from "@/lib/flow/state";
-import type { TablesStamp } from "@/lib/offline/answers";
+import { phoneWorkedOut, type PhoneWorkedOut, type TablesStamp } from "@/lib/offline/answers";
+import { keepWorkedOut, rechecking } from "@/components/offline/phone-answers";
 import { readPhoneTables, refreshPhoneTables } from "@/components/offline/phone-tables";
 import { useOnline } from "@/components/ui/use-online";
 
@@ -38,6 +39,10 @@ async function postJson<T>(url: string, body: string): Promise<T> {
   return data as T;
 }
 
+function delay<T>(ms: number, value: T): Promise<T> {
+  return new Promise((resolve) => setTimeout(() => resolve(value), ms));
+}
+
 /** The value, once it has stopped changing for `ms` milliseconds. */
 export function useDebounced<T>(value: T, ms: number): T {
   const [settled, setSettled] = useState(value);
@@ -50,10 +55,10 @@ export function useDebounced<T>(value: T, ms: number): T {
 
 /**
  * A size answer and where it was worked out: `onPhone` null = the server; a stamp = on this phone, with those
- * tables. `stamp` names the tables used when known; `replaced` is the phone's answer to the same request that
- * this server answer replaces (the server's recheck of it), else null.
+ * tables. `stamp` names the tables used when known; `replaced` is what the phone worked out for the same request with no
+ * signal, which this server answer rechecks, else null.
  */
-export type SizeAnswer = SizeOutput & { onPhone: TablesStamp | null; stamp: TablesStamp | null; replaced: SizeAnswer | null };
+export type SizeAnswer = SizeOutput & { onPhone: TablesStamp | null; stamp: TablesStamp | null; replaced: PhoneWorkedOut | null };
 
 /** Says a refusal is the lost connection (the phone then works the answer out itself). */
 export function isNoConnection(err: unknown): boolean {
@@ -67,12 +72,12 @@ export function isNoConnection(err: unknown): boolean {
 async function sizeAnywhere(url: string, body: string): Promise<SizeAnswer> {
   try {
     const out = await postJson<SizeOutput>(url, body);
-    // the version the server sized with, named in full (fetched once when it is new to this phone)
-    const kept = await refreshPhoneTables(out.tables).catch(() => null);
-    // kept (a second server answer, on reconnect, still shows the recheck); the phone's answers to other requests
-    // stay too: on reconnect the server may answer an earlier request first, and clearing them then lost this
-    // request's recheck. At most 24 are kept (below).
-    const replaced = phoneAnswers.get(body) ?? null;
+    // the version the server sized with, named in full (fetched once when it is new to this phone); the answer
+    // waits 2 s for it at most (then names the version by its id) and the tables go on arriving in the background
+    const kept = await Promise.race([refreshPhoneTables(out.tables).catch(() => null), delay(2_000, null)]);
+    // what this phone worked out for the same request with no signal, if anything: the server's answer is its
+    // recheck (kept after it, so a second server answer on reconnect, or after a reload, still shows the recheck)
+    const replaced = rechecking(body);
     return { ...out, onPhone: null, stamp: kept?.stamp.id === out.tables ? kept.stamp : null, replaced };
   } catch (err) {
     if (!isNoConnection(err)) throw err;
@@ -91,19 +96,13 @@ async function sizeAnywhere(url: string, body: string): Promise<SizeAnswer> {
       if (designErr instanceof DesignInputError) throw new DesignRequestError(400, "invalid input", designErr.issues);
       throw designErr;
     }
-    phoneAnswers.delete(body);
-    phoneAnswers.set(body, answer);
-    // a long spell with no signal: keep the latest few requests' answers
-    for (const key of phoneAnswers.keys()) if (phoneAnswers.size > 24) phoneAnswers.delete(key);
+    keepWorkedOut(body, phoneWorkedOut(answer, kept.stamp, Date.now()));
     return answer;
   }
 }
 
-/**
- * The phone's answers by request, until the server has answered another one. Shared by every useSize on the
- * page: requests are shared too (the answer beside the inputs and the answer step ask the same one).
- */
-const phoneAnswers = new Map<string, SizeAnswer>();
+const RECHECK_FIRST_RETRY_MS = 5_000;
+const RECHECK_LONGEST_WAIT_MS = 30_000;
 
 const SWR_OPTIONS = {
   keepPreviousData: true,
@@ -111,8 +110,6 @@ const SWR_OPTIONS = {
   revalidateOnReconnect: true,
   shouldRetryOnError: false,
   dedupingInterval: 10_000,
-  // an answer worked out on the phone is sent to the server again every 20 s until the server has checked it
-  refreshInterval: (data: SizeAnswer | undefined) => (data?.onPhone ? 20_000 : 0),
 } as const;
 
 /**
@@ -124,12 +121,33 @@ export function useSize(state: FlowState) {
   const body = useDebounced(JSON.stringify(sizeRequest(state)), 250);
   const swr = useSWR<SizeAnswer, DesignRequestError>(["/api/size", body], ([url, b]: [string, string]) => sizeAnywhere(url, b), SWR_OPTIONS);
   const online = useOnline();
-  const { mutate, data } = swr;
-
-  // back online with an answer from the phone: ask the server at once
+  const { mutate, data, isValidating } = swr;
+  const validating = useRef(isValidating);
   useEffect(() => {
-    if (online && data?.onPhone) void mutate();
-  }, [online, data?.onPhone, mutate]);
+    validating.current = isValidating;
+  }, [isValidating]);
+
+  // back online with an answer from the phone: ask the server at once, then again after 5, 10, 20 and every 30 s
+  // while none is on its way, until the server has answered. The first request as the signal returns may be lost
+  // or refused; SWR's own refreshInterval cannot do this (it reads the data only when the key changes, when an
+  // answer worked out offline is not there yet).
+  // (a string, so a request lost again, which answers with an equal but new phone answer, does not restart this)
+  const onPhoneWith = data?.onPhone?.id ?? null;
+  useEffect(() => {
+    if (!online || onPhoneWith === null) return;
+    let tries = 0;
+    let timer: ReturnType<typeof setTimeout>;
+    const later = () => {
+      timer = setTimeout(again, Math.min(RECHECK_FIRST_RETRY_MS * 2 ** tries++, RECHECK_LONGEST_WAIT_MS));
+    };
+    const again = () => {
+      if (!validating.current) void mutate();
+      later();
+    };
+    void mutate();
+    later();
+    return () => clearTimeout(timer);
+  }, [online, onPhoneWith, mutate]);
 
   return swr;
 }

@@ -21,6 +21,7 @@ const KEY = "current";
 let store: ReturnType<typeof createStore> | null = null;
 let held: PhoneTables | null = null;
 let refreshing: Promise<PhoneTables | null> | null = null;
+const TABLES_TIMEOUT_MS = 20_000;
 
 function tablesStore(): ReturnType<typeof createStore> {
   store ??= createStore("spanlark-tables", "tables");
@@ -40,7 +41,12 @@ export async function readPhoneTables(): Promise<PhoneTables | null> {
 
 async function fetchTables(): Promise<PhoneTables | null> {
   const kept = await readPhoneTables();
-  const res = await fetch("/api/tables", { cache: "no-store", headers: kept ? { "if-none-match": `"${kept.stamp.id}"` } : {} });
+  // a signal that connects but never answers must not hold the tables (and every answer waiting on them) forever
+  const res = await fetch("/api/tables", {
+    cache: "no-store",
+    headers: kept ? { "if-none-match": `"${kept.stamp.id}"` } : {},
+    signal: AbortSignal.timeout(TABLES_TIMEOUT_MS),
+  });
   if (res.status === 304 && kept) return kept;
   if (!res.ok) return kept;
   const body = (await res.json()) as { stamp: TablesStamp; tables: MaterialTables };

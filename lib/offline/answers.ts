@@ -89,6 +89,26 @@ export function answerLineOf(candidate: SizeCandidateResult | null): AnswerLine 
   return { headline: candidate.answer, memberLabel: candidate.label, spec: candidate.member, ratio: candidate.ratio, governing: candidate.governing };
 }
 
+/**
+ * What the phone keeps of an answer it worked out with no signal, until the server has rechecked it: the answer
+ * line of every member that passed (the builder may choose another before the signal is back) and the tables used.
+ */
+export interface PhoneWorkedOut {
+  tables: TablesStamp;
+  lines: AnswerLine[];
+  /** when it was worked out, ms since 1970 */
+  at: number;
+}
+
+export function phoneWorkedOut(output: SizeOutput, tables: TablesStamp, at: number): PhoneWorkedOut {
+  return { tables, lines: output.passing.map((p) => answerLineOf(p)).filter((l): l is AnswerLine => l !== null), at };
+}
+
+/** The line the answer screen showed for `chosen` when the phone worked it out (as shownCandidate chose it). */
+export function shownLine(kept: PhoneWorkedOut, chosen: MemberSpec | null): AnswerLine | null {
+  return (chosen ? kept.lines.find((l) => sameSpec(l.spec, chosen)) : undefined) ?? kept.lines[0] ?? null;
+}
+
 /** The server's recheck of an answer worked out on the phone. */
 export type Recheck =
   | { same: true; phone: AnswerLine | null; server: AnswerLine | null }

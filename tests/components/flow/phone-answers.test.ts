@@ -1,0 +1,56 @@
+// @vitest-environment jsdom
+// What the phone keeps of an answer worked out with no signal (components/offline/phone-answers.ts): it outlives a
+// reload of the page (the module loaded afresh, as after one), is the server's to recheck for 15 minutes after the
+// first server answer and then forgotten, and at most 24 requests are kept.
+import { afterEach, describe, expect, test, vi } from "vitest";
+import type { PhoneWorkedOut } from "@/lib/offline/answers";
+
+const TABLES = { id: "v-demo", number: 6, publishedAt: "2026-12-02T00:00:00.000Z" };
+const worked = (headline: string, at: number): PhoneWorkedOut => ({
+  tables: TABLES,
+  lines: [
+    {
+      headline,
+      memberLabel: "2-ply 2x8 No.2 Douglas Fir-Larch",
+      spec: { material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "2x8", plies: 2 } as never,
+      ratio: 0.62,
+      governing: "bending",
+    },
+  ],
+  at,
+});
+
+async function freshModule() {
+  vi.resetModules();
+  return import("@/components/offline/phone-answers");
+}
+
+afterEach(() => localStorage.clear());
+
+describe("answers worked out on the phone", () => {
+  test("kept across a reload, rechecked once, shown again within 15 minutes, then forgotten", async () => {
+    const t0 = Date.parse("2026-12-04T09:00:00Z");
+    (await freshModule()).keepWorkedOut('{"lengthFt":6}', worked("2-ply 2x8 No.2, 1 jack stud each end", t0));
+    const afterReload = await freshModule();
+    expect(afterReload.rechecking('{"lengthFt":7}', t0 + 1_000)).toBeNull();
+    expect(afterReload.rechecking('{"lengthFt":6}', t0 + 60_000)?.lines[0]?.headline).toBe("2-ply 2x8 No.2, 1 jack stud each end");
+    // reloaded again 10 minutes after the recheck: still shown
+    const again = await freshModule();
+    expect(again.rechecking('{"lengthFt":6}', t0 + 60_000 + 10 * 60_000)).not.toBeNull();
+    // 16 minutes after the first recheck: an answer with a signal is no longer called a recheck
+    expect(again.rechecking('{"lengthFt":6}', t0 + 60_000 + 16 * 60_000)).toBeNull();
+    expect((await freshModule()).rechecking('{"lengthFt":6}', t0 + 60_000 + 17 * 60_000)).toBeNull();
+  });
+
+  test("the latest 24 requests are kept; damaged storage is ignored", async () => {
+    const m = await freshModule();
+    const now = Date.now();
+    for (let i = 0; i < 30; i += 1) m.keepWorkedOut(`{"lengthFt":${i}}`, worked(`answer ${i}`, now));
+    const reloaded = await freshModule();
+    expect(reloaded.rechecking('{"lengthFt":5}', now)).toBeNull();
+    expect(reloaded.rechecking('{"lengthFt":6}', now)?.lines[0]?.headline).toBe("answer 6");
+    expect(reloaded.rechecking('{"lengthFt":29}', now)?.lines[0]?.headline).toBe("answer 29");
+    localStorage.setItem("spanlark-phone-answers", "{not json");
+    expect((await freshModule()).rechecking('{"lengthFt":29}', now)).toBeNull();
+  });
+});
