@@ -10,7 +10,7 @@ import { Dialog } from "@/components/ui/dialog";
 import { SelectField, TextField } from "@/components/ui/field";
 import { useToast } from "@/components/ui/toast";
 import { saveMemberSchema, type SaveMemberForm } from "@/lib/flow/forms";
-import { queueSave } from "@/components/offline/save-queue";
+import { queueSave, whenUnqueued } from "@/components/offline/save-queue";
 import type { MemberSnapshot, PhoneAnswer } from "@/lib/offline/answers";
 import { KIND_LABELS, type FlowState } from "@/lib/flow/state";
 import type { MemberSpec } from "@/lib/solver/design/schema";
@@ -95,7 +95,8 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               await queueSave({ key, body: input, label: values.label, jobName, phoneAnswer, queuedAt: new Date().toISOString() });
               saveKey.current = null;
               onClose();
-              toast.show({ message: `No signal: ${values.label} is saved on this phone and goes to ${jobName} when the signal is back.` });
+              const note = toast.show({ message: `No signal: ${values.label} is saved on this phone and goes to ${jobName} when the signal is back.` });
+              whenUnqueued(key, () => toast.dismiss(note));
             };
             // a change to a saved member waits on the phone too, applied later only if nobody changed the member meanwhile
             const offlineEdit = editing?.version && editing.base ? { version: editing.version, base: editing.base } : null;
@@ -114,7 +115,10 @@ export function SaveToJob({ open, onClose, state, chosen, jobs, editing, preferr
               });
               saveKey.current = null;
               onClose();
-              toast.show({ message: `No signal: your change to ${values.label} is kept on this phone and goes to ${jobName} when the signal is back.` });
+              const note = toast.show({
+                message: `No signal: your change to ${values.label} is kept on this phone and goes to ${jobName} when the signal is back.`,
+              });
+              whenUnqueued(key, () => toast.dismiss(note));
             };
             if (!navigator.onLine && (!editing || offlineEdit)) {
               if (editing && offlineEdit) await keepChangeOnPhone(editing, offlineEdit);

@@ -87,7 +87,7 @@ export function SentCard({ record, dismissible = true }: { record: SentRecord; d
       </p>
       <p>
         Sent <time dateTime={record.sentAt}>{phoneTime(record.sentAt)}</time>
-        {record.by === "background" ? " while Spanlark was closed" : ""}.
+        {record.by === "background" ? " in the background, by this phone" : ""}.
       </p>
       {check ? (
         check.same ? (

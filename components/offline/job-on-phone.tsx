@@ -75,7 +75,7 @@ export function JobOnPhone({ jobId }: { jobId: string }) {
             {sent.map((r) => (
               <li key={r.key}>
                 {what(r.kind, r.response.label)}: sent <time dateTime={r.sentAt}>{phoneTime(r.sentAt)}</time>
-                {r.by === "background" ? " while Spanlark was closed" : ""} (made <time dateTime={r.queuedAt}>{phoneTime(r.queuedAt)}</time>)
+                {r.by === "background" ? " in the background, by this phone" : ""} (made <time dateTime={r.queuedAt}>{phoneTime(r.queuedAt)}</time>)
               </li>
             ))}
           </ul>

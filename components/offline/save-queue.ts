@@ -45,6 +45,19 @@ async function askWorkerToSend(): Promise<void> {
   }
 }
 
+/** Dismisses a note about a waiting item (`dismiss`) once it has left the queue: sent, settled or discarded. */
+export function whenUnqueued(key: string, dismiss: () => void): void {
+  const stop = onQueueChange(() => {
+    void queuedSaves().then((waiting) => {
+      if (waiting.some((s) => s.key === key)) return;
+      stop();
+      dismiss();
+    });
+  });
+  // the note goes by itself in seconds: listen no longer than it can show
+  setTimeout(stop, 60_000);
+}
+
 export async function queueSave(save: QueuedSave): Promise<void> {
   await putQueued(save);
   announce();

@@ -58,7 +58,7 @@ describe("Background Sync and changes made with no signal", () => {
     expect(sent).toHaveLength(1);
     expect(sent[0]!.by).toBe("background");
     await again.getByTestId("sent-save").filter({ hasText: label }).waitFor();
-    expect(await again.getByTestId("sent-save").filter({ hasText: label }).textContent()).toContain("while Spanlark was closed");
+    expect(await again.getByTestId("sent-save").filter({ hasText: label }).textContent()).toContain("in the background, by this phone");
     await again.waitForTimeout(2_000);
     expect(await membersInDatabase(jobName, label)).toBe(1);
   }, 240_000);
