@@ -150,7 +150,7 @@ export const deleteMemberSchema = z.object({
 export const updateMemberSchema = z.object({
   memberId: uuid("Member"),
   label: label.optional(),
-  flowState: flowStateSchema.optional(),
+  flowState: z.optional(flowStateSchema),
   chosenMember: memberSchema.nullable().optional(),
   /** the member that carries this one (joists on a beam), in the same job; null to clear */
   carriedByMemberId: uuid("Carried by").nullable().optional(),
