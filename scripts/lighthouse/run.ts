@@ -62,6 +62,8 @@ type Run = {
   accessibility: number;
   metrics: Record<string, string>;
   misses: string[];
+  /** Lighthouse's own failure to record the run (e.g. NO_NAVSTART, a trace it could not read), else null */
+  failed: string | null;
 };
 
 const METRICS = [
@@ -106,6 +108,7 @@ async function audit(url: string, name: string, cpuSlowdown: number | undefined)
     accessibility: score("accessibility"),
     metrics: Object.fromEntries(METRICS.map(([id, short]) => [short, lhr.audits[id]?.displayValue ?? "—"])),
     misses,
+    failed: lhr.runtimeError?.code ?? null,
   };
 }
 
@@ -119,12 +122,21 @@ const median = <T>(values: T[], key: (v: T) => number): T => [...values].sort((x
 /** RUNS audits of one page at one CPU slowdown (undefined: Lighthouse's default), as a table row and its runs. */
 async function measure(name: string, path: string, cpuSlowdown: number | undefined): Promise<{ row: string; runs: Run[]; ok: boolean }> {
   const runs: Run[] = [];
-  for (let i = 0; i < RUNS; i++) runs.push(await audit(`${base}${path}`, name, cpuSlowdown));
-  const mid = median(runs, (r) => r.performance);
+  for (let i = 0; i < RUNS; i++) {
+    // a run Lighthouse failed to record measures nothing: it is run again (twice at most) and left out of the median
+    let run = await audit(`${base}${path}`, name, cpuSlowdown);
+    for (let retry = 0; run.failed && retry < 2; retry++) {
+      console.error(`${name}: Lighthouse could not record a run (${run.failed}); running it again`);
+      run = await audit(`${base}${path}`, name, cpuSlowdown);
+    }
+    runs.push(run);
+  }
+  const recorded = runs.filter((r) => !r.failed);
+  const mid = median(recorded.length > 0 ? recorded : runs, (r) => r.performance);
   const ok = mid.performance >= TARGET.performance && mid.bestPractices >= TARGET.bestPractices;
   if (mid.misses.length > 0) console.error(`${name}${cpuSlowdown === undefined ? "" : ` (calibrated, ${cpuSlowdown}x)`}:\n  ${mid.misses.join("\n  ")}`);
   const row =
-    `| ${name} | ${Math.round(mid.performance * 100)} (runs ${runs.map((r) => Math.round(r.performance * 100)).join(", ")}) | ${Math.round(mid.bestPractices * 100)} | ${Math.round(mid.accessibility * 100)} | ` +
+    `| ${name} | ${Math.round(mid.performance * 100)} (runs ${runs.map((r) => (r.failed ? `not recorded: ${r.failed}` : Math.round(r.performance * 100))).join(", ")}) | ${Math.round(mid.bestPractices * 100)} | ${Math.round(mid.accessibility * 100)} | ` +
     `${METRICS.map(([, short]) => mid.metrics[short]).join(" · ")} | ${mid.scriptMs.toLocaleString("en-US")} ms | ${mid.jsKb} KB | ` +
     `${runs.map((r) => r.benchmarkIndex).join(", ")} | ${runs.map((r) => r.load.toFixed(1)).join(", ")} | ${cpuSlowdown ?? 4}x | ${ok ? "met" : "MISSED"} |`;
   return { row, runs, ok };
