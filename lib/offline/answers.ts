@@ -79,14 +79,20 @@ export interface PhoneAnswer {
 
 const sameSpec = (a: MemberSpec, b: MemberSpec): boolean => JSON.stringify(a) === JSON.stringify(b);
 
-/** The candidate the answer screen shows: the chosen member while it still passes, else the best that passes. */
-export function shownCandidate(output: SizeOutput, chosen: MemberSpec | null): SizeCandidateResult | null {
-  return (chosen ? output.passing.find((p) => sameSpec(p.member, chosen)) : undefined) ?? output.passing[0] ?? null;
+/** Of members that pass (best first), the one the answer screen shows: the chosen one while it passes, else the best. */
+function shownOf<T>(passing: readonly T[], specOf: (item: T) => MemberSpec, chosen: MemberSpec | null): T | null {
+  return (chosen ? passing.find((p) => sameSpec(specOf(p), chosen)) : undefined) ?? passing[0] ?? null;
 }
 
+/** The candidate the answer screen shows: the chosen member while it still passes, else the best that passes. */
+export function shownCandidate(output: SizeOutput, chosen: MemberSpec | null): SizeCandidateResult | null {
+  return shownOf(output.passing, (p) => p.member, chosen);
+}
+
+const lineOf = (c: SizeCandidateResult): AnswerLine => ({ headline: c.answer, memberLabel: c.label, spec: c.member, ratio: c.ratio, governing: c.governing });
+
 export function answerLineOf(candidate: SizeCandidateResult | null): AnswerLine | null {
-  if (!candidate) return null;
-  return { headline: candidate.answer, memberLabel: candidate.label, spec: candidate.member, ratio: candidate.ratio, governing: candidate.governing };
+  return candidate ? lineOf(candidate) : null;
 }
 
 /**
@@ -101,12 +107,12 @@ export interface PhoneWorkedOut {
 }
 
 export function phoneWorkedOut(output: SizeOutput, tables: TablesStamp, at: number): PhoneWorkedOut {
-  return { tables, lines: output.passing.map((p) => answerLineOf(p)).filter((l): l is AnswerLine => l !== null), at };
+  return { tables, lines: output.passing.map(lineOf), at };
 }
 
 /** The line the answer screen showed for `chosen` when the phone worked it out (as shownCandidate chose it). */
 export function shownLine(kept: PhoneWorkedOut, chosen: MemberSpec | null): AnswerLine | null {
-  return (chosen ? kept.lines.find((l) => sameSpec(l.spec, chosen)) : undefined) ?? kept.lines[0] ?? null;
+  return shownOf(kept.lines, (l) => l.spec, chosen);
 }
 
 /** The server's recheck of an answer worked out on the phone. */
