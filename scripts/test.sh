@@ -96,6 +96,15 @@ for (const stage of stages) {
     passed += r.numPassedTests; failed += r.numFailedTests + broken; skipped += s;
     lines.push(`  ${name}: ${r.numPassedTests} passed, ${r.numFailedTests + broken} failed, ${s} skipped`);
     if (status !== "0" && r.numFailedTests + broken === 0) { failed += 1; lines.push(`  ${name}: runner exited ${status}`); }
+    // Name each failure here too, so a log cut to its last lines still says what failed and why.
+    for (const t of r.testResults ?? []) {
+      const where = t.name.replace(`${process.cwd()}/`, "");
+      const first = (m) => String(m ?? "").split("\n").find((l) => l.trim()) ?? "";
+      if (t.status === "failed" && (t.assertionResults ?? []).length === 0) lines.push(`    FAILED ${where}: ${first(t.message).slice(0, 300)}`);
+      for (const a of t.assertionResults ?? []) {
+        if (a.status === "failed") lines.push(`    FAILED ${where} > ${a.fullName}: ${first((a.failureMessages ?? [])[0]).slice(0, 300)}`);
+      }
+    }
   } else {
     if (status === "0") passed += 1; else failed += 1;
     lines.push(`  ${name}: ${status === "0" ? "passed" : "FAILED"}`);

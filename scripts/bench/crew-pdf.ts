@@ -4,17 +4,8 @@
 // a 304, nothing drawn: what the service worker's keep-a-copy fetch on every crew page view now costs). The
 // database read that every request makes (the crew link and the job) is the same in each case and not measured.
 // Runs in a child process with the react-server condition, as the app's route code runs on the server.
-import { execFileSync } from "node:child_process";
-import path from "node:path";
-import { fileURLToPath } from "node:url";
-
-const ROOT = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../..");
+import { runServerChild } from "./support/server-child";
 
 export function run(): void {
-  const out = execFileSync(process.execPath, ["--conditions=react-server", "--import", "tsx", "scripts/bench/support/crew-pdf-child.ts"], {
-    cwd: ROOT,
-    encoding: "utf8",
-    env: { ...process.env, NODE_ENV: "production" },
-  });
-  process.stdout.write(out);
+  runServerChild("crew-pdf-child.ts");
 }

@@ -1,3 +1,4 @@
+import bcrypt from "bcryptjs";
 import { beforeEach, describe, expect, test, vi } from "vitest";
 import { fromClient } from "../support/client-ip";
 import { TEST_DB, lastMailTo, makeUser, outbox, sendMailMock, uniqueEmail, uniqueIp } from "./support";
@@ -26,11 +27,6 @@ async function timed<T>(work: () => Promise<T>): Promise<{ value: T; ms: number 
   return { value, ms: performance.now() - started };
 }
 
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  return sorted[Math.floor(sorted.length / 2)];
-}
-
 beforeEach(() => {
   outbox.length = 0;
 });
@@ -49,16 +45,29 @@ describe.skipIf(!TEST_DB)("no user enumeration", () => {
     expect(lastMailTo(nobody)?.text).not.toMatch(/token=/);
   });
 
-  test("forgot password: both answers take about the same time (mail goes out after the answer)", async () => {
+  // Equal times come from equal work, checked here as work, not as a stopwatch reading: a timed comparison flakes
+  // on a busy 2-core CI machine, and the figures belong in `npm run bench`.
+  test("forgot password: neither answer comes sooner than the floor, and neither waits for its mail", async () => {
     const user = await makeUser();
-    const known: number[] = [];
-    const unknown: number[] = [];
-    for (let i = 0; i < 3; i++) {
-      known.push((await timed(() => forgotRoute.POST(post("/api/auth/password/forgot", { email: user.email }), ctx))).ms);
-      unknown.push((await timed(() => forgotRoute.POST(post("/api/auth/password/forgot", { email: uniqueEmail("nobody") }), ctx))).ms);
+    for (const email of [user.email, uniqueEmail("nobody")]) {
+      // The mail server hangs: the answer must not wait for it.
+      let release = () => {};
+      const held = new Promise<void>((resolve) => (release = resolve));
+      sendMailMock.mockImplementationOnce(async (message) => {
+        await held;
+        outbox.push(message);
+        return { messageId: "<held@test>" };
+      });
+      const { value, ms } = await timed(() => forgotRoute.POST(post("/api/auth/password/forgot", { email }), ctx));
+      expect(value.status).toBe(202);
+      // a lower bound only: a slow machine makes it longer, never shorter
+      expect(ms).toBeGreaterThanOrEqual(PUBLIC_FLOW_MIN_MS - 5);
+      expect(sendMailMock).toHaveBeenLastCalledWith(expect.objectContaining({ to: email.toLowerCase() }));
+      expect(lastMailTo(email)).toBeUndefined();
+      release();
+      await settleBackground();
+      expect(lastMailTo(email)).toBeDefined();
     }
-    expect(Math.min(...known, ...unknown)).toBeGreaterThanOrEqual(PUBLIC_FLOW_MIN_MS - 5);
-    expect(Math.abs(median(known) - median(unknown))).toBeLessThan(250);
   });
 
   test("sign-up: an address already in use gets the same answer; its owner gets a note, no second account", async () => {
@@ -87,22 +96,28 @@ describe.skipIf(!TEST_DB)("no user enumeration", () => {
     expect(outbox.map((m) => m.to)).toEqual([unconfirmed.email]);
   });
 
-  test("sign-in: unknown address and wrong password give one answer in about the same time", async () => {
+  test("sign-in: an unknown address and a wrong password give one answer after the same work: one bcrypt comparison at the same cost", async () => {
     const user = await makeUser({ password: "the-right-password" });
-    const wrong: number[] = [];
-    const unknown: number[] = [];
-    for (let i = 0; i < 3; i++) {
-      const w = await timed(() => authenticate(user.email, "not-the-password", uniqueIp()));
-      const u = await timed(() => authenticate(uniqueEmail("nobody"), "not-the-password", uniqueIp()));
-      expect(w.value).toEqual({ ok: false, reason: "invalid" });
-      expect(u.value).toEqual(w.value);
-      wrong.push(w.ms);
-      unknown.push(u.ms);
+    // the stand-in hash for unknown addresses is made once per process; made here, outside the comparison below
+    await authenticate(uniqueEmail("warm"), "not-the-password", uniqueIp());
+    const compare = vi.spyOn(bcrypt, "compare");
+    const hash = vi.spyOn(bcrypt, "hash");
+    try {
+      const wrong = await authenticate(user.email, "not-the-password", uniqueIp());
+      const wrongHashes = compare.mock.calls.map((c) => c[1]);
+      compare.mockClear();
+      const unknown = await authenticate(uniqueEmail("nobody"), "not-the-password", uniqueIp());
+      const unknownHashes = compare.mock.calls.map((c) => c[1]);
+      expect(wrong).toEqual({ ok: false, reason: "invalid" });
+      expect(unknown).toEqual(wrong);
+      expect(wrongHashes).toHaveLength(1);
+      expect(unknownHashes).toHaveLength(1);
+      expect(bcrypt.getRounds(unknownHashes[0])).toBe(bcrypt.getRounds(wrongHashes[0]));
+      expect(bcrypt.getRounds(wrongHashes[0])).toBe(12);
+      expect(hash).not.toHaveBeenCalled();
+    } finally {
+      compare.mockRestore();
+      hash.mockRestore();
     }
-    // Both paths run one bcrypt comparison at cost 12; without the stand-in hash an unknown address would
-    // answer in a few milliseconds against hundreds.
-    const ratio = median(unknown) / median(wrong);
-    expect(ratio).toBeGreaterThan(0.5);
-    expect(ratio).toBeLessThan(2);
   }, 60_000);
 });
