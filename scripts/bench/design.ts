@@ -5,6 +5,7 @@
 import { checkMember, largestSpan, sizeMember } from "../../lib/solver/design";
 import { STARTER_TABLES } from "../../lib/tables";
 import { asdCombinations } from "../../lib/solver/asce7/combinations";
+import { median } from "./support/stats";
 
 // An invented header: 10 ft opening under a roof with snow and a floor above.
 const headerCheck = {
@@ -57,11 +58,6 @@ const spanSearch = {
   conditions: { repetitive: true, selfWeight: false },
   maxLengthFt: 30,
 };
-
-function median(v: number[]): number {
-  const s = [...v].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
 
 /**
  * Median seconds per call over several batches, after a warm-up: CPU time of this process

@@ -8,6 +8,7 @@
 // http://127.0.0.1:3000, what `npm start` serves): /, /size, and the paths in WEIGHT_PATHS (e.g. a crew link),
 // MAIN_THREAD_RUNS fresh visits each (default 5), reporting the median.
 import { chromium, type Browser } from "playwright-core";
+import { median } from "./support/stats";
 
 type TraceEvent = { name: string; ph: string; pid: number; tid: number; ts: number; dur?: number; tdur?: number; args?: Record<string, unknown> };
 
@@ -78,8 +79,6 @@ export async function traceFirstLoad(browser: Browser, url: string): Promise<Mai
     await context.close();
   }
 }
-
-const median = (xs: number[]) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
 
 export async function run(): Promise<void> {
   const baseUrl = (process.env.WEIGHT_BASE_URL ?? process.env.E2E_BASE_URL ?? "http://127.0.0.1:3000").replace(/\/$/, "");

@@ -5,6 +5,7 @@ import { analyzeBeam, type StationArrays } from "../../lib/solver/beam";
 import { asdCombinations } from "../../lib/solver/asce7/combinations";
 import { envelope } from "../../lib/solver/envelope";
 import type { BeamInput, Load, LoadCase } from "../../lib/solver/types";
+import { median } from "./support/stats";
 
 const STATIONS = 200;
 
@@ -62,11 +63,6 @@ export const caseB: BeamInput = {
   supports: [0, 12, 24, 36, 48].map((x, i) => ({ x, type: i === 0 ? "pin" : "roller" }) as const),
   loads: caseBLoads(),
 };
-
-function median(v: number[]): number {
-  const s = [...v].sort((a, b) => a - b);
-  return s[s.length >> 1];
-}
 
 /** CPU time of this process in seconds: unlike wall time, other busy processes on the machine do not count. */
 function cpuSeconds(): number {

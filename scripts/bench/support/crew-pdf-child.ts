@@ -1,5 +1,4 @@
 // The measurements of scripts/bench/crew-pdf.ts (run in a child process with --conditions=react-server).
-import { performance } from "node:perf_hooks";
 import { defaultFlowState } from "../../../lib/flow/defaults";
 import { checkRequest, sizeRequest } from "../../../lib/flow/request";
 import { summarize } from "../../../lib/flow/summary";
@@ -12,6 +11,7 @@ import { scheduleRow } from "../../../lib/crew/schedule";
 import { NOT_CHECKED } from "../../../lib/caution";
 import { checkMember, sizeMember } from "../../../lib/solver/design";
 import { STARTER_TABLES } from "../../../lib/tables";
+import { median, timed } from "./stats";
 
 const CREW = 10;
 const ROUNDS = Number(process.env.BENCH_CREW_PDF_ROUNDS ?? "3");
@@ -37,17 +37,6 @@ const view: CrewJobView = {
   readAt: new Date().toISOString(),
 };
 const url = "http://127.0.0.1:3100/crew/AAAAAAAAAAAAAAAAAAAAAAAA";
-
-async function timed(work: () => Promise<unknown>): Promise<number> {
-  const start = performance.now();
-  await work();
-  return performance.now() - start;
-}
-
-function median(xs: number[]): number {
-  const s = [...xs].sort((a, b) => a - b);
-  return s[Math.floor(s.length / 2)];
-}
 
 // warm-up: fonts, pdfkit and the QR encoder loaded once
 await renderCrewPdf(view, { url, qrPng: await crewQrPng(url, 400) }, "letter");

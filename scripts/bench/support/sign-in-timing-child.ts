@@ -5,19 +5,9 @@
 // No database: it calls lib/auth/password directly, in a child process (./server-child.ts).
 import { loadavg } from "node:os";
 import { BCRYPT_COST, hashPassword, verifyPassword } from "../../../lib/auth/password";
+import { median, timed } from "./stats";
 
 const RUNS = Number(process.env.BENCH_SIGN_IN_RUNS ?? "15");
-
-function median(values: number[]): number {
-  const sorted = [...values].sort((a, b) => a - b);
-  return sorted[Math.floor(sorted.length / 2)];
-}
-
-async function timed(work: () => Promise<unknown>): Promise<number> {
-  const started = performance.now();
-  await work();
-  return performance.now() - started;
-}
 
 async function run(): Promise<void> {
   const stored = await hashPassword("the-right-password-1");
