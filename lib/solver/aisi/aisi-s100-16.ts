@@ -562,12 +562,16 @@ export interface DistortionalResult {
   Mnd: number;
 }
 
-/** Nominal flexural strength for distortional buckling, §F4.1 Eq. F4.1-1 (λd ≤ 0.673: My) and F4.1-2, λd = √(My/Mcrd), kip-in. */
+/**
+ * Nominal flexural strength for distortional buckling, §F4.1 Eq. F4.1-1 (λd ≤ 0.673: My) and F4.1-2, λd = √(My/Mcrd), kip-in.
+ * Eq. F4.1-2 read as printed gives up to 1.00016 My for 0.673 < λd < 0.67321 (the limit is rounded); Mnd is held to My
+ * there, the conservative reading, as ρ is held to 1 in Appendix 1 Eq. 1.1-3 above.
+ */
 export function nominalMnd(My: number, Mcrd: number): { Mnd: number; lambdaD: number } {
   const lambdaD = Math.sqrt(My / Mcrd); // Eq. F4.1-3
   if (lambdaD <= 0.673) return { Mnd: My, lambdaD }; // Eq. F4.1-1
   const r = Math.sqrt(Mcrd / My);
-  return { Mnd: (1 - 0.22 * r) * r * My, lambdaD }; // Eq. F4.1-2
+  return { Mnd: Math.min(My, (1 - 0.22 * r) * r * My), lambdaD }; // Eq. F4.1-2, never above My
 }
 
 /**

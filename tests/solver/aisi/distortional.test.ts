@@ -133,6 +133,15 @@ describe("Mcrd and Mnd of single C-sections, no restraint (kφ = 0, β = 1.0, L 
 });
 
 describe("§F4.1 Eq. F4.1-1 and F4.1-2", () => {
+  test("just above λd = 0.673, where Eq. F4.1-2 as printed gives up to 1.00016 My (0.673 < λd < 0.67321), Mnd is held to My (the conservative reading, as ρ ≤ 1 in Appendix 1 Eq. 1.1-3)", () => {
+    // the band found by the property test below: λd = 0.6731 gives (1 − 0.22/λd)/λd = 1.00008 by the equation as printed
+    for (const lambdaD of [0.67301, 0.6731, 0.6732]) {
+      const printed = (1 - 0.22 / lambdaD) / lambdaD;
+      expect(printed).toBeGreaterThan(1);
+      expect(nominalMnd(100, 100 / lambdaD ** 2).Mnd).toBe(100);
+    }
+    expect(nominalMnd(100, 100 / 0.675 ** 2).Mnd).toBeCloseTo((100 * (1 - 0.22 / 0.675)) / 0.675, 10);
+  });
   test("continuous at λd = 0.673 to the rounding of 0.673 (the 0.5 power does this; runtosolve/AISIS100.jl's f411 writes 0.4, which would drop 4 % there)", () => {
     const My = 100;
     const Mcrd = My / 0.673 ** 2;
