@@ -4,6 +4,7 @@ import { defaultFlowState } from "@/lib/flow/defaults";
 import { checkRequest, sizeRequest } from "@/lib/flow/request";
 import { withMainSpan, withOverhang, type FlowState } from "@/lib/flow/state";
 import { summarize } from "@/lib/flow/summary";
+import { orderListMail } from "@/lib/mail/templates/order-list";
 import { orderCsv } from "@/lib/orders/csv";
 import { buildOrderList, cutLengthFt, NO_ORDER_DETAILS, type OrderDetails, type OrderLine, type OrderMember } from "@/lib/orders/order-list";
 import { blockingRows, blocksPerPiece, concreteToOrder, footingCubicYards, joistCount, stockLengthFor, stripsPerSheet, studSizeFor } from "@/lib/orders/rules";
@@ -188,5 +189,18 @@ describe("CSV", () => {
     expect(cells.some((c) => c.startsWith("'=HYPERLINK"))).toBe(true);
     expect(rows.length - 2).toBe(lines(list).length); // header and total line
     expect(cells.filter((c) => c.includes("no price in the cost table")).length).toBe(lines(list).filter((l) => l.price === null).length);
+  });
+});
+
+describe("the e-mail to the yard", () => {
+  test("every line in the body says which members its pieces are for, and a member's name in HTML stays text", () => {
+    const h1 = member("H1 <b>kitchen</b> header", withMainSpan(defaultFlowState("header"), 8));
+    const j1 = member("J1 addition floor joists", withMainSpan(defaultFlowState("floor-joist"), 13.5), { runWidthFt: 16 });
+    const list = buildOrderList([h1, j1], STARTER_TABLES);
+    const mail = orderListMail({ jobName: "Marsh Lane addition", senderName: "Dana", list });
+    for (const line of lines(list)) for (const use of line.uses) expect(mail.text).toContain(use);
+    expect(mail.text).toMatch(/for J1 addition floor joists/);
+    expect(mail.html).toContain("H1 &lt;b&gt;kitchen&lt;/b&gt; header");
+    expect(mail.html).not.toContain("<b>kitchen</b>");
   });
 });

@@ -1,4 +1,4 @@
-import { formatDollars, formatStockLength, type OrderList } from "@/lib/orders/order-list";
+import { formatDollars, formatStockLength, type OrderLine, type OrderList } from "@/lib/orders/order-list";
 import { renderMail, type MailBlock, type RenderedMail } from "./layout";
 
 export interface OrderListMailInput {
@@ -8,6 +8,13 @@ export interface OrderListMailInput {
   senderCompany?: string | null;
   note?: string | null;
   list: OrderList;
+}
+
+/** " — for J1 floor joists: 13 joists (note)": which members the pieces are for, so the yard can ask about one. */
+function forWhat(line: OrderLine): string {
+  const uses = line.uses.length > 0 ? ` — for ${line.uses.join("; ")}` : "";
+  const notes = line.notes.length > 0 ? ` (${line.notes.join("; ")})` : "";
+  return uses + notes;
 }
 
 /** Sent when a builder e-mails a job's order list to a yard: every line in the body, the CSV and PDF attached. */
@@ -32,7 +39,7 @@ export function orderListMail({ jobName, siteAddress, senderName, senderCompany,
       kind: "rows",
       rows: group.lines.map((l) => [
         `${l.item}${l.lengthFt !== null ? ` × ${formatStockLength(l.lengthFt)}` : ""}`,
-        `${l.quantity} ${l.unit}${l.price !== null ? ` — ${formatDollars(l.price)}` : " — no price on file"}`,
+        `${l.quantity} ${l.unit}${l.price !== null ? ` — ${formatDollars(l.price)}` : " — no price on file"}${forWhat(l)}`,
       ]),
     });
   }
