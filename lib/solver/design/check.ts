@@ -87,7 +87,7 @@ export interface Bracing {
   neededFt: number | null;
   /** the instruction, e.g. "brace the top flange at 7 ft 0 in or closer" */
   instruction: string | null;
-  /** where the member hogs and the bottom edge was given as braced along its length: what the crew must build for it */
+  /** where the member hogs and the bottom edge was given as braced along its length, or an I-joist hogs: what the crew must build for it */
   bottomEdge: string | null;
 }
 
@@ -256,6 +256,11 @@ export function roughOpeningOf(input: Omit<CheckInput, "member">): RoughOpening 
   };
 }
 
+/** More than one span or an overhang: somewhere the member hogs under gravity load. */
+function hogsGeometrically(input: Pick<CheckInput, "supports" | "lengthFt">): boolean {
+  return input.supports.length !== 2 || input.supports.some((s) => s.x > 1e-9 && s.x < input.lengthFt - 1e-9);
+}
+
 export function assumptionsFor(input: Omit<CheckInput, "member">, member: DesignMember, ctx: DesignContext): string[] {
   const a: string[] = [];
   const c = input.conditions;
@@ -332,7 +337,7 @@ export function assumptionsFor(input: Omit<CheckInput, "member">, member: Design
   }
   if (member.kind === "ijoist") {
     a.push(
-      "wood I-joist checked against its published capacities (moment, shear, end and intermediate reactions) and its EI and K; dry service, normal temperature; compression flange braced by the sheathing",
+      `wood I-joist checked against its published capacities (moment, shear, end and intermediate reactions) and its EI and K; dry service, normal temperature; CL = 1.0: top flange braced by the sheathing${hogsAnywhere(ctx.model, ctx.strength, c.selfWeight ? member.weightPlf : 0) ? "; the bottom flange, in compression where the joist hogs, taken as braced as the answer's bracing line asks (its lateral stability is not worked out here)" : ""}`,
     );
     a.push(
       "deflection includes shear deflection (K); no holes, notches or cut flanges in the joist; squash blocks, rim and blocking as the joist's installation guide shows",
@@ -412,25 +417,38 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     loadStandard: input.loadStandard,
     kind: input.kind ?? null,
     assembly,
-    bracing: bracingFor(input, member, ev),
+    bracing: bracingFor(input, member, ev, member.kind === "ijoist" && hogsAnywhere(ctx.model, ctx.strength, sw)),
     roughOpening: roughOpeningOf(input),
     diagrams,
   };
 }
 
 /**
+ * An I-joist's published moment capacity holds with its compression flange braced (NDS 2018 §7.3.5 takes
+ * CL = 1.0 only then; the check here uses CL = 1.0 and has no flange properties to work out a lower one).
+ * Where the joist hogs, the compression flange is the bottom one, which the sheathing does not brace: the
+ * answer asks the crew to brace it, as the joist makers' installation guides do (common practice), and says
+ * the check counts on it.
+ */
+export const I_JOIST_BOTTOM_FLANGE =
+  "brace the I-joist's bottom flange where it hogs (it is in compression there and the check counts on it braced): blocking panels or a rim at every interior support and at an overhang's support, and along an overhang's bottom flange a ceiling fastened to it or the bracing the joist maker's guide shows";
+
+/**
  * The unbraced length given is the one checked. When the member fails on lateral stability at that
  * length and passes with braces closer, the answer says how close (to the inch, rounded down), as an
  * instruction for the crew; nothing is assumed.
  */
-function bracingFor(input: Omit<CheckInput, "member">, member: DesignMember, ev: Evaluation): Bracing {
+function bracingFor(input: Omit<CheckInput, "member">, member: DesignMember, ev: Evaluation, iJoistHogs: boolean): Bracing {
   const givenFt = input.conditions.unbracedLengthFt;
   // the answer rests on the bottom edge's bracing only where the member hogs (more than one span, an overhang)
-  const hogs = member.kind !== "ijoist" && (input.supports.length !== 2 || input.supports.some((s) => s.x > 1e-9 && s.x < input.lengthFt - 1e-9));
   const bottomEdge =
-    input.conditions.bottomEdgeBraced && hogs
-      ? "the bottom edge is taken as braced along its length: fasten the ceiling directly to it, over the supports and on any overhang"
-      : null;
+    member.kind === "ijoist"
+      ? iJoistHogs
+        ? I_JOIST_BOTTOM_FLANGE
+        : null
+      : input.conditions.bottomEdgeBraced && hogsGeometrically(input)
+        ? "the bottom edge is taken as braced along its length: fasten the ceiling directly to it, over the supports and on any overhang"
+        : null;
   const none: Bracing = { givenFt, neededFt: null, instruction: null, bottomEdge };
   if (givenFt <= 0 || ev.pass) return none;
   const passesAt = (lbFt: number) => evaluateMember(member, contextFor({ ...input, conditions: { ...input.conditions, unbracedLengthFt: lbFt } })).pass;

@@ -1,5 +1,5 @@
 import { describe, expect, test } from "vitest";
-import { checkMember } from "@/lib/solver/design/check";
+import { checkMember, I_JOIST_BOTTOM_FLANGE } from "@/lib/solver/design/check";
 import { endReactionCapacity, uniformDeflectionIn } from "@/lib/solver/design/i-joist";
 import { sizeMember } from "@/lib/solver/design/size";
 import { findIJoist, STARTER_TABLES } from "@/lib/tables";
@@ -131,6 +131,31 @@ describe("reaction capacities from the table", () => {
     // continuous over two equal spans, uniform load: the middle reaction is 1.25 wL (AISC Manual 15th ed. Table 3-23, case 29)
     const w = (55 * 16) / 12;
     expect(mid.maxDown).toBeGreaterThanOrEqual(Math.round(1.25 * w * 14) - 1);
+    // over the middle support it hogs: the bottom flange is in compression and the published moment
+    // capacity holds with it braced (NDS 2018 §7.3.5, CL = 1.0 only when braced): the answer asks for it
+    expect(r.bracing.bottomEdge).toBe(I_JOIST_BOTTOM_FLANGE);
+    expect(r.assumptions.join(" ")).toMatch(/bottom flange, in compression where the joist hogs, taken as braced/);
+  });
+
+  test("a simple span never hogs under gravity load: no bottom-flange line", () => {
+    const r = checkMember(floor("PRI-40 9-1/2"), T);
+    expect(r.bracing.bottomEdge).toBeNull();
+    expect(r.assumptions.join(" ")).not.toMatch(/bottom flange/);
+  });
+
+  test("an overhang hogs over its support: the bottom flange there must be braced", () => {
+    const r = checkMember(
+      floor("PRI-40 11-7/8", {
+        lengthFt: 16,
+        supports: [
+          { x: 0, type: "pin" },
+          { x: 14, type: "roller" },
+        ],
+        bearingIn: 3.5,
+      }),
+      T,
+    );
+    expect(r.bracing.bottomEdge).toMatch(/along an overhang's bottom flange/);
   });
 });
 
