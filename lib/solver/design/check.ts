@@ -432,8 +432,22 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
  * answer asks the crew to brace it, as the joist makers' installation guides do (common practice), and says
  * the check counts on it.
  */
-export const I_JOIST_BOTTOM_FLANGE =
-  "brace the I-joist's bottom flange where it hogs (it is in compression there and the check counts on it braced): blocking panels or a rim at every interior support and at an overhang's support, and along an overhang's bottom flange a ceiling fastened to it or the bracing the joist maker's guide shows";
+export function iJoistBottomFlange(input: Pick<CheckInput, "supports" | "lengthFt">): string {
+  const xs = input.supports.map((s) => s.x);
+  const first = Math.min(...xs);
+  const last = Math.max(...xs);
+  const interior = xs.some((x) => x > first + 1e-9 && x < last - 1e-9);
+  const overhangs = (first > 1e-9 ? 1 : 0) + (last < input.lengthFt - 1e-9 ? 1 : 0);
+  const overhang = overhangs > 0;
+  const at: string[] = [];
+  if (interior) at.push(xs.length > 3 ? "every interior support" : "the interior support");
+  if (overhang) at.push(overhangs > 1 ? "the supports next to the overhangs" : "the support next to the overhang");
+  const where =
+    at.length > 0
+      ? `blocking panels or a rim at ${at.join(" and ")}${overhang ? `; along ${overhangs > 1 ? "each overhang" : "the overhang"}, a ceiling fastened to the bottom flange or the bracing the joist maker's guide shows` : ""}`
+      : "along its length: a ceiling fastened to it, or the bracing the joist maker's guide shows";
+  return `brace the I-joist's bottom flange where it hogs (it is in compression there, and the check counts on it braced): ${where}`;
+}
 
 /**
  * The unbraced length given is the one checked. When the member fails on lateral stability at that
@@ -446,7 +460,7 @@ function bracingFor(input: Omit<CheckInput, "member">, member: DesignMember, ev:
   const bottomEdge =
     member.kind === "ijoist"
       ? iJoistHogs
-        ? I_JOIST_BOTTOM_FLANGE
+        ? iJoistBottomFlange(input)
         : null
       : input.conditions.bottomEdgeBraced && hogsGeometrically(input)
         ? "the bottom edge is taken as braced along its length: fasten the ceiling directly to it, over the supports and on any overhang"
