@@ -19,6 +19,7 @@ export const NOT_CHECKED: readonly string[] = [
   "Posts, studs, columns and footings, and the plates or walls under the bearing (bearing is checked on this member only; under a steel header in a stud wall the wood under its flanges is checked too). Posts and footings added to a job are checked for axial load and soil bearing only: not bending in the post, uplift, post bases and anchors, steel columns, or the concrete's own strength",
   "Lateral loads: wind and earthquake on the building, bracing and shear walls; wind on this member beyond the loads given",
   "Point loads on joists without blocking or a beam under them",
+  "The post, beam or truss that bears on this member at a point load, and its connection (the bearing it needs on this member is given with the answer)",
   "Notches, holes and cuts in the member",
   "Floor vibration and bounce beyond the deflection limits",
   "Ponding on low-slope roofs, snow drifts, sliding and unbalanced snow",

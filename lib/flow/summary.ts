@@ -138,6 +138,7 @@ export function answerFacts(check: CheckOutput): string[] {
   if (check.roughOpening) facts.push(`Span: ${check.roughOpening.note}`);
   if (check.bracing.instruction) facts.push(`Bracing: ${check.bracing.instruction}`);
   if (check.bracing.bottomEdge) facts.push(`Bracing: ${check.bracing.bottomEdge}`);
+  for (const b of check.pointBearing ?? []) facts.push(`Bearing: ${b.words}`);
   return facts;
 }
 

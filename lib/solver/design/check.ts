@@ -4,6 +4,7 @@
  */
 import { DESIGN_RULES } from "./rules";
 import { hogsAnywhere } from "./load-model";
+import { pointBearings, type PointBearing } from "./point-bearing";
 import type { MaterialTables } from "@/lib/tables/types";
 import { ratioPercent } from "./ratio-percent";
 import { checkWords } from "./check-words";
@@ -78,6 +79,13 @@ export interface CheckOutput {
   bracing: Bracing;
   /** a header given by its rough opening: how the span was found */
   roughOpening: RoughOpening | null;
+  /** what each point load needs to bear on this member, with the words for the crew (absent in answers worked out before it was added) */
+  pointBearing?: PointBearingLine[];
+}
+
+export interface PointBearingLine extends PointBearing {
+  /** e.g. "the point load at 6' 0" (4,200 lb, D+L) needs 6.7 in² of bearing on this member: …" */
+  words: string;
 }
 
 export interface Bracing {
@@ -256,6 +264,43 @@ export function roughOpeningOf(input: Omit<CheckInput, "member">): RoughOpening 
   };
 }
 
+/** Rounded up to the next 1/4 in: "2-1/4 in". */
+function quarterInches(inches: number): string {
+  const q = Math.ceil(inches * 4 - 1e-9) / 4;
+  const whole = Math.floor(q);
+  const frac = ["", "1/4", "1/2", "3/4"][Math.round((q - whole) * 4)];
+  return whole === 0 && frac ? `${frac} in` : frac ? `${whole}-${frac} in` : `${whole} in`;
+}
+
+/** Square posts as sawn: nominal name and dressed side, in (NDS Supplement 2018 Table 1B). */
+const POST_ENDS: readonly (readonly [string, number])[] = [
+  ["4x4", 3.5],
+  ["6x6", 5.5],
+];
+
+/** The crew's words for what a point load needs to bear on this member. */
+export function pointBearingWords(b: PointBearing): string {
+  const load = `the point load at ${feetInches(b.x)} (${Math.round(b.P).toLocaleString("en-US")} lb, ${b.combination})`;
+  if (b.areaIn2 !== null && b.widthIn !== null && b.FcPerpPrime !== null) {
+    const width = b.widthIn;
+    const need = b.areaIn2;
+    // a square post end bears on min(its side, the member's width) × its side (dressed sizes, NDS Supplement Table 1B)
+    const posts = POST_ENDS.map(([name, side]) => {
+      const area = Math.min(side, width) * side;
+      return `a ${name} post's end gives ${Math.floor(area * 10) / 10} in²${area >= need ? "" : ", too little"}`;
+    });
+    return (
+      `${load} needs ${Math.ceil(need * 10 - 1e-9) / 10} in² of contact on this member (${posts.join("; ")}), ` +
+      `Fc⊥′ = ${Math.round(b.FcPerpPrime)} psi, ${b.basis}; the post or beam bearing on it is not checked`
+    );
+  }
+  if (!Number.isFinite(b.lengthIn))
+    return `${load} needs web stiffeners under it: the web cannot take it in bearing alone (${b.basis}); stiffeners are not designed here`;
+  return b.lengthIn <= 0
+    ? `${load}: the web takes it at any bearing length (${b.basis}); the post or beam bearing on it is not checked`
+    : `${load} needs at least ${quarterInches(b.lengthIn)} of bearing along the flange (${b.basis}); the post or beam bearing on it is not checked`;
+}
+
 /** More than one span or an overhang: somewhere the member hogs under gravity load. */
 function hogsGeometrically(input: Pick<CheckInput, "supports" | "lengthFt">): boolean {
   return input.supports.length !== 2 || input.supports.some((s) => s.x > 1e-9 && s.x < input.lengthFt - 1e-9);
@@ -419,6 +464,7 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
     assembly,
     bracing: bracingFor(input, member, ev, member.kind === "ijoist" && hogsAnywhere(ctx.model, ctx.strength, sw)),
     roughOpening: roughOpeningOf(input),
+    pointBearing: pointBearings(member, ctx, ev.factors).map((b) => ({ ...b, words: pointBearingWords(b) })),
     diagrams,
   };
 }
