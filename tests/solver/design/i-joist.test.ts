@@ -157,7 +157,9 @@ describe("reaction capacities from the table", () => {
       }),
       T,
     );
-    expect(r.bracing.bottomEdge).toMatch(/blocking panels or a rim at the support next to the overhang; along the overhang, a ceiling fastened to the bottom flange/);
+    expect(r.bracing.bottomEdge).toMatch(
+      /blocking panels or a rim at the support next to the overhang; along the overhang, a ceiling fastened to the bottom flange/,
+    );
     expect(r.bracing.bottomEdge).not.toMatch(/interior support/);
   });
 });
