@@ -16,11 +16,14 @@ const OWNERS = ["sam@hollisrowe.test", "dee@hollisrowe.test"];
 type DemoDetails = { runWidthFt?: number; postHeightFt?: number; postSize?: string; footingDiameterIn?: number; footingDepthIn?: number };
 type DemoMember = { key: string; label: string; state: FlowState; carriedBy?: string; details?: DemoDetails };
 
+const engineered = (state: FlowState): FlowState => ({ ...state, material: { ...state.material, family: "engineered", plies: 0, product: "" } });
+
 function demoMembers(job: "marsh" | "orchard"): DemoMember[] {
   if (job === "marsh") {
     return [
       { key: "h1", label: "H1 kitchen header", state: withMainSpan(defaultFlowState("header"), 8) },
-      { key: "b1", label: "B1 family room beam", state: withMainSpan(defaultFlowState("beam"), 14) },
+      // 14 ft carrying 12 ft of floor: past what 2x plies do, so an engineered beam (LVL or glulam)
+      { key: "b1", label: "B1 family room beam", state: engineered(withMainSpan(defaultFlowState("beam"), 14)) },
       { key: "j1", label: "J1 addition floor joists", state: withMainSpan(defaultFlowState("floor-joist"), 13.5), details: { runWidthFt: 16 } },
     ];
   }

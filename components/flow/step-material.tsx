@@ -17,7 +17,7 @@ export type StepMaterialProps = { state: FlowState; update: (fn: (s: FlowState) 
 const FAMILIES: { value: MaterialFamily; label: string; detail: string }[] = [
   { value: "any", label: "Any", detail: "the lightest member that works, from every table" },
   { value: "sawn", label: "Sawn lumber", detail: "one piece: 2x8, 2x10, 4x12…" },
-  { value: "built-up", label: "Built-up plies", detail: "2, 3 or 4 plies nailed together" },
+  { value: "built-up", label: "Built-up plies", detail: "2, 3 or 4 plies of 2x nailed together" },
   { value: "engineered", label: "Engineered wood", detail: "LVL, PSL or glulam" },
   { value: "ijoist", label: "Wood I-joists", detail: "PRI-20 to PRI-90, 9-1/2 to 16 in deep; floors and flat roofs" },
   { value: "steel", label: "Steel", detail: "W-shapes, A992" },

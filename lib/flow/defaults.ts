@@ -78,7 +78,8 @@ export function defaultFlowState(kind: MemberKind): FlowState {
       return {
         ...BASE,
         kind,
-        ...SIMPLE(14),
+        // a girder on posts about 10 ft apart (common practice): built up of 2x plies it is a 3-ply 2x12
+        ...SIMPLE(10),
         width: { mode: "tributary", tributaryFt: 12 },
         areaLoads: [presetLoad("living"), presetLoad("floor-dead")],
         material: { family: "built-up", species: "Douglas Fir-Larch", grade: "No.2", plies: 0, product: "" },

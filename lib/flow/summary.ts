@@ -118,6 +118,14 @@ export function basisWords(standard: LoadStandard, hasSnow: boolean): string {
     : "Snow basis: ASCE 7-16, ground snow from the map in the 2021 code or older, counted in full (D + S)";
 }
 
+/** How the plies are held together: nailed through 1-1/2 in plies (common practice); thicker plies are bolted or screwed (not designed here). */
+function pliesFastened(check: CheckOutput): string {
+  const spec = check.member.spec;
+  return spec.material === "sawn" && !spec.size.startsWith("2x")
+    ? "plies bolted or screwed together (a nail does not reach through them; the fastening is not designed here)"
+    : "plies nailed together";
+}
+
 /**
  * What the answer rests on, in the words the answer screen, the crew link and the sheet all print:
  * the load basis, how the member is assembled in its wall, whether treated lumber was taken as
@@ -132,7 +140,7 @@ export function answerFacts(check: CheckOutput): string[] {
   ];
   const a = check.assembly;
   if (a.wallFraming !== null) facts.push(`Assemble: ${a.words}, ${a.fits ? "fills" : "does NOT fill"} a ${a.wallFraming} wall`);
-  else if (a.plies > 1) facts.push(`Assemble: ${a.words}, plies nailed together`);
+  else if (a.plies > 1) facts.push(`Assemble: ${a.words}, ${pliesFastened(check)}`);
   const f = check.factors as { incisedBasis?: string; incised?: boolean };
   if (typeof f.incisedBasis === "string" && (f.incised === true || /treated|as given/.test(f.incisedBasis))) facts.push(`Lumber: ${f.incisedBasis}`);
   if (check.roughOpening) facts.push(`Span: ${check.roughOpening.note}`);

@@ -87,7 +87,10 @@ describe("counting rules (common practice), by hand", () => {
 describe("the demo jobs' order lists, by hand", () => {
   // Marsh Lane addition (seeders/20261201120010-demo-jobs.ts): H1 8 ft header, B1 14 ft beam, J1 13.5 ft floor joists over a 16 ft width.
   const h1 = member("H1 kitchen header", withMainSpan(defaultFlowState("header"), 8));
-  const b1 = member("B1 family room beam", withMainSpan(defaultFlowState("beam"), 14));
+  const b1 = member("B1 family room beam", {
+    ...withMainSpan(defaultFlowState("beam"), 14),
+    material: { ...defaultFlowState("beam").material, family: "engineered", plies: 0, product: "" },
+  });
   const j1 = member("J1 addition floor joists", withMainSpan(defaultFlowState("floor-joist"), 13.5), { runWidthFt: 16 });
   const marsh = buildOrderList([h1, b1, j1], STARTER_TABLES);
 

@@ -116,7 +116,9 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
       }
       for (const grade of grades) {
         for (const size of tables.sawnSizes) {
-          for (const n of size.sizeClass === "dimension" ? plies : [1]) {
+          // built-up plies are 2x lumber, nailed through (common practice): a 3x or 4x is used alone, since a
+          // nail does not reach through two of its plies; asked for by name, such plies are still checked
+          for (const n of size.sizeClass === "dimension" && size.nominalThickness === 2 ? plies : [1]) {
             out.push({ material: "sawn", species: sp, grade, size: size.name, plies: n });
           }
         }
@@ -340,7 +342,7 @@ function describeFamily(input: SizeInput): string {
   const plies = (given: number[] | undefined) => (given ?? (joists ? [1] : ALL_PLIES)).join(", ");
   switch (m.material) {
     case "sawn":
-      return `sawn lumber, ${m.species ?? "every species"}, ${m.grade ?? "every grade"}, every size in the tables, plies ${plies(m.plies)} (timbers 1 ply)`;
+      return `sawn lumber, ${m.species ?? "every species"}, ${m.grade ?? "every grade"}, every size in the tables, plies ${plies(m.plies)} of 2x (3x, 4x and timbers 1 ply)`;
     case "engineered":
       return `${m.product ?? "every engineered product"}, every width and depth in the tables, LVL plies ${plies(m.plies)}`;
     case "steel":
