@@ -5,7 +5,7 @@ import { scheduleRow } from "@/lib/crew/schedule";
 import { designSpecOf } from "@/lib/flow/summary";
 import { checkOrder, cycleIssue, workOutJob, type PathMember } from "@/lib/jobs/load-path";
 import { woodDensity } from "@/lib/solver/nds/nds-2018";
-import { STARTER_TABLES, findSawnValues } from "@/lib/tables";
+import { STARTER_TABLES, findSawnSize, findSawnValues } from "@/lib/tables";
 
 /**
  * An invented deck worked out as one job and checked by hand (the Wrenfield Road deck):
@@ -168,12 +168,12 @@ describe("the load path of a deck, worked by hand", () => {
     const P = 1.1 * wD * 8 + 1.2 * wL * 8;
     const stability = p1?.checks.find((c) => c.name === "stability");
     expect(stability?.ratio).toBeCloseTo(P / 30.25 / (FcStar * Cp), 2);
-    // the beam's bearing on the post's top (NDS 2018 §3.10.2): B1's plies × 1.5 in across 5.5 in, Fc⊥ × CM 0.67 (wet)
+    // the beam's bearing on the post's top (NDS 2018 §3.10.2): B1's width (plies × the dressed thickness) across 5.5 in, Fc⊥ × CM 0.67 (wet)
     const b1Spec = b1?.spec;
-    const plies = b1Spec?.material === "sawn" ? b1Spec.plies : 0;
+    const widthIn = b1Spec?.material === "sawn" ? b1Spec.plies * findSawnSize(STARTER_TABLES, b1Spec.size).b : 0;
     const fcPerp = findSawnValues(STARTER_TABLES, "Southern Pine", "No.2", "dimension", 10).FcPerp * 0.67;
     const onTop = p1?.checks.filter((c) => c.name === "bearing").map((c) => c.ratio) ?? [];
-    expect(Math.max(...onTop)).toBeCloseTo(P / (plies * 1.5 * 5.5) / fcPerp, 2);
+    expect(Math.max(...onTop)).toBeCloseTo(P / (Math.min(widthIn, 5.5) * 5.5) / fcPerp, 2);
     expect(p1?.pass).toBe(true);
     expect(p1?.reactions).toHaveLength(4);
   });

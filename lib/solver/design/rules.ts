@@ -5,8 +5,8 @@
  * opened (lib/jobs/service.ts#recheckIfOutdated), each changed answer flagged with DESIGN_RULES_CHANGE.
  * DEVELOPERS.md ("Design rule editions") lists every edition and what changed.
  */
-export const DESIGN_RULES = "2026-12-03";
+export const DESIGN_RULES = "2026-12-05";
 
 /** Why answers changed in the newest edition, as the job page and the crew link show it. */
 export const DESIGN_RULES_CHANGE =
-  "the design checks changed: where a member hogs (over a support, on an overhang) its bottom edge is now taken as braced only at the supports";
+  "the design checks changed: each point load now says the bearing it needs on the member, an I-joist that hogs says where to brace its bottom flange, and built-up beams are offered in 2x plies only";
