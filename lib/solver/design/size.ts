@@ -117,8 +117,10 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
       for (const grade of grades) {
         for (const size of tables.sawnSizes) {
           // built-up plies are 2x lumber, nailed through (common practice): a 3x or 4x is used alone, since a
-          // nail does not reach through two of its plies; asked for by name, such plies are still checked
-          for (const n of size.sizeClass === "dimension" && size.nominalThickness === 2 ? plies : [1]) {
+          // nail does not reach through two of its plies (offered only where one piece is asked for); asked for
+          // by name, such plies are still checked
+          const pliesOf = size.sizeClass !== "dimension" ? [1] : size.nominalThickness === 2 ? plies : plies.filter((n) => n === 1);
+          for (const n of pliesOf) {
             out.push({ material: "sawn", species: sp, grade, size: size.name, plies: n });
           }
         }

@@ -33,6 +33,12 @@ describe("built-up plies", () => {
     expect(r.passing.some((p) => p.member.material === "sawn" && p.member.size === "4x12" && p.member.plies === 1)).toBe(true);
   });
 
+  test("asked for as built-up plies, no single 3x or 4x is offered (a single piece is what the sawn family is for)", () => {
+    const r = sizeMember(request({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", plies: [2, 3, 4] }), T);
+    expect(r.passing.length).toBeGreaterThan(0);
+    for (const p of r.passing) if (p.member.material === "sawn" && p.member.plies === 1) expect(p.member.size).toMatch(/^[68]x/);
+  });
+
   test("asked for by name, 2-ply 4x12 is checked, and its plies are said to be bolted or screwed", () => {
     const r = checkMember(request({ material: "sawn", species: "Douglas Fir-Larch", grade: "No.2", size: "4x12", plies: 2 }), T);
     expect(answerFacts(r).join("\n")).toMatch(/Assemble: 2-ply 4x12, plies bolted or screwed together/);
