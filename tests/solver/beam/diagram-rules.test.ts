@@ -156,10 +156,13 @@ describe("common practice: a clockwise couple is an upward step in the moment di
  * M at z is a local maximum (or minimum) from both sides; where a couple also acts at z, M steps
  * there, so each side is compared with its own one-sided limit.
  */
-function isLocalExtreme(a: BeamAnalysis, z: number, L: number, tol: number): boolean {
-  // Probe no further than halfway to the next reported zero-shear point: two can sit a hair apart
-  // (a crossing just left of a support where V jumps back), and a wider probe would step over the other.
-  const gaps = a.extremes.zeroShear.map((p) => Math.abs(p - z)).filter((d) => d > 1e-12 * L);
+function isLocalExtreme(a: BeamAnalysis, z: number, input: BeamInput, tol: number): boolean {
+  const L = input.length;
+  // Probe no further than halfway to the next reported zero-shear point, support or couple: two zero-shear
+  // points can sit a hair apart (a crossing just left of a support where V jumps back), and a crossing can sit
+  // a hair from a couple (M steps there); a wider probe would step over the other point or the step.
+  const steps = [...input.supports.map((s) => s.x), ...input.loads.flatMap((l) => (l.type === "moment" ? [l.x] : []))];
+  const gaps = [...a.extremes.zeroShear, ...steps].map((p) => Math.abs(p - z)).filter((d) => d > 1e-12 * L);
   const h = Math.min(1e-4 * L, 0.5 * Math.min(Infinity, ...gaps));
   const lim = Math.min(1e-7 * L, h / 10);
   const leftLim = a.evaluate(Math.max(z - lim, 0)).M;
@@ -175,7 +178,7 @@ describe("common practice: the moment has a local extreme where the shear crosse
   test.each(layouts)("$name", ({ input }) => {
     const a = analyzeBeam(input);
     expect(a.extremes.zeroShear.length).toBeGreaterThan(0);
-    for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input.length, 0)).toBe(true);
+    for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input, 0)).toBe(true);
   });
 
   test("on random beams: at every reported zero-shear point M is a local extreme", () => {
@@ -183,10 +186,35 @@ describe("common practice: the moment has a local extreme where the shear crosse
       fc.property(beamArb, (input) => {
         const a = analyzeBeam(input);
         const tol = 1e-9 * Math.max(Math.abs(a.extremes.Mpos.value), Math.abs(a.extremes.Mneg.value));
-        for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input.length, tol)).toBe(true);
+        for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input, tol)).toBe(true);
       }),
       { numRuns: 300 },
     );
+  });
+
+  test("a crossing 0.0005 in right of a couple (M steps there): a local extreme on its own side", () => {
+    // found by the random test above (seed 485676344): the shear crosses zero at x = 7.315044 ft, a couple of
+    // −3,731.67 lb-ft acts at 7.315 ft; a probe of 0.0038 ft stepped over the couple's step
+    const input: BeamInput = {
+      length: 38,
+      E: 1_000_000,
+      I: 5,
+      supports: [
+        { x: 37.24, type: "roller" },
+        { x: 2.28, type: "fixed" },
+        { x: 24.32, type: "fixed" },
+        { x: 3.8, type: "fixed" },
+      ],
+      loads: [
+        { type: "udl", from: 0, to: 10.64, w: 30.83 },
+        { type: "linear", from: 0.095, to: 22.23, w1: 0, w2: -64.6 },
+        { type: "moment", x: 7.315, M: -3731.67 },
+      ],
+    };
+    const a = analyzeBeam(input);
+    expect(a.extremes.zeroShear.some((z) => z > 7.315 && z < 7.3151)).toBe(true);
+    const tol = 1e-9 * Math.max(Math.abs(a.extremes.Mpos.value), Math.abs(a.extremes.Mneg.value));
+    for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input, tol)).toBe(true);
   });
 
   test("a crossing 0.0075 in left of a support where the shear jumps back: both are extremes", () => {
@@ -210,6 +238,6 @@ describe("common practice: the moment has a local extreme where the shear crosse
     };
     const a = analyzeBeam(input);
     expect(a.extremes.zeroShear.some((z) => z > 3.983 && z < 3.9839)).toBe(true);
-    for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input.length, 1e-12)).toBe(true);
+    for (const z of a.extremes.zeroShear) expect(isLocalExtreme(a, z, input, 1e-12)).toBe(true);
   });
 });
