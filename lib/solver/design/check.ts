@@ -281,6 +281,8 @@ const POST_ENDS: readonly (readonly [string, number])[] = [
 /** The crew's words for what a point load needs to bear on this member. */
 export function pointBearingWords(b: PointBearing): string {
   const load = `the point load at ${feetInches(b.x)} (${Math.round(b.P).toLocaleString("en-US")} lb, ${b.combination})`;
+  if (b.on === "ijoist")
+    return `${load} bears on the I-joist's top flange: web stiffeners under it, or blocking or a beam that carries it, as ${b.basis} asks (the flange and web under it are not checked here)`;
   if (b.areaIn2 !== null && b.widthIn !== null && b.FcPerpPrime !== null) {
     const width = b.widthIn;
     const need = b.areaIn2;
@@ -294,7 +296,7 @@ export function pointBearingWords(b: PointBearing): string {
       `Fc⊥′ = ${Math.round(b.FcPerpPrime)} psi, ${b.basis}; the post or beam bearing on it is not checked`
     );
   }
-  if (!Number.isFinite(b.lengthIn))
+  if (b.lengthIn === null)
     return `${load} needs web stiffeners under it: the web cannot take it in bearing alone (${b.basis}); stiffeners are not designed here`;
   return b.lengthIn <= 0
     ? `${load}: the web takes it at any bearing length (${b.basis}); the post or beam bearing on it is not checked`

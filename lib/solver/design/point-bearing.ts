@@ -19,6 +19,8 @@ import { requiredSteelBearing, type SteelFactors } from "./steel";
 import type { WoodFactors } from "./wood";
 
 export interface PointBearing {
+  /** which rule the line follows: wood bearing, a W-shape's web, or an I-joist (the maker's details, not worked out) */
+  on: "wood" | "steel" | "ijoist";
   /** ft from the left end */
   x: number;
   /** lb, in the combination named */
@@ -26,8 +28,8 @@ export interface PointBearing {
   combination: string;
   /** wood: bearing area needed on the member, in²; null for steel */
   areaIn2: number | null;
-  /** wood: length along the member at its full width; steel: bearing length along the flange; in (Infinity: stiffeners needed) */
-  lengthIn: number;
+  /** wood: length along the member at its full width; steel: bearing length along the flange, in; null: for steel no length will do (web stiffeners), for an I-joist not worked out */
+  lengthIn: number | null;
   /** wood: the member's full width, in; null for steel */
   widthIn: number | null;
   /** wood: Fc⊥′ used, psi; null for steel */
@@ -55,18 +57,34 @@ function pointLoadsByPlace(ctx: DesignContext, lrfd: boolean): { x: number; P: n
   });
 }
 
-/** The bearing each point load needs on this member; [] for I-joists and cold-formed steel (checked elsewhere or not at all). */
+/**
+ * The bearing each point load needs on this member. An I-joist gets a line naming the load, for the web stiffeners
+ * or blocking its maker's guide asks under it (not worked out here); cold-formed steel none (its web crippling
+ * under point loads is a check of its own).
+ */
 export function pointBearings(member: DesignMember, ctx: DesignContext, factors: unknown): PointBearing[] {
-  if (member.kind !== "wood" && member.kind !== "steel") return [];
+  if (member.kind === "cfs") return [];
   const lrfd = ctx.method === "lrfd";
   const loads = pointLoadsByPlace(ctx, lrfd).filter((p) => p.P > 0);
   if (loads.length === 0) return [];
+  if (member.kind === "ijoist") {
+    return loads.map((p) => ({
+      on: "ijoist",
+      ...p,
+      areaIn2: null,
+      lengthIn: null,
+      widthIn: null,
+      FcPerpPrime: null,
+      basis: "the joist maker's installation guide",
+    }));
+  }
   if (member.kind === "wood") {
     const f = factors as WoodFactors;
     const FcPrime = f.FcPerp * f.CM.FcPerp * f.Ct.FcPerp * f.Ci.FcPerp * (lrfd && f.KF && f.phi ? f.KF.FcPerp * f.phi.FcPerp : 1);
     return loads.map((p) => {
       const areaIn2 = p.P / FcPrime;
       return {
+        on: "wood",
         ...p,
         areaIn2,
         lengthIn: areaIn2 / member.b,
@@ -80,7 +98,15 @@ export function pointBearings(member: DesignMember, ctx: DesignContext, factors:
   const s = member.shape;
   return loads.map((p) => {
     const fromEndIn = Math.min(p.x, ctx.model.length - p.x) * 12;
-    const lengthIn = requiredSteelBearing(s, f.Fy, p.P / 1000, fromEndIn <= s.d, fromEndIn < s.d / 2, lrfd);
-    return { ...p, areaIn2: null, lengthIn, widthIn: null, FcPerpPrime: null, basis: "AISC 360-16 §J10.2 and §J10.3" };
+    const needed = requiredSteelBearing(s, f.Fy, p.P / 1000, fromEndIn <= s.d, fromEndIn < s.d / 2, lrfd);
+    return {
+      on: "steel",
+      ...p,
+      areaIn2: null,
+      lengthIn: Number.isFinite(needed) ? needed : null,
+      widthIn: null,
+      FcPerpPrime: null,
+      basis: "AISC 360-16 §J10.2 and §J10.3",
+    };
   });
 }

@@ -134,7 +134,37 @@ describe("a W8x18 with a column bearing on it at mid-span (D 8 kips + L 12 kips)
       beam({ material: "steel", shape: "W8x18", grade: "A992" }, [{ type: "point", case: "D", x: 6, P: 400000 }], { limits: { live: null, total: null } }),
       T,
     );
-    expect(heavy.pointBearing![0].lengthIn).toBe(Infinity);
+    expect(heavy.pointBearing![0].lengthIn).toBeNull();
     expect(heavy.pointBearing![0].words).toMatch(/needs web stiffeners under it/);
+  });
+});
+
+describe("an I-joist under a point load", () => {
+  test("the answer names the load and asks for web stiffeners, blocking or a beam under it, as the maker's guide does", () => {
+    const r = checkMember(
+      {
+        member: { material: "ijoist", joist: "PRI-40 11-7/8" },
+        lengthFt: 14,
+        supports: [
+          { x: 0, type: "pin" },
+          { x: 14, type: "roller" },
+        ],
+        spacingIn: 16,
+        loads: [
+          { type: "area", case: "L", psf: 40 },
+          { type: "area", case: "D", psf: 15 },
+          { type: "point", case: "D", x: 7, P: 300 },
+        ],
+        bearingIn: 1.75,
+        conditions: { selfWeight: false },
+        limits: { live: 360, total: 240 },
+      },
+      T,
+    );
+    expect(r.pointBearing).toHaveLength(1);
+    expect(r.pointBearing![0]).toMatchObject({ on: "ijoist", x: 7, P: 300, areaIn2: null, lengthIn: null });
+    expect(answerFacts(r).join("\n")).toMatch(
+      /Bearing: the point load at 7 ft 0 in \(300 lb, D\) bears on the I-joist's top flange: web stiffeners under it, or blocking or a beam that carries it/,
+    );
   });
 });
