@@ -9,6 +9,7 @@ import type { FootingShape } from "@/lib/solver/design/footing";
 import type { MemberSpec } from "@/lib/solver/design/schema";
 import type { LoadCase, SupportType } from "@/lib/solver/types";
 import { jackStudsApply } from "@/lib/solver/design/answer-line";
+import { pliesNailed } from "@/lib/solver/design/assembly";
 import { formatFeetInches } from "./length";
 import { mainSpanFt, overhangs, spansFt, wallOf, type FlowState } from "./state";
 
@@ -118,10 +119,10 @@ export function basisWords(standard: LoadStandard, hasSnow: boolean): string {
     : "Snow basis: ASCE 7-16, ground snow from the map in the 2021 code or older, counted in full (D + S)";
 }
 
-/** How the plies are held together: nailed through 1-1/2 in plies (common practice); thicker plies are bolted or screwed (not designed here). */
+/** How the plies are held together: nailed (2x plies) or, thicker, bolted or screwed (not designed here). */
 function pliesFastened(check: CheckOutput): string {
   const spec = check.member.spec;
-  return spec.material === "sawn" && !spec.size.startsWith("2x")
+  return spec.material === "sawn" && !pliesNailed(spec.size)
     ? "plies bolted or screwed together (a nail does not reach through them; the fastening is not designed here)"
     : "plies nailed together";
 }

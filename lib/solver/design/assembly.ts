@@ -27,6 +27,15 @@ export interface Assembly {
   words: string;
 }
 
+/**
+ * Whether sawn plies of this size are nailed together: 2x plies, 1-1/2 in thick, are (common practice: a 16d nail
+ * joins two); a nail does not reach through two 3x or 4x plies, which are bolted or screwed instead. The search
+ * offers multi-ply members in these sizes only; the answer names the fastening.
+ */
+export function pliesNailed(size: string): boolean {
+  return size.startsWith("2x");
+}
+
 /** The wall a member must fit: the input's, or 2x4 for a header when not said; null otherwise. */
 export function wallFor(kind: MemberKind | undefined, wallFraming: WallFraming | undefined): WallFraming | null {
   if (wallFraming !== undefined) return wallFraming;

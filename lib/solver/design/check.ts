@@ -15,6 +15,7 @@ import type { LoadStandard } from "../asce7/standard";
 import { LRFD_SNOW_COMPANION_22 } from "../asce7/combinations";
 import { zodIssues } from "@/lib/zod-issues";
 import { assemblyFor, wallFor, type Assembly } from "./assembly";
+import { formatInches } from "../lengths";
 import { buildContext, type DesignContext } from "./context";
 import type { MemberKind } from "./kinds";
 import { DesignInputError } from "./errors";
@@ -264,12 +265,9 @@ export function roughOpeningOf(input: Omit<CheckInput, "member">): RoughOpening 
   };
 }
 
-/** Rounded up to the next 1/4 in: "2-1/4 in". */
+/** Rounded up to the next 1/4 in, in words: "2-1/4 in" (the fraction as lib/solver/lengths.ts writes it). */
 function quarterInches(inches: number): string {
-  const q = Math.ceil(inches * 4 - 1e-9) / 4;
-  const whole = Math.floor(q);
-  const frac = ["", "1/4", "1/2", "3/4"][Math.round((q - whole) * 4)];
-  return whole === 0 && frac ? `${frac} in` : frac ? `${whole}-${frac} in` : `${whole} in`;
+  return `${formatInches(Math.ceil(inches * 4 - 1e-9) / 4).replace(/"$/, "")} in`;
 }
 
 /** Square posts as sawn: nominal name and dressed side, in (NDS Supplement 2018 Table 1B). */

@@ -7,7 +7,7 @@ import { TableLookupError } from "@/lib/tables";
 import type { MaterialTables, SawnGrade, Species } from "@/lib/tables/types";
 import { CAUTION, notCheckedFor } from "@/lib/caution";
 import type { LoadStandard } from "../asce7/standard";
-import { assemblyFor, wallFor, type Assembly } from "./assembly";
+import { assemblyFor, pliesNailed, wallFor, type Assembly } from "./assembly";
 import {
   answerFor,
   percent,
@@ -116,10 +116,9 @@ export function candidateSpecs(family: SizeFamily, tables: MaterialTables, joist
       }
       for (const grade of grades) {
         for (const size of tables.sawnSizes) {
-          // built-up plies are 2x lumber, nailed through (common practice): a 3x or 4x is used alone, since a
-          // nail does not reach through two of its plies (offered only where one piece is asked for); asked for
-          // by name, such plies are still checked
-          const pliesOf = size.sizeClass !== "dimension" ? [1] : size.nominalThickness === 2 ? plies : plies.filter((n) => n === 1);
+          // built-up plies are nailed 2x (assembly.ts pliesNailed); a 3x or 4x is offered alone, and only where one
+          // piece is asked for; asked for by name, thicker plies are still checked
+          const pliesOf = size.sizeClass !== "dimension" ? [1] : pliesNailed(size.name) ? plies : plies.filter((n) => n === 1);
           for (const n of pliesOf) {
             out.push({ material: "sawn", species: sp, grade, size: size.name, plies: n });
           }
