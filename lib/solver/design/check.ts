@@ -470,10 +470,12 @@ export function fullCheck(input: Omit<CheckInput, "member">, member: DesignMembe
 }
 
 /**
- * An I-joist's published moment capacity holds with its compression flange braced (NDS 2018 §7.3.5, the beam
- * stability factor CL of I-joists: the clause number read in a published summary of NDS Chapter 7; that CL = 1.0
- * only with the compression flange braced is from memory, and is the conservative reading). The check here uses
- * CL = 1.0 and has no flange properties to work out a lower one.
+ * An I-joist's published moment capacity holds with its compression flange braced: NDS 2018 §7.3.5 (the beam
+ * stability factor CL of I-joists; the clause number read in a published summary of NDS Chapter 7), and the
+ * American Wood Council's ASD/LRFD Manual, M7.3 and Table M7.3-1: M′ = M·CD·CM·Ct·CL·Cr, reducing to M′ = M·CD
+ * only "for fully laterally supported bending members" (read in a published copy, yumpu.com document 32600583,
+ * p. 53; the manual's edition is not shown there). The check here uses CL = 1.0 and has no flange properties to
+ * work out a lower one.
  * Where the joist hogs, the compression flange is the bottom one, which the sheathing does not brace: the
  * answer asks the crew to brace it, as the joist makers' installation guides do (common practice), and says
  * the check counts on it.

@@ -8,8 +8,8 @@ import type { Species } from "@/lib/tables/types";
  * (DCA 6, based on the 2015 IRC), printing 04-18 (AWC-DCA62015-DeckGuide-1804.pdf,
  * web-media.awc.org/wp-content/uploads/2022/02/17210514/AWC-DCA62015-DeckGuide-1804.pdf), p. 6, Table 3A
  * "Dimension Lumber Deck Beam Spans (LB) Supporting a Single Span of Joists with or without Overhangs". The PDF
- * itself was not read here: the figures were read in two public transcriptions of that page, which agree cell for
- * cell on every figure below: the independent review of a transcription, github.com/marctjones/napkin,
+ * itself was not read here: the figures were read in two public copies of that page, which agree cell for
+ * cell on every figure below: an independent review of a copy of it, github.com/marctjones/napkin,
  * docs/code-packs/reviews/us-ct-2022/dca6-table3a.md (commit d255191c), which quotes the four notes; and
  * github.com/vbomfim/wooddeck, src/domain/spans/irc-2018-tables.ts (commit 63118a37). Earlier printings title the
  * table "Table 3. Deck Beam Spans (LB) for Joists Framing from One Side Only" (seen only as a title in search
